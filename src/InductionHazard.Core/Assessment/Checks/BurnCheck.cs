@@ -1,0 +1,133 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Criteria;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Assessment.Checks;
+
+/// <summary>
+/// Burn: skin against the heated item, assuming the skin reaches the item's temperature (perfect contact, no
+/// cooling by blood flow: the safe side). A worn or held item is in contact throughout: for every contact time d
+/// the highest temperature the item holds for d is compared with the ISO 13732-1 threshold for d, and the
+/// thermal dose CEM43 with its limit. An item that is not worn or held is judged for a brief touch: its peak
+/// temperature against the threshold for the policy's touch time. Temperature margins are the allowed rise over
+/// the predicted rise from the starting temperature.
+/// </summary>
+public sealed class BurnCheck : IHazardCheck
+{
+    private const int DurationsPerDecade = 12;
+
+    /// <inheritdoc />
+    public HazardMechanism Mechanism => HazardMechanism.Burn;
+
+    /// <inheritdoc />
+    public MechanismResult Evaluate(InductionResponse response, HazardPolicy policy)
+    {
+        if (response.Item.IsSplit)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "open loop: no current flows, so the item does not heat");
+        }
+
+        var issues = response.IssuesAffecting(AffectedResults.Current | AffectedResults.Heating);
+        if (issues.Count > 0)
+        {
+            return MechanismResult.Indeterminate(Mechanism, policy.ContactBurn.Source, issues);
+        }
+
+        return response.Item.Contact is ContactKind.Skin or ContactKind.Held
+            ? Continuous(response, policy)
+            : Touch(response, policy);
+    }
+
+    private MechanismResult Touch(InductionResponse response, HazardPolicy policy)
+    {
+        double start = response.InitialTemperatureCelsius;
+        double peak = response.PeakTemperatureCelsius;
+        double threshold = policy.ContactBurn.CelsiusFor(policy.TouchSeconds);
+        double margin = RiseMargin(threshold, peak, start);
+        return MechanismResult.Judged(
+            Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, policy.ContactBurn.Source,
+            "a " + SiFormat.Format(policy.TouchSeconds, "s") + " touch of the item at its peak " + SiFormat.Celsius(peak)
+            + " against the burn threshold " + SiFormat.Celsius(threshold) + " (" + response.Item.Contact + " item: not worn or held)");
+    }
+
+    private MechanismResult Continuous(InductionResponse response, HazardPolicy policy)
+    {
+        IReadOnlyList<HeatingSample> history = response.HeatingSeries;
+        double start = response.InitialTemperatureCelsius;
+        ContactBurnThreshold curve = policy.ContactBurn;
+        double span = history[history.Count - 1].TimeSeconds - history[0].TimeSeconds;
+
+        // The contact-time threshold: the worst contact duration over the curve's range.
+        (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
+        foreach (double d in Durations(curve, span))
+        {
+            double held = TemperatureHistory.SustainedFor(history, d);
+            double threshold = curve.CelsiusFor(d);
+            double m = RiseMargin(threshold, held, start);
+            if (double.IsNaN(m) || m < worst.margin)
+            {
+                worst = (m, d, held, threshold);
+                if (double.IsNaN(m))
+                {
+                    break;
+                }
+            }
+        }
+
+        if (span < curve.ShortestSeconds)
+        {
+            // Shorter than the standard covers: the peak against the shortest contact's threshold (thresholds rise for shorter contacts).
+            double peak = response.PeakTemperatureCelsius;
+            worst = (RiseMargin(worst.threshold, peak, start), span, peak, worst.threshold);
+        }
+
+        double dose = ThermalDose.Cem43Minutes(history);
+        double doseMargin = VerdictRules.Margin(policy.ThermalDoseLimitMinutes, dose);
+        string doseText = "thermal dose " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin " + SiFormat.Plain(doseMargin) + ")";
+        string contactText = "held " + SiFormat.Celsius(worst.held) + " for " + SiFormat.Format(worst.seconds, "s") + " against the threshold "
+            + SiFormat.Celsius(worst.threshold) + " for that contact time (margin " + SiFormat.Plain(worst.margin) + ")";
+        string basis = curve.Source + "; " + Standards.ThermalDoseModel + "; " + Standards.ThermalDoseLimit;
+        if (double.IsNaN(doseMargin) || doseMargin < worst.margin)
+        {
+            return MechanismResult.Judged(Mechanism, "thermal dose", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", doseMargin, policy.SafetyFactor, basis,
+                "skin in contact: " + doseText + "; " + contactText);
+        }
+
+        return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
+            "skin in contact: " + contactText + "; " + doseText);
+    }
+
+    /// <summary>Allowed rise over predicted rise; a start already at the threshold has no margin at all.</summary>
+    private static double RiseMargin(double threshold, double predicted, double start)
+    {
+        if (double.IsNaN(predicted) || double.IsNaN(threshold))
+        {
+            return double.NaN;
+        }
+
+        if (threshold <= start)
+        {
+            return 0;
+        }
+
+        return VerdictRules.Margin(threshold - start, Math.Max(0, predicted - start));
+    }
+
+    /// <summary>Contact durations to test: the curve's points and a logarithmic grid, all within the history's span.</summary>
+    private static IEnumerable<double> Durations(ContactBurnThreshold curve, double span)
+    {
+        double first = curve.ShortestSeconds, last = Math.Min(curve.LongestSeconds, span);
+        if (last < first)
+        {
+            return Array.Empty<double>();
+        }
+
+        int count = (int)Math.Ceiling(Math.Log10(last / first) * DurationsPerDecade);
+        IEnumerable<double> grid = Enumerable.Range(0, count + 1).Select(k => first * Math.Pow(last / first, count == 0 ? 0 : (double)k / count));
+        return grid.Concat(curve.Points.Select(p => p.Seconds).Where(s => s <= last)).Distinct().OrderBy(s => s);
+    }
+}

@@ -1,0 +1,38 @@
+using InductionHazard.Criteria;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment.Checks;
+
+/// <summary>
+/// Overheat: the item's own peak temperature against its melting point (or solidus). The margin is the allowed
+/// rise over the predicted rise from the starting temperature.
+/// </summary>
+public sealed class OverheatCheck : IHazardCheck
+{
+    /// <inheritdoc />
+    public HazardMechanism Mechanism => HazardMechanism.Overheat;
+
+    /// <inheritdoc />
+    public MechanismResult Evaluate(InductionResponse response, HazardPolicy policy)
+    {
+        if (response.Item.IsSplit)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "open loop: no current flows, so the item does not heat");
+        }
+
+        var issues = response.IssuesAffecting(AffectedResults.Current | AffectedResults.Heating);
+        if (issues.Count > 0)
+        {
+            return MechanismResult.Indeterminate(Mechanism, Standards.Melting, issues);
+        }
+
+        double melting = response.Item.Material.MeltingCelsius;
+        double start = response.InitialTemperatureCelsius;
+        double peak = response.PeakTemperatureCelsius;
+        double margin = VerdictRules.Margin(melting - start, peak - start);
+        string detail = "peak temperature " + SiFormat.Celsius(peak) + " against the melting point of " + response.Item.Material.Name
+            + " " + SiFormat.Celsius(melting) + " (margin on the rise from " + SiFormat.Celsius(start) + ")"
+            + (response.MeltingReachedSeconds is { } t ? "; melting reached at t = " + SiFormat.Format(t, "s") + ", beyond which the model is notional" : string.Empty);
+        return MechanismResult.Judged(Mechanism, "peak temperature", peak, melting, "°C", margin, policy.SafetyFactor, Standards.Melting, detail);
+    }
+}

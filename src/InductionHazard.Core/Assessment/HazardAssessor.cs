@@ -1,0 +1,111 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Reflection;
+using InductionHazard.Assessment.Checks;
+using InductionHazard.Criteria;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>Turns a response into an assessment: each mechanism's check, the combined verdict, the cautions.</summary>
+public static class HazardAssessor
+{
+    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck() };
+
+    /// <summary>The module's version, as recorded in assessments.</summary>
+    public static string ModuleVersion { get; } =
+        typeof(HazardAssessor).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0]
+        ?? typeof(HazardAssessor).Assembly.GetName().Version?.ToString() ?? "unknown";
+
+    /// <summary>The mechanisms this version checks.</summary>
+    public static IEnumerable<HazardMechanism> CheckedMechanisms => Checks.Select(c => c.Mechanism);
+
+    /// <summary>Assesses a response against a policy.</summary>
+    /// <param name="response">The physics.</param>
+    /// <param name="policy">The limits and safety factor.</param>
+    /// <param name="rowNumber">The record's position in its input, if any.</param>
+    /// <param name="now">The time to record (UTC); default now.</param>
+    public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
+    {
+        policy.Validated();
+        MechanismResult[] results = Checks.Select(c => c.Evaluate(response, policy)).ToArray();
+        MechanismResult[] applicable = results.Where(r => r.Applies).ToArray();
+        Verdict verdict = VerdictRules.Combine(applicable.Select(r => r.Verdict!.Value));
+        MechanismResult? governing = Governing(applicable, verdict);
+        double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : applicable.Min(r => r.Margin);
+
+        var reasons = new List<string>();
+        if (applicable.Length == 0)
+        {
+            reasons.Add("no mechanism applies that this version can check");
+        }
+
+        reasons.AddRange(applicable.Where(r => r.Verdict != Verdict.Clear).Select(r => r.Mechanism + ": " + r.Detail));
+        IEnumerable<string> sources = applicable.Select(r => r.Basis).Append(Standards.SafetyFactor).Distinct();
+
+        return new InductionAssessment
+        {
+            ItemName = response.ItemName,
+            RowNumber = rowNumber,
+            SourceName = response.SourceName,
+            Verdict = verdict,
+            GoverningMechanism = governing?.Mechanism,
+            MinimumMargin = minimum,
+            Summary = Summarize(verdict, governing, policy),
+            Mechanisms = results,
+            ShockMargin = MarginOf(results, HazardMechanism.Shock),
+            BurnMargin = MarginOf(results, HazardMechanism.Burn),
+            OverheatMargin = MarginOf(results, HazardMechanism.Overheat),
+            PeakEmfVolts = response.PeakEmfVolts,
+            GapVoltageVolts = response.GapVoltageVolts,
+            PeakCurrentAmperes = response.PeakCurrentAmperes,
+            PeakTemperatureCelsius = response.PeakTemperatureCelsius,
+            EnergyDissipatedJoules = response.EnergyDissipatedJoules,
+            Reasons = reasons,
+            Cautions = Criteria.Cautions.For(sources),
+            PolicyName = policy.Name,
+            SafetyFactor = policy.SafetyFactor,
+            ModuleVersion = ModuleVersion,
+            AssessedUtc = now ?? DateTime.UtcNow,
+            Response = response,
+        };
+    }
+
+    private static MechanismResult? Governing(MechanismResult[] applicable, Verdict verdict)
+    {
+        if (applicable.Length == 0)
+        {
+            return null;
+        }
+
+        if (verdict == Verdict.Indeterminate)
+        {
+            return applicable.First(r => r.Verdict == Verdict.Indeterminate);
+        }
+
+        return applicable.Where(r => r.Verdict != Verdict.Indeterminate).OrderBy(r => r.Margin).First();
+    }
+
+    private static double? MarginOf(IEnumerable<MechanismResult> results, HazardMechanism mechanism)
+    {
+        MechanismResult? r = results.FirstOrDefault(m => m.Mechanism == mechanism);
+        return r is { Applies: true } ? r.Margin : null;
+    }
+
+    private static string Summarize(Verdict verdict, MechanismResult? governing, HazardPolicy policy)
+    {
+        if (governing is null)
+        {
+            return "Indeterminate: no mechanism could be checked.";
+        }
+
+        return verdict switch
+        {
+            Verdict.Clear => "Clear: every margin is at least " + SiFormat.Plain(policy.SafetyFactor) + "; the lowest is " + governing.Mechanism + " at " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
+            Verdict.Caution => "Caution: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " is below the safety factor " + SiFormat.Plain(policy.SafetyFactor) + " (" + governing.Detail + ").",
+            Verdict.Hazard => "Hazard: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
+            _ => "Indeterminate: " + governing.Mechanism + " " + governing.Detail + ".",
+        };
+    }
+}

@@ -1,0 +1,81 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Criteria;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// The verdict on one item at one place: per-mechanism results and margins, the governing mechanism, the key
+/// numbers flattened for CSV export, the cautions and the provenance. Built by <see cref="HazardAssessor"/>.
+/// </summary>
+public sealed class InductionAssessment
+{
+    /// <summary>The item's name.</summary>
+    public string ItemName { get; init; } = string.Empty;
+
+    /// <summary>The position of the item's record in the input (1-based), when it came from a pipeline or file.</summary>
+    public int? RowNumber { get; init; }
+
+    /// <summary>The source's name.</summary>
+    public string SourceName { get; init; } = string.Empty;
+
+    /// <summary>The overall verdict.</summary>
+    public Verdict Verdict { get; init; }
+
+    /// <summary>The mechanism that decides the verdict (lowest margin, or the one that cannot be judged).</summary>
+    public HazardMechanism? GoverningMechanism { get; init; }
+
+    /// <summary>The lowest margin over the mechanisms that apply; NaN when the verdict is Indeterminate.</summary>
+    public double MinimumMargin { get; init; } = double.NaN;
+
+    /// <summary>The finding in one sentence.</summary>
+    public string Summary { get; init; } = string.Empty;
+
+    /// <summary>Every mechanism checked, including those that do not apply (with the reason).</summary>
+    public IReadOnlyList<MechanismResult> Mechanisms { get; init; } = Array.Empty<MechanismResult>();
+
+    /// <summary>The Shock margin; null when it does not apply.</summary>
+    public double? ShockMargin { get; init; }
+
+    /// <summary>The Burn margin; null when it does not apply.</summary>
+    public double? BurnMargin { get; init; }
+
+    /// <summary>The Overheat margin; null when it does not apply.</summary>
+    public double? OverheatMargin { get; init; }
+
+    /// <summary>The peak emf around the loop, V.</summary>
+    public double PeakEmfVolts { get; init; }
+
+    /// <summary>The peak gap voltage of a split ring, V; null for a closed loop.</summary>
+    public double? GapVoltageVolts { get; init; }
+
+    /// <summary>The peak loop current, A.</summary>
+    public double PeakCurrentAmperes { get; init; }
+
+    /// <summary>The item's peak temperature, °C.</summary>
+    public double PeakTemperatureCelsius { get; init; }
+
+    /// <summary>The energy dissipated in the item, J.</summary>
+    public double EnergyDissipatedJoules { get; init; }
+
+    /// <summary>Why the verdict is what it is: the broken assumptions of an Indeterminate, the findings of a Hazard or Caution.</summary>
+    public IReadOnlyList<string> Reasons { get; init; } = Array.Empty<string>();
+
+    /// <summary>The cautions every assessment carries, with the standards the limits came from.</summary>
+    public IReadOnlyList<string> Cautions { get; init; } = Array.Empty<string>();
+
+    /// <summary>The policy applied.</summary>
+    public string PolicyName { get; init; } = string.Empty;
+
+    /// <summary>The safety factor applied between Clear and Caution.</summary>
+    public double SafetyFactor { get; init; }
+
+    /// <summary>The module version that produced the assessment.</summary>
+    public string ModuleVersion { get; init; } = string.Empty;
+
+    /// <summary>When the assessment was made (UTC).</summary>
+    public DateTime AssessedUtc { get; init; }
+
+    /// <summary>The physics behind the verdict.</summary>
+    public InductionResponse Response { get; init; } = null!;
+}

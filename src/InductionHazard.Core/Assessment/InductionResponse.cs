@@ -1,0 +1,131 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Induction;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// The physics of one scenario: emf, gap voltage, current, energy, temperatures and their time series, with the
+/// model used, its notes and any assumption that does not hold. Values are SI with the unit in the name.
+/// </summary>
+public sealed class InductionResponse
+{
+    /// <summary>The scenario solved.</summary>
+    public Scenario Scenario { get; init; } = null!;
+
+    /// <summary>The item's name.</summary>
+    public string ItemName => Scenario.Item.Name;
+
+    /// <summary>The source's name.</summary>
+    public string SourceName => Scenario.Source.Name;
+
+    /// <summary>The item.</summary>
+    public ConductiveItem Item => Scenario.Item;
+
+    /// <summary>The model used, in one line.</summary>
+    public string Model { get; init; } = string.Empty;
+
+    /// <summary>What the model did and why (shown with -Verbose).</summary>
+    public IReadOnlyList<string> ModelNotes { get; init; } = Array.Empty<string>();
+
+    /// <summary>Assumptions that do not hold; empty when the model is valid throughout.</summary>
+    public IReadOnlyList<ValidityIssue> ValidityIssues { get; init; } = Array.Empty<ValidityIssue>();
+
+    /// <summary>True when every model assumption holds.</summary>
+    public bool IsValid => ValidityIssues.Count == 0;
+
+    /// <summary>The loop's unit normal used.</summary>
+    public Vector3D Normal { get; init; }
+
+    /// <summary>The area of the loop, m^2.</summary>
+    public double LoopAreaSquareMeters { get; init; }
+
+    /// <summary>The largest flux density normal to the loop at its centre, T.</summary>
+    public double PeakFluxDensityTesla { get; init; }
+
+    /// <summary>The largest flux through the loop, Wb.</summary>
+    public double PeakFluxWebers { get; init; }
+
+    /// <summary>The net change of flux over a transient drive, Wb; null for an alternating drive.</summary>
+    public double? FluxChangeWebers { get; init; }
+
+    /// <summary>The drive's highest significant frequency, Hz.</summary>
+    public double FrequencyHertz { get; init; }
+
+    /// <summary>The time course of the emf.</summary>
+    public EmfKind EmfKind { get; init; }
+
+    /// <summary>The largest emf around the loop, |dPhi/dt|, V.</summary>
+    public double PeakEmfVolts { get; init; }
+
+    /// <summary>The rms emf of an alternating drive, V; null for a transient.</summary>
+    public double? RmsEmfVolts { get; init; }
+
+    /// <summary>The largest voltage across the gap of a split ring (the open-circuit emf), V; null for a closed loop.</summary>
+    public double? GapVoltageVolts { get; init; }
+
+    /// <summary>The loop's d.c. resistance at the starting temperature, ohm.</summary>
+    public double ResistanceOhms { get; init; }
+
+    /// <summary>The loop's a.c. resistance at the drive frequency (alternating drive), ohm; null otherwise.</summary>
+    public double? AcResistanceOhms { get; init; }
+
+    /// <summary>The loop's self-inductance used, H.</summary>
+    public double InductanceHenries { get; init; }
+
+    /// <summary>The loop's time constant L / R, s.</summary>
+    public double TimeConstantSeconds { get; init; }
+
+    /// <summary>The skin depth at the drive's significant frequency and the starting temperature, m.</summary>
+    public double SkinDepthMeters { get; init; }
+
+    /// <summary>Whether resistance or inductance limits the current, with the ratio that says so.</summary>
+    public string Regime { get; init; } = string.Empty;
+
+    /// <summary>The largest current around the loop, A (zero for a split ring).</summary>
+    public double PeakCurrentAmperes { get; init; }
+
+    /// <summary>The textbook estimate peak emf / R, A, shown beside the circuit result for comparison only.</summary>
+    public double? NaiveCurrentAmperes { get; init; }
+
+    /// <summary>|Delta Phi| / L, the current a change much faster than L/R tends to, A (transient drives).</summary>
+    public double? InductiveLimitCurrentAmperes { get; init; }
+
+    /// <summary>The sense of the current in plain words (Lenz's law).</summary>
+    public string CurrentSense { get; init; } = string.Empty;
+
+    /// <summary>The energy dissipated in the item, J.</summary>
+    public double EnergyDissipatedJoules { get; init; }
+
+    /// <summary>The item's temperature when the drive starts, °C.</summary>
+    public double InitialTemperatureCelsius { get; init; }
+
+    /// <summary>The item's highest temperature, °C.</summary>
+    public double PeakTemperatureCelsius { get; init; }
+
+    /// <summary>The item's temperature at the end of the exposure, °C.</summary>
+    public double FinalTemperatureCelsius { get; init; }
+
+    /// <summary>Peak minus initial temperature, K.</summary>
+    public double TemperatureRiseKelvin => PeakTemperatureCelsius - InitialTemperatureCelsius;
+
+    /// <summary>When the item reaches its melting point, s; null if it does not (beyond it the model is notional).</summary>
+    public double? MeltingReachedSeconds { get; init; }
+
+    /// <summary>The time assessed, from the start of the drive, s.</summary>
+    public double ExposureSeconds { get; init; }
+
+    /// <summary>The electrical time series (one period for an alternating drive).</summary>
+    public IReadOnlyList<CircuitSample> CircuitSeries { get; init; } = Array.Empty<CircuitSample>();
+
+    /// <summary>The temperature history over the exposure.</summary>
+    public IReadOnlyList<HeatingSample> HeatingSeries { get; init; } = Array.Empty<HeatingSample>();
+
+    /// <summary>The validity issues that affect any of the given results.</summary>
+    public IReadOnlyList<ValidityIssue> IssuesAffecting(AffectedResults results) =>
+        ValidityIssues.Where(i => (i.Affects & results) != 0).ToArray();
+}

@@ -1,0 +1,77 @@
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Criteria;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>One mechanism's check: the quantity predicted, the limit, the margin and the verdict, with the limit's source.</summary>
+public sealed class MechanismResult
+{
+    private MechanismResult(HazardMechanism mechanism)
+    {
+        Mechanism = mechanism;
+    }
+
+    /// <summary>The mechanism.</summary>
+    public HazardMechanism Mechanism { get; }
+
+    /// <summary>False when the mechanism cannot arise for this item (a closed loop has no gap to bridge).</summary>
+    public bool Applies { get; private set; }
+
+    /// <summary>The verdict; null when the mechanism does not apply.</summary>
+    public Verdict? Verdict { get; private set; }
+
+    /// <summary>What was compared ("gap voltage, rms").</summary>
+    public string Quantity { get; private set; } = string.Empty;
+
+    /// <summary>The predicted value, in <see cref="Unit"/>.</summary>
+    public double Predicted { get; private set; } = double.NaN;
+
+    /// <summary>The limit, in <see cref="Unit"/>.</summary>
+    public double Limit { get; private set; } = double.NaN;
+
+    /// <summary>The unit of the predicted value and the limit.</summary>
+    public string Unit { get; private set; } = string.Empty;
+
+    /// <summary>Limit over predicted (for temperatures: the allowed rise over the predicted rise); at least 1 passes.</summary>
+    public double Margin { get; private set; } = double.NaN;
+
+    /// <summary>Where the limit comes from.</summary>
+    public string Basis { get; private set; } = string.Empty;
+
+    /// <summary>The finding in one sentence, or why the mechanism does not apply or cannot be judged.</summary>
+    public string Detail { get; private set; } = string.Empty;
+
+    /// <summary>A mechanism that cannot arise for this item.</summary>
+    public static MechanismResult NotApplicable(HazardMechanism mechanism, string reason) =>
+        new(mechanism) { Applies = false, Detail = reason };
+
+    /// <summary>A mechanism that applies but cannot be judged (a broken assumption, a failed number).</summary>
+    public static MechanismResult Indeterminate(HazardMechanism mechanism, string basis, IEnumerable<ValidityIssue> issues) =>
+        new(mechanism)
+        {
+            Applies = true,
+            Verdict = Criteria.Verdict.Indeterminate,
+            Basis = basis,
+            Detail = "cannot be judged: " + string.Join("; ", issues.Select(i => i.Reason)),
+        };
+
+    /// <summary>A judged mechanism; the verdict follows from the margin and the safety factor.</summary>
+    public static MechanismResult Judged(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, string basis, string detail) =>
+        new(mechanism)
+        {
+            Applies = true,
+            Quantity = quantity,
+            Predicted = predicted,
+            Limit = limit,
+            Unit = unit,
+            Margin = margin,
+            Verdict = VerdictRules.FromMargin(margin, safetyFactor),
+            Basis = basis,
+            Detail = detail,
+        };
+
+    /// <summary>"Burn: Hazard (margin 0.42)".</summary>
+    public override string ToString() =>
+        Mechanism + ": " + (Applies ? Verdict + " (margin " + Quantities.SiFormat.Plain(Margin) + ")" : "not applicable");
+}

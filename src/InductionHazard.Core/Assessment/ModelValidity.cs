@@ -1,0 +1,133 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using InductionHazard.Induction;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// The assumptions of the ring models, checked per scenario. Each broken assumption becomes a
+/// <see cref="ValidityIssue"/> naming what it breaks; what holds goes into the notes.
+/// </summary>
+public static class ModelValidity
+{
+    /// <summary>Quasi-static: the item's largest dimension must stay below this fraction of the wavelength.</summary>
+    public const double QuasiStaticFraction = 0.1;
+
+    /// <summary>
+    /// Thin ring: the section's GMD over the loop radius must stay below 0.25 e^(-1/4) = 0.195, which for a round wire
+    /// is a wire radius below a quarter of the loop radius. Grover's thin-ring formula then errs by under about 2 %
+    /// (its first correction is of order (a/R)^2 / 8 ln(8R/a)).
+    /// </summary>
+    public static readonly double MaxGmdToLoopRadius = 0.25 * Math.Exp(-0.25);
+
+    /// <summary>
+    /// The d.c. resistance and inductance hold while a round wire's radius is at most one skin depth (R_ac/R_dc =
+    /// 1.020 there, Kelvin-function formula) and a band's thickness at most one skin depth and width at most two.
+    /// </summary>
+    public const double DcModelSkinDepths = 1.0;
+
+    /// <summary>Checks the scenario's assumptions.</summary>
+    /// <param name="item">The item.</param>
+    /// <param name="frequencyHertz">The drive's highest significant frequency.</param>
+    /// <param name="alternating">True when the drive is sinusoidal (round wires then carry skin effect through the Kelvin functions).</param>
+    /// <param name="startCelsius">The starting temperature.</param>
+    /// <param name="thermal">The lumped heating model of the item.</param>
+    /// <param name="issues">Receives the broken assumptions.</param>
+    /// <param name="notes">Receives what was checked and holds.</param>
+    public static void Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    {
+        ConductorMaterial material = item.Material;
+        if (material.IsFerromagnetic)
+        {
+            issues.Add(new ValidityIssue(
+                material.Name + " is ferromagnetic: its permeability depends on the field, and the pull toward the source (Attraction) is not modelled yet",
+                AffectedResults.All));
+        }
+
+        double wavelength = PhysicalConstants.SpeedOfLight / frequencyHertz;
+        double size = item.Ring.LargestDimensionMeters;
+        if (size > QuasiStaticFraction * wavelength)
+        {
+            issues.Add(new ValidityIssue(
+                "not quasi-static: the item (" + SiFormat.Format(size, "m") + ") exceeds a tenth of the wavelength (" + SiFormat.Format(wavelength, "m") + ") at " + SiFormat.Format(frequencyHertz, "Hz"),
+                AffectedResults.All));
+        }
+
+        double ratio = item.Ring.Section.GeometricMeanRadiusMeters / item.Ring.LoopRadiusMeters;
+        if (ratio > MaxGmdToLoopRadius)
+        {
+            issues.Add(new ValidityIssue(
+                "the section is too thick for the thin-ring inductance formula: GMD / loop radius = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + " (for a round wire: a diameter above half the loop radius); a solid-body model is needed",
+                AffectedResults.Current | AffectedResults.Heating));
+        }
+        else
+        {
+            notes.Add("thin-ring inductance (Grover 1946): GMD / loop radius = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
+        }
+
+        CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
+
+        double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Ring.VolumeCubicMeters, item.Ring.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
+        if (biot > LumpedThermalModel.LumpedBiotLimit)
+        {
+            issues.Add(new ValidityIssue("lumped heating does not hold: Biot number " + Num(biot) + " > 0.1", AffectedResults.Heating));
+        }
+        else
+        {
+            notes.Add("lumped heating: Biot number " + Num(biot) + " < 0.1");
+        }
+
+        if (!material.TemperatureCoefficientKnown)
+        {
+            notes.Add(material.Name + ": no confirmed temperature coefficient; resistivity held at its 20 °C value");
+        }
+    }
+
+    private static void CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    {
+        if (item.IsSplit)
+        {
+            return;
+        }
+
+        double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
+        string at = " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(delta, "m") + ")";
+        if (item.Ring.Section is RoundWire wire)
+        {
+            if (alternating)
+            {
+                notes.Add("skin effect by the Kelvin-function formula: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
+            }
+            else if (wire.RadiusMeters > DcModelSkinDepths * delta)
+            {
+                issues.Add(new ValidityIssue(
+                    "the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": the current does not fill the wire during the pulse, and the d.c. resistance and inductance do not hold (a filament model is needed)",
+                    AffectedResults.Current | AffectedResults.Heating));
+            }
+            else
+            {
+                notes.Add("d.c. resistance and inductance hold: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
+            }
+
+            return;
+        }
+
+        var band = (RectangularBand)item.Ring.Section;
+        if (band.ThicknessMeters > DcModelSkinDepths * delta || band.WidthMeters > 2 * DcModelSkinDepths * delta)
+        {
+            issues.Add(new ValidityIssue(
+                "the band (" + band.Describe() + ") is not thin against the skin depth" + at + ": the d.c. resistance and inductance do not hold (a filament model is needed)",
+                AffectedResults.Current | AffectedResults.Heating));
+        }
+        else
+        {
+            notes.Add("d.c. resistance and inductance hold: band thickness / skin depth = " + Num(band.ThicknessMeters / delta) + at);
+        }
+    }
+
+    private static string Num(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,23 @@
+namespace InductionHazard.Criteria;
+
+/// <summary>The published sources of the module's limits, cited the same way everywhere.</summary>
+public static class Standards
+{
+    /// <summary>Extra-low voltage limits.</summary>
+    public const string ExtraLowVoltage = "IEC 61140 / IEC 60364-4-41 section 414 (extra-low voltage: 50 V a.c. rms, 120 V ripple-free d.c.)";
+
+    /// <summary>Contact burn thresholds of hot surfaces.</summary>
+    public const string ContactBurn = "ISO 13732-1:2006 (burn thresholds for skin contact with hot surfaces; uncoated metal)";
+
+    /// <summary>The thermal dose model.</summary>
+    public const string ThermalDoseModel = "Sapareto and Dewey, Int J Radiat Oncol Biol Phys 10:787 (1984) (CEM43)";
+
+    /// <summary>The thermal dose limit.</summary>
+    public const string ThermalDoseLimit = "van Rhoon et al., Eur Radiol 23:2215 (2013) (2 CEM43 for uncontrolled exposure)";
+
+    /// <summary>Melting points and solidus temperatures of the materials.</summary>
+    public const string Melting = "material melting point or solidus (see Get-ConductorMaterial for each value's source)";
+
+    /// <summary>The safety factor between Clear and Caution.</summary>
+    public const string SafetyFactor = "site policy (default 2)";
+}

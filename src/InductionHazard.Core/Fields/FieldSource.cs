@@ -1,0 +1,106 @@
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+
+namespace InductionHazard.Fields;
+
+/// <summary>
+/// A magnetic field source in air: B(p, t) = sum over terms of b_k(p) d_k(t). The first slice of the module
+/// has the uniform field; conductors, coils and dipoles add terms of their own.
+/// </summary>
+public sealed class FieldSource
+{
+    /// <summary>Creates a source from its terms.</summary>
+    /// <exception cref="InvalidInputException">No terms, or a waveform whose drive does not fit its geometry.</exception>
+    public FieldSource(string name, IReadOnlyList<SourceTerm> terms)
+    {
+        if (terms.Count == 0)
+        {
+            throw new InvalidInputException("Source", "a source needs at least one term");
+        }
+
+        foreach (SourceTerm term in terms)
+        {
+            if (term.Waveform.Drive != DriveKind.Unspecified && term.Waveform.Drive != term.Geometry.Drive)
+            {
+                throw new InvalidInputException(
+                    "Waveform",
+                    "the " + term.Geometry.Describe() + " is driven by " + DriveWords(term.Geometry.Drive)
+                    + ", but the waveform is in " + DriveWords(term.Waveform.Drive));
+            }
+        }
+
+        Name = string.IsNullOrWhiteSpace(name) ? "source" : name.Trim();
+        Terms = terms;
+    }
+
+    /// <summary>The source's name, as it appears in assessments and reports.</summary>
+    public string Name { get; }
+
+    /// <summary>The terms that sum to the field.</summary>
+    public IReadOnlyList<SourceTerm> Terms { get; }
+
+    /// <summary>The form of the source ("Uniform").</summary>
+    public string Kind => Terms.All(t => t.Geometry is UniformField) ? "Uniform" : "Composite";
+
+    /// <summary>Creates a uniform source along a direction driven by a waveform in tesla.</summary>
+    public static FieldSource Uniform(string name, FieldWaveform waveform, Vector3D direction) =>
+        new(name, new[] { new SourceTerm(new UniformField(direction), waveform) });
+
+    /// <summary>The field at a point and time, T.</summary>
+    public Vector3D FieldAt(Vector3D point, double t)
+    {
+        Vector3D sum = Vector3D.Zero;
+        foreach (SourceTerm term in Terms)
+        {
+            sum += term.Waveform.Value(t) * term.Geometry.FieldPerUnitDrive(point);
+        }
+
+        return sum;
+    }
+
+    /// <summary>The largest |B| the source can give at a point: the sum of the terms' peak magnitudes, T.</summary>
+    public double PeakFieldBound(Vector3D point) =>
+        Terms.Sum(t => t.Waveform.PeakValue * t.Geometry.FieldPerUnitDrive(point).Length);
+
+    /// <summary>A one-line description.</summary>
+    public string Describe() =>
+        Name + ": " + string.Join(" + ", Terms.Select(t => t.Geometry.Describe() + ", " + t.Waveform.Describe()));
+
+    /// <inheritdoc />
+    public override string ToString() => Describe();
+
+    private static string DriveWords(DriveKind drive) => drive switch
+    {
+        DriveKind.FluxDensity => "a flux density (tesla)",
+        DriveKind.Current => "a current (amperes)",
+        _ => "unspecified units",
+    };
+
+    /// <summary>The union of the terms' breakpoints within [from, to], sorted and distinct.</summary>
+    public IReadOnlyList<double> BreakpointsBetween(double from, double to) =>
+        Terms.SelectMany(t => t.Waveform.Breakpoints)
+            .Where(b => b > from && b < to && !double.IsInfinity(b))
+            .Distinct()
+            .OrderBy(b => b)
+            .ToArray();
+
+    /// <summary>The highest significant frequency over the terms, Hz.</summary>
+    public double SignificantFrequencyHertz => Terms.Max(t => t.Waveform.SignificantFrequencyHertz);
+
+    /// <summary>The earliest start of any term, s.</summary>
+    public double StartSeconds => Terms.Min(t => t.Waveform.StartSeconds);
+
+    /// <summary>The latest end of any term, s (infinity when one runs on).</summary>
+    public double EndSeconds => Terms.Max(t => t.Waveform.EndSeconds);
+
+    /// <summary>True when every term is periodic with the same period (a phasor-capable source).</summary>
+    public bool IsPeriodic =>
+        Terms.All(t => t.Waveform.IsPeriodic)
+        && Terms.Select(t => t.Waveform.PeriodSeconds).Distinct().Count() == 1;
+
+    /// <summary>True when every term is a sinusoid of one frequency.</summary>
+    public bool IsSinusoidal => IsPeriodic && Terms.All(t => t.Waveform is SineWaveform);
+}

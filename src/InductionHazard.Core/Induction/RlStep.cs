@@ -1,0 +1,68 @@
+using System;
+using MathNet.Numerics;
+using MathNet.Numerics.Integration;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// The exact solution of L di/ds + R i = e0 + g s over one step with L and R fixed (an exponential integrator):
+/// i(s) = i0 e^(-s/tau) + (e0/R)(1 - e^(-s/tau)) + (g/R)(s - tau (1 - e^(-s/tau))), tau = L/R.
+/// Exact for an emf that is piecewise linear in time (a ramp's emf is piecewise constant).
+/// </summary>
+internal static class RlStep
+{
+    private static readonly GaussLegendreRule Rule = new(0, 1, 8);
+
+    /// <summary>The current after s seconds.</summary>
+    public static double Current(double l, double r, double i0, double e0, double slope, double s)
+    {
+        double tau = l / r;
+        double x = s / tau;
+        double phi1 = -SpecialFunctions.Expm1(-x);               // 1 - e^(-x)
+        double phi2 = x < 1e-4 ? tau * x * x * (0.5 - (x / 6) + (x * x / 24)) : s - (tau * phi1); // s - tau (1 - e^(-x)), without cancellation
+        return (i0 * (1 - phi1)) + (e0 / r * phi1) + (slope / r * phi2);
+    }
+
+    /// <summary>The energy R times the integral of i^2 over [0, h], J (8-point Gauss-Legendre on the exact current).</summary>
+    public static double Energy(double l, double r, double i0, double e0, double slope, double h)
+    {
+        double sum = 0;
+        for (int k = 0; k < Rule.Order; k++)
+        {
+            double i = Current(l, r, i0, e0, slope, Rule.Abscissas[k] * h);
+            sum += Rule.Weights[k] * i * i;
+        }
+
+        return r * sum * h;
+    }
+
+    /// <summary>The largest |i| over [0, h] and where it occurs: the ends or the one interior extremum of i(s).</summary>
+    public static (double Current, double At) Peak(double l, double r, double i0, double e0, double slope, double h)
+    {
+        double end = Current(l, r, i0, e0, slope, h);
+        (double current, double at) best = Math.Abs(end) > Math.Abs(i0) ? (end, h) : (i0, 0.0);
+
+        // i(s) = a + b s + c e^(-s/tau); di/ds = 0 where e^(-s/tau) = b tau / c.
+        double tau = l / r;
+        double b = slope / r;
+        double c = i0 - (e0 / r) + (slope * tau / r);
+        if (b != 0 && c != 0)
+        {
+            double ratio = b * tau / c;
+            if (ratio > 0 && ratio < 1)
+            {
+                double s = -tau * Math.Log(ratio);
+                if (s > 0 && s < h)
+                {
+                    double i = Current(l, r, i0, e0, slope, s);
+                    if (Math.Abs(i) > Math.Abs(best.current))
+                    {
+                        best = (i, s);
+                    }
+                }
+            }
+        }
+
+        return best;
+    }
+}

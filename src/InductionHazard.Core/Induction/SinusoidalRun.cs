@@ -1,0 +1,30 @@
+using System.Collections.Generic;
+using System.Numerics;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Induction;
+
+/// <summary>What <see cref="SinusoidalLoopSolver"/> found.</summary>
+public sealed class SinusoidalRun
+{
+    /// <summary>The current phasor at the start temperature (peak value; i(t) = Im(I e^(j omega t))), A.</summary>
+    public Complex CurrentPhasor { get; init; }
+
+    /// <summary>The loop impedance at the start temperature, ohm.</summary>
+    public Complex Impedance { get; init; }
+
+    /// <summary>The largest current amplitude over the heating history, A.</summary>
+    public double PeakCurrentAmperes { get; init; }
+
+    /// <summary>One period of emf and current at the start temperature.</summary>
+    public IReadOnlyList<CircuitSample> Circuit { get; init; } = System.Array.Empty<CircuitSample>();
+
+    /// <summary>The temperature history with the cycle-averaged power.</summary>
+    public IReadOnlyList<HeatingSample> Heating { get; init; } = System.Array.Empty<HeatingSample>();
+
+    /// <summary>The energy dissipated while the field runs, J.</summary>
+    public double EnergyJoules { get; init; }
+
+    /// <summary>The temperature at the end of the exposure, °C.</summary>
+    public double FinalCelsius { get; init; }
+}

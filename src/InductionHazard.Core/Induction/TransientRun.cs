@@ -1,0 +1,32 @@
+using System.Collections.Generic;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Induction;
+
+/// <summary>What <see cref="TransientLoopSolver"/> found.</summary>
+public sealed class TransientRun
+{
+    /// <summary>The electrical time series (thinned to what a chart needs; peaks are exact, not sampled).</summary>
+    public IReadOnlyList<CircuitSample> Circuit { get; init; } = System.Array.Empty<CircuitSample>();
+
+    /// <summary>The temperature history.</summary>
+    public IReadOnlyList<HeatingSample> Heating { get; init; } = System.Array.Empty<HeatingSample>();
+
+    /// <summary>The current of largest magnitude (signed), A.</summary>
+    public double PeakCurrentAmperes { get; init; }
+
+    /// <summary>When the peak current occurs, s.</summary>
+    public double PeakCurrentSeconds { get; init; }
+
+    /// <summary>The energy dissipated in the loop, J.</summary>
+    public double EnergyJoules { get; init; }
+
+    /// <summary>The temperature at the end, °C.</summary>
+    public double FinalCelsius { get; init; }
+
+    /// <summary>The steps taken.</summary>
+    public int Steps { get; init; }
+
+    /// <summary>True when the step budget ran out before the end (the result is then incomplete).</summary>
+    public bool BudgetExceeded { get; init; }
+}

@@ -1,0 +1,58 @@
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Items;
+
+/// <summary>
+/// A conductive thing that a person wears, carries or installs near a field: its shape, material, dimensions,
+/// any gap, and how a person touches it. Built by <see cref="ItemRecordReader"/> from parameters or a data row.
+/// </summary>
+public sealed class ConductiveItem
+{
+    internal ConductiveItem(string name, ItemShape shape, ConductorMaterial material, RingGeometry ring, double gapMeters, ContactKind contact)
+    {
+        Name = name;
+        Shape = shape;
+        Material = material;
+        Ring = ring;
+        GapMeters = gapMeters;
+        Contact = contact;
+    }
+
+    /// <summary>The item's name as given in the inventory.</summary>
+    public string Name { get; }
+
+    /// <summary>The shape.</summary>
+    public ItemShape Shape { get; }
+
+    /// <summary>The material.</summary>
+    public ConductorMaterial Material { get; }
+
+    /// <summary>The loop geometry.</summary>
+    public RingGeometry Ring { get; }
+
+    /// <summary>The width of the gap in a split ring, m; zero for a closed loop.</summary>
+    public double GapMeters { get; }
+
+    /// <summary>How a person touches the item.</summary>
+    public ContactKind Contact { get; }
+
+    /// <summary>True for a split ring or open loop (a gap that carries the emf and no current).</summary>
+    public bool IsSplit => GapMeters > 0;
+
+    /// <summary>The mean diameter, m.</summary>
+    public double MeanDiameterMeters => Ring.MeanDiameterMeters;
+
+    /// <summary>The metal mass, kg (the gap's missing metal neglected).</summary>
+    public double MassKilograms => Ring.VolumeCubicMeters * Material.DensityKilogramsPerCubicMeter;
+
+    /// <summary>The d.c. resistance around the loop at 20 °C, rho l / S, ohm.</summary>
+    public double ResistanceOhms => Material.ResistivityOhmMeters * Ring.PathLengthMeters / Ring.Section.AreaSquareMeters;
+
+    /// <summary>"Wedding band: Ring, Gold, D 19.8 mm, 4 mm x 1.6 mm band, closed, Skin".</summary>
+    public string Describe() =>
+        Name + ": " + Shape + ", " + Material.Name + ", D " + SiFormat.Format(MeanDiameterMeters, "m") + ", "
+        + Ring.Section.Describe() + ", " + (IsSplit ? "gap " + SiFormat.Format(GapMeters, "m") : "closed") + ", " + Contact;
+
+    /// <inheritdoc />
+    public override string ToString() => Name;
+}

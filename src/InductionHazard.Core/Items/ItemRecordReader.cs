@@ -1,0 +1,218 @@
+using System;
+using System.Collections;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Items;
+
+/// <summary>
+/// Builds a <see cref="ConductiveItem"/> from named values: a CSV row, a hashtable or the parameters of
+/// New-ConductiveItem. Columns: Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and
+/// Thickness, Gap, Contact (names match without regard to case, spaces and underscores; common spellings are
+/// aliases). Other columns (location, asset tag, notes) are ignored. Every problem in the record is reported
+/// at once, naming the record and the field.
+/// </summary>
+public static class ItemRecordReader
+{
+    /// <summary>The aliases each field accepts, for documentation and completion.</summary>
+    public static IReadOnlyDictionary<string, string[]> Aliases { get; } = new Dictionary<string, string[]>
+    {
+        ["Name"] = new[] { "Item", "ItemName", "Description" },
+        ["Shape"] = new[] { "Form", "Type" },
+        ["Material"] = new[] { "Metal", "Alloy" },
+        ["Diameter"] = new[] { "MeanDiameter", "D" },
+        ["InnerDiameter"] = new[] { "ID", "InsideDiameter", "Inner" },
+        ["WireDiameter"] = new[] { "Wire", "WireDia" },
+        ["Width"] = new[] { "BandWidth" },
+        ["Thickness"] = new[] { "BandThickness" },
+        ["Gap"] = new[] { "GapWidth", "Split" },
+        ["Contact"] = new[] { "ContactKind", "Wear", "Worn" },
+    };
+
+    /// <summary>Reads one item.</summary>
+    /// <param name="record">The named values.</param>
+    /// <param name="materials">Where material names are looked up.</param>
+    /// <param name="rowNumber">The record's position in its input (1-based), for messages; null for a single item.</param>
+    /// <exception cref="RecordException">Something in the record is missing, malformed or out of range.</exception>
+    public static ConductiveItem Read(IEnumerable<KeyValuePair<string, object?>> record, MaterialLibrary materials, int? rowNumber = null)
+    {
+        var fields = new RecordFields(record);
+        string? name = fields.Text("Name", required: false, A("Name"));
+        ItemShape shape = fields.Choice<ItemShape>("Shape", required: false, A("Shape")) ?? ItemShape.Ring;
+        ConductorMaterial? material = ReadMaterial(fields, materials);
+        double? mean = fields.Quantity("Diameter", QuantityKind.Length, required: false, A("Diameter"));
+        double? inner = fields.Quantity("InnerDiameter", QuantityKind.Length, required: false, A("InnerDiameter"));
+        double? wire = fields.Quantity("WireDiameter", QuantityKind.Length, required: false, A("WireDiameter"));
+        double? width = fields.Quantity("Width", QuantityKind.Length, required: false, A("Width"));
+        double? thickness = fields.Quantity("Thickness", QuantityKind.Length, required: false, A("Thickness"));
+        double gap = fields.Quantity("Gap", QuantityKind.Length, required: false, A("Gap")) ?? 0.0;
+        ContactKind contact = fields.Choice<ContactKind>("Contact", required: false, A("Contact")) ?? ContactKind.Skin;
+
+        string label = Label(rowNumber, name);
+        CrossSection? section = ReadSection(fields, wire, width, thickness);
+        double? diameter = ReadDiameter(fields, mean, inner, section);
+        if (diameter is { } d)
+        {
+            double circumference = Math.PI * d;
+            if (gap < 0)
+            {
+                fields.AddError("Gap", "must be zero (a closed loop) or more; got " + Mm(gap));
+            }
+            else if (gap >= circumference)
+            {
+                fields.AddError("Gap", "(" + Mm(gap) + ") must be shorter than the loop's circumference (" + Mm(circumference) + ")");
+            }
+        }
+
+        if (fields.Errors.Count > 0)
+        {
+            throw new RecordException(label, fields.Errors);
+        }
+
+        return new ConductiveItem(
+            string.IsNullOrWhiteSpace(name) ? (rowNumber is { } r ? "row " + r.ToString(CultureInfo.InvariantCulture) : "item") : name!,
+            shape,
+            material!,
+            new RingGeometry(diameter!.Value, section!),
+            gap,
+            contact);
+    }
+
+    /// <summary>How a record is named in messages: "row 7 ('Wedding band')", or "item 'Wedding band'".</summary>
+    public static string Label(int? rowNumber, string? name)
+    {
+        string quoted = string.IsNullOrWhiteSpace(name) ? string.Empty : "'" + name + "'";
+        if (rowNumber is { } r)
+        {
+            return "row " + r.ToString(CultureInfo.InvariantCulture) + (quoted.Length > 0 ? " (" + quoted + ")" : string.Empty);
+        }
+
+        return quoted.Length > 0 ? "item " + quoted : "item";
+    }
+
+    private static string[] A(string field) => Aliases[field];
+
+    private static ConductorMaterial? ReadMaterial(RecordFields fields, MaterialLibrary materials)
+    {
+        object? raw = fields.Raw("Material", required: true, A("Material"));
+        switch (raw)
+        {
+            case null:
+                return null;
+            case ConductorMaterial material:
+                return material;
+            case IDictionary dictionary:
+                try
+                {
+                    return MaterialLibrary.Define(dictionary.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, dictionary[k])));
+                }
+                catch (RecordException ex)
+                {
+                    fields.AddError("Material", ex.Message, ex.ErrorId);
+                    return null;
+                }
+
+            default:
+                string name = Convert.ToString(raw, CultureInfo.InvariantCulture)?.Trim() ?? string.Empty;
+                try
+                {
+                    return materials.Find(name);
+                }
+                catch (UnknownMaterialException ex)
+                {
+                    fields.AddError("Material", ex.Message, ex.ErrorId);
+                    return null;
+                }
+        }
+    }
+
+    private static CrossSection? ReadSection(RecordFields fields, double? wire, double? width, double? thickness)
+    {
+        bool hasWire = fields.Has("WireDiameter", A("WireDiameter"));
+        bool hasBand = fields.Has("Width", A("Width")) || fields.Has("Thickness", A("Thickness"));
+        if (hasWire && hasBand)
+        {
+            fields.AddError("WireDiameter", "give WireDiameter for a round wire or Width and Thickness for a band, not both");
+            return null;
+        }
+
+        if (hasWire)
+        {
+            return Positive(fields, "WireDiameter", wire) ? new RoundWire(wire!.Value) : null;
+        }
+
+        if (hasBand)
+        {
+            if (!fields.Has("Width", A("Width")))
+            {
+                fields.AddError("Width", "is missing (a band needs Width and Thickness)");
+            }
+
+            if (!fields.Has("Thickness", A("Thickness")))
+            {
+                fields.AddError("Thickness", "is missing (a band needs Width and Thickness)");
+            }
+
+            bool ok = Positive(fields, "Width", width) & Positive(fields, "Thickness", thickness);
+            return ok ? new RectangularBand(width!.Value, thickness!.Value) : null;
+        }
+
+        fields.AddError("WireDiameter", "is missing (give WireDiameter for a round wire, or Width and Thickness for a band)");
+        return null;
+    }
+
+    private static double? ReadDiameter(RecordFields fields, double? mean, double? inner, CrossSection? section)
+    {
+        bool hasMean = fields.Has("Diameter", A("Diameter"));
+        bool hasInner = fields.Has("InnerDiameter", A("InnerDiameter"));
+        if (hasMean && hasInner)
+        {
+            fields.AddError("Diameter", "give Diameter (the loop's mean diameter) or InnerDiameter, not both");
+            return null;
+        }
+
+        if (!hasMean && !hasInner)
+        {
+            fields.AddError("Diameter", "is missing (give the loop's mean diameter as Diameter, or InnerDiameter as jewellers size rings)");
+            return null;
+        }
+
+        string field = hasMean ? "Diameter" : "InnerDiameter";
+        double? given = hasMean ? mean : inner;
+        if (!Positive(fields, field, given) || section is null)
+        {
+            return null;
+        }
+
+        double radial = section.RadialExtentMeters;
+        double diameter = hasMean ? given!.Value : given!.Value + radial;
+        if (hasMean && diameter <= radial)
+        {
+            fields.AddError("Diameter", "(" + Mm(diameter) + ") must exceed the section's radial extent (" + Mm(radial) + "): the loop would have no hole");
+            return null;
+        }
+
+        return diameter;
+    }
+
+    private static bool Positive(RecordFields fields, string field, double? value)
+    {
+        if (value is null)
+        {
+            return false;
+        }
+
+        if (!(value.Value > 0))
+        {
+            fields.AddError(field, "must be greater than zero; got " + Mm(value.Value));
+            return false;
+        }
+
+        return true;
+    }
+
+    private static string Mm(double metres) => SiFormat.Format(metres, "m");
+}

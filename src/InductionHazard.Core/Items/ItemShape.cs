@@ -1,0 +1,8 @@
+namespace InductionHazard.Items;
+
+/// <summary>The geometric form of a conductive item.</summary>
+public enum ItemShape
+{
+    /// <summary>A circular loop of round wire or of a rectangular band: rings, bands, bracelets, bangles; closed or split.</summary>
+    Ring,
+}

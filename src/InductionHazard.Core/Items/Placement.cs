@@ -1,0 +1,49 @@
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Items;
+
+/// <summary>
+/// Where an item is and how its loop faces: the loop's centre and the unit normal of its plane. Without a
+/// normal the loop faces the field at its centre (the worst case for induction).
+/// </summary>
+public sealed class Placement
+{
+    /// <summary>Creates a placement.</summary>
+    /// <exception cref="InvalidInputException">The normal is zero or not finite, or the centre is not finite.</exception>
+    public Placement(Vector3D centre, Vector3D? normal = null)
+    {
+        if (!centre.IsFinite)
+        {
+            throw new InvalidInputException("Position", "must be finite; got " + centre);
+        }
+
+        Centre = centre;
+        Normal = normal is { } n ? Require.Direction("Normal", n) : null;
+    }
+
+    /// <summary>The loop at the origin facing the field.</summary>
+    public static Placement FacingField { get; } = new(Vector3D.Zero);
+
+    /// <summary>The loop's centre, m.</summary>
+    public Vector3D Centre { get; }
+
+    /// <summary>The loop's unit normal, or null to face the field.</summary>
+    public Vector3D? Normal { get; }
+
+    /// <summary>
+    /// The normal to use with a source: the given one, else the direction of the first term's field per unit
+    /// drive at the centre (the worst case for a single-term source); +z when that field is zero.
+    /// </summary>
+    public Vector3D ResolveNormal(FieldSource source)
+    {
+        if (Normal is { } n)
+        {
+            return n;
+        }
+
+        Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(Centre);
+        return b.Length > 0 && b.IsFinite ? b.Normalized() : Vector3D.UnitZ;
+    }
+}

@@ -1,0 +1,221 @@
+using System;
+using System.Globalization;
+using System.Linq;
+using System.Text.RegularExpressions;
+using InductionHazard.Errors;
+using UnitsNet;
+
+namespace InductionHazard.Quantities;
+
+/// <summary>
+/// Reads a quantity from a number (taken in the kind's canonical unit) or from a string with a unit
+/// ("20 mm", "1.5 T", "2 ms", "150 G"), using UnitsNet for units and conversions. Accepts the ASCII
+/// spellings people type in a shell where UnitsNet wants a symbol: "us" and "uT" for micro, "ohm" and
+/// "kohm" for the ohm, "degC" for degrees Celsius, "mm2" for square millimetres.
+/// </summary>
+public static class QuantityParser
+{
+    private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
+
+    private static readonly Regex NumberAndUnit = new(
+        @"^\s*(?<number>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>.*?)\s*$",
+        RegexOptions.CultureInvariant);
+
+    private static readonly Regex Ohm = new(@"(?i:ohms?)(?![a-z])", RegexOptions.CultureInvariant);
+
+    private static readonly Regex OhmMetre = new(@"Ω\s*[\*\.\-·× ]?\s*(?<len>c?m)$", RegexOptions.CultureInvariant);
+
+    private static readonly Regex PowerSuffix = new(@"(?<=[a-zA-Zµ])\^?(?<pow>[23])(?![0-9])", RegexOptions.CultureInvariant);
+
+    /// <summary>Parses a value of the given kind into the kind's canonical unit, or throws.</summary>
+    /// <exception cref="QuantityFormatException">The value is empty, not a number, not finite, or not of the kind.</exception>
+    public static double Parse(object? input, QuantityKind kind)
+    {
+        if (TryParse(input, kind, out double value, out string? error))
+        {
+            return value;
+        }
+
+        throw new QuantityFormatException(error!, Display(input), kind);
+    }
+
+    /// <summary>Parses a value of the given kind; on failure gives the reason instead of throwing.</summary>
+    public static bool TryParse(object? input, QuantityKind kind, out double value, out string? error)
+    {
+        QuantityKindInfo info = QuantityKindInfo.Of(kind);
+        value = double.NaN;
+        error = null;
+        switch (input)
+        {
+            case null:
+                error = "no value given; expected " + Expectation(info);
+                return false;
+            case double or float or decimal or int or long or short or byte or sbyte or uint or ulong or ushort:
+                value = Convert.ToDouble(input, Invariant);
+                return CheckFinite(value, Display(input), out error);
+            case string text:
+                return TryParseText(text, info, out value, out error);
+            default:
+                error = "got a " + input.GetType().Name + " ('" + Display(input) + "'); expected " + Expectation(info);
+                return false;
+        }
+    }
+
+    /// <summary>
+    /// Parses a value that may be any one of several kinds (a drive may be a flux density or a current).
+    /// Returns the kind found; a bare number returns null for the kind.
+    /// </summary>
+    public static (double Value, QuantityKind? Kind) ParseOneOf(object? input, params QuantityKind[] kinds)
+    {
+        if (input is string text && IsBareNumber(text) || input is not string && input is not null)
+        {
+            return (Parse(input, kinds[0]), null);
+        }
+
+        foreach (QuantityKind kind in kinds)
+        {
+            if (TryParse(input, kind, out double value, out _))
+            {
+                return (value, kind);
+            }
+        }
+
+        string expected = string.Join(" or ", kinds.Select(k => QuantityKindInfo.Of(k).Description + " such as " + QuantityKindInfo.Of(k).Example));
+        string found = input is string s ? DimensionOf(s) : null ?? string.Empty;
+        throw new QuantityFormatException(
+            "expected " + expected + "; got '" + Display(input) + "'" + (found.Length > 0 ? ", which is " + found : string.Empty),
+            Display(input),
+            kinds[0]);
+    }
+
+    private static bool IsBareNumber(string text)
+    {
+        Match m = NumberAndUnit.Match(text);
+        return m.Success && m.Groups["unit"].Value.Length == 0;
+    }
+
+    private static bool TryParseText(string text, QuantityKindInfo info, out double value, out string? error)
+    {
+        value = double.NaN;
+        error = null;
+        string trimmed = text.Trim();
+        if (trimmed.Length == 0)
+        {
+            error = "no value given (the field is empty); expected " + Expectation(info);
+            return false;
+        }
+
+        if (trimmed.Equals("NaN", StringComparison.OrdinalIgnoreCase) || trimmed.IndexOf("Infinity", StringComparison.OrdinalIgnoreCase) >= 0 || trimmed.Contains("∞"))
+        {
+            error = "'" + trimmed + "' is not a finite number; expected " + Expectation(info);
+            return false;
+        }
+
+        Match match = NumberAndUnit.Match(trimmed);
+        if (!match.Success)
+        {
+            error = "'" + trimmed + "' is not a number with a unit; expected " + Expectation(info);
+            return false;
+        }
+
+        double number = double.Parse(match.Groups["number"].Value, NumberStyles.Float, Invariant);
+        string unitText = match.Groups["unit"].Value;
+        if (unitText.Length == 0)
+        {
+            value = number;
+            return CheckFinite(value, trimmed, out error);
+        }
+
+        if (TryUnit(unitText, info, out Enum? unit))
+        {
+            value = UnitsNet.Quantity.From(number, unit!).As(info.CanonicalUnit);
+            return CheckFinite(value, trimmed, out error);
+        }
+
+        string dimension = DimensionOf(unitText);
+        error = dimension.Length > 0
+            ? "expected " + Expectation(info) + "; got '" + trimmed + "', which is " + dimension
+            : "'" + unitText + "' is not a unit of " + info.Description.Substring(info.Description.IndexOf(' ') + 1)
+                + "; expected " + Expectation(info);
+        return false;
+    }
+
+    private static bool CheckFinite(double value, string shown, out string? error)
+    {
+        error = Finite.Is(value) ? null : "'" + shown + "' is not a finite number";
+        return error is null;
+    }
+
+    private static string Expectation(QuantityKindInfo info) =>
+        info.Description + " such as " + info.Example + " or a number in " + info.CanonicalSymbol;
+
+    /// <summary>Tries the unit as typed, then its ASCII spellings normalised to UnitsNet symbols.</summary>
+    private static bool TryUnit(string unitText, QuantityKindInfo info, out Enum? unit)
+    {
+        foreach (string candidate in Spellings(unitText, info.Kind))
+        {
+            if (UnitParser.Default.TryParse(candidate, info.UnitType, Invariant, out Enum? parsed))
+            {
+                unit = parsed;
+                return true;
+            }
+        }
+
+        unit = null;
+        return false;
+    }
+
+    private static string[] Spellings(string unitText, QuantityKind kind)
+    {
+        string s = unitText.Trim()
+            .Replace('\u03BC', '\u00B5')   // Greek mu to the micro sign UnitsNet uses
+            .Replace('\u00BA', '\u00B0');  // ordinal indicator typed for a degree sign
+        s = Ohm.Replace(s, "Ω");
+        s = OhmMetre.Replace(s, "Ω·${len}");
+        s = PowerSuffix.Replace(s, m => m.Groups["pow"].Value == "2" ? "²" : "³");
+        if (kind is QuantityKind.Temperature or QuantityKind.TemperatureDifference)
+        {
+            s = Regex.Replace(s, @"^(?i:deg(?:rees?)?\.?\s*)?C$", "°C", RegexOptions.CultureInvariant);
+            s = Regex.Replace(s, @"^(?i:deg(?:rees?)?\.?\s*)F$", "°F", RegexOptions.CultureInvariant);
+        }
+
+        string micro = s.Length > 1 && s[0] == 'u' ? "µ" + s.Substring(1) : s;
+        string words = s.ToLowerInvariant() switch
+        {
+            "gauss" => "G",
+            "tesla" => "T",
+            "hz" => "Hz",
+            "khz" => "kHz",
+            "sec" or "secs" or "second" or "seconds" => "s",
+            "hrs" or "hour" or "hours" => "h",
+            "mins" or "minute" or "minutes" => "min",
+            "amp" or "amps" => "A",
+            "kiloamp" or "kiloamps" or "kamp" or "kamps" => "kA",
+            _ => s,
+        };
+        return new[] { unitText.Trim(), s, micro, words };
+    }
+
+    /// <summary>Names the dimension of a unit string when UnitsNet knows the unit, else an empty string.</summary>
+    private static string DimensionOf(string unitOrQuantity)
+    {
+        Match m = NumberAndUnit.Match(unitOrQuantity);
+        string unitText = m.Success && m.Groups["unit"].Value.Length > 0 ? m.Groups["unit"].Value : unitOrQuantity;
+        foreach (QuantityKindInfo other in QuantityKindInfo.All)
+        {
+            if (TryUnit(unitText, other, out _))
+            {
+                return other.Description;
+            }
+        }
+
+        return string.Empty;
+    }
+
+    private static string Display(object? input) => input switch
+    {
+        null => "(nothing)",
+        IFormattable f => f.ToString(null, Invariant),
+        _ => input.ToString() ?? string.Empty,
+    };
+}

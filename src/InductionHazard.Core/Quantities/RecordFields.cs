@@ -1,0 +1,162 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using InductionHazard.Errors;
+
+namespace InductionHazard.Quantities;
+
+/// <summary>
+/// Reads the fields of one data record (a CSV row, a hashtable) by name, matching names without regard to case,
+/// spaces, hyphens, underscores or dots, and through each field's aliases. Collects every problem as a
+/// <see cref="FieldError"/> instead of stopping at the first, so one message can list them all.
+/// </summary>
+public sealed class RecordFields
+{
+    private readonly Dictionary<string, object?> _values = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, string> _keyByName = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _used = new(StringComparer.Ordinal);
+    private readonly List<FieldError> _errors = new();
+
+    /// <summary>Reads a record given as name-value pairs.</summary>
+    public RecordFields(IEnumerable<KeyValuePair<string, object?>> record)
+    {
+        foreach (KeyValuePair<string, object?> pair in record)
+        {
+            string key = Normalize(pair.Key);
+            if (!_values.ContainsKey(key))
+            {
+                _values[key] = pair.Value;
+                _keyByName[key] = pair.Key;
+            }
+        }
+    }
+
+    /// <summary>The problems found so far.</summary>
+    public IReadOnlyList<FieldError> Errors => _errors;
+
+    /// <summary>True when a field (or one of its aliases) holds a non-empty value.</summary>
+    public bool Has(string field, params string[] aliases) => Find(field, aliases) is not null;
+
+    /// <summary>Reads a quantity; null when absent (and an error when required).</summary>
+    public double? Quantity(string field, QuantityKind kind, bool required, params string[] aliases)
+    {
+        object? raw = Raw(field, required, aliases);
+        if (raw is null)
+        {
+            return null;
+        }
+
+        if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
+        {
+            return value;
+        }
+
+        _errors.Add(new FieldError(field, error!, "InvalidQuantity"));
+        return null;
+    }
+
+    /// <summary>Reads a plain number (dimensionless or in a stated unit); null when absent.</summary>
+    public double? Number(string field, bool required, params string[] aliases)
+    {
+        object? raw = Raw(field, required, aliases);
+        if (raw is null)
+        {
+            return null;
+        }
+
+        string text = Convert.ToString(raw, CultureInfo.InvariantCulture)?.Trim() ?? string.Empty;
+        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) && Finite.Is(value))
+        {
+            return value;
+        }
+
+        _errors.Add(new FieldError(field, "'" + text + "' is not a finite number", "InvalidQuantity"));
+        return null;
+    }
+
+    /// <summary>Reads text; null when absent (and an error when required).</summary>
+    public string? Text(string field, bool required, params string[] aliases)
+    {
+        object? raw = Raw(field, required, aliases);
+        return raw is null ? null : Convert.ToString(raw, CultureInfo.InvariantCulture)?.Trim();
+    }
+
+    /// <summary>Reads the raw value of a field; null when absent (and an error when required).</summary>
+    public object? Raw(string field, bool required, params string[] aliases)
+    {
+        string? key = Find(field, aliases);
+        if (key is null)
+        {
+            if (required)
+            {
+                _errors.Add(new FieldError(field, "is missing", "InvalidInput"));
+            }
+
+            return null;
+        }
+
+        _used.Add(key);
+        return _values[key];
+    }
+
+    /// <summary>Reads a value of an enumeration by name (case-insensitive); null when absent.</summary>
+    public TEnum? Choice<TEnum>(string field, bool required, params string[] aliases)
+        where TEnum : struct, Enum
+    {
+        object? raw = Raw(field, required, aliases);
+        if (raw is null)
+        {
+            return null;
+        }
+
+        if (raw is TEnum typed)
+        {
+            return typed;
+        }
+
+        string text = Convert.ToString(raw, CultureInfo.InvariantCulture)?.Trim() ?? string.Empty;
+        foreach (string name in Enum.GetNames(typeof(TEnum)))
+        {
+            if (string.Equals(name, text, StringComparison.OrdinalIgnoreCase))
+            {
+                return (TEnum)Enum.Parse(typeof(TEnum), name);
+            }
+        }
+
+        AddError(field, "'" + text + "' is not one of " + string.Join(", ", Enum.GetNames(typeof(TEnum))), "InvalidInput");
+        return null;
+    }
+
+    /// <summary>Records a problem found by the caller.</summary>
+    public void AddError(string field, string message, string errorId = "InvalidInput") =>
+        _errors.Add(new FieldError(field, message, errorId));
+
+    /// <summary>The record's field names (as given) that no read has used.</summary>
+    public IEnumerable<string> UnusedNames() =>
+        _values.Where(p => !_used.Contains(p.Key) && !IsEmpty(p.Value)).Select(p => _keyByName[p.Key]);
+
+    /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
+    public static string Normalize(string name)
+    {
+        var chars = name.Where(c => !char.IsWhiteSpace(c) && c != '-' && c != '_' && c != '.').ToArray();
+        return new string(chars).ToLowerInvariant();
+    }
+
+    private string? Find(string field, string[] aliases)
+    {
+        foreach (string name in new[] { field }.Concat(aliases))
+        {
+            string key = Normalize(name);
+            if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
+            {
+                return key;
+            }
+        }
+
+        return null;
+    }
+
+    private static bool IsEmpty(object? value) =>
+        value is null || value is DBNull || (value is string s && s.Trim().Length == 0);
+}

@@ -1,0 +1,106 @@
+using System;
+using System.Globalization;
+
+namespace InductionHazard.Quantities;
+
+/// <summary>Formats SI values for people: three significant figures and an SI prefix ("1.4 mV", "35 kA").</summary>
+public static class SiFormat
+{
+    private static readonly string[] Prefixes = { "y", "z", "a", "f", "p", "n", "µ", "m", string.Empty, "k", "M", "G", "T", "P", "E", "Z", "Y" };
+    private const int UnitPrefixIndex = 8;
+
+    /// <summary>Formats a value in an SI unit with a prefix. NaN shows as "NaN", infinities as "∞"; null as an empty string.</summary>
+    /// <param name="value">The value in the unprefixed SI unit.</param>
+    /// <param name="unit">The unit symbol, for example "V".</param>
+    /// <param name="significantDigits">How many significant digits to keep (1 to 15).</param>
+    public static string Format(double? value, string unit, int significantDigits = 3)
+    {
+        if (value is null)
+        {
+            return string.Empty;
+        }
+
+        double v = value.Value;
+        if (double.IsNaN(v))
+        {
+            return "NaN";
+        }
+
+        if (double.IsInfinity(v))
+        {
+            return (v < 0 ? "-∞ " : "∞ ") + unit;
+        }
+
+        if (v == 0)
+        {
+            return "0 " + unit;
+        }
+
+        int exponent3 = (int)Math.Floor(Math.Log10(Math.Abs(v)) / 3.0);
+        int index = exponent3 + UnitPrefixIndex;
+        if (index < 0 || index >= Prefixes.Length)
+        {
+            return v.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) + " " + unit;
+        }
+
+        double scaled = v / Math.Pow(10, 3 * (index - UnitPrefixIndex));
+        string digits = Round(scaled, significantDigits);
+        if (Math.Abs(double.Parse(digits, CultureInfo.InvariantCulture)) >= 1000 && index < Prefixes.Length - 1)
+        {
+            index++;
+            digits = Round(v / Math.Pow(10, 3 * (index - UnitPrefixIndex)), significantDigits);
+        }
+
+        return digits + " " + Prefixes[index] + unit;
+    }
+
+    /// <summary>Formats a dimensionless number to three significant figures; "∞" for infinity, "NaN" for NaN.</summary>
+    public static string Plain(double? value, int significantDigits = 3)
+    {
+        if (value is null)
+        {
+            return string.Empty;
+        }
+
+        double v = value.Value;
+        if (double.IsNaN(v))
+        {
+            return "NaN";
+        }
+
+        if (double.IsInfinity(v))
+        {
+            return v < 0 ? "-∞" : "∞";
+        }
+
+        return Math.Abs(v) >= 1e6 || (v != 0 && Math.Abs(v) < 1e-3)
+            ? v.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture)
+            : Round(v, significantDigits);
+    }
+
+    /// <summary>Formats a temperature in degrees Celsius to one decimal ("36.4 °C").</summary>
+    public static string Celsius(double? value)
+    {
+        if (value is null)
+        {
+            return string.Empty;
+        }
+
+        return Finite.Is(value.Value)
+            ? value.Value.ToString("0.0", CultureInfo.InvariantCulture) + " °C"
+            : Plain(value);
+    }
+
+    private static string Round(double value, int significantDigits)
+    {
+        if (value == 0)
+        {
+            return "0";
+        }
+
+        int magnitude = (int)Math.Floor(Math.Log10(Math.Abs(value))) + 1;
+        int decimals = Math.Max(0, Math.Min(15, significantDigits - magnitude));
+        double rounded = Math.Round(value, decimals, MidpointRounding.AwayFromZero);
+        return rounded.ToString("0." + new string('#', Math.Max(1, decimals)), CultureInfo.InvariantCulture);
+    }
+}

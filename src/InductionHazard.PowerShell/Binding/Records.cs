@@ -1,0 +1,42 @@
+using System;
+using System.Collections;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using System.Management.Automation;
+
+namespace InductionHazard.PowerShell.Binding;
+
+/// <summary>Presents a pipeline object (a CSV row, a hashtable, any object) as named values for the core's record readers.</summary>
+internal static class Records
+{
+    /// <summary>The named values of a hashtable.</summary>
+    public static IEnumerable<KeyValuePair<string, object?>> From(IDictionary dictionary) =>
+        dictionary.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, QuantityAttribute.Unwrap(dictionary[k])));
+
+    /// <summary>The named values of any object: a hashtable's entries, else its properties.</summary>
+    public static IEnumerable<KeyValuePair<string, object?>> From(PSObject input)
+    {
+        if (input.BaseObject is IDictionary dictionary)
+        {
+            return From(dictionary);
+        }
+
+        return input.Properties
+            .Where(p => p.IsGettable && p.MemberType is PSMemberTypes.NoteProperty or PSMemberTypes.Property or PSMemberTypes.AliasProperty or PSMemberTypes.ScriptProperty)
+            .Select(p => new KeyValuePair<string, object?>(p.Name, QuantityAttribute.Unwrap(SafeValue(p))))
+            .ToArray();
+    }
+
+    private static object? SafeValue(PSPropertyInfo property)
+    {
+        try
+        {
+            return property.Value;
+        }
+        catch (GetValueException)
+        {
+            return null;
+        }
+    }
+}

@@ -1,0 +1,13 @@
+using System.Management.Automation;
+using InductionHazard.Assessment;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>Get-InductionResponse: the physics of each item in a source's field (emf, current, heating, time series).</summary>
+[Cmdlet(VerbsCommon.Get, "InductionResponse")]
+[OutputType(typeof(InductionResponse))]
+public sealed class GetInductionResponseCommand : ItemPipelineCommand
+{
+    /// <inheritdoc />
+    protected override void Process(InductionResponse response, int row) => WriteObject(response);
+}

@@ -1,0 +1,142 @@
+using System;
+using System.Diagnostics;
+using System.Management.Automation;
+using System.Threading;
+using InductionHazard.Assessment;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.PowerShell.Binding;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>
+/// What Get-InductionResponse and Test-InductionHazard share: items from the pipeline (item objects, CSV rows or
+/// hashtables), one output per input in order, a non-terminating error naming the row and field for a bad
+/// record, progress on long runs, verbose model notes, and cancellation.
+/// </summary>
+public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
+{
+    private readonly CancellationTokenSource _cancellation = new();
+    private readonly Stopwatch _sinceProgress = new();
+    private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
+    private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
+    private int _row;
+
+    /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
+    [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
+    [Alias("Item")]
+    public PSObject[] InputObject { get; set; } = null!;
+
+    /// <summary>The field source, from New-FieldSource.</summary>
+    [Parameter(Mandatory = true, Position = 1)]
+    public FieldSource Source { get; set; } = null!;
+
+    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the loop faces the field (the worst case).</summary>
+    [Parameter]
+    [Vector]
+    public Vector3D? Normal { get; set; }
+
+    /// <summary>How long the item stays, from the start of the drive ('10 min'); by default the drive and the cooling after it, or 8 h for a field that runs on.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Time)]
+    public double? ExposureTime { get; set; }
+
+    /// <summary>The temperature of the surrounding air ('20 degC' by default).</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Temperature)]
+    public double AmbientTemperature { get; set; } = 20.0;
+
+    /// <summary>Materials that data rows may name besides the built-in ones (hashtables or materials).</summary>
+    [Parameter]
+    [Material]
+    public ConductorMaterial[]? AdditionalMaterial { get; set; }
+
+    /// <summary>What the command does with one item's response.</summary>
+    protected abstract void Process(InductionResponse response, int row);
+
+    /// <inheritdoc />
+    protected override void BeginProcessing()
+    {
+        try
+        {
+            _environment = new ThermalEnvironment(AmbientTemperature);
+            Scenario.ValidateExposure(ExposureTime);
+            if (Normal is { } n)
+            {
+                Require.Direction("Normal", n);
+            }
+        }
+        catch (InductionHazardException ex)
+        {
+            ThrowTerminatingError(ErrorRecords.From(ex, null));
+        }
+
+        if (AdditionalMaterial is { Length: > 0 })
+        {
+            _materials = MaterialLibrary.BuiltIn.With(AdditionalMaterial);
+        }
+
+        _sinceProgress.Start();
+    }
+
+    /// <inheritdoc />
+    protected override void ProcessRecord()
+    {
+        foreach (PSObject input in InputObject)
+        {
+            _row++;
+            string label = ItemInput.Label(input, _row);
+            ShowProgress(label);
+            try
+            {
+                ConductiveItem item = ItemInput.ToItem(input, _materials, _row);
+                var scenario = new Scenario(item, Source, new Placement(Vector3D.Zero, Normal), ExposureTime, _environment);
+                InductionResponse response = InductionEngine.Respond(scenario, _cancellation.Token);
+                WriteVerbose(label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
+                Process(response, _row);
+            }
+            catch (InductionHazardException ex)
+            {
+                WriteError(ErrorRecords.From(ex, input, label));
+            }
+            catch (OperationCanceledException)
+            {
+                throw new PipelineStoppedException();
+            }
+            catch (Exception ex) when (ex is ArithmeticException or InvalidOperationException or ArgumentException or IndexOutOfRangeException)
+            {
+                WriteError(ErrorRecords.Unexpected(ex, input, label));
+            }
+        }
+    }
+
+    /// <inheritdoc />
+    protected override void EndProcessing() => CompleteProgress();
+
+    /// <inheritdoc />
+    protected override void StopProcessing() => _cancellation.Cancel();
+
+    /// <summary>Releases the cancellation source.</summary>
+    public void Dispose()
+    {
+        _cancellation.Dispose();
+        GC.SuppressFinalize(this);
+    }
+
+    private void ShowProgress(string label)
+    {
+        if (_row > 1 && _sinceProgress.ElapsedMilliseconds < 250)
+        {
+            return;
+        }
+
+        _sinceProgress.Restart();
+        WriteProgress(new ProgressRecord(1, MyInvocation.MyCommand.Name, "Item " + _row + ": " + label) { PercentComplete = -1 });
+    }
+
+    private void CompleteProgress() =>
+        WriteProgress(new ProgressRecord(1, MyInvocation.MyCommand.Name, _row + " items") { RecordType = ProgressRecordType.Completed });
+}

@@ -1,0 +1,127 @@
+using System.Collections.Generic;
+using System.Management.Automation;
+using InductionHazard.Errors;
+using InductionHazard.Items;
+using InductionHazard.PowerShell.Binding;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>New-ConductiveItem: a ring, band or bracelet, from parameters or from data rows.</summary>
+[Cmdlet(VerbsCommon.New, "ConductiveItem", DefaultParameterSetName = ParametersSet)]
+[OutputType(typeof(ConductiveItem))]
+public sealed class NewConductiveItemCommand : PSCmdlet
+{
+    private const string ParametersSet = "Parameters";
+    private const string InputObjectSet = "InputObject";
+    private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
+    private int _row;
+
+    /// <summary>The item's name as it appears in assessments.</summary>
+    [Parameter(ParameterSetName = ParametersSet, Position = 0)]
+    public string? Name { get; set; }
+
+    /// <summary>The shape (Ring: a round-wire ring or a band; closed, or split when -Gap is given).</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    public ItemShape Shape { get; set; } = ItemShape.Ring;
+
+    /// <summary>The material: a built-in name ('Gold', 'SS304'), a hashtable defining one, or a material from Get-ConductorMaterial.</summary>
+    [Parameter(Mandatory = true, ParameterSetName = ParametersSet)]
+    [Material]
+    [ArgumentCompleter(typeof(MaterialCompleter))]
+    public ConductorMaterial Material { get; set; } = null!;
+
+    /// <summary>The loop's mean diameter (the centre line of the wire or band), for example '20 mm'.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Diameter { get; set; }
+
+    /// <summary>The inner diameter, as jewellers size rings; the mean diameter adds the wire diameter or band thickness.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? InnerDiameter { get; set; }
+
+    /// <summary>The diameter of a round wire.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? WireDiameter { get; set; }
+
+    /// <summary>The width of a band, along the ring's axis.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Width { get; set; }
+
+    /// <summary>The radial thickness of a band.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Thickness { get; set; }
+
+    /// <summary>The width of the gap of a split ring; omit or 0 for a closed ring.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Gap { get; set; }
+
+    /// <summary>How a person touches the item: Skin (worn, the default), Held, Free or Fixed.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    public ContactKind Contact { get; set; } = ContactKind.Skin;
+
+    /// <summary>Data rows (Import-Csv output, hashtables) with columns Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and Thickness, Gap, Contact.</summary>
+    [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
+    public PSObject[] InputObject { get; set; } = null!;
+
+    /// <summary>Materials that data rows may name besides the built-in ones (hashtables or materials).</summary>
+    [Parameter(ParameterSetName = InputObjectSet)]
+    [Material]
+    public ConductorMaterial[]? AdditionalMaterial { get; set; }
+
+    /// <inheritdoc />
+    protected override void BeginProcessing()
+    {
+        if (AdditionalMaterial is { Length: > 0 })
+        {
+            _materials = MaterialLibrary.BuiltIn.With(AdditionalMaterial);
+        }
+    }
+
+    /// <inheritdoc />
+    protected override void ProcessRecord()
+    {
+        if (ParameterSetName == ParametersSet)
+        {
+            try
+            {
+                WriteObject(ItemRecordReader.Read(BoundValues(), _materials));
+            }
+            catch (InductionHazardException ex)
+            {
+                ThrowTerminatingError(ErrorRecords.From(ex, null));
+            }
+
+            return;
+        }
+
+        foreach (PSObject input in InputObject)
+        {
+            _row++;
+            try
+            {
+                WriteObject(ItemInput.ToItem(input, _materials, _row));
+            }
+            catch (InductionHazardException ex)
+            {
+                WriteError(ErrorRecords.From(ex, input, ItemInput.Label(input, _row)));
+            }
+        }
+    }
+
+    private Dictionary<string, object?> BoundValues()
+    {
+        var values = new Dictionary<string, object?>();
+        foreach (KeyValuePair<string, object> pair in MyInvocation.BoundParameters)
+        {
+            values[pair.Key] = pair.Value is SwitchParameter s ? s.IsPresent : pair.Value;
+        }
+
+        return values;
+    }
+}

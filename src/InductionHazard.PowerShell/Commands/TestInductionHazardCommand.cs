@@ -1,0 +1,23 @@
+using System.Management.Automation;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>Test-InductionHazard: a verdict for each item at a place (Clear, Caution, Hazard or Indeterminate), with margins per mechanism.</summary>
+[Cmdlet(VerbsDiagnostic.Test, "InductionHazard")]
+[OutputType(typeof(InductionAssessment))]
+public sealed class TestInductionHazardCommand : ItemPipelineCommand
+{
+    /// <inheritdoc />
+    protected override void Process(InductionResponse response, int row)
+    {
+        InductionAssessment assessment = HazardAssessor.Assess(response, HazardPolicy.Default, row);
+        if (assessment.Verdict == Verdict.Indeterminate)
+        {
+            WriteWarning(assessment.ItemName + ": Indeterminate: " + string.Join("; ", assessment.Reasons));
+        }
+
+        WriteObject(assessment);
+    }
+}

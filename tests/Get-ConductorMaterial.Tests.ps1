@@ -1,0 +1,48 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll { Import-Module $ModulePath -Force }
+
+Describe 'Get-ConductorMaterial' {
+    It 'lists the ten built-in materials, each value with its source' {
+        $all = @(Get-ConductorMaterial)
+        $all.Count | Should -Be 10
+        foreach ($m in $all) {
+            $m.Sources.Keys | Should -Contain 'ResistivityOhmMeters'
+            $m.Sources.Keys | Should -Contain 'MeltingCelsius'
+        }
+    }
+
+    It 'finds <Name> by a common spelling' -TestCases @(
+        @{ Name = 'aluminum'; Expected = 'Aluminium' }
+        @{ Name = 'SS304'; Expected = 'Stainless 304' }
+        @{ Name = 'Stainless304'; Expected = 'Stainless 304' }
+        @{ Name = 'titanium'; Expected = 'Titanium grade 2' }
+    ) {
+        (Get-ConductorMaterial $Name).Name | Should -Be $Expected
+    }
+
+    It 'selects with wildcards' {
+        (Get-ConductorMaterial 'Ti*').Name | Should -Be @('Titanium grade 2', 'Ti-6Al-4V')
+    }
+
+    It 'writes an error for an unknown name and goes on' {
+        $found = @(Get-ConductorMaterial Copper, Unobtainium, Gold -ErrorVariable e -ErrorAction SilentlyContinue)
+        $found.Name | Should -Be @('Copper', 'Gold')
+        $e[0].FullyQualifiedErrorId | Should -BeLike 'UnknownMaterial,*'
+    }
+
+    It 'defines a material from a hashtable with units' {
+        $m = Get-ConductorMaterial -Definition @{ Name = 'Alloy'; Resistivity = '2.5e-7 ohm m'; Density = '15.5 g/cm3'; SpecificHeat = 150; MeltingTemperature = '900 degC'; Source = 'assay 17' }
+        $m.ResistivityOhmMeters | Should -Be 2.5e-7
+        $m.DensityKilogramsPerCubicMeter | Should -Be 15500
+        $m.Sources['ResistivityOhmMeters'] | Should -Be 'assay 17'
+        $m.TemperatureCoefficientKnown | Should -BeFalse
+    }
+
+    It 'names every field a definition gets wrong' {
+        Get-ConductorMaterial -Definition @{ Name = 'Bad'; Resistivity = '3 T'; Density = 1000 } -ErrorVariable e -ErrorAction SilentlyContinue
+        $e[0].Exception.Message | Should -Match 'Resistivity:'
+        $e[0].Exception.Message | Should -Match 'SpecificHeat: is missing'
+        $e[0].Exception.Message | Should -Match 'MeltingTemperature: is missing'
+    }
+}

@@ -1,0 +1,98 @@
+using System;
+using System.Linq;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using Xunit;
+
+namespace InductionHazard.Tests.Assessment;
+
+public class HazardAssessorTests
+{
+    private static InductionAssessment Assess(InductionResponse r) => HazardAssessor.Assess(r, HazardPolicy.Default);
+
+    [Theory]
+    [InlineData(1.0, Verdict.Caution)]
+    [InlineData(0.5, Verdict.Clear)]
+    [InlineData(1.5, Verdict.Hazard)]
+    public void ASplitRingsGapVoltageIsJudgedAgainstFiftyVoltsRms(double fractionOfLimit, Verdict expected)
+    {
+        // IEC 61140 / IEC 60364-4-41: extra-low voltage is at most 50 V a.c. rms.
+        double d = 0.065, f = 50, area = Math.PI * d * d / 4;
+        double tesla = fractionOfLimit * 50 * Math.Sqrt(2) / (2 * Math.PI * f * area);
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Titanium", d, 0.004, gap: 0.02), Fixtures.UniformSine(tesla, f)));
+        Within.Relative(1 / fractionOfLimit, a.ShockMargin!.Value, 1e-9, "Shock margin");
+        Assert.Equal(expected, a.Verdict);
+        Assert.Equal(HazardMechanism.Shock, a.GoverningMechanism);
+        Assert.Null(a.BurnMargin);
+    }
+
+    [Fact]
+    public void AUnidirectionalPulseIsJudgedAgainstTheDirectCurrentLimit()
+    {
+        // IEC 61140: 120 V ripple-free d.c.
+        double d = 0.065, area = Math.PI * d * d / 4, ramp = 1e-3;
+        double deltaB = 60 * ramp / area;
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Titanium", d, 0.004, gap: 0.02), Fixtures.UniformRamp(0, deltaB, ramp)));
+        Within.Relative(2.0, a.ShockMargin!.Value, 1e-9, "Shock margin of a 60 V pulse");
+        Assert.Equal(Verdict.Clear, a.Verdict);
+    }
+
+    [Fact]
+    public void AClosedRingHasNoShockButBurnAndOverheat()
+    {
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.01, 50)));
+        Assert.False(a.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Shock).Applies);
+        Assert.NotNull(a.BurnMargin);
+        Assert.NotNull(a.OverheatMargin);
+        Assert.Equal(Verdict.Clear, a.Verdict);
+        Assert.Contains(a.Cautions, c => c.Contains("engineering estimates", StringComparison.Ordinal));
+        Assert.Contains(a.Cautions, c => c.Contains("ISO 13732-1", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ARingThatHeatsPastTheBurnThresholdIsAHazard()
+    {
+        // 12 kHz, 4 mT on a copper ring: tens of amperes circulate and the ring heats far past 43 °C.
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.004, 12000)));
+        Assert.Equal(Verdict.Hazard, a.Verdict);
+        Assert.Equal(HazardMechanism.Burn, a.GoverningMechanism);
+        Assert.True(a.PeakTemperatureCelsius > 100);
+        Assert.Contains(a.Reasons, r => r.StartsWith("Burn", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void AnItemThatMeltsIsAnOverheatHazard()
+    {
+        // A thin copper wire loop in a 2 T, 50 Hz field dissipates a hundred watts in a quarter of a gram: it melts.
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Copper", 0.05, 0.0005, contact: "Free"), Fixtures.UniformSine(2.0, 50)));
+        Assert.True(a.Response.MeltingReachedSeconds is not null, "melting is reached");
+        Assert.True(a.OverheatMargin < 1);
+        Assert.Equal(Verdict.Hazard, a.Verdict);
+    }
+
+    [Fact]
+    public void AnInvalidModelIsIndeterminateWithItsReasonNeverClear()
+    {
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
+        Assert.Equal(Verdict.Indeterminate, a.Verdict);
+        Assert.True(double.IsNaN(a.MinimumMargin));
+        Assert.Contains(a.Reasons, r => r.Contains("thin-ring", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ANaNReachingAMarginIsIndeterminate()
+    {
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(1e300, 50)));
+        Assert.Equal(Verdict.Indeterminate, a.Verdict);
+        Assert.Contains(a.Reasons, r => r.Contains("numerical failure", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void ALooseItemIsJudgedForABriefTouch()
+    {
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(contact: "Free"), Fixtures.UniformSine(0.004, 12000)));
+        var burn = a.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
+        Assert.Equal(65, burn.Limit, 9);
+        Assert.Contains("touch", burn.Detail, StringComparison.Ordinal);
+    }
+}

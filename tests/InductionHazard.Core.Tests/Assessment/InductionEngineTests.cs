@@ -1,0 +1,141 @@
+using System;
+using System.Linq;
+using InductionHazard.Assessment;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using Xunit;
+
+namespace InductionHazard.Tests.Assessment;
+
+public class InductionEngineTests
+{
+    private const double Mu0 = 4e-7 * Math.PI;
+
+    [Theory]
+    [InlineData(0.01, 50, 0.02)]
+    [InlineData(0.004, 12000, 0.065)]
+    [InlineData(2e-4, 60, 0.3)]
+    public void TheEmfAmplitudeInASinusoidalUniformFieldIsOmegaBA(double tesla, double frequency, double diameter)
+    {
+        // Faraday's law for a flat loop facing a uniform field B sin(wt): emf amplitude = w B A.
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", diameter, 0.002, gap: 0.001), Fixtures.UniformSine(tesla, frequency));
+        double area = Math.PI * diameter * diameter / 4;
+        Within.Relative(2 * Math.PI * frequency * tesla * area, r.PeakEmfVolts, 1e-12, "peak emf");
+        Within.Relative(r.PeakEmfVolts, r.GapVoltageVolts!.Value, 1e-15, "gap voltage of the split ring");
+        Within.Relative(r.PeakEmfVolts / Math.Sqrt(2), r.RmsEmfVolts!.Value, 1e-12, "rms emf");
+        Assert.Equal(0, r.PeakCurrentAmperes);
+    }
+
+    [Fact]
+    public void ATiltedLoopLinksTheFluxOfTheNormalComponent()
+    {
+        // Flux through a flat loop in a uniform field: B A cos(theta).
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.02, 0.002, gap: 0.001);
+        double theta = 60 * Math.PI / 180;
+        InductionResponse tilted = Fixtures.Respond(ring, Fixtures.UniformSine(0.01, 50), normal: new Vector3D(Math.Sin(theta), 0, Math.Cos(theta)));
+        InductionResponse facing = Fixtures.Respond(ring, Fixtures.UniformSine(0.01, 50));
+        Within.Relative(facing.PeakEmfVolts * Math.Cos(theta), tilted.PeakEmfVolts, 1e-12, "emf of the tilted loop");
+        InductionResponse edgeOn = Fixtures.Respond(ring, Fixtures.UniformSine(0.01, 50), normal: Vector3D.UnitX);
+        Assert.Equal(0, edgeOn.PeakEmfVolts, 15);
+    }
+
+    [Fact]
+    public void TheSinusoidalSteadyStateCurrentIsThePhasorResultWithTheRingsLAndR()
+    {
+        // Phasor analysis: |I| = w B A / sqrt(R^2 + (w L)^2), with R = rho l / S (IEC 60028 copper at 20 °C) and
+        // L from Grover's formula; at 50 Hz a 1 mm radius copper wire is a tenth of a skin depth, so R_ac = R_dc.
+        double d = 0.02, a = 0.001, b = 0.01, f = 50, omega = 2 * Math.PI * f;
+        double area = Math.PI * d * d / 4;
+        double resistance = 1.7241e-8 * Math.PI * d / (Math.PI * a * a);
+        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 1.75);
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", d, 2 * a, contact: "Free"), Fixtures.UniformSine(b, f));
+        double expected = omega * b * area / Math.Sqrt((resistance * resistance) + (omega * inductance * omega * inductance));
+        Within.Relative(expected, r.PeakCurrentAmperes, 1e-4, "steady-state current amplitude");
+        Within.Relative(omega * b * area / resistance, r.NaiveCurrentAmperes!.Value, 1e-4, "naive e/R beside it");
+        Assert.Contains("resistive", r.Regime, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ARampGivesTheRlRiseWithTheRingsLAndR()
+    {
+        // i(t) = (e/R)(1 - exp(-t R/L)) with e = A dB/dt, R = rho l / S, L from Grover's formula.
+        double d = 0.02, a = 0.001, ramp = 0.5e-3, deltaB = 0.01;
+        double resistance = 1.7241e-8 * Math.PI * d / (Math.PI * a * a);
+        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 1.75);
+        double emf = Math.PI * d * d / 4 * deltaB / ramp;
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", d, 2 * a, contact: "Free"), Fixtures.UniformRamp(0, deltaB, ramp), exposure: ramp);
+        foreach (var s in r.CircuitSeries.Where(s => s.TimeSeconds > 0))
+        {
+            Within.Relative(-emf / resistance * (1 - Math.Exp(-s.TimeSeconds * resistance / inductance)), s.CurrentAmperes, 1e-5, "i at " + s.TimeSeconds);
+        }
+
+        Within.Relative(emf / resistance * (1 - Math.Exp(-ramp * resistance / inductance)), r.PeakCurrentAmperes, 1e-5, "peak current");
+        Assert.Contains("anticlockwise", r.CurrentSense, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ARampMuchFasterThanLOverRDrivesNearDeltaPhiOverL()
+    {
+        // The inductive limit: I -> Delta Phi / L; the naive e/R is far larger.
+        double d = 0.02, a = 0.001, deltaB = 1.0, ramp = 1e-7;
+        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 1.75);
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", d, 2 * a, contact: "Free"), Fixtures.UniformRamp(0, deltaB, ramp));
+        double limit = Math.PI * d * d / 4 * deltaB / inductance;
+        Within.Relative(limit, r.InductiveLimitCurrentAmperes!.Value, 1e-12, "Delta Phi / L");
+        Within.Relative(limit, r.PeakCurrentAmperes, 2e-3, "peak current against Delta Phi / L");
+        Assert.True(r.NaiveCurrentAmperes > 100 * r.PeakCurrentAmperes);
+        Assert.Contains("inductive", r.Regime, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void AFallingFieldDrivesAClockwiseCurrentViewedAlongTheField()
+    {
+        // Lenz's law: viewed looking along the field, a falling flux drives a clockwise current.
+        InductionResponse falling = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(3, 0, 1));
+        Assert.StartsWith("clockwise", falling.CurrentSense, StringComparison.Ordinal);
+        InductionResponse flipped = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(3, 0, 1), normal: -Vector3D.UnitZ);
+        Assert.StartsWith("clockwise", flipped.CurrentSense, StringComparison.Ordinal);
+        InductionResponse rising = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(0, 3, 1));
+        Assert.StartsWith("anticlockwise", rising.CurrentSense, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void HeatingEnergyMatchesEmfSquaredOverRForASlowRamp()
+    {
+        // A ramp much slower than L/R: P = e^2 / R(T) while it lasts; with alpha the heating falls as R rises.
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.002, contact: "Free"), Fixtures.UniformRamp(0, 20, 0.01));
+        double emf = Math.PI * 1e-4 * 20 / 0.01;
+        double coldEnergy = emf * emf / r.ResistanceOhms * 0.01;
+        Assert.InRange(r.EnergyDissipatedJoules, 0.9 * coldEnergy, coldEnergy);
+        double heatCapacity = r.Item.MassKilograms * 385;
+        Within.Relative(r.EnergyDissipatedJoules / heatCapacity, r.TemperatureRiseKelvin, 0.01, "adiabatic rise during a 10 ms pulse");
+    }
+
+    [Fact]
+    public void AThickSectionIsOutsideTheThinRingModel()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(0.01, 50));
+        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("thin-ring", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void AFerromagneticItemIsOutsideTheLoopModel()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Steel"), Fixtures.UniformRamp(0, 3, 1));
+        Assert.Contains(r.ValidityIssues, i => i.Affects == AffectedResults.All && i.Reason.Contains("ferromagnetic", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void AFastPulseInAThickWireIsOutsideTheDcModel()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.002), Fixtures.UniformRamp(0, 1, 1e-5));
+        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("skin depth", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void AnOverflowingResultIsRecordedAsANumericalFailure()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(1e300, 50));
+        Assert.Contains(r.ValidityIssues, i => i.Affects == AffectedResults.All && i.Reason.StartsWith("numerical failure", StringComparison.Ordinal));
+    }
+}

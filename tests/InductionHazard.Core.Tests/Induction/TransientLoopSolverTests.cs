@@ -1,0 +1,89 @@
+using System;
+using System.Linq;
+using System.Threading;
+using InductionHazard.Induction;
+using InductionHazard.Thermal;
+using Xunit;
+
+namespace InductionHazard.Tests.Induction;
+
+public class TransientLoopSolverTests
+{
+    private const double L = 3.3e-8, R = 3.6e-4;
+    private static readonly double Tau = L / R;
+
+    /// <summary>A solver whose loop does not heat (an enormous heat capacity), so R stays fixed.</summary>
+    private static TransientLoopSolver FixedResistance(double maxStep = double.PositiveInfinity) =>
+        new(L, _ => R, new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0))) { MaxStepSeconds = maxStep };
+
+    [Fact]
+    public void ARampGivesTheExponentialRiseOfAnRlCircuit()
+    {
+        // Constant emf e switched on at t = 0: i(t) = (e/R)(1 - exp(-t R / L)) (RL circuit theory, any circuits textbook).
+        double e = 1e-3, ramp = 20 * Tau;
+        TransientRun run = FixedResistance().Run(t => t < ramp ? e : 0, new[] { ramp }, 0, ramp, 20, CancellationToken.None);
+        Assert.True(run.Circuit.Count > 10, "the series resolves the rise");
+        foreach (CircuitSample s in run.Circuit.Skip(1))
+        {
+            Within.Relative(e / R * (1 - Math.Exp(-s.TimeSeconds / Tau)), s.CurrentAmperes, 1e-9, "i at t = " + s.TimeSeconds);
+        }
+
+        Within.Relative(e / R * (1 - Math.Exp(-20)), run.PeakCurrentAmperes, 1e-9, "peak current at the end of the ramp");
+    }
+
+    [Fact]
+    public void AfterTheRampTheCurrentDecaysWithTimeConstantLOverR()
+    {
+        double e = 1e-3, ramp = 2 * Tau;
+        TransientRun run = FixedResistance().Run(t => t < ramp ? e : 0, new[] { ramp }, 0, 12 * Tau, 20, CancellationToken.None);
+        double atEnd = e / R * (1 - Math.Exp(-2));
+        foreach (CircuitSample s in run.Circuit.Where(s => s.TimeSeconds > ramp))
+        {
+            Within.Relative(atEnd * Math.Exp(-(s.TimeSeconds - ramp) / Tau), s.CurrentAmperes, 1e-8, "decay at t = " + s.TimeSeconds);
+        }
+    }
+
+    [Fact]
+    public void ARampMuchFasterThanLOverRDrivesTheFluxChangeOverL()
+    {
+        // The inductive limit: for a change much faster than L/R the current tends to Delta Phi / L, not e / R.
+        double deltaPhi = 3e-4, ramp = Tau / 1000, e = deltaPhi / ramp;
+        TransientRun run = FixedResistance().Run(t => t < ramp ? e : 0, new[] { ramp }, 0, 5 * Tau, 20, CancellationToken.None);
+        Within.Relative(deltaPhi / L, run.PeakCurrentAmperes, 1e-3, "peak current against Delta Phi / L");
+        Assert.True(run.PeakCurrentAmperes < 0.01 * e / R, "the naive e/R overstates the current a thousandfold");
+    }
+
+    [Fact]
+    public void EnergyDissipatedEqualsEnergyDeliveredByTheEmf()
+    {
+        // Energy balance of an RL circuit: integral of e i dt = integral of R i^2 dt + L i^2 / 2 at the end. For a constant
+        // emf over [0, T] followed by a full decay: dissipated = (e^2 / R)(T - tau (1 - exp(-T/tau))).
+        double e = 2e-3, ramp = 3 * Tau;
+        TransientRun run = FixedResistance().Run(t => t < ramp ? e : 0, new[] { ramp }, 0, ramp + (60 * Tau), 20, CancellationToken.None);
+        double delivered = e * e / R * (ramp - (Tau * (1 - Math.Exp(-ramp / Tau))));
+        Within.Relative(delivered, run.EnergyJoules, 1e-9, "energy dissipated");
+    }
+
+    [Fact]
+    public void ASinusoidalEmfSettlesToThePhasorAmplitude()
+    {
+        // Steady state of L di/dt + R i = E sin(wt): amplitude E / sqrt(R^2 + (wL)^2) (phasor analysis).
+        double f = 5000, omega = 2 * Math.PI * f, e = 1e-3, period = 1 / f, end = (40 * Tau) + (3 * period);
+        TransientRun run = FixedResistance(period / 400).Run(t => e * Math.Sin(omega * t), Array.Empty<double>(), 0, end, 20, CancellationToken.None);
+        double lastPeriodPeak = run.Circuit.Where(s => s.TimeSeconds > end - period).Max(s => Math.Abs(s.CurrentAmperes));
+        Within.Relative(e / Math.Sqrt((R * R) + (omega * L * omega * L)), lastPeriodPeak, 2e-3, "steady-state amplitude");
+    }
+
+    [Fact]
+    public void HeatingRaisesTheResistanceWhileTheCurrentFlows()
+    {
+        // A loop whose resistance follows rho(T) carries less current as it heats under a constant emf.
+        var thermal = new LumpedThermalModel(1e-3, 1e-4, new ThermalEnvironment(20, 0, 0));
+        var solver = new TransientLoopSolver(L, t => R * (1 + (0.00393 * (t - 20))), thermal);
+        double e = 0.05, ramp = 0.05;
+        TransientRun run = solver.Run(t => t < ramp ? e : 0, new[] { ramp }, 0, ramp, 20, CancellationToken.None);
+        Assert.True(run.FinalCelsius > 100, "the loop heats");
+        double expectedEnd = e / (R * (1 + (0.00393 * (run.FinalCelsius - 20))));
+        Within.Relative(expectedEnd, run.Circuit[run.Circuit.Count - 1].CurrentAmperes, 1e-3, "current at the end follows e / R(T)");
+    }
+}

@@ -1,0 +1,83 @@
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Items;
+using Xunit;
+
+namespace InductionHazard.Tests.Items;
+
+public class ItemRecordReaderTests
+{
+    private static ConductiveItem Read(Dictionary<string, object?> row, int? number = null) =>
+        ItemRecordReader.Read(row, MaterialLibrary.BuiltIn, number);
+
+    [Fact]
+    public void ReadsARoundWireRingFromStringsWithUnits()
+    {
+        ConductiveItem ring = Read(new() { ["Name"] = "Band", ["Material"] = "gold", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Contact"] = "held" });
+        Assert.Equal(0.02, ring.MeanDiameterMeters, 15);
+        Assert.IsType<RoundWire>(ring.Ring.Section);
+        Assert.Equal(ContactKind.Held, ring.Contact);
+        Assert.False(ring.IsSplit);
+    }
+
+    [Fact]
+    public void AnInnerDiameterAddsTheRadialExtentAsJewellersSizeRings()
+    {
+        ConductiveItem wire = Read(new() { ["Material"] = "Silver", ["InnerDiameter"] = "17.3 mm", ["WireDiameter"] = "1.5 mm" });
+        Assert.Equal(0.0188, wire.MeanDiameterMeters, 12);
+        ConductiveItem band = Read(new() { ["Material"] = "Silver", ["ID"] = "17.3 mm", ["Width"] = "5 mm", ["Thickness"] = "2 mm" });
+        Assert.Equal(0.0193, band.MeanDiameterMeters, 12);
+        Assert.Equal(0.0173, band.Ring.InnerDiameterMeters, 12);
+    }
+
+    [Fact]
+    public void ColumnNamesMatchWithoutRegardToCaseOrSpacing()
+    {
+        ConductiveItem ring = Read(new() { ["material"] = "Copper", ["MEAN DIAMETER"] = 0.02, ["wire_diameter"] = 0.002, ["gap width"] = "1 mm", ["Location"] = "bay 2" });
+        Assert.Equal(0.001, ring.GapMeters, 15);
+        Assert.True(ring.IsSplit);
+    }
+
+    [Fact]
+    public void TheRingsGeometryFollowsFromItsDimensions()
+    {
+        ConductiveItem ring = Read(new() { ["Material"] = "Copper", ["Diameter"] = 0.02, ["WireDiameter"] = 0.002 });
+        double pathLength = System.Math.PI * 0.02;
+        double section = System.Math.PI * 0.001 * 0.001;
+        Within.Relative(System.Math.PI * 0.01 * 0.01, ring.Ring.LoopAreaSquareMeters, 1e-12, "loop area pi (D/2)^2");
+        Within.Relative(1.7241e-8 * pathLength / section, ring.ResistanceOhms, 1e-4, "R = rho l / S");
+        Within.Relative(8890 * pathLength * section, ring.MassKilograms, 1e-12, "mass");
+    }
+
+    [Theory]
+    [InlineData("Diameter", "-20 mm", "Diameter")]
+    [InlineData("Diameter", "", "Diameter")]
+    [InlineData("Diameter", "3 T", "Diameter")]
+    [InlineData("WireDiameter", "0", "WireDiameter")]
+    [InlineData("Material", "Unobtainium", "Material")]
+    [InlineData("Contact", "Tattooed", "Contact")]
+    [InlineData("Gap", "100 mm", "Gap")]
+    public void ABadFieldNamesTheRowAndTheField(string field, string value, string expectedField)
+    {
+        var row = new Dictionary<string, object?> { ["Name"] = "Signet", ["Material"] = "Gold", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm" };
+        row[field] = value;
+        var error = Assert.Throws<RecordException>(() => Read(row, 7));
+        Assert.Contains(expectedField, error.Fields);
+        Assert.StartsWith("row 7 ('Signet')", error.Message, System.StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void EveryProblemInARowIsReportedAtOnce()
+    {
+        var error = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Kryptonite", ["Width"] = "5 mm" }, 3));
+        Assert.Equal(new[] { "Material", "Thickness", "Diameter" }, error.Fields.ToArray());
+    }
+
+    [Fact]
+    public void ADiameterSmallerThanTheWireIsRefused()
+    {
+        var error = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Gold", ["Diameter"] = "2 mm", ["WireDiameter"] = "3 mm" }));
+        Assert.Contains("no hole", error.Message, System.StringComparison.Ordinal);
+    }
+}

@@ -1,0 +1,95 @@
+using InductionHazard.Errors;
+using InductionHazard.Quantities;
+using Xunit;
+
+namespace InductionHazard.Tests.Quantities;
+
+public class QuantityParserTests
+{
+    // Conversions follow the SI prefixes and the definitions of the gauss (1 G = 1e-4 T) and the Celsius scale
+    // (T/K = t/°C + 273.15): SI Brochure, 9th edition (2019).
+    [Theory]
+    [InlineData("20 mm", QuantityKind.Length, 0.02)]
+    [InlineData("20mm", QuantityKind.Length, 0.02)]
+    [InlineData("1.5 T", QuantityKind.MagneticFluxDensity, 1.5)]
+    [InlineData("150 G", QuantityKind.MagneticFluxDensity, 0.015)]
+    [InlineData("40 kA", QuantityKind.ElectricCurrent, 40000)]
+    [InlineData("2 ms", QuantityKind.Time, 0.002)]
+    [InlineData("60 Hz", QuantityKind.Frequency, 60)]
+    [InlineData("1e-3 m", QuantityKind.Length, 0.001)]
+    [InlineData("0.5", QuantityKind.Length, 0.5)]
+    [InlineData("293.15 K", QuantityKind.Temperature, 20)]
+    [InlineData("20 °C", QuantityKind.Temperature, 20)]
+    [InlineData("3 mm²", QuantityKind.Area, 3e-6)]
+    public void ParsesNumbersWithUnitsIntoCanonicalUnits(string text, QuantityKind kind, double expected)
+    {
+        Within.Relative(expected, QuantityParser.Parse(text, kind), 1e-12, text);
+    }
+
+    // The ASCII spellings people type in a shell, which UnitsNet alone rejects.
+    [Theory]
+    [InlineData("10 us", QuantityKind.Time, 1e-5)]
+    [InlineData("5 uT", QuantityKind.MagneticFluxDensity, 5e-6)]
+    [InlineData("5 μT", QuantityKind.MagneticFluxDensity, 5e-6)]
+    [InlineData("0.01 ohm", QuantityKind.Resistance, 0.01)]
+    [InlineData("2 kohm", QuantityKind.Resistance, 2000)]
+    [InlineData("3 Ohms", QuantityKind.Resistance, 3)]
+    [InlineData("1.72e-8 ohm m", QuantityKind.Resistivity, 1.72e-8)]
+    [InlineData("20 degC", QuantityKind.Temperature, 20)]
+    [InlineData("20 C", QuantityKind.Temperature, 20)]
+    [InlineData("3 mm2", QuantityKind.Area, 3e-6)]
+    [InlineData("8.9 g/cm3", QuantityKind.Density, 8900)]
+    [InlineData("2 secs", QuantityKind.Time, 2)]
+    [InlineData("10 gauss", QuantityKind.MagneticFluxDensity, 1e-3)]
+    public void AcceptsAsciiSpellings(string text, QuantityKind kind, double expected)
+    {
+        Within.Relative(expected, QuantityParser.Parse(text, kind), 1e-12, text);
+    }
+
+    [Fact]
+    public void NumbersPassThroughInTheCanonicalUnit()
+    {
+        Assert.Equal(0.02, QuantityParser.Parse(0.02, QuantityKind.Length));
+        Assert.Equal(3.0, QuantityParser.Parse(3, QuantityKind.MagneticFluxDensity));
+    }
+
+    [Fact]
+    public void AWrongDimensionNamesWhatWasExpectedAndWhatWasGiven()
+    {
+        var error = Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse("3 T", QuantityKind.Length));
+        Assert.Contains("a length", error.Message, System.StringComparison.Ordinal);
+        Assert.Contains("'3 T'", error.Message, System.StringComparison.Ordinal);
+        Assert.Contains("magnetic flux density", error.Message, System.StringComparison.Ordinal);
+        Assert.Equal("InvalidQuantity", error.ErrorId);
+    }
+
+    [Theory]
+    [InlineData("")]
+    [InlineData("   ")]
+    [InlineData("NaN")]
+    [InlineData("Infinity mm")]
+    [InlineData("1,5 mm")]
+    [InlineData("twenty mm")]
+    [InlineData("20 furlongs")]
+    public void RejectsWhatIsNotAFiniteQuantity(string text)
+    {
+        Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse(text, QuantityKind.Length));
+    }
+
+    [Fact]
+    public void RejectsNonFiniteNumbers()
+    {
+        Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse(double.NaN, QuantityKind.Length));
+        Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse(double.PositiveInfinity, QuantityKind.Time));
+    }
+
+    [Fact]
+    public void ADriveIsAFluxDensityOrACurrent()
+    {
+        Assert.Equal((1.5, QuantityKind.MagneticFluxDensity), QuantityParser.ParseOneOf("1.5 T", QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent));
+        Assert.Equal((40000.0, QuantityKind.ElectricCurrent), QuantityParser.ParseOneOf("40 kA", QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent));
+        Assert.Equal((2.0, (QuantityKind?)null), QuantityParser.ParseOneOf("2", QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent));
+        var error = Assert.Throws<QuantityFormatException>(() => QuantityParser.ParseOneOf("5 mm", QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent));
+        Assert.Contains("a length", error.Message, System.StringComparison.Ordinal);
+    }
+}

@@ -1,0 +1,41 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    $module = Import-Module $ModulePath -Force -PassThru
+    $root = Split-Path $PSScriptRoot -Parent
+    $moduleDir = Split-Path $ModulePath -Parent
+}
+
+Describe 'The laid-out module' {
+    It 'has a valid manifest whose version is the one in Directory.Build.props' {
+        $manifest = Test-ModuleManifest $ModulePath
+        [xml] $props = Get-Content (Join-Path $root 'Directory.Build.props') -Raw
+        $manifest.Version.ToString() | Should -Be @($props.Project.PropertyGroup.Version | Where-Object { $_ })[0]
+        $manifest.CompatiblePSEditions | Should -Be @('Desktop', 'Core')
+        $manifest.PowerShellVersion.ToString() | Should -Be '5.1'
+    }
+
+    It 'exports exactly its cmdlets and nothing else' {
+        $module.ExportedCmdlets.Keys | Sort-Object | Should -Be @(
+            'Get-ConductorMaterial', 'Get-InductionResponse', 'New-ConductiveItem', 'New-FieldSource', 'New-FieldWaveform', 'Test-InductionHazard')
+        $module.ExportedFunctions.Count | Should -Be 0
+        $module.ExportedAliases.Count | Should -Be 0
+    }
+
+    It 'does not carry a copy of System.Management.Automation' {
+        Test-Path (Join-Path $moduleDir 'System.Management.Automation.dll') | Should -BeFalse
+    }
+
+    It 'has its help and about topic' {
+        Test-Path (Join-Path $moduleDir 'en-US/InductionHazard.dll-Help.xml') | Should -BeTrue
+        Get-Help about_InductionHazard | Out-String | Should -Match 'engineering estimates'
+    }
+
+    It 'targets netstandard2.0 so that Windows PowerShell 5.1 can load it' {
+        foreach ($dll in 'InductionHazard.dll', 'InductionHazard.Core.dll') {
+            $assembly = [System.Reflection.Assembly]::LoadFile((Join-Path $moduleDir $dll))
+            $framework = $assembly.GetCustomAttributes([System.Runtime.Versioning.TargetFrameworkAttribute], $false)
+            $framework.FrameworkName | Should -Be '.NETStandard,Version=v2.0'
+        }
+    }
+}

@@ -1,0 +1,62 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $root = Split-Path $PSScriptRoot -Parent
+}
+
+Describe 'New-ConductiveItem' {
+    It 'makes a band sized by its inner diameter, as jewellers size rings' {
+        $band = New-ConductiveItem -Name 'Band' -Material Gold -InnerDiameter '18.5 mm' -Width '4 mm' -Thickness '1.6 mm'
+        $band.MeanDiameterMeters | Should -BeGreaterThan 0.020099
+        $band.MeanDiameterMeters | Should -BeLessThan 0.020101
+        $band.IsSplit | Should -BeFalse
+        $band.Contact | Should -Be 'Skin'
+    }
+
+    It 'makes a split ring when a gap is given' {
+        $ring = New-ConductiveItem -Material Titanium -Diameter '65 mm' -WireDiameter '4 mm' -Gap '25 mm' -Contact Held
+        $ring.IsSplit | Should -BeTrue
+        $ring.GapMeters | Should -Be 0.025
+        $ring.Material.Name | Should -Be 'Titanium grade 2'
+    }
+
+    It 'takes a material defined by a hashtable' {
+        $item = New-ConductiveItem -Material @{ Name = 'Alloy'; Resistivity = '1e-7 ohm m'; Density = '13 g/cm3'; SpecificHeat = 150; MeltingTemperature = '800 degC' } -Diameter '20 mm' -WireDiameter '2 mm'
+        $item.Material.Name | Should -Be 'Alloy'
+        $item.Material.IsBuiltIn | Should -BeFalse
+    }
+
+    It 'refuses an unknown material, naming it and the known ones' {
+        { New-ConductiveItem -Material Unobtainium -Diameter '20 mm' -WireDiameter '2 mm' } | Should -Throw -ExpectedMessage "*Material*'Unobtainium'*Copper*"
+    }
+
+    It 'refuses a dimension in the wrong unit, naming the parameter' {
+        { New-ConductiveItem -Material Gold -Diameter '3 T' -WireDiameter '2 mm' } | Should -Throw -ExpectedMessage "*Diameter*a length*"
+    }
+
+    It 'refuses a wire thicker than the loop with a reason' {
+        { New-ConductiveItem -Material Gold -Diameter '2 mm' -WireDiameter '3 mm' } | Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewConductiveItemCommand' -ExpectedMessage '*no hole*'
+    }
+
+    It 'reads inventory rows from Import-Csv, one item per row in order' {
+        $rows = @(Import-Csv (Join-Path $root 'examples/marrowby-heath-inventory.csv'))
+        $items = @($rows | New-ConductiveItem)
+        $items.Count | Should -Be $rows.Count
+        $items.Name | Should -Be $rows.Name
+    }
+
+    It 'writes an error naming the row and field for a bad row and goes on' {
+        $items = @(Import-Csv (Join-Path $PSScriptRoot 'data/inventory-with-bad-rows.csv') | New-ConductiveItem -ErrorVariable bad -ErrorAction SilentlyContinue)
+        $items.Count | Should -Be 3
+        $bad.Count | Should -Be 4
+        $bad[0].Exception.Message | Should -BeLike "row 2 ('Negative diameter'): Diameter: *"
+    }
+
+    It 'completes material names' {
+        $line = 'New-ConductiveItem -Material Ti'
+        $completion = TabExpansion2 -inputScript $line -cursorColumn $line.Length
+        $completion.CompletionMatches.ListItemText | Should -Contain 'Titanium grade 2'
+        $completion.CompletionMatches.ListItemText | Should -Contain 'Ti-6Al-4V'
+    }
+}

@@ -1,0 +1,35 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $w = New-FieldWaveform -Ramp -From 0 -To '1 T' -Duration '1 s'
+}
+
+Describe 'New-FieldSource' {
+    It 'makes a uniform source along <Direction>' -TestCases @(
+        @{ Direction = 'x'; X = 1; Y = 0; Z = 0 }
+        @{ Direction = '-y'; X = 0; Y = -1; Z = 0 }
+        @{ Direction = '0,0,2'; X = 0; Y = 0; Z = 1 }
+    ) {
+        $s = New-FieldSource -Uniform -Waveform $w -Direction $Direction
+        $s.Terms[0].Geometry.Direction.X | Should -Be $X
+        $s.Terms[0].Geometry.Direction.Y | Should -Be $Y
+        $s.Terms[0].Geometry.Direction.Z | Should -Be $Z
+    }
+
+    It 'takes the direction as three numbers and the waveform from the pipeline' {
+        $s = $w | New-FieldSource -Uniform -Direction 3, 0, 4 -Name 'Tilted'
+        $s.Name | Should -Be 'Tilted'
+        $s.Terms[0].Geometry.Direction.X | Should -BeGreaterThan 0.5999999999
+        $s.Terms[0].Geometry.Direction.X | Should -BeLessThan 0.6000000001
+    }
+
+    It 'refuses a zero direction' {
+        { New-FieldSource -Uniform -Waveform $w -Direction 0, 0, 0 } | Should -Throw -ExpectedMessage '*Direction*non-zero*'
+    }
+
+    It 'refuses a waveform in amperes for a uniform field' {
+        $amps = New-FieldWaveform -Sine -Amplitude '10 A' -Frequency 50
+        { New-FieldSource -Uniform -Waveform $amps } | Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewFieldSourceCommand'
+    }
+}

@@ -1,0 +1,43 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll { Import-Module $ModulePath -Force }
+
+Describe 'New-FieldWaveform' {
+    It 'makes a ramp from strings with units, including the ASCII spelling of micro' {
+        $w = New-FieldWaveform -Ramp -From '0 T' -To '3 T' -Duration '10 us' -Start '1 ms'
+        $w.Form | Should -Be 'Ramp'
+        [math]::Abs($w.DurationSeconds - 1e-5) | Should -BeLessThan 1e-18
+        [math]::Abs($w.StartSeconds - 1e-3) | Should -BeLessThan 1e-15
+        [math]::Abs($w.PeakRate / 3e5 - 1) | Should -BeLessThan 1e-12
+        $w.Drive | Should -Be 'FluxDensity'
+    }
+
+    It 'takes gauss and plain numbers in SI' {
+        (New-FieldWaveform -Ramp -From 0 -To '150 G' -Duration 2).To | Should -Be 0.015
+    }
+
+    It 'makes a sine from an rms amplitude' {
+        $w = New-FieldWaveform -Sine -RmsAmplitude '2 mT' -Frequency '12 kHz'
+        $w.Amplitude | Should -BeGreaterThan 0.0028284
+        $w.Amplitude | Should -BeLessThan 0.0028285
+        $w.PeriodSeconds | Should -Be (1 / 12000)
+        $w.Drive | Should -Be 'FluxDensity'
+    }
+
+    It 'makes a current waveform from amperes' {
+        (New-FieldWaveform -Sine -Amplitude '40 kA' -Frequency '50 Hz').Drive | Should -Be 'Current'
+    }
+
+    It 'refuses a value of the wrong dimension, naming the parameter and what it expects' {
+        { New-FieldWaveform -Ramp -From 0 -To '3 T' -Duration '3 T' } | Should -Throw -ExpectedMessage "*Duration*a time*'3 T'*magnetic flux density*"
+    }
+
+    It 'refuses a ramp from tesla to amperes' {
+        { New-FieldWaveform -Ramp -From '0 T' -To '3 A' -Duration '1 s' } |
+            Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewFieldWaveformCommand'
+    }
+
+    It 'refuses a zero duration' {
+        { New-FieldWaveform -Ramp -From 0 -To 1 -Duration 0 } | Should -Throw -ExpectedMessage '*Duration*greater than zero*'
+    }
+}

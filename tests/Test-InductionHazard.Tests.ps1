@@ -1,0 +1,155 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $root = Split-Path $PSScriptRoot -Parent
+    $inventoryPath = Join-Path $root 'examples/marrowby-heath-inventory.csv'
+    $pulse = New-FieldWaveform -Ramp -From '0 T' -To '20 T' -Duration '10 ms' | New-FieldSource -Uniform -Name 'Pulse bore'
+}
+
+Describe 'Test-InductionHazard' {
+    Context 'an inventory piped from Import-Csv' {
+        BeforeAll {
+            $rows = @(Import-Csv $inventoryPath)
+            $result = @($rows | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue)
+        }
+
+        It 'returns one assessment per row, in order' {
+            $result.Count | Should -Be $rows.Count
+            $result.ItemName | Should -Be $rows.Name
+            $result.RowNumber | Should -Be (1..$rows.Count)
+        }
+
+        It 'gives every assessment a verdict, a governing mechanism, the source and the cautions' {
+            foreach ($a in $result) {
+                $a.Verdict | Should -BeIn 'Clear', 'Caution', 'Hazard', 'Indeterminate'
+                $a.GoverningMechanism | Should -Not -BeNullOrEmpty
+                $a.SourceName | Should -Be 'Pulse bore'
+                ($a.Cautions -join ' ') | Should -Match 'engineering estimates'
+                ($a.Cautions -join ' ') | Should -Match 'licensed professionals govern'
+            }
+        }
+
+        It 'judges split rings by Shock and closed rings by Burn and Overheat' {
+            $split = $result | Where-Object ItemName -EQ 'Copper wellness bracelet'
+            $split.ShockMargin | Should -BeGreaterThan 0
+            $split.BurnMargin | Should -BeNullOrEmpty
+            $closed = $result | Where-Object ItemName -EQ 'Closed copper bangle'
+            $closed.ShockMargin | Should -BeNullOrEmpty
+            $closed.BurnMargin | Should -Not -BeNullOrEmpty
+            $closed.OverheatMargin | Should -Not -BeNullOrEmpty
+        }
+
+        It 'exports to CSV with the numbers in SI' {
+            $file = Join-Path $TestDrive 'audit.csv'
+            $result | Select-Object RowNumber, ItemName, Verdict, MinimumMargin, PeakEmfVolts, PeakCurrentAmperes, PeakTemperatureCelsius |
+                Export-Csv $file -NoTypeInformation
+            $back = @(Import-Csv $file)
+            $back.Count | Should -Be $rows.Count
+            [double] $back[0].PeakEmfVolts | Should -BeGreaterThan 0
+        }
+
+        It 'accepts items made by New-ConductiveItem as well as rows' {
+            $items = $rows | New-ConductiveItem
+            $again = @($items | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue)
+            $again.Verdict | Should -Be $result.Verdict
+        }
+    }
+
+    Context 'rows that cannot be assessed' {
+        BeforeAll {
+            $badPath = Join-Path $PSScriptRoot 'data/inventory-with-bad-rows.csv'
+            $result = @(Import-Csv $badPath | Test-InductionHazard -Source $pulse -ErrorVariable rowErrors -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
+        }
+
+        It 'still assesses every other row, in order' {
+            $result.ItemName | Should -Be @('Good copper ring', 'Good gold band', 'Good split bangle')
+            $result.RowNumber | Should -Be @(1, 4, 7)
+        }
+
+        It 'writes one error for row <Row> naming the row and the field <Field>' -TestCases @(
+            @{ Row = 2; Field = 'Diameter'; Id = 'InvalidInput' }
+            @{ Row = 3; Field = 'WireDiameter'; Id = 'InvalidInput' }
+            @{ Row = 5; Field = 'Material'; Id = 'UnknownMaterial' }
+            @{ Row = 6; Field = 'Diameter'; Id = 'InvalidQuantity' }
+        ) {
+            $e = @($rowErrors | Where-Object { $_.Exception.Message -like "row $Row *" })
+            $e.Count | Should -Be 1
+            $e[0].Exception.Message | Should -Match "$($Field):"
+            $e[0].FullyQualifiedErrorId | Should -BeLike "$Id,*"
+            $e[0].TargetObject.AssetTag | Should -Be "T-0$Row"
+            $e[0].CategoryInfo.TargetName | Should -BeLike "row $Row (*"
+        }
+
+        It 'writes no other errors' {
+            $rowErrors.Count | Should -Be 4
+        }
+    }
+
+    Context 'failing closed' {
+        It 'gives Indeterminate, never Clear, when a NaN reaches a margin' {
+            $absurd = New-FieldWaveform -Sine -Amplitude 1e300 -Frequency '50 Hz' | New-FieldSource -Uniform
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
+            $a = Test-InductionHazard -Item $ring -Source $absurd -WarningAction SilentlyContinue
+            $a.Verdict | Should -Be 'Indeterminate'
+            [double]::IsNaN($a.MinimumMargin) | Should -BeTrue
+            ($a.Reasons -join ' ') | Should -Match 'numerical failure'
+        }
+
+        It 'gives Indeterminate with the reason for an item outside the model, and warns' {
+            $field = New-FieldWaveform -Sine -Amplitude '1 uT' -Frequency '50 Hz' | New-FieldSource -Uniform
+            $thick = New-ConductiveItem -Name 'Thick ring' -Material Copper -Diameter '20 mm' -WireDiameter '6 mm'
+            $a = Test-InductionHazard -Item $thick -Source $field -WarningVariable warned -WarningAction SilentlyContinue
+            $a.Verdict | Should -Be 'Indeterminate'
+            ($a.Reasons -join ' ') | Should -Match 'thin-ring'
+            ($warned -join ' ') | Should -Match 'Thick ring: Indeterminate'
+        }
+
+        It 'gives Indeterminate for a ferromagnetic item, whose attraction is not modelled' {
+            $ramp = New-FieldWaveform -Ramp -From '3 T' -To '0 T' -Duration '1 s' | New-FieldSource -Uniform
+            $a = New-ConductiveItem -Material 'mild steel' -Diameter '25 mm' -WireDiameter '2 mm' -Contact Held |
+                Test-InductionHazard -Source $ramp -WarningAction SilentlyContinue
+            $a.Verdict | Should -Be 'Indeterminate'
+            ($a.Reasons -join ' ') | Should -Match 'ferromagnetic'
+        }
+    }
+
+    Context 'limits from published standards' {
+        It 'puts a split ring whose gap sees 50 V rms exactly at the extra-low-voltage limit (IEC 61140)' {
+            # 50 V rms across the gap: B = 50 sqrt2 / (omega A) for a 65 mm ring at 50 Hz.
+            $area = [math]::PI * 0.065 * 0.065 / 4
+            $tesla = 50 * [math]::Sqrt(2) / (2 * [math]::PI * 50 * $area)
+            $field = New-FieldWaveform -Sine -Amplitude $tesla -Frequency 50 | New-FieldSource -Uniform
+            $a = New-ConductiveItem -Material Titanium -Diameter '65 mm' -WireDiameter '4 mm' -Gap '20 mm' | Test-InductionHazard -Source $field
+            $a.ShockMargin | Should -BeGreaterThan 0.999999
+            $a.ShockMargin | Should -BeLessThan 1.000001
+            $a.Verdict | Should -Be 'Caution'
+        }
+
+        It 'finds a copper ring in a 12 kHz, 4 mT field a burn hazard' {
+            $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform
+            $a = New-ConductiveItem -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' | Test-InductionHazard -Source $heater
+            $a.Verdict | Should -Be 'Hazard'
+            $a.GoverningMechanism | Should -Be 'Burn'
+        }
+    }
+
+    Context 'parameters' {
+        It 'refuses an exposure longer than 8 h with an error naming the parameter' {
+            { New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' | Test-InductionHazard -Source $pulse -ExposureTime '9 h' } |
+                Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.TestInductionHazardCommand' -ExpectedMessage '*ExposureTime*'
+        }
+
+        It 'refuses an ambient temperature given in the wrong unit, naming the parameter' {
+            { New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' | Test-InductionHazard -Source $pulse -AmbientTemperature '3 T' } |
+                Should -Throw -ExpectedMessage '*AmbientTemperature*a temperature*'
+        }
+
+        It 'reads rows that name a user-defined material' {
+            $alloy = @{ Name = 'Site alloy'; Resistivity = '1e-7 ohm m'; Density = 13000; SpecificHeat = 150; MeltingTemperature = '800 degC' }
+            $a = @{ Name = 'Alloy ring'; Material = 'site alloy'; Diameter = '20 mm'; WireDiameter = '2 mm' } |
+                Test-InductionHazard -Source $pulse -AdditionalMaterial $alloy -WarningAction SilentlyContinue
+            $a.Response.Item.Material.Name | Should -Be 'Site alloy'
+        }
+    }
+}
