@@ -26,11 +26,13 @@ $assessments = [System.Collections.Generic.List[object]]::new()
 $rowErrors = [System.Collections.Generic.List[object]]::new()
 foreach ($station in $site.Stations) {
     $shape = @{}
-    foreach ($key in $station.Keys) { if ($key -notin 'Name', 'Form', 'Why') { $shape[$key] = $station[$key] } }
+    foreach ($key in $station.Keys) { if ($key -notin 'Name', 'Form', 'Why', 'ExposureTime') { $shape[$key] = $station[$key] } }
     $shape[$station.Form] = $true
     $source = New-FieldWaveform @shape | New-FieldSource -Uniform -Name $station.Name
+    $stay = @{}
+    if ($station.ContainsKey('ExposureTime')) { $stay.ExposureTime = $station.ExposureTime }
     Write-Host "Assessing $($inventory.Count) items at $($station.Name)"
-    $inventory | Test-InductionHazard -Source $source -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed |
+    $inventory | Test-InductionHazard -Source $source @stay -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed |
         ForEach-Object { $assessments.Add($_) }
     foreach ($e in $failed) { $rowErrors.Add([pscustomobject]@{ Station = $station.Name; Error = $e.Exception.Message }) }
 }
@@ -62,7 +64,9 @@ $null = $md.AppendLine("Assessed $($inventory.Count) inventory items at $($site.
 $null = $md.AppendLine()
 $null = $md.AppendLine('## Cautions')
 $null = $md.AppendLine()
-foreach ($c in ($assessments | ForEach-Object Cautions | Select-Object -Unique)) { $null = $md.AppendLine("- $c") }
+foreach ($c in ($assessments | ForEach-Object Cautions | Where-Object { $_ -notlike 'Limits from:*' } | Select-Object -Unique)) { $null = $md.AppendLine("- $c") }
+$null = $md.AppendLine('- Limits and factors applied in this audit:')
+foreach ($s in ($assessments | ForEach-Object Standards | Select-Object -Unique)) { $null = $md.AppendLine("  - $s") }
 $null = $md.AppendLine()
 $null = $md.AppendLine('## Summary')
 $null = $md.AppendLine()
@@ -80,7 +84,9 @@ foreach ($station in $site.Stations) {
     $here = @($assessments | Where-Object SourceName -EQ $station.Name)
     $null = $md.AppendLine("## $($station.Name)")
     $null = $md.AppendLine()
-    $null = $md.AppendLine("$($station.Why) Field: $($here[0].Response.Scenario.Source.Describe()).")
+    $terms = ($here[0].Response.Scenario.Source.Terms | ForEach-Object { $_.Geometry.Describe() + ', ' + $_.Waveform.Describe() }) -join ' + '
+    $stayText = if ($station.ContainsKey('ExposureTime')) { " Time in the field: $($station.ExposureTime), then the cooling that follows." } else { '' }
+    $null = $md.AppendLine("$($station.Why) Field: $terms.$stayText")
     $null = $md.AppendLine()
     $null = $md.AppendLine('| Row | Item | Verdict | Governing | Margin | Emf | Gap voltage | Current | Peak temperature |')
     $null = $md.AppendLine('|---:|---|---|---|---:|---:|---:|---:|---:|')

@@ -1,5 +1,6 @@
 # Places at the Marrowby Heath Field Laboratory (an invented site) where conductive items are assessed.
-# Each station is a uniform field whose drive follows a waveform; values are invented for the demonstration.
+# Each station is a uniform field whose drive follows a waveform, and optionally how long a person stays there
+# (ExposureTime); values are invented for the demonstration.
 @{
     Site     = 'Marrowby Heath Field Laboratory'
     Stations = @(
@@ -20,11 +21,12 @@
             Why      = 'A person at the bore entrance when the magnet quenches.'
         }
         @{
-            Name      = 'Induction furnace F1 operator position'
-            Form      = 'Sine'
-            Amplitude = '1.5 mT'
-            Frequency = '9.6 kHz'
-            Why       = 'The operator stands at the furnace through a shift.'
+            Name         = 'Induction furnace F1 coil mouth'
+            Form         = 'Sine'
+            Amplitude    = '1.5 mT'
+            Frequency    = '9.6 kHz'
+            ExposureTime = '2 min'
+            Why          = 'A hand at the coil mouth for two minutes while a billet is loaded.'
         }
         @{
             Name      = 'Demagnetiser bench D3'

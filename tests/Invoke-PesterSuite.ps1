@@ -19,6 +19,7 @@ $configuration = New-PesterConfiguration
 $configuration.Run.Container = $container
 $configuration.Run.PassThru = $true
 $configuration.Output.Verbosity = 'Normal'
+if ([Console]::IsOutputRedirected) { $configuration.Output.RenderMode = 'Plaintext' }
 $result = Invoke-Pester -Configuration $configuration
 $failed = $result.FailedCount + $result.FailedBlocksCount + $result.FailedContainersCount
 @{ Passed = $result.PassedCount; Failed = $failed } | ConvertTo-Json | Set-Content -Path $ResultPath -Encoding utf8

@@ -102,6 +102,7 @@ Describe 'Test-InductionHazard' {
             $a = Test-InductionHazard -Item $thick -Source $field -WarningVariable warned -WarningAction SilentlyContinue
             $a.Verdict | Should -Be 'Indeterminate'
             ($a.Reasons -join ' ') | Should -Match 'thin-ring'
+            [double]::IsNaN($a.PeakTemperatureCelsius) | Should -BeTrue -Because 'no safe-looking number comes from a model outside its validity'
             ($warned -join ' ') | Should -Match 'Thick ring: Indeterminate'
         }
 

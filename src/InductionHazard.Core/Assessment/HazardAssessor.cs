@@ -41,8 +41,14 @@ public static class HazardAssessor
             reasons.Add("no mechanism applies that this version can check");
         }
 
-        reasons.AddRange(applicable.Where(r => r.Verdict != Verdict.Clear).Select(r => r.Mechanism + ": " + r.Detail));
-        IEnumerable<string> sources = applicable.Select(r => r.Basis).Append(Standards.SafetyFactor).Distinct();
+        // Each broken assumption once, however many mechanisms it stops; then the findings of judged mechanisms.
+        if (applicable.Any(r => r.Verdict == Verdict.Indeterminate))
+        {
+            reasons.AddRange(response.ValidityIssues.Select(i => i.Reason).Distinct());
+        }
+
+        reasons.AddRange(applicable.Where(r => r.Verdict is Verdict.Caution or Verdict.Hazard).Select(r => r.Mechanism + ": " + r.Detail));
+        string[] standards = applicable.SelectMany(r => r.Sources).Append(Standards.SafetyFactor).Distinct().ToArray();
 
         return new InductionAssessment
         {
@@ -57,13 +63,14 @@ public static class HazardAssessor
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             BurnMargin = MarginOf(results, HazardMechanism.Burn),
             OverheatMargin = MarginOf(results, HazardMechanism.Overheat),
-            PeakEmfVolts = response.PeakEmfVolts,
-            GapVoltageVolts = response.GapVoltageVolts,
-            PeakCurrentAmperes = response.PeakCurrentAmperes,
-            PeakTemperatureCelsius = response.PeakTemperatureCelsius,
-            EnergyDissipatedJoules = response.EnergyDissipatedJoules,
+            PeakEmfVolts = Trusted(response, AffectedResults.Emf, response.PeakEmfVolts),
+            GapVoltageVolts = response.GapVoltageVolts is { } gap ? Trusted(response, AffectedResults.Emf, gap) : null,
+            PeakCurrentAmperes = Trusted(response, AffectedResults.Current, response.PeakCurrentAmperes),
+            PeakTemperatureCelsius = Trusted(response, AffectedResults.Current | AffectedResults.Heating, response.PeakTemperatureCelsius),
+            EnergyDissipatedJoules = Trusted(response, AffectedResults.Current | AffectedResults.Heating, response.EnergyDissipatedJoules),
             Reasons = reasons,
-            Cautions = Criteria.Cautions.For(sources),
+            Standards = standards,
+            Cautions = Criteria.Cautions.For(standards),
             PolicyName = policy.Name,
             SafetyFactor = policy.SafetyFactor,
             ModuleVersion = ModuleVersion,
@@ -71,6 +78,10 @@ public static class HazardAssessor
             Response = response,
         };
     }
+
+    /// <summary>A value the assessment shows only when no broken assumption affects it: never a safe-looking number.</summary>
+    private static double Trusted(InductionResponse response, AffectedResults needs, double value) =>
+        response.Trusts(needs) ? value : double.NaN;
 
     private static MechanismResult? Governing(MechanismResult[] applicable, Verdict verdict)
     {

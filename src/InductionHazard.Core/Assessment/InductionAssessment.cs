@@ -43,7 +43,7 @@ public sealed class InductionAssessment
     /// <summary>The Overheat margin; null when it does not apply.</summary>
     public double? OverheatMargin { get; init; }
 
-    /// <summary>The peak emf around the loop, V.</summary>
+    /// <summary>The peak emf around the loop, V. Like the other numbers here, NaN when a broken model assumption affects it.</summary>
     public double PeakEmfVolts { get; init; }
 
     /// <summary>The peak gap voltage of a split ring, V; null for a closed loop.</summary>
@@ -60,6 +60,9 @@ public sealed class InductionAssessment
 
     /// <summary>Why the verdict is what it is: the broken assumptions of an Indeterminate, the findings of a Hazard or Caution.</summary>
     public IReadOnlyList<string> Reasons { get; init; } = Array.Empty<string>();
+
+    /// <summary>The standards and sources of the limits applied (and of the safety factor).</summary>
+    public IReadOnlyList<string> Standards { get; init; } = Array.Empty<string>();
 
     /// <summary>The cautions every assessment carries, with the standards the limits came from.</summary>
     public IReadOnlyList<string> Cautions { get; init; } = Array.Empty<string>();

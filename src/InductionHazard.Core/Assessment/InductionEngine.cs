@@ -78,18 +78,16 @@ public static class InductionEngine
 
         Complex emf = -Complex.ImaginaryOne * omega * flux;
         double on = c.Scenario.Source.StartSeconds;
-        double exposure = c.Scenario.ExposureSeconds
-            ?? (double.IsInfinity(c.Scenario.Source.EndSeconds)
-                ? Scenario.LongestExposureSeconds
-                : Math.Min(Scenario.LongestExposureSeconds, c.Scenario.Source.EndSeconds - on + (3 * c.Thermal.TimeConstantSeconds(c.Start))));
-        double end = on + exposure;
-        double off = Math.Min(c.Scenario.Source.EndSeconds, end);
+        double runs = c.Scenario.Source.EndSeconds - on;
+        double inField = c.Scenario.ExposureSeconds ?? Math.Min(runs, Scenario.LongestExposureSeconds);
+        double off = on + Math.Min(inField, runs);
+        double end = on + inField + CoolingTail(c);
         double delta = SkinEffect.SkinDepthMeters(c.Scenario.Item.Material.ResistivityAt(c.Start), f, c.Scenario.Item.Material.RelativePermeability);
-        c.Notes.Add("alternating drive at " + SiFormat.Format(f, "Hz") + ", periodic steady state (switch-on transients not modelled); field on for " + SiFormat.Format(off - on, "s") + ", assessed over " + SiFormat.Format(exposure, "s"));
+        c.Notes.Add("alternating drive at " + SiFormat.Format(f, "Hz") + ", periodic steady state (switch-on transients not modelled); the item is in the field for " + SiFormat.Format(off - on, "s") + ", then cools to " + SiFormat.Format(end - on, "s"));
 
         if (c.Scenario.Item.IsSplit)
         {
-            return Open(c, emf.Magnitude, emf.Magnitude / Math.Sqrt(2), EmfKind.Alternating, flux.Magnitude, field.Magnitude, null, delta, exposure, OnePeriodOpen(emf, f, on, c.Start), on, end);
+            return Open(c, emf.Magnitude, emf.Magnitude / Math.Sqrt(2), EmfKind.Alternating, flux.Magnitude, field.Magnitude, null, delta, off - on, OnePeriodOpen(emf, f, on, c.Start), on, end);
         }
 
         var solver = new SinusoidalLoopSolver(t => c.Circuit.ImpedanceOhms(f, t), c.Thermal);
@@ -124,11 +122,18 @@ public static class InductionEngine
             PeakTemperatureCelsius = TemperatureHistory.Peak(run.Heating),
             FinalTemperatureCelsius = run.FinalCelsius,
             MeltingReachedSeconds = TemperatureHistory.FirstReaching(run.Heating, c.Scenario.Item.Material.MeltingCelsius),
-            ExposureSeconds = exposure,
+            ExposureSeconds = off - on,
+            AssessedSeconds = end - on,
             CircuitSeries = run.Circuit,
             HeatingSeries = run.Heating,
         };
     }
+
+    /// <summary>
+    /// How long the cooling after the exposure is followed: three cooling time constants, and at least ten L/R
+    /// so that the current has died away. The item is still worn or held while it cools.
+    /// </summary>
+    private static double CoolingTail(Common c) => Math.Max(10 * c.Ldc / c.Rdc, 3 * c.Thermal.TimeConstantSeconds(c.Start));
 
     private static InductionResponse Transient(Common c, CancellationToken cancellation)
     {
@@ -137,11 +142,15 @@ public static class InductionEngine
         double begin = source.StartSeconds;
         double fieldEnd = source.EndSeconds;
         double tauElectric = c.Ldc / c.Rdc;
-        double tail = Math.Max(10 * tauElectric, 3 * c.Thermal.TimeConstantSeconds(c.Start));
-        double exposure = c.Scenario.ExposureSeconds ?? Math.Min(Scenario.LongestExposureSeconds, fieldEnd - begin + tail);
-        double end = begin + exposure;
+        double leave = begin + (c.Scenario.ExposureSeconds ?? (fieldEnd - begin));
+        double end = leave + CoolingTail(c);
         double Emf(double t)
         {
+            if (t >= leave)
+            {
+                return 0;
+            }
+
             double sum = 0;
             for (int k = 0; k < terms.Count; k++)
             {
@@ -162,23 +171,29 @@ public static class InductionEngine
             return sum;
         }
 
-        double[] times = new[] { begin }.Concat(source.BreakpointsBetween(begin, end)).Append(Math.Min(end, fieldEnd)).Distinct().OrderBy(t => t).ToArray();
+        double stop = Math.Min(leave, fieldEnd);
+        double[] breakpoints = source.BreakpointsBetween(begin, end).Append(leave).Where(t => t < end).Distinct().OrderBy(t => t).ToArray();
+        double[] times = new[] { begin }.Concat(breakpoints.Where(t => t < stop)).Append(stop).Distinct().OrderBy(t => t).ToArray();
         double peakFlux = times.Max(t => Math.Abs(Linked(c.Coupling, t)));
         double peakField = times.Max(t => Math.Abs(Linked(c.NormalField, t)));
         double peakEmf = times.Zip(times.Skip(1), (a, b) => Math.Abs(Emf(0.5 * (a + b)))).DefaultIfEmpty(0).Max();
-        double fluxChange = Linked(c.Coupling, Math.Min(end, fieldEnd)) - Linked(c.Coupling, begin);
+        double fluxChange = Linked(c.Coupling, stop) - Linked(c.Coupling, begin);
         double delta = SkinEffect.SkinDepthMeters(c.Scenario.Item.Material.ResistivityAt(c.Start), c.Frequency, c.Scenario.Item.Material.RelativePermeability);
         double rampTime = terms.Select(t => t.Waveform.TimeScales[0].Seconds).Min();
-        c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + ", assessed over " + SiFormat.Format(exposure, "s") + " including the cooling after it");
+        c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s") + ", then cools to " + SiFormat.Format(end - begin, "s"));
+        if (leave < fieldEnd)
+        {
+            c.Notes.Add("the item leaves before the drive ends: the drive is taken to stop for it then; the flux change of moving out of the field is not modelled");
+        }
 
         if (c.Scenario.Item.IsSplit)
         {
             var series = times.SelectMany(t => new[] { new CircuitSample(t, Emf(t), 0, c.Start) }).ToArray();
-            return Open(c, peakEmf, null, EmfKind.Unidirectional, peakFlux, peakField, fluxChange, delta, exposure, series, begin, end);
+            return Open(c, peakEmf, null, EmfKind.Unidirectional, peakFlux, peakField, fluxChange, delta, leave - begin, series, begin, end);
         }
 
         var solver = new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal);
-        TransientRun run = solver.Run(Emf, source.BreakpointsBetween(begin, end), begin, end, c.Start, cancellation);
+        TransientRun run = solver.Run(Emf, breakpoints, begin, end, c.Start, cancellation);
         if (run.BudgetExceeded)
         {
             c.Issues.Add(new ValidityIssue("the circuit solver ran out of steps before the end of the exposure", AffectedResults.Current | AffectedResults.Heating));
@@ -213,7 +228,8 @@ public static class InductionEngine
             PeakTemperatureCelsius = TemperatureHistory.Peak(run.Heating),
             FinalTemperatureCelsius = run.FinalCelsius,
             MeltingReachedSeconds = TemperatureHistory.FirstReaching(run.Heating, c.Scenario.Item.Material.MeltingCelsius),
-            ExposureSeconds = exposure,
+            ExposureSeconds = leave - begin,
+            AssessedSeconds = end - begin,
             CircuitSeries = run.Circuit,
             HeatingSeries = run.Heating,
         };
@@ -250,6 +266,7 @@ public static class InductionEngine
             PeakTemperatureCelsius = c.Start,
             FinalTemperatureCelsius = c.Start,
             ExposureSeconds = exposure,
+            AssessedSeconds = end - begin,
             CircuitSeries = series,
             HeatingSeries = new[] { new HeatingSample(begin, c.Start, 0), new HeatingSample(end, c.Start, 0) },
         };

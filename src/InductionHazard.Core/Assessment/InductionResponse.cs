@@ -116,14 +116,20 @@ public sealed class InductionResponse
     /// <summary>When the item reaches its melting point, s; null if it does not (beyond it the model is notional).</summary>
     public double? MeltingReachedSeconds { get; init; }
 
-    /// <summary>The time assessed, from the start of the drive, s.</summary>
+    /// <summary>How long the item is in the field, from the start of the drive, s.</summary>
     public double ExposureSeconds { get; init; }
+
+    /// <summary>The time assessed, from the start of the drive: the exposure and the cooling after it, s.</summary>
+    public double AssessedSeconds { get; init; }
 
     /// <summary>The electrical time series (one period for an alternating drive).</summary>
     public IReadOnlyList<CircuitSample> CircuitSeries { get; init; } = Array.Empty<CircuitSample>();
 
     /// <summary>The temperature history over the exposure.</summary>
     public IReadOnlyList<HeatingSample> HeatingSeries { get; init; } = Array.Empty<HeatingSample>();
+
+    /// <summary>True when no validity issue affects any of the given results.</summary>
+    public bool Trusts(AffectedResults results) => IssuesAffecting(results).Count == 0;
 
     /// <summary>The validity issues that affect any of the given results.</summary>
     public IReadOnlyList<ValidityIssue> IssuesAffecting(AffectedResults results) =>

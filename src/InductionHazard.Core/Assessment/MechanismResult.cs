@@ -36,8 +36,11 @@ public sealed class MechanismResult
     /// <summary>Limit over predicted (for temperatures: the allowed rise over the predicted rise); at least 1 passes.</summary>
     public double Margin { get; private set; } = double.NaN;
 
-    /// <summary>Where the limit comes from.</summary>
-    public string Basis { get; private set; } = string.Empty;
+    /// <summary>Where the limits come from, one source per entry.</summary>
+    public IReadOnlyList<string> Sources { get; private set; } = System.Array.Empty<string>();
+
+    /// <summary>Where the limits come from, in one line.</summary>
+    public string Basis => string.Join("; ", Sources);
 
     /// <summary>The finding in one sentence, or why the mechanism does not apply or cannot be judged.</summary>
     public string Detail { get; private set; } = string.Empty;
@@ -47,17 +50,17 @@ public sealed class MechanismResult
         new(mechanism) { Applies = false, Detail = reason };
 
     /// <summary>A mechanism that applies but cannot be judged (a broken assumption, a failed number).</summary>
-    public static MechanismResult Indeterminate(HazardMechanism mechanism, string basis, IEnumerable<ValidityIssue> issues) =>
+    public static MechanismResult Indeterminate(HazardMechanism mechanism, IReadOnlyList<string> sources, IEnumerable<ValidityIssue> issues) =>
         new(mechanism)
         {
             Applies = true,
             Verdict = Criteria.Verdict.Indeterminate,
-            Basis = basis,
+            Sources = sources,
             Detail = "cannot be judged: " + string.Join("; ", issues.Select(i => i.Reason)),
         };
 
     /// <summary>A judged mechanism; the verdict follows from the margin and the safety factor.</summary>
-    public static MechanismResult Judged(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, string basis, string detail) =>
+    public static MechanismResult Judged(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, IReadOnlyList<string> sources, string detail) =>
         new(mechanism)
         {
             Applies = true,
@@ -67,7 +70,7 @@ public sealed class MechanismResult
             Unit = unit,
             Margin = margin,
             Verdict = VerdictRules.FromMargin(margin, safetyFactor),
-            Basis = basis,
+            Sources = sources,
             Detail = detail,
         };
 

@@ -17,7 +17,7 @@ public sealed class Scenario
     /// <param name="item">The item.</param>
     /// <param name="source">The field source.</param>
     /// <param name="placement">Where the item is and how it faces; null: at the origin facing the field.</param>
-    /// <param name="exposureSeconds">How long from the start of the drive the item stays; null: the drive and the cooling after it (a continuous drive: 8 h).</param>
+    /// <param name="exposureSeconds">How long the item stays in the field from the start of the drive; null: as long as the drive changes (a continuous drive: 8 h). The cooling that follows is assessed too, as the item is still worn or held.</param>
     /// <param name="environment">The surroundings; null: still air at 20 °C.</param>
     /// <exception cref="InvalidInputException">The exposure time is out of range.</exception>
     public Scenario(ConductiveItem item, FieldSource source, Placement? placement = null, double? exposureSeconds = null, ThermalEnvironment? environment = null)
@@ -53,7 +53,7 @@ public sealed class Scenario
     /// <summary>The item's placement.</summary>
     public Placement Placement { get; }
 
-    /// <summary>The exposure time from the start of the drive, s; null for the default.</summary>
+    /// <summary>How long the item stays in the field from the start of the drive, s; null for the default.</summary>
     public double? ExposureSeconds { get; }
 
     /// <summary>The surroundings.</summary>

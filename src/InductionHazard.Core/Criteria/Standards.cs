@@ -7,7 +7,7 @@ public static class Standards
     public const string ExtraLowVoltage = "IEC 61140 / IEC 60364-4-41 section 414 (extra-low voltage: 50 V a.c. rms, 120 V ripple-free d.c.)";
 
     /// <summary>Contact burn thresholds of hot surfaces.</summary>
-    public const string ContactBurn = "ISO 13732-1:2006 (burn thresholds for skin contact with hot surfaces; uncoated metal)";
+    public const string ContactBurn = "ISO 13732-1:2006 (burn thresholds for skin contact with hot surfaces, uncoated metal)";
 
     /// <summary>The thermal dose model.</summary>
     public const string ThermalDoseModel = "Sapareto and Dewey, Int J Radiat Oncol Biol Phys 10:787 (1984) (CEM43)";

@@ -29,5 +29,5 @@ public sealed class UniformField : IFieldGeometry
         Math.PI * radius * radius * Direction.Dot(normal);
 
     /// <inheritdoc />
-    public string Describe() => "uniform field along " + Direction;
+    public string Describe() => "uniform field along " + Directions.Describe(Direction);
 }

@@ -77,6 +77,11 @@ public class HazardAssessorTests
         Assert.Equal(Verdict.Indeterminate, a.Verdict);
         Assert.True(double.IsNaN(a.MinimumMargin));
         Assert.Contains(a.Reasons, r => r.Contains("thin-ring", StringComparison.Ordinal));
+        Assert.Single(a.Reasons);
+        Assert.True(double.IsNaN(a.PeakCurrentAmperes), "the current is not shown from a model outside its validity");
+        Assert.True(double.IsNaN(a.PeakTemperatureCelsius), "nor the temperature");
+        Assert.True(a.PeakEmfVolts > 0, "the emf does not depend on the ring's inductance and is still shown");
+        Assert.True(a.Response.PeakTemperatureCelsius > 0, "the response keeps the raw number for diagnosis");
     }
 
     [Fact]

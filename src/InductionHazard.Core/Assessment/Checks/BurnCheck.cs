@@ -34,7 +34,7 @@ public sealed class BurnCheck : IHazardCheck
         var issues = response.IssuesAffecting(AffectedResults.Current | AffectedResults.Heating);
         if (issues.Count > 0)
         {
-            return MechanismResult.Indeterminate(Mechanism, policy.ContactBurn.Source, issues);
+            return MechanismResult.Indeterminate(Mechanism, SourcesOf(policy), issues);
         }
 
         return response.Item.Contact is ContactKind.Skin or ContactKind.Held
@@ -49,7 +49,7 @@ public sealed class BurnCheck : IHazardCheck
         double threshold = policy.ContactBurn.CelsiusFor(policy.TouchSeconds);
         double margin = RiseMargin(threshold, peak, start);
         return MechanismResult.Judged(
-            Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, policy.ContactBurn.Source,
+            Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, new[] { policy.ContactBurn.Source },
             "a " + SiFormat.Format(policy.TouchSeconds, "s") + " touch of the item at its peak " + SiFormat.Celsius(peak)
             + " against the burn threshold " + SiFormat.Celsius(threshold) + " (" + response.Item.Contact + " item: not worn or held)");
     }
@@ -90,7 +90,7 @@ public sealed class BurnCheck : IHazardCheck
         string doseText = "thermal dose " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin " + SiFormat.Plain(doseMargin) + ")";
         string contactText = "held " + SiFormat.Celsius(worst.held) + " for " + SiFormat.Format(worst.seconds, "s") + " against the threshold "
             + SiFormat.Celsius(worst.threshold) + " for that contact time (margin " + SiFormat.Plain(worst.margin) + ")";
-        string basis = curve.Source + "; " + Standards.ThermalDoseModel + "; " + Standards.ThermalDoseLimit;
+        IReadOnlyList<string> basis = SourcesOf(policy);
         if (double.IsNaN(doseMargin) || doseMargin < worst.margin)
         {
             return MechanismResult.Judged(Mechanism, "thermal dose", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", doseMargin, policy.SafetyFactor, basis,
@@ -100,6 +100,9 @@ public sealed class BurnCheck : IHazardCheck
         return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
             "skin in contact: " + contactText + "; " + doseText);
     }
+
+    private static string[] SourcesOf(HazardPolicy policy) =>
+        new[] { policy.ContactBurn.Source, Standards.ThermalDoseModel, Standards.ThermalDoseLimit };
 
     /// <summary>Allowed rise over predicted rise; a start already at the threshold has no margin at all.</summary>
     private static double RiseMargin(double threshold, double predicted, double start)

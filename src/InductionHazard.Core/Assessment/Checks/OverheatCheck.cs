@@ -9,6 +9,8 @@ namespace InductionHazard.Assessment.Checks;
 /// </summary>
 public sealed class OverheatCheck : IHazardCheck
 {
+    private static readonly string[] Sources = { Standards.Melting };
+
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Overheat;
 
@@ -23,7 +25,7 @@ public sealed class OverheatCheck : IHazardCheck
         var issues = response.IssuesAffecting(AffectedResults.Current | AffectedResults.Heating);
         if (issues.Count > 0)
         {
-            return MechanismResult.Indeterminate(Mechanism, Standards.Melting, issues);
+            return MechanismResult.Indeterminate(Mechanism, Sources, issues);
         }
 
         double melting = response.Item.Material.MeltingCelsius;
@@ -33,6 +35,6 @@ public sealed class OverheatCheck : IHazardCheck
         string detail = "peak temperature " + SiFormat.Celsius(peak) + " against the melting point of " + response.Item.Material.Name
             + " " + SiFormat.Celsius(melting) + " (margin on the rise from " + SiFormat.Celsius(start) + ")"
             + (response.MeltingReachedSeconds is { } t ? "; melting reached at t = " + SiFormat.Format(t, "s") + ", beyond which the model is notional" : string.Empty);
-        return MechanismResult.Judged(Mechanism, "peak temperature", peak, melting, "°C", margin, policy.SafetyFactor, Standards.Melting, detail);
+        return MechanismResult.Judged(Mechanism, "peak temperature", peak, melting, "°C", margin, policy.SafetyFactor, Sources, detail);
     }
 }

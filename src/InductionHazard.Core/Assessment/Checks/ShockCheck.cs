@@ -9,6 +9,8 @@ namespace InductionHazard.Assessment.Checks;
 /// </summary>
 public sealed class ShockCheck : IHazardCheck
 {
+    private static readonly string[] Sources = { Standards.ExtraLowVoltage };
+
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Shock;
 
@@ -23,7 +25,7 @@ public sealed class ShockCheck : IHazardCheck
         var issues = response.IssuesAffecting(AffectedResults.Emf);
         if (issues.Count > 0)
         {
-            return MechanismResult.Indeterminate(Mechanism, Standards.ExtraLowVoltage, issues);
+            return MechanismResult.Indeterminate(Mechanism, Sources, issues);
         }
 
         bool alternating = response.EmfKind == EmfKind.Alternating;
@@ -32,7 +34,7 @@ public sealed class ShockCheck : IHazardCheck
         string quantity = alternating ? "gap voltage, rms" : "gap voltage, peak of a unidirectional pulse";
         double margin = VerdictRules.Margin(limit, predicted);
         return MechanismResult.Judged(
-            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, Standards.ExtraLowVoltage,
+            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, Sources,
             quantity + " " + SiFormat.Format(predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(limit, "V")
             + (alternating ? " rms" : " d.c."));
     }
