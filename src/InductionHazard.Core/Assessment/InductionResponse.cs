@@ -12,7 +12,7 @@ namespace InductionHazard.Assessment;
 /// The physics of one scenario: emf, gap voltage, current, energy, temperatures and their time series, with the
 /// model used, its notes and any assumption that does not hold. Values are SI with the unit in the name.
 /// </summary>
-public sealed class InductionResponse
+public sealed record InductionResponse
 {
     /// <summary>The scenario solved.</summary>
     public Scenario Scenario { get; init; } = null!;
@@ -130,6 +130,9 @@ public sealed class InductionResponse
 
     /// <summary>True when no validity issue affects any of the given results.</summary>
     public bool Trusts(AffectedResults results) => IssuesAffecting(results).Count == 0;
+
+    /// <summary>"item in source".</summary>
+    public override string ToString() => ItemName + " in " + SourceName;
 
     /// <summary>The validity issues that affect any of the given results.</summary>
     public IReadOnlyList<ValidityIssue> IssuesAffecting(AffectedResults results) =>
