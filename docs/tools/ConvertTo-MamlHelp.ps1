@@ -66,9 +66,11 @@ function Read-HelpMarkdown {
 
 function Add-Paras {
     param([System.Xml.XmlWriter] $W, [string] $Text)
-    $paras = @(($Text -split "`n\s*`n") | ForEach-Object { ($_ -replace "`n", ' ').Trim() } | Where-Object { $_ })
+    # Paragraphs are separated by blank lines; each list item ("- ") is a paragraph of its own.
+    $text = $Text -replace "`n- ", "`n`n- "
+    $paras = @(($text -split "`n\s*`n") | ForEach-Object { ($_ -replace '\s+', ' ').Trim() } | Where-Object { $_ })
     if ($paras.Count -eq 0) { $paras = @('') }
-    foreach ($p in $paras) { $W.WriteElementString('maml', 'para', $maml, ($p -replace '^- ', '')) }
+    foreach ($p in $paras) { $W.WriteElementString('maml', 'para', $maml, $p) }
 }
 
 function Write-Parameter {

@@ -39,7 +39,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Vector]
     public Vector3D? Normal { get; set; }
 
-    /// <summary>How long the item stays, from the start of the drive ('10 min'); by default the drive and the cooling after it, or 8 h for a field that runs on.</summary>
+    /// <summary>How long the item stays in the field from the start of the drive ('10 min'); by default while the drive changes, or 8 h for a field that runs on. The cooling after it is assessed too.</summary>
     [Parameter]
     [Quantity(QuantityKind.Time)]
     public double? ExposureTime { get; set; }
