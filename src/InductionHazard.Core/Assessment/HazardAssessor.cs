@@ -18,9 +18,6 @@ public static class HazardAssessor
         typeof(HazardAssessor).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0]
         ?? typeof(HazardAssessor).Assembly.GetName().Version?.ToString() ?? "unknown";
 
-    /// <summary>The mechanisms this version checks.</summary>
-    public static IEnumerable<HazardMechanism> CheckedMechanisms => Checks.Select(c => c.Mechanism);
-
     /// <summary>Assesses a response against a policy.</summary>
     /// <param name="response">The physics.</param>
     /// <param name="policy">The limits and safety factor.</param>

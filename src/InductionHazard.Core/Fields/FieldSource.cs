@@ -49,22 +49,6 @@ public sealed class FieldSource
     public static FieldSource Uniform(string name, FieldWaveform waveform, Vector3D direction) =>
         new(name, new[] { new SourceTerm(new UniformField(direction), waveform) });
 
-    /// <summary>The field at a point and time, T.</summary>
-    public Vector3D FieldAt(Vector3D point, double t)
-    {
-        Vector3D sum = Vector3D.Zero;
-        foreach (SourceTerm term in Terms)
-        {
-            sum += term.Waveform.Value(t) * term.Geometry.FieldPerUnitDrive(point);
-        }
-
-        return sum;
-    }
-
-    /// <summary>The largest |B| the source can give at a point: the sum of the terms' peak magnitudes, T.</summary>
-    public double PeakFieldBound(Vector3D point) =>
-        Terms.Sum(t => t.Waveform.PeakValue * t.Geometry.FieldPerUnitDrive(point).Length);
-
     /// <summary>A one-line description.</summary>
     public string Describe() =>
         Name + ": " + string.Join(" + ", Terms.Select(t => t.Geometry.Describe() + ", " + t.Waveform.Describe()));

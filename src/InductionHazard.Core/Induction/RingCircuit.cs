@@ -45,8 +45,4 @@ public sealed class RingCircuit
 
         return new Complex(rdc, omega * DcInductanceHenries);
     }
-
-    /// <summary>The effective inductance at a frequency, Im(Z) / omega, H.</summary>
-    public double InductanceHenries(double frequencyHertz, double celsius) =>
-        ImpedanceOhms(frequencyHertz, celsius).Imaginary / (2 * Math.PI * frequencyHertz);
 }

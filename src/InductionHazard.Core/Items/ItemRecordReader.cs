@@ -81,6 +81,10 @@ public static class ItemRecordReader
             contact);
     }
 
+    /// <summary>The item name a record gives (through the Name column or its aliases), or null.</summary>
+    public static string? NameOf(IEnumerable<KeyValuePair<string, object?>> record) =>
+        new RecordFields(record).Text("Name", required: false, A("Name"));
+
     /// <summary>How a record is named in messages: "row 7 ('Wedding band')", or "item 'Wedding band'".</summary>
     public static string Label(int? rowNumber, string? name)
     {

@@ -67,7 +67,7 @@ public static class QuantityParser
     /// </summary>
     public static (double Value, QuantityKind? Kind) ParseOneOf(object? input, params QuantityKind[] kinds)
     {
-        if (input is string text && IsBareNumber(text) || input is not string && input is not null)
+        if ((input is string text && IsBareNumber(text)) || (input is not string && input is not null))
         {
             return (Parse(input, kinds[0]), null);
         }

@@ -19,7 +19,6 @@ internal static class ItemInput
             return ItemRecordReader.Label(row, item.Name);
         }
 
-        object? name = input.BaseObject is System.Collections.IDictionary d ? d["Name"] : input.Properties["Name"]?.Value;
-        return ItemRecordReader.Label(row, name?.ToString());
+        return ItemRecordReader.Label(row, ItemRecordReader.NameOf(Records.From(input)));
     }
 }

@@ -68,6 +68,14 @@ public class ItemRecordReaderTests
     }
 
     [Fact]
+    public void ARowIsNamedThroughItsNameColumnOrAnAlias()
+    {
+        Assert.Equal("Bangle", ItemRecordReader.NameOf(new Dictionary<string, object?> { ["Item"] = " Bangle " }));
+        Assert.Null(ItemRecordReader.NameOf(new Dictionary<string, object?> { ["Material"] = "Gold" }));
+        Assert.Equal("row 4 ('Bangle')", ItemRecordReader.Label(4, "Bangle"));
+    }
+
+    [Fact]
     public void EveryProblemInARowIsReportedAtOnce()
     {
         var error = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Kryptonite", ["Width"] = "5 mm" }, 3));
