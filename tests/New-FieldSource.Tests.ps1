@@ -32,4 +32,9 @@ Describe 'New-FieldSource' {
         $amps = New-FieldWaveform -Sine -Amplitude '10 A' -Frequency 50
         { New-FieldSource -Uniform -Waveform $amps } | Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewFieldSourceCommand'
     }
+
+    It 'takes a direction with huge components, such as 1e200,0,0, as the axis it points along' {
+        $s = New-FieldWaveform -Ramp -From 0 -To '1 T' -Duration 1 | New-FieldSource -Uniform -Direction '1e200,0,0'
+        $s.Terms[0].Geometry.Direction.X | Should -Be 1
+    }
 }

@@ -40,4 +40,21 @@ Describe 'New-FieldWaveform' {
     It 'refuses a zero duration' {
         { New-FieldWaveform -Ramp -From 0 -To 1 -Duration 0 } | Should -Throw -ExpectedMessage '*Duration*greater than zero*'
     }
+
+    It 'reads -PhaseDegrees as an angle: <Given> is <Degrees> degrees' -TestCases @(
+        @{ Given = 90; Degrees = 90 }
+        @{ Given = '90 deg'; Degrees = 90 }
+        @{ Given = '3.141592653589793 rad'; Degrees = 180 }
+    ) {
+        $w = New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' -PhaseDegrees $Given
+        [math]::Abs($w.PhaseRadians - $Degrees * [math]::PI / 180) | Should -BeLessThan 1e-12
+    }
+
+    It 'refuses a -PhaseDegrees of <Shown> instead of reading it as a number' -TestCases @(
+        @{ Given = ''; Shown = 'an empty string' }
+        @{ Given = '0x10'; Shown = '0x10' }
+        @{ Given = $true; Shown = 'True' }
+    ) {
+        { New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' -PhaseDegrees $Given } | Should -Throw -ExpectedMessage '*PhaseDegrees*'
+    }
 }

@@ -87,13 +87,9 @@ Describe 'Test-InductionHazard' {
     }
 
     Context 'failing closed' {
-        It 'gives Indeterminate, never Clear, when a NaN reaches a margin' {
-            $absurd = New-FieldWaveform -Sine -Amplitude 1e300 -Frequency '50 Hz' | New-FieldSource -Uniform
-            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
-            $a = Test-InductionHazard -Item $ring -Source $absurd -WarningAction SilentlyContinue
-            $a.Verdict | Should -Be 'Indeterminate'
-            [double]::IsNaN($a.MinimumMargin) | Should -BeTrue
-            ($a.Reasons -join ' ') | Should -Match 'numerical failure'
+        It 'refuses a field no source can make, rather than carry it into the physics' {
+            { New-FieldWaveform -Sine -Amplitude 1e300 -Frequency '50 Hz' | New-FieldSource -Uniform } |
+                Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewFieldSourceCommand' -ExpectedMessage '*Waveform*1000 T*'
         }
 
         It 'gives Indeterminate with the reason for an item outside the model, and warns' {
@@ -112,6 +108,64 @@ Describe 'Test-InductionHazard' {
                 Test-InductionHazard -Source $ramp -WarningAction SilentlyContinue
             $a.Verdict | Should -Be 'Indeterminate'
             ($a.Reasons -join ' ') | Should -Match 'ferromagnetic'
+        }
+    }
+
+    Context 'hostile input (each a defect that once stopped a run or gave a false Clear)' {
+        It 'assesses every other row when one holds digits of another script, and keeps the output already made' {
+            $rows = @(
+                [pscustomobject]@{ Name = 'First'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+                [pscustomobject]@{ Name = 'Arabic digits'; Material = 'Copper'; Diameter = '١٨ mm'; WireDiameter = '2 mm' }
+                [pscustomobject]@{ Name = 'Last'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            )
+            $out = $rows | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue -WarningAction SilentlyContinue
+            @($out).ItemName | Should -Be @('First', 'Last')
+            $bad.Count | Should -Be 1
+            $bad[0].Exception.Message | Should -BeLike "row 2 ('Arabic digits'): Diameter:*digits other than 0-9*"
+            $bad[0].TargetObject.Name | Should -Be 'Arabic digits'
+        }
+
+        It 'refuses a drive that starts too late to resolve, instead of assessing it as no exposure' {
+            { New-FieldWaveform -Ramp -From '0 T' -To '20 T' -Duration '10 ms' -Start '1e17 s' } |
+                Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.NewFieldWaveformCommand' -ExpectedMessage 'Start:*'
+            { New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' -Start 1e300 } | Should -Throw -ExpectedMessage 'Start:*'
+        }
+
+        It 'refuses an exposure too short for anyone to arrange (<Exposure>)' -TestCases @(@{ Exposure = '1e-300 s' }, @{ Exposure = '1 ms' }) {
+            { New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' | Test-InductionHazard -Source $pulse -ExposureTime $Exposure } |
+                Should -Throw -ErrorId 'InvalidInput,InductionHazard.PowerShell.Commands.TestInductionHazardCommand' -ExpectedMessage '*ExposureTime*0.1 s*'
+        }
+
+        It 'refuses a <Field> of <Value> naming the field' -TestCases @(
+            @{ Field = 'Gap'; Value = '1 nm' }
+            @{ Field = 'Gap'; Value = 1e-15 }
+            @{ Field = 'WireDiameter'; Value = 5e-324 }
+            @{ Field = 'WireDiameter'; Value = '5 A' }
+        ) {
+            $row = @{ Name = 'Absurd'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $row[$Field] = $Value
+            $out = [pscustomobject]$row | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue
+            $out | Should -BeNullOrEmpty
+            $bad[0].Exception.Message | Should -BeLike "*$($Field): must be between*"
+        }
+
+        It 'refuses two columns that give one field different values' {
+            $row = [pscustomobject]@{ Name = 'Twice'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; 'Wire Diameter' = '9 mm' }
+            $out = $row | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue
+            $out | Should -BeNullOrEmpty
+            $bad[0].Exception.Message | Should -BeLike "*WireDiameter: is given by more than one column*'Wire Diameter' = '9 mm'*"
+        }
+
+        It 'names the parameter when a length overflows in conversion' {
+            { New-ConductiveItem -Material Copper -Diameter '1e308 km' -WireDiameter '2 mm' } | Should -Throw -ExpectedMessage "*Diameter*'1e308 km' is too large*"
+        }
+
+        It 'shows a thick split ring''s zero current and unchanged temperature, never NaN beside a verdict' {
+            $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform
+            $a = New-ConductiveItem -Material Copper -Diameter '12 mm' -WireDiameter '6 mm' -Gap '1 mm' | Test-InductionHazard -Source $heater
+            $a.Verdict | Should -Not -Be 'Indeterminate'
+            $a.PeakCurrentAmperes | Should -Be 0
+            [double]::IsNaN($a.PeakTemperatureCelsius) | Should -BeFalse
         }
     }
 

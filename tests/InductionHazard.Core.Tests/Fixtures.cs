@@ -42,6 +42,22 @@ internal static class Fixtures
     public static FieldSource UniformRamp(double from, double to, double duration) =>
         FieldSource.Uniform("ramp", new RampWaveform(from, to, duration, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
 
+    /// <summary>A sine source whose geometry yields NaN: stands for a defect inside a field model.</summary>
+    public static FieldSource BrokenGeometrySine(double frequency) =>
+        new("broken", new[] { new SourceTerm(new NaNGeometry(), new SineWaveform(1, frequency, drive: DriveKind.FluxDensity)) });
+
     public static InductionResponse Respond(ConductiveItem item, FieldSource source, double? exposure = null, Vector3D? normal = null) =>
         InductionEngine.Respond(new Scenario(item, source, new Placement(Vector3D.Zero, normal), exposure));
+
+    /// <summary>A field geometry that returns NaN for everything, as a defect inside a model would.</summary>
+    private sealed class NaNGeometry : IFieldGeometry
+    {
+        public DriveKind Drive => DriveKind.FluxDensity;
+
+        public Vector3D FieldPerUnitDrive(Vector3D point) => new(double.NaN, double.NaN, double.NaN);
+
+        public double FluxThroughDisc(Vector3D centre, Vector3D normal, double radius) => double.NaN;
+
+        public string Describe() => "a geometry that yields NaN";
+    }
 }

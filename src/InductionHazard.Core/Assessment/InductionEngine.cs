@@ -88,7 +88,8 @@ public static class InductionEngine
             return Open(drive, c, OnePeriod(t => (emf * Complex.FromPolarCoordinates(1, omega * t)).Imaginary, f, on, c.Start), on, end);
         }
 
-        SinusoidalRun run = new SinusoidalLoopSolver(t => c.Circuit.ImpedanceOhms(f, t), c.Thermal).Run(emf, f, on, off, end, c.Start, cancellation);
+        SinusoidalRun run = new SinusoidalLoopSolver(t => c.Circuit.ImpedanceOhms(f, t), c.Thermal).Run(emf, f, on, off, end, c.Start, cancellation, c.MeltingCelsius);
+        NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the heating integrator");
         Complex z = run.Impedance;
         return Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
@@ -141,11 +142,9 @@ public static class InductionEngine
             return Open(drive, c, times.Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end);
         }
 
-        TransientRun run = new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal).Run(Emf, breakpoints, begin, end, c.Start, cancellation);
-        if (run.BudgetExceeded)
-        {
-            c.Issues.Add(new ValidityIssue("the circuit solver ran out of steps before the end of the exposure", AffectedResults.Current | AffectedResults.Heating));
-        }
+        TransientRun run = new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal) { StopAboveCelsius = c.MeltingCelsius }
+            .Run(Emf, breakpoints, begin, end, c.Start, cancellation);
+        NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
         double tau = c.Ldc / c.Rdc;
         double rampTime = terms.Min(t => t.Waveform.TimeScales[0].Seconds);
@@ -160,6 +159,23 @@ public static class InductionEngine
             CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
         };
+    }
+
+    /// <summary>
+    /// A run that melted the item stops there (a molten loop opens, and nothing after it is modelled); one that ran
+    /// out of steps is incomplete, so what it would have shown is not known.
+    /// </summary>
+    private static void NoteHowItEnded(Common c, double? meltedAt, bool budgetExceeded, string solver)
+    {
+        if (meltedAt is { } t)
+        {
+            c.Notes.Add("the item passed its melting point (" + SiFormat.Celsius(c.MeltingCelsius) + ") at t = " + SiFormat.Format(t, "s") + "; the model stops there, as a molten loop opens");
+        }
+
+        if (budgetExceeded)
+        {
+            c.Issues.Add(new ValidityIssue(solver + " ran out of steps (or time stopped advancing) before the end of the exposure, so the result is incomplete", AffectedResults.Current | AffectedResults.Heating));
+        }
     }
 
     /// <summary>What every response has: the scenario, the notes and issues, the loop, and the item at its starting temperature.</summary>
@@ -303,6 +319,8 @@ public static class InductionEngine
         public double Ldc { get; }
 
         public double Frequency { get; }
+
+        public double MeltingCelsius => Scenario.Item.Material.MeltingCelsius;
 
         public List<string> Notes { get; } = new();
 

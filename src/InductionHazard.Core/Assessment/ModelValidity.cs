@@ -57,6 +57,15 @@ public static class ModelValidity
                 AffectedResults.All));
         }
 
+        if (item.IsSplit)
+        {
+            // An open loop carries no current and does not heat: the inductance, skin depth and lumped-heating
+            // assumptions have nothing to act on, and its zero current and unchanged temperature are exact.
+            notes.Add("split ring: open circuit, so the inductance, skin-effect and heating models are not needed; the gap emf is taken around the loop's mean outline");
+            CheckTemperatureCoefficient(material, notes);
+            return;
+        }
+
         double ratio = item.Ring.Section.GeometricMeanRadiusMeters / item.Ring.LoopRadiusMeters;
         if (ratio > MaxGmdToLoopRadius)
         {
@@ -81,6 +90,11 @@ public static class ModelValidity
             notes.Add("lumped heating: Biot number " + Num(biot) + " < 0.1");
         }
 
+        CheckTemperatureCoefficient(material, notes);
+    }
+
+    private static void CheckTemperatureCoefficient(ConductorMaterial material, ICollection<string> notes)
+    {
         if (!material.TemperatureCoefficientKnown)
         {
             notes.Add(material.Name + ": no confirmed temperature coefficient; resistivity held at its 20 °C value");
@@ -89,11 +103,6 @@ public static class ModelValidity
 
     private static void CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, ICollection<string> notes)
     {
-        if (item.IsSplit)
-        {
-            return;
-        }
-
         double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
         string at = " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(delta, "m") + ")";
         if (item.Ring.Section is RoundWire wire)

@@ -33,17 +33,13 @@ public sealed class Scenario
     /// <summary>The item.</summary>
     public ConductiveItem Item { get; }
 
-    /// <summary>Checks an exposure time: positive and at most 8 h.</summary>
+    /// <summary>Checks an exposure time: from 0.1 s to 8 h (<see cref="PhysicalRanges.ExposureTime"/>).</summary>
     /// <exception cref="InvalidInputException">It is out of range.</exception>
     public static void ValidateExposure(double? exposureSeconds)
     {
         if (exposureSeconds is { } e)
         {
-            Require.Positive("ExposureTime", e);
-            if (e > LongestExposureSeconds)
-            {
-                throw new InvalidInputException("ExposureTime", "must be at most 8 h (the longest contact time of ISO 13732-1); got " + SiFormat.Format(e, "s"));
-            }
+            PhysicalRanges.ExposureTime.Check(e);
         }
     }
 

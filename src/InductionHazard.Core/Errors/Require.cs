@@ -42,7 +42,7 @@ public static class Require
     /// <summary>The vector must be finite and non-zero.</summary>
     public static Vector3D Direction(string field, Vector3D value)
     {
-        if (!value.IsFinite || !(value.Length > 0))
+        if (!value.IsFinite || (value.X == 0 && value.Y == 0 && value.Z == 0))
         {
             throw new InvalidInputException(field, "must be a finite, non-zero direction x,y,z; got " + value);
         }

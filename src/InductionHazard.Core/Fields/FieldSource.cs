@@ -30,6 +30,12 @@ public sealed class FieldSource
                     "the " + term.Geometry.Describe() + " is driven by " + DriveWords(term.Geometry.Drive)
                     + ", but the waveform is in " + DriveWords(term.Waveform.Drive));
             }
+
+            PhysicalRange range = term.Geometry.Drive == DriveKind.Current ? PhysicalRanges.Current : PhysicalRanges.FluxDensity;
+            if (range.Problem(term.Waveform.PeakValue) is { } problem)
+            {
+                throw new InvalidInputException("Waveform", "its peak " + problem);
+            }
         }
 
         Name = string.IsNullOrWhiteSpace(name) ? "source" : name.Trim();

@@ -36,7 +36,8 @@ public sealed class SinusoidalLoopSolver
     /// <param name="exposureEnd">When the assessment ends, s.</param>
     /// <param name="celsius0">The item's temperature when the field starts, °C.</param>
     /// <param name="cancellation">Stops the run.</param>
-    public SinusoidalRun Run(Complex emfPhasor, double frequencyHertz, double fieldOn, double fieldOff, double exposureEnd, double celsius0, CancellationToken cancellation)
+    /// <param name="stopAboveCelsius">The melting point: the run stops when the item passes it (a molten loop opens).</param>
+    public SinusoidalRun Run(Complex emfPhasor, double frequencyHertz, double fieldOn, double fieldOff, double exposureEnd, double celsius0, CancellationToken cancellation, double stopAboveCelsius = double.PositiveInfinity)
     {
         double emfSquared = emfPhasor.Magnitude * emfPhasor.Magnitude;
         double peakCurrent = 0;
@@ -54,11 +55,11 @@ public sealed class SinusoidalLoopSolver
         }
 
         var heating = new List<HeatingSample> { new(fieldOn, celsius0, Power(fieldOn, celsius0)) };
-        (double onCelsius, double energy) = HeatingIntegrator.Run(_thermal, Power, fieldOn, fieldOff, celsius0, heating, cancellation);
-        double final = onCelsius;
-        if (exposureEnd > fieldOff)
+        HeatingIntegration on = HeatingIntegrator.Run(_thermal, Power, fieldOn, fieldOff, celsius0, heating, cancellation, stopAboveCelsius: stopAboveCelsius);
+        HeatingIntegration last = on;
+        if (exposureEnd > fieldOff && on.StoppedAboveLimitSeconds is null && !on.BudgetExceeded)
         {
-            (final, _) = HeatingIntegrator.Run(_thermal, (_, _) => 0.0, fieldOff, exposureEnd, onCelsius, heating, cancellation);
+            last = HeatingIntegrator.Run(_thermal, (_, _) => 0.0, fieldOff, exposureEnd, on.FinalCelsius, heating, cancellation);
         }
 
         Complex z0 = _impedanceAt(celsius0);
@@ -70,8 +71,10 @@ public sealed class SinusoidalLoopSolver
             PeakCurrentAmperes = Math.Max(peakCurrent, current.Magnitude),
             Circuit = OnePeriod(emfPhasor, current, frequencyHertz, fieldOn, celsius0),
             Heating = heating,
-            EnergyJoules = energy,
-            FinalCelsius = final,
+            EnergyJoules = on.EnergyJoules,
+            FinalCelsius = last.FinalCelsius,
+            MeltedAtSeconds = on.StoppedAboveLimitSeconds,
+            BudgetExceeded = on.BudgetExceeded || last.BudgetExceeded,
         };
     }
 

@@ -27,4 +27,10 @@ public sealed class SinusoidalRun
 
     /// <summary>The temperature at the end of the exposure, °C.</summary>
     public double FinalCelsius { get; init; }
+
+    /// <summary>When the item passed its melting point and the run stopped, s; null when it did not.</summary>
+    public double? MeltedAtSeconds { get; init; }
+
+    /// <summary>True when the heating ran out of steps before the end (the result is then incomplete).</summary>
+    public bool BudgetExceeded { get; init; }
 }

@@ -39,7 +39,10 @@ public sealed class TransientLoopSolver
     public double MaxStepSeconds { get; init; } = double.PositiveInfinity;
 
     /// <summary>The most steps before the run gives up and says so.</summary>
-    public int MaxSteps { get; init; } = 2_000_000;
+    public int MaxSteps { get; init; } = HeatingIntegrator.DefaultMaxSteps;
+
+    /// <summary>The run stops at the first step that ends above this temperature, °C: the melting point, where a molten loop opens.</summary>
+    public double StopAboveCelsius { get; init; } = double.PositiveInfinity;
 
     /// <summary>Runs from tStart to tEnd with the current zero at the start.</summary>
     /// <param name="emf">The emf e(t) around the loop, V.</param>
@@ -48,6 +51,7 @@ public sealed class TransientLoopSolver
     /// <param name="tEnd">End time, s.</param>
     /// <param name="celsius0">The item's temperature at the start, °C.</param>
     /// <param name="cancellation">Stops the run.</param>
+    /// <remarks>The run stops early, and says so, when the step budget runs out, when time stops advancing, or when the item passes <see cref="StopAboveCelsius"/>.</remarks>
     public TransientRun Run(Func<double, double> emf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation)
     {
         double[] edges = breakpoints.Where(b => b > tStart && b < tEnd).Append(tEnd).Distinct().OrderBy(b => b).ToArray();
@@ -58,6 +62,7 @@ public sealed class TransientLoopSolver
         (double current, double at) peak = (0, tStart);
         int steps = 0;
         bool budgetExceeded = false;
+        double? melted = null;
 
         foreach (double edge in edges)
         {
@@ -79,6 +84,13 @@ public sealed class TransientLoopSolver
                 if (edge - t - h < 1e-12 * Math.Max(1, Math.Abs(edge)))
                 {
                     h = edge - t;
+                }
+
+                if (!(t + h > t))
+                {
+                    // Time no longer advances at this magnitude: stop and say so rather than loop.
+                    budgetExceeded = true;
+                    break;
                 }
 
                 // The emf over the step as a line through its values at h/4 and 3h/4: exact for linear e.
@@ -103,7 +115,8 @@ public sealed class TransientLoopSolver
                 i = trial.Current;
                 energy += trial.Energy;
                 temperature = trial.Celsius;
-                if (t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], i, temperature))
+                bool melting = temperature > StopAboveCelsius;
+                if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], i, temperature))
                 {
                     circuit.Add(new CircuitSample(t, emf(Math.Min(t, edge - (1e-9 * h))), i, temperature));
                     heating.Add(new HeatingSample(t, temperature, trial.Energy / h));
@@ -114,10 +127,16 @@ public sealed class TransientLoopSolver
                     break;
                 }
 
+                if (melting)
+                {
+                    melted = t;
+                    break;
+                }
+
                 h = Math.Min(h * Growth, MaxStep(temperature));
             }
 
-            if (budgetExceeded || !IsFinite(i) || !IsFinite(temperature))
+            if (budgetExceeded || melted is not null || !IsFinite(i) || !IsFinite(temperature))
             {
                 break;
             }
@@ -133,6 +152,7 @@ public sealed class TransientLoopSolver
             FinalCelsius = temperature,
             Steps = steps,
             BudgetExceeded = budgetExceeded,
+            MeltedAtSeconds = melted,
         };
     }
 

@@ -24,9 +24,12 @@ public sealed class TransientRun
     /// <summary>The temperature at the end, °C.</summary>
     public double FinalCelsius { get; init; }
 
+    /// <summary>When the item passed its melting point and the run stopped, s; null when it did not.</summary>
+    public double? MeltedAtSeconds { get; init; }
+
     /// <summary>The steps taken.</summary>
     public int Steps { get; init; }
 
-    /// <summary>True when the step budget ran out before the end (the result is then incomplete).</summary>
+    /// <summary>True when the step budget ran out, or time stopped advancing, before the end (the result is then incomplete).</summary>
     public bool BudgetExceeded { get; init; }
 }

@@ -61,6 +61,10 @@ public static class ItemRecordReader
             {
                 fields.AddError("Gap", "must be zero (a closed loop) or more; got " + Mm(gap));
             }
+            else if (gap > 0 && PhysicalRanges.Gap.Problem(gap) is { } gapProblem)
+            {
+                fields.AddError("Gap", gapProblem);
+            }
             else if (gap >= circumference)
             {
                 fields.AddError("Gap", "(" + Mm(gap) + ") must be shorter than the loop's circumference (" + Mm(circumference) + ")");
@@ -212,6 +216,12 @@ public static class ItemRecordReader
         if (!(value.Value > 0))
         {
             fields.AddError(field, "must be greater than zero; got " + Mm(value.Value));
+            return false;
+        }
+
+        if (PhysicalRanges.ItemDimension.Problem(value.Value) is { } problem)
+        {
+            fields.AddError(field, problem);
             return false;
         }
 

@@ -69,18 +69,21 @@ public sealed class MaterialLibrary
         double? melt = fields.Quantity("MeltingTemperature", QuantityKind.Temperature, required: true, "Melting", "MeltingPoint", "Solidus", "MeltingCelsius");
         string source = fields.Text("Source", required: false, "Reference") ?? "user supplied";
 
-        CheckPositive(fields, "Resistivity", rho);
-        CheckPositive(fields, "Density", density);
-        CheckPositive(fields, "SpecificHeat", cp);
-        CheckPositive(fields, "ThermalConductivity", k);
-        if (mu is { } m && m < 1)
+        CheckRange(fields, PhysicalRanges.Resistivity, rho);
+        CheckRange(fields, PhysicalRanges.TemperatureCoefficient, alpha);
+        CheckRange(fields, PhysicalRanges.Density, density);
+        CheckRange(fields, PhysicalRanges.SpecificHeat, cp);
+        CheckRange(fields, PhysicalRanges.ThermalConductivity, k);
+        CheckRange(fields, PhysicalRanges.RelativePermeability, mu);
+        CheckRange(fields, PhysicalRanges.Melting, melt);
+        if (alpha is { } a && melt is { } m && PhysicalRanges.TemperatureCoefficient.Contains(a) && PhysicalRanges.Melting.Contains(m))
         {
-            fields.AddError("RelativePermeability", "must be 1 or more for a conductor; got " + m);
-        }
-
-        if (alpha is { } a && Math.Abs(a) > 0.1)
-        {
-            fields.AddError("TemperatureCoefficient", "is in 1/K and is about 0.004 for pure metals; got " + a);
+            // rho(T) = rho20 (1 + alpha (T - 20)) must stay positive over every temperature assessed: the coldest room to melting.
+            double lowest = Math.Min(1 + (a * (PhysicalRanges.Ambient.Minimum - 20)), 1 + (a * (m - 20)));
+            if (!(lowest > 0))
+            {
+                fields.AddError("TemperatureCoefficient", "would make the resistivity zero or negative between " + PhysicalRanges.Ambient.Minimum + " °C and the melting point; got " + a.ToString("G6", System.Globalization.CultureInfo.InvariantCulture) + " per K");
+            }
         }
 
         foreach (string unknown in fields.UnusedNames())
@@ -124,11 +127,11 @@ public sealed class MaterialLibrary
     /// <summary>The thermal conductivity assumed when a user material gives none, W/(m K): below any structural metal.</summary>
     public const double LowestMetalConductivity = 5.0;
 
-    private static void CheckPositive(RecordFields fields, string field, double? value)
+    private static void CheckRange(RecordFields fields, PhysicalRange range, double? value)
     {
-        if (value is { } v && !(v > 0))
+        if (value is { } v && range.Problem(v) is { } problem)
         {
-            fields.AddError(field, "must be greater than zero; got " + v.ToString("G6", System.Globalization.CultureInfo.InvariantCulture));
+            fields.AddError(range.Field, problem);
         }
     }
 

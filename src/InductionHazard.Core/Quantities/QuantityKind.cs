@@ -56,4 +56,7 @@ public enum QuantityKind
 
     /// <summary>A power; canonical unit watt.</summary>
     Power,
+
+    /// <summary>An angle; canonical unit degree (a bare number is in degrees).</summary>
+    Angle,
 }

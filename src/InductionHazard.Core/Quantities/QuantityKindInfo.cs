@@ -27,6 +27,7 @@ public sealed class QuantityKindInfo
         [QuantityKind.HeatTransferCoefficient] = new(QuantityKind.HeatTransferCoefficient, "a heat transfer coefficient", "W/(m²·K)", "'10 W/m²·K'", HeatTransferCoefficientUnit.WattPerSquareMeterKelvin),
         [QuantityKind.Energy] = new(QuantityKind.Energy, "an energy", "J", "'5 J'", EnergyUnit.Joule),
         [QuantityKind.Power] = new(QuantityKind.Power, "a power", "W", "'2 W'", PowerUnit.Watt),
+        [QuantityKind.Angle] = new(QuantityKind.Angle, "an angle", "degrees", "'90 deg'", AngleUnit.Degree),
     };
 
     private QuantityKindInfo(QuantityKind kind, string description, string canonicalSymbol, string example, Enum canonicalUnit)

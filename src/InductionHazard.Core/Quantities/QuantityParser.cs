@@ -18,7 +18,7 @@ public static class QuantityParser
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
     private static readonly Regex NumberAndUnit = new(
-        @"^\s*(?<number>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>.*?)\s*$",
+        @"^\s*(?<number>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$",
         RegexOptions.CultureInvariant);
 
     private static readonly Regex Ohm = new(@"(?i:ohms?)(?![a-z])", RegexOptions.CultureInvariant);
@@ -111,6 +111,12 @@ public static class QuantityParser
             return false;
         }
 
+        if (HasOtherDigits(trimmed))
+        {
+            error = "'" + trimmed + "' has digits other than 0-9 (write the number with the digits 0-9); expected " + Expectation(info);
+            return false;
+        }
+
         Match match = NumberAndUnit.Match(trimmed);
         if (!match.Success)
         {
@@ -118,7 +124,12 @@ public static class QuantityParser
             return false;
         }
 
-        double number = double.Parse(match.Groups["number"].Value, NumberStyles.Float, Invariant);
+        if (!double.TryParse(match.Groups["number"].Value, NumberStyles.Float, Invariant, out double number) || !Finite.Is(number))
+        {
+            error = "'" + trimmed + "' is too large to be a finite number; expected " + Expectation(info);
+            return false;
+        }
+
         string unitText = match.Groups["unit"].Value;
         if (unitText.Length == 0)
         {
@@ -128,8 +139,23 @@ public static class QuantityParser
 
         if (TryUnit(unitText, info, out Enum? unit))
         {
-            value = UnitsNet.Quantity.From(number, unit!).As(info.CanonicalUnit);
-            return CheckFinite(value, trimmed, out error);
+            try
+            {
+                value = UnitsNet.Quantity.From(number, unit!).As(info.CanonicalUnit);
+            }
+            catch (Exception ex) when (ex is ArgumentException or OverflowException)
+            {
+                // UnitsNet refuses a value that its conversion takes past the range of a double.
+                value = double.NaN;
+            }
+
+            if (!Finite.Is(value))
+            {
+                error = "'" + trimmed + "' is too large to be a number in " + info.CanonicalSymbol + "; expected " + Expectation(info);
+                return false;
+            }
+
+            return true;
         }
 
         string dimension = DimensionOf(unitText);
@@ -137,6 +163,20 @@ public static class QuantityParser
             ? "expected " + Expectation(info) + "; got '" + trimmed + "', which is " + dimension
             : "'" + unitText + "' is not a unit of " + info.Description.Substring(info.Description.IndexOf(' ') + 1)
                 + "; expected " + Expectation(info);
+        return false;
+    }
+
+    /// <summary>True when the text holds a decimal digit outside 0-9 (Arabic-Indic, Devanagari, full-width...), which the module does not read.</summary>
+    private static bool HasOtherDigits(string text)
+    {
+        foreach (char c in text)
+        {
+            if (char.IsDigit(c) && (c < '0' || c > '9'))
+            {
+                return true;
+            }
+        }
+
         return false;
     }
 

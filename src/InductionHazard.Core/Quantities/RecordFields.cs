@@ -17,6 +17,8 @@ public sealed class RecordFields
     private readonly Dictionary<string, string> _keyByName = new(StringComparer.Ordinal);
     private readonly HashSet<string> _used = new(StringComparer.Ordinal);
     private readonly List<FieldError> _errors = new();
+    private readonly List<KeyValuePair<string, object?>> _shadowed = new();
+    private readonly HashSet<string> _conflictsReported = new(StringComparer.Ordinal);
 
     /// <summary>Reads a record given as name-value pairs.</summary>
     public RecordFields(IEnumerable<KeyValuePair<string, object?>> record)
@@ -28,6 +30,11 @@ public sealed class RecordFields
             {
                 _values[key] = pair.Value;
                 _keyByName[key] = pair.Key;
+            }
+            else
+            {
+                // A second column that means the same field ("WireDiameter" and "Wire Diameter"): kept to be checked.
+                _shadowed.Add(pair);
             }
         }
     }
@@ -145,17 +152,51 @@ public sealed class RecordFields
 
     private string? Find(string field, string[] aliases)
     {
+        string? found = null;
         foreach (string name in new[] { field }.Concat(aliases))
         {
             string key = Normalize(name);
             if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
             {
-                return key;
+                found ??= key;
             }
         }
 
-        return null;
+        if (found is not null)
+        {
+            CheckOneValue(field, aliases);
+        }
+
+        return found;
     }
+
+    /// <summary>
+    /// Two columns that name the same field (through spelling or an alias) must agree: otherwise which one is meant
+    /// cannot be known, and the record is refused for that field rather than the first silently winning.
+    /// </summary>
+    private void CheckOneValue(string field, string[] aliases)
+    {
+        if (_conflictsReported.Contains(field))
+        {
+            return;
+        }
+
+        var keys = new HashSet<string>(new[] { field }.Concat(aliases).Select(Normalize), StringComparer.Ordinal);
+        var given = _values.Where(p => keys.Contains(p.Key) && !IsEmpty(p.Value)).Select(p => new KeyValuePair<string, object?>(_keyByName[p.Key], p.Value))
+            .Concat(_shadowed.Where(p => keys.Contains(Normalize(p.Key)) && !IsEmpty(p.Value)))
+            .ToArray();
+        string[] distinct = given.Select(p => Shown(p.Value)).Distinct(StringComparer.Ordinal).ToArray();
+        if (distinct.Length > 1)
+        {
+            _conflictsReported.Add(field);
+            _errors.Add(new FieldError(
+                field,
+                "is given by more than one column with different values (" + string.Join(", ", given.Select(p => "'" + p.Key + "' = '" + Shown(p.Value) + "'")) + "); keep one column",
+                "InvalidInput"));
+        }
+    }
+
+    private static string Shown(object? value) => Convert.ToString(value, CultureInfo.InvariantCulture)?.Trim() ?? string.Empty;
 
     private static bool IsEmpty(object? value) =>
         value is null || value is DBNull || (value is string s && s.Trim().Length == 0);

@@ -81,16 +81,20 @@ public readonly struct Vector3D : IEquatable<Vector3D>
     public Vector3D Cross(Vector3D other) =>
         new((Y * other.Z) - (Z * other.Y), (Z * other.X) - (X * other.Z), (X * other.Y) - (Y * other.X));
 
-    /// <summary>The unit vector in the same direction; throws for a zero or non-finite vector.</summary>
+    /// <summary>
+    /// The unit vector in the same direction; throws for a zero or non-finite vector. The components are scaled by
+    /// the largest first, so that a direction given as 1e200,0,0 or 1e-200,0,0 neither overflows nor underflows.
+    /// </summary>
     public Vector3D Normalized()
     {
-        double length = Length;
-        if (!(length > 0) || !Finite.Is(length))
+        double largest = Math.Max(Math.Abs(X), Math.Max(Math.Abs(Y), Math.Abs(Z)));
+        if (!(largest > 0) || !Finite.Is(largest))
         {
             throw new InvalidOperationException("A zero or non-finite vector has no direction.");
         }
 
-        return (1.0 / length) * this;
+        Vector3D scaled = (1.0 / largest) * this;
+        return (1.0 / scaled.Length) * scaled;
     }
 
     /// <inheritdoc />

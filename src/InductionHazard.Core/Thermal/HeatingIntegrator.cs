@@ -14,7 +14,17 @@ public static class HeatingIntegrator
     /// <summary>The default largest temperature change in one step, K.</summary>
     public const double DefaultMaxStepKelvin = 0.5;
 
-    /// <summary>Integrates from t0 to t1 and appends samples; returns the final temperature and the energy delivered.</summary>
+    /// <summary>
+    /// The default step budget. A run that heats to melting in 0.5 K steps takes a few thousand; 8 h of cooling a
+    /// few hundred. A run that needs more is stopped and says so, rather than running on.
+    /// </summary>
+    public const int DefaultMaxSteps = 200_000;
+
+    /// <summary>
+    /// Integrates from t0 to t1 and appends samples. Stops early, and says so, when the temperature passes
+    /// <paramref name="stopAboveCelsius"/> (the melting point: a molten loop opens and the model ends there), when the
+    /// step budget runs out, or when time stops advancing.
+    /// </summary>
     /// <param name="model">The lumped model.</param>
     /// <param name="power">Heating power P(t, T), W.</param>
     /// <param name="t0">Start time, s.</param>
@@ -24,7 +34,9 @@ public static class HeatingIntegrator
     /// <param name="cancellation">Stops the run.</param>
     /// <param name="maxStepKelvin">The largest temperature change in one step, K.</param>
     /// <param name="maxStepSeconds">The largest step, s (default: a tenth of the cooling time constant).</param>
-    public static (double FinalCelsius, double EnergyJoules) Run(
+    /// <param name="stopAboveCelsius">The run stops at the first step that ends above this temperature, °C.</param>
+    /// <param name="maxSteps">The step budget.</param>
+    public static HeatingIntegration Run(
         LumpedThermalModel model,
         Func<double, double, double> power,
         double t0,
@@ -33,7 +45,9 @@ public static class HeatingIntegrator
         ICollection<HeatingSample> samples,
         CancellationToken cancellation,
         double maxStepKelvin = DefaultMaxStepKelvin,
-        double? maxStepSeconds = null)
+        double? maxStepSeconds = null,
+        double stopAboveCelsius = double.PositiveInfinity,
+        int maxSteps = DefaultMaxSteps)
     {
         double t = t0;
         double temperature = celsius0;
@@ -48,12 +62,23 @@ public static class HeatingIntegrator
         int steps = 0;
         while (t < t1)
         {
-            if ((++steps & 255) == 0)
+            if (++steps > maxSteps)
+            {
+                return new HeatingIntegration(temperature, energy, null, true, steps);
+            }
+
+            if ((steps & 255) == 0)
             {
                 cancellation.ThrowIfCancellationRequested();
             }
 
             double h = Math.Min(dt, t1 - t);
+            if (!(t + h > t))
+            {
+                // Time no longer advances at this magnitude: stop and say so rather than loop.
+                return new HeatingIntegration(temperature, energy, null, true, steps);
+            }
+
             double p0 = power(t, temperature);
             double predicted = model.Advance(temperature, p0, h);
             double p1 = power(t + h, predicted);
@@ -74,9 +99,14 @@ public static class HeatingIntegrator
                 break;
             }
 
+            if (temperature > stopAboveCelsius)
+            {
+                return new HeatingIntegration(temperature, energy, t, false, steps);
+            }
+
             dt = Math.Min(cap, h * 1.5);
         }
 
-        return (temperature, energy);
+        return new HeatingIntegration(temperature, energy, null, false, steps);
     }
 }

@@ -19,11 +19,7 @@ public sealed class ThermalEnvironment
     /// <exception cref="InvalidInputException">A value is out of range.</exception>
     public ThermalEnvironment(double ambientCelsius = 20.0, double convectionWattsPerSquareMeterKelvin = StillAirConvection, double emissivity = BrightMetalEmissivity)
     {
-        Require.Finite("AmbientTemperature", ambientCelsius);
-        if (ambientCelsius < -100 || ambientCelsius > 200)
-        {
-            throw new InvalidInputException("AmbientTemperature", "must be between -100 °C and 200 °C; got " + ambientCelsius + " °C");
-        }
+        Quantities.PhysicalRanges.Ambient.Check(ambientCelsius);
 
         Require.NonNegative("ConvectionCoefficient", convectionWattsPerSquareMeterKelvin);
         if (!(emissivity >= 0 && emissivity <= 1))

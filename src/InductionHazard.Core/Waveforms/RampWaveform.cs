@@ -12,14 +12,15 @@ namespace InductionHazard.Waveforms;
 public sealed class RampWaveform : FieldWaveform
 {
     /// <summary>Creates the ramp.</summary>
-    /// <exception cref="InvalidInputException">A value is not finite or the duration is not positive.</exception>
+    /// <exception cref="InvalidInputException">A value is not finite, the duration or start is out of range, or the start is too late to resolve the duration.</exception>
     public RampWaveform(double from, double to, double durationSeconds, double startSeconds = 0, DriveKind drive = DriveKind.Unspecified)
         : base(drive)
     {
         Require.Finite("From", from);
         Require.Finite("To", to);
         Require.Positive("Duration", durationSeconds);
-        Require.Finite("Start", startSeconds);
+        PhysicalRanges.DriveDuration.Check(durationSeconds);
+        DriveTiming.RequireResolvable(startSeconds, durationSeconds, "Duration");
         From = from;
         To = to;
         DurationSeconds = durationSeconds;

@@ -13,18 +13,21 @@ namespace InductionHazard.Waveforms;
 public sealed class SineWaveform : FieldWaveform
 {
     /// <summary>Creates the sinusoid.</summary>
-    /// <exception cref="InvalidInputException">A value is not finite, or the frequency or duration is not positive.</exception>
+    /// <exception cref="InvalidInputException">A value is not finite, the frequency, duration or start is out of range, or the start is too late to resolve a period.</exception>
     public SineWaveform(double amplitude, double frequencyHertz, double phaseRadians = 0, double? durationSeconds = null, double startSeconds = 0, DriveKind drive = DriveKind.Unspecified)
         : base(drive)
     {
         Require.NonNegative("Amplitude", amplitude);
         Require.Positive("Frequency", frequencyHertz);
+        PhysicalRanges.Frequency.Check(frequencyHertz);
         Require.Finite("PhaseDegrees", phaseRadians);
-        Require.Finite("Start", startSeconds);
         if (durationSeconds is { } d)
         {
             Require.Positive("Duration", d);
+            PhysicalRanges.DriveDuration.Check(d);
         }
+
+        DriveTiming.RequireResolvable(startSeconds, 1.0 / frequencyHertz, "Frequency");
 
         Amplitude = amplitude;
         FrequencyHertz = frequencyHertz;

@@ -34,6 +34,13 @@ internal static class ErrorRecords
         return record;
     }
 
+    /// <summary>
+    /// True for an exception that belongs to one record and must not stop the pipeline: anything but the shell's
+    /// own flow control (a stopped pipeline, a user's break) and a failure of the process itself.
+    /// </summary>
+    public static bool IsRecordFailure(Exception ex) =>
+        ex is not (PipelineStoppedException or FlowControlException or OperationCanceledException or OutOfMemoryException or StackOverflowException);
+
     /// <summary>The error record of an unexpected failure while processing one record (the run goes on).</summary>
     public static ErrorRecord Unexpected(Exception ex, object? target, string label) =>
         new(new InvalidOperationException(label + ": the assessment failed unexpectedly: " + ex.Message, ex), "AssessmentFailed", ErrorCategory.NotSpecified, target);

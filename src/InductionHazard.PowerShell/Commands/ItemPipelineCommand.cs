@@ -106,8 +106,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             {
                 throw new PipelineStoppedException();
             }
-            catch (Exception ex) when (ex is ArithmeticException or InvalidOperationException or ArgumentException or IndexOutOfRangeException)
+            catch (Exception ex) when (ErrorRecords.IsRecordFailure(ex))
             {
+                // Whatever one record does, the run goes on: the failure is that record's error, not the pipeline's.
                 WriteError(ErrorRecords.Unexpected(ex, input, label));
             }
         }

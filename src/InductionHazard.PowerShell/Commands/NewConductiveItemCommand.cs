@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Errors;
@@ -110,6 +111,10 @@ public sealed class NewConductiveItemCommand : PSCmdlet
             catch (InductionHazardException ex)
             {
                 WriteError(ErrorRecords.From(ex, input, ItemInput.Label(input, _row)));
+            }
+            catch (Exception ex) when (ErrorRecords.IsRecordFailure(ex))
+            {
+                WriteError(ErrorRecords.Unexpected(ex, input, ItemInput.Label(input, _row)));
             }
         }
     }

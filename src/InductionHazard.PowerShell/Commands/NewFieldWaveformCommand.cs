@@ -52,9 +52,10 @@ public sealed class NewFieldWaveformCommand : PSCmdlet
     [Quantity(QuantityKind.Frequency)]
     public double Frequency { get; set; }
 
-    /// <summary>The phase of the sinusoid at its start, in degrees.</summary>
+    /// <summary>The phase of the sinusoid at its start: a number in degrees, or an angle with its unit ('90 deg', '1.57 rad').</summary>
     [Parameter(ParameterSetName = SineSet)]
     [Parameter(ParameterSetName = SineRmsSet)]
+    [Quantity(QuantityKind.Angle)]
     public double PhaseDegrees { get; set; }
 
     /// <summary>How long the ramp takes; for a sinusoid, how long the field runs (omit for a field that runs on).</summary>

@@ -1,6 +1,9 @@
 using System;
 using System.Linq;
 using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Waveforms;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
 using Xunit;
@@ -134,9 +137,64 @@ public class InductionEngineTests
     }
 
     [Fact]
-    public void AnOverflowingResultIsRecordedAsANumericalFailure()
+    public void ANonFiniteResultIsRecordedAsANumericalFailure()
     {
-        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(1e300, 50));
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.BrokenGeometrySine(50));
         Assert.Contains(r.ValidityIssues, i => i.Affects == AffectedResults.All && i.Reason.StartsWith("numerical failure", StringComparison.Ordinal));
+    }
+
+    // Defect: 10 T at 10 kHz kept the heating integrator stepping far past melting. The run stops where the item
+    // melts, and the response says so.
+    [Fact]
+    public void ARingThatMeltsStopsThereAndSaysSo()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(10, 10000));
+        Assert.NotNull(r.MeltingReachedSeconds);
+        Assert.True(r.PeakTemperatureCelsius > r.Item.Material.MeltingCelsius);
+        Assert.Contains(r.ModelNotes, n => n.Contains("melting point", StringComparison.Ordinal));
+        InductionAssessment a = HazardAssessor.Assess(r, HazardPolicy.Default);
+        Assert.Equal(Verdict.Hazard, a.Verdict);
+        Assert.True(a.OverheatMargin < 1);
+    }
+
+    [Fact]
+    public void ARampThatMeltsTheRingStopsThereInsteadOfSteppingOn()
+    {
+        // 60 T in 1 ms (a pulsed-magnet bore) through a 60 mm copper ring: the current heats it past melting within the pulse.
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.06, 0.002), Fixtures.UniformRamp(0, 60, 0.001));
+        Assert.NotNull(r.MeltingReachedSeconds);
+        Assert.Equal(Verdict.Hazard, HazardAssessor.Assess(r, HazardPolicy.Default).Verdict);
+    }
+
+    // Defect: 189 split rings showed Clear beside a NaN current and temperature: a thin-ring assumption that only the
+    // closed-loop current needs blanked the numbers of an open loop, whose zero current is exact.
+    [Fact]
+    public void AThickSplitRingShowsItsZeroCurrentAndUnchangedTemperature()
+    {
+        ConductiveItem thick = Fixtures.Ring("Copper", 0.012, 0.006, gap: 0.001);
+        InductionResponse r = Fixtures.Respond(thick, Fixtures.UniformSine(0.004, 12000));
+        Assert.Empty(r.ValidityIssues);
+        InductionAssessment a = HazardAssessor.Assess(r, HazardPolicy.Default);
+        Assert.Equal(0, a.PeakCurrentAmperes);
+        Assert.Equal(r.InitialTemperatureCelsius, a.PeakTemperatureCelsius);
+        Assert.NotEqual(Verdict.Indeterminate, a.Verdict);
+    }
+
+    // Defect: a drive that started late enough turned a Hazard into Clear. Within the accepted range of start times
+    // the result does not depend on when the drive starts (to the resolution the range guarantees).
+    [Theory]
+    [InlineData(3600.0)]
+    [InlineData(-5e5)]
+    [InlineData(9.9e5)]
+    public void TheResultDoesNotDependOnWhenTheDriveStarts(double start)
+    {
+        ConductiveItem ring = Fixtures.Ring();
+        FieldSource Ramp(double s) => FieldSource.Uniform("ramp", new RampWaveform(0, 3, 0.01, s, DriveKind.FluxDensity), Vector3D.UnitZ);
+        InductionResponse at0 = Fixtures.Respond(ring, Ramp(0));
+        InductionResponse late = Fixtures.Respond(ring, Ramp(start));
+        Within.Relative(at0.PeakEmfVolts, late.PeakEmfVolts, 1e-6, "peak emf");
+        Within.Relative(at0.PeakCurrentAmperes, late.PeakCurrentAmperes, 1e-6, "peak current");
+        Within.Relative(at0.PeakTemperatureCelsius, late.PeakTemperatureCelsius, 1e-6, "peak temperature");
+        Assert.Equal(HazardAssessor.Assess(at0, HazardPolicy.Default).Verdict, HazardAssessor.Assess(late, HazardPolicy.Default).Verdict);
     }
 }

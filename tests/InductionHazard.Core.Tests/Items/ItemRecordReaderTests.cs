@@ -88,4 +88,39 @@ public class ItemRecordReaderTests
         var error = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Gold", ["Diameter"] = "2 mm", ["WireDiameter"] = "3 mm" }));
         Assert.Contains("no hole", error.Message, System.StringComparison.Ordinal);
     }
+
+    // Defect: absurd sizes were assessed and could come out Clear: a 1 nm or 1e-15 m gap (taken as a perfect open
+    // circuit), a 5e-324 m wire, and '5 A' in a length column read as 5 angstrom. Each is now refused naming the field.
+    [Theory]
+    [InlineData("Gap", "1 nm")]
+    [InlineData("Gap", 1e-15)]
+    [InlineData("WireDiameter", 5e-324)]
+    [InlineData("WireDiameter", "5 A")]
+    [InlineData("Diameter", "180 km")]
+    public void SizesNoItemCanHaveAreRefusedNamingTheField(string field, object value)
+    {
+        var row = new Dictionary<string, object?> { ["Name"] = "absurd", ["Material"] = "Copper", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm" };
+        row[field] = value;
+        var ex = Assert.Throws<RecordException>(() => Read(row, 3));
+        Assert.Contains(field, ex.Fields);
+        Assert.Contains("must be between", ex.Message, System.StringComparison.Ordinal);
+    }
+
+    // Defect: two columns meaning one field ('WireDiameter' and 'Wire Diameter') were not reported: the first won silently.
+    [Fact]
+    public void TwoColumnsForOneFieldThatDisagreeAreRefused()
+    {
+        var ex = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Copper", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Wire Diameter"] = "9 mm" }, 4));
+        Assert.Contains("WireDiameter", ex.Fields);
+        Assert.Contains("'Wire Diameter' = '9 mm'", ex.Message, System.StringComparison.Ordinal);
+        var alias = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Copper", ["Diameter"] = "20 mm", ["D"] = "30 mm", ["WireDiameter"] = "2 mm" }, 5));
+        Assert.Contains("Diameter", alias.Fields);
+    }
+
+    [Fact]
+    public void TwoColumnsForOneFieldThatAgreeAreRead()
+    {
+        ConductiveItem ring = Read(new() { ["Material"] = "Copper", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Wire Diameter"] = " 2 mm " });
+        Assert.Equal(0.002, ((RoundWire)ring.Ring.Section).DiameterMeters, 15);
+    }
 }

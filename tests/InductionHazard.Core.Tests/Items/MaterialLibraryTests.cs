@@ -104,4 +104,39 @@ public class MaterialLibraryTests
         }));
         Assert.Equal(new[] { "Resistivity", "SpecificHeat", "Density", "Resistivty" }, error.Fields.ToArray());
     }
+
+    // Defect: custom materials accepted a melting point of -500 K, a negative temperature coefficient that makes the
+    // resistivity negative at skin temperature, and values of 1e300. Each is refused naming the property.
+    [Theory]
+    [InlineData("MeltingTemperature", "-500 K")]
+    [InlineData("TemperatureCoefficient", -0.01)]
+    [InlineData("Resistivity", 1e300)]
+    [InlineData("Density", 1e300)]
+    [InlineData("SpecificHeat", 1e300)]
+    [InlineData("RelativePermeability", 1e300)]
+    public void PropertiesNoMaterialCanHaveAreRefused(string property, object value)
+    {
+        var definition = new Dictionary<string, object?>
+        {
+            ["Name"] = "Hostile alloy",
+            ["Resistivity"] = 5e-8,
+            ["Density"] = 8000,
+            ["SpecificHeat"] = 400,
+            ["MeltingTemperature"] = 1000,
+        };
+        definition[property] = value;
+        var error = Assert.Throws<RecordException>(() => MaterialLibrary.Define(definition));
+        Assert.Contains(property, error.Fields);
+    }
+
+    [Fact]
+    public void ATemperatureCoefficientThatTurnsTheResistivityNegativeBeforeMeltingIsRefused()
+    {
+        // -9e-4 per K is inside the range of resistance alloys, but 1 + alpha (T - 20) reaches zero near 1131 °C.
+        var error = Assert.Throws<RecordException>(() => MaterialLibrary.Define(new Dictionary<string, object?>
+        {
+            ["Name"] = "Odd alloy", ["Resistivity"] = 5e-7, ["Alpha"] = -9e-4, ["Density"] = 8000, ["SpecificHeat"] = 400, ["MeltingTemperature"] = 1400,
+        }));
+        Assert.Contains("zero or negative", error.Message, System.StringComparison.Ordinal);
+    }
 }

@@ -92,4 +92,50 @@ public class QuantityParserTests
         var error = Assert.Throws<QuantityFormatException>(() => QuantityParser.ParseOneOf("5 mm", QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent));
         Assert.Contains("a length", error.Message, System.StringComparison.Ordinal);
     }
+
+    // Defect: a digit from another script ('١٨ mm', Arabic-Indic) matched the number pattern and then threw a
+    // FormatException that stopped the whole pipeline. It must be a refusal that says why.
+    [Theory]
+    [InlineData("١٨ mm")]
+    [InlineData("१८ mm")]
+    [InlineData("１８ mm")]
+    [InlineData("1٨ mm")]
+    public void DigitsFromOtherScriptsAreRefusedWithTheReason(string text)
+    {
+        Assert.False(QuantityParser.TryParse(text, QuantityKind.Length, out double value, out string? error));
+        Assert.True(double.IsNaN(value));
+        Assert.Contains("digits other than 0-9", error, System.StringComparison.Ordinal);
+    }
+
+    // Defect: '1e308 km' overflowed inside the unit conversion and surfaced as an unexplained failure.
+    [Theory]
+    [InlineData("1e308 km")]
+    [InlineData("1e400 mm")]
+    [InlineData("1e400")]
+    public void AValueThatOverflowsIsRefusedAsTooLarge(string text)
+    {
+        var ex = Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse(text, QuantityKind.Length));
+        Assert.Contains("too large", ex.Message, System.StringComparison.Ordinal);
+    }
+
+    // Defect: -PhaseDegrees bypassed the module's parsing ('' became 0, '0x10' 16, $true 1). Angles now parse like any quantity.
+    [Theory]
+    [InlineData("")]
+    [InlineData("0x10")]
+    [InlineData(true)]
+    public void AnAngleThatIsNotANumberIsRefused(object input)
+    {
+        Assert.False(QuantityParser.TryParse(input, QuantityKind.Angle, out _, out string? error));
+        Assert.False(string.IsNullOrEmpty(error));
+    }
+
+    // 1 rad = 180/pi degrees (SI Brochure, 9th edition, table 4).
+    [Theory]
+    [InlineData("90 deg", 90.0)]
+    [InlineData("90", 90.0)]
+    [InlineData("3.141592653589793 rad", 180.0)]
+    public void AnglesParseIntoDegrees(string text, double degrees)
+    {
+        Within.Relative(degrees, QuantityParser.Parse(text, QuantityKind.Angle), 1e-12, text);
+    }
 }

@@ -43,7 +43,7 @@ public class AdiabaticHeatingTests
         double seconds = k * k * Section * Section / (Current * Current);
         var model = new LumpedThermalModel(CopperQc * Section * Length, 1e-3, new ThermalEnvironment(20, 0, 0));
         double Power(double t, double celsius) => Current * Current * CopperRho * (1 + (alpha * (celsius - 20))) * Length / Section;
-        (double final, _) = HeatingIntegrator.Run(model, Power, 0, seconds, 30, new List<HeatingSample>(), CancellationToken.None);
+        double final = HeatingIntegrator.Run(model, Power, 0, seconds, 30, new List<HeatingSample>(), CancellationToken.None).FinalCelsius;
         Within.Absolute(200, final, 0.05, "final temperature by the lumped model");
         Within.Absolute(200, AdiabaticHeating.FinalCelsius(CopperQc, CopperBeta, CopperRho, 30, Current * Current * seconds, Section), 1e-9, "the law solved for Tf");
     }

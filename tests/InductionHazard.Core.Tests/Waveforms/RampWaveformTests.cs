@@ -36,4 +36,27 @@ public class RampWaveformTests
         Assert.Equal("Duration", error.Field);
         Assert.Throws<InvalidInputException>(() => new RampWaveform(double.NaN, 1, 1));
     }
+
+    // Defect: a ramp starting at 1e17 s (or 1e300) had start + duration round back to the start, and was assessed as
+    // no exposure: a Hazard became Clear. Such a start is refused, naming -Start.
+    [Theory]
+    [InlineData(1e17, 0.01)]
+    [InlineData(1e300, 0.01)]
+    [InlineData(-1e300, 0.01)]
+    [InlineData(9e5, 1e-9)]
+    public void AStartTooLateToResolveTheRampIsRefused(double start, double duration)
+    {
+        var ex = Assert.Throws<InvalidInputException>(() => new RampWaveform(0, 3, duration, start));
+        Assert.Equal("Start", ex.Field);
+    }
+
+    [Theory]
+    [InlineData(0.0)]
+    [InlineData(1e-10)]
+    [InlineData(2e6)]
+    public void ADurationOutsideItsPhysicalRangeIsRefused(double duration)
+    {
+        var ex = Assert.Throws<InvalidInputException>(() => new RampWaveform(0, 3, duration));
+        Assert.Equal("Duration", ex.Field);
+    }
 }

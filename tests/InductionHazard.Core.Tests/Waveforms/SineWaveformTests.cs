@@ -38,4 +38,15 @@ public class SineWaveformTests
         Assert.Equal("Frequency", error.Field);
         Assert.Throws<InvalidInputException>(() => new SineWaveform(-1, 50));
     }
+
+    // Defect: -Start 1e300 on a sine was accepted and the drive's time stopped advancing in the heating integrator.
+    [Theory]
+    [InlineData(1e300, 50.0)]
+    [InlineData(1e17, 50.0)]
+    [InlineData(5e5, 1e9)]
+    public void AStartTooLateToResolveAPeriodIsRefused(double start, double frequency)
+    {
+        var ex = Assert.Throws<InvalidInputException>(() => new SineWaveform(1, frequency, startSeconds: start));
+        Assert.Equal("Start", ex.Field);
+    }
 }
