@@ -17,6 +17,8 @@
         'Get-ConductorMaterial'
         'Get-InductionResponse'
         'Test-InductionHazard'
+        'Get-FieldStrength'
+        'Import-HazardSite'
     )
     FunctionsToExport      = @()
     VariablesToExport      = @()

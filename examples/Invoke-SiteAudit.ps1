@@ -1,41 +1,35 @@
 <#
 .SYNOPSIS
-    Audits the inventory of the Marrowby Heath Field Laboratory (an invented site) at each of its stations.
+    Audits an inventory at the stations of a site: by default the Marrowby Heath Field Laboratory (an invented site).
 .DESCRIPTION
-    Reads the site's inventory (marrowby-heath-inventory.csv) and its stations (marrowby-heath-stations.psd1),
-    assesses every item at every station with Test-InductionHazard, and writes two files to -OutputDirectory:
-    marrowby-heath-audit.csv (one row per item and station, for further processing) and
-    marrowby-heath-audit.md (the report). Rows that cannot be assessed are listed in the report with the
-    reason; the audit goes on without them.
+    Reads the site file (-SitePath, read as data by Import-HazardSite) and the inventory (-InventoryPath, a CSV
+    whose Station column names where each item is used), assesses every row at its station with
+    Test-InductionHazard -Site, and writes two files to -OutputDirectory: <name>-audit.csv (one row per item, for
+    further processing) and <name>-audit.md (the report). Rows that cannot be assessed are listed in the report
+    with the reason; the audit goes on without them.
 .EXAMPLE
     ./examples/Invoke-SiteAudit.ps1 -OutputDirectory ./out/demo
+.EXAMPLE
+    ./examples/Invoke-SiteAudit.ps1 -SitePath ./my-site.psd1 -InventoryPath ./my-inventory.csv -Name my-site
 #>
 [CmdletBinding()]
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'),
-    [string] $OutputDirectory = (Join-Path $PSScriptRoot '../out/demo')
+    [string] $OutputDirectory = (Join-Path $PSScriptRoot '../out/demo'),
+    [string] $SitePath = (Join-Path $PSScriptRoot 'marrowby-heath-site.psd1'),
+    [string] $InventoryPath = (Join-Path $PSScriptRoot 'marrowby-heath-inventory.csv'),
+    [string] $Name = 'marrowby-heath'
 )
 
 $ErrorActionPreference = 'Stop'
 Import-Module $ModulePath -Force
 $null = New-Item -ItemType Directory -Path $OutputDirectory -Force
-$site = Import-PowerShellDataFile (Join-Path $PSScriptRoot 'marrowby-heath-stations.psd1')
-$inventory = @(Import-Csv (Join-Path $PSScriptRoot 'marrowby-heath-inventory.csv'))
+$site = Import-HazardSite -Path $SitePath
+$inventory = @(Import-Csv $InventoryPath)
 
-$assessments = [System.Collections.Generic.List[object]]::new()
-$rowErrors = [System.Collections.Generic.List[object]]::new()
-foreach ($station in $site.Stations) {
-    $shape = @{}
-    foreach ($key in $station.Keys) { if ($key -notin 'Name', 'Form', 'Why', 'ExposureTime') { $shape[$key] = $station[$key] } }
-    $shape[$station.Form] = $true
-    $source = New-FieldWaveform @shape | New-FieldSource -Uniform -Name $station.Name
-    $stay = @{}
-    if ($station.ContainsKey('ExposureTime')) { $stay.ExposureTime = $station.ExposureTime }
-    Write-Host "Assessing $($inventory.Count) items at $($station.Name)"
-    $inventory | Test-InductionHazard -Source $source @stay -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed |
-        ForEach-Object { $assessments.Add($_) }
-    foreach ($e in $failed) { $rowErrors.Add([pscustomobject]@{ Station = $station.Name; Error = $e.Exception.Message }) }
-}
+Write-Host "Assessing $($inventory.Count) items at the $($site.Stations.Count) stations of $($site.Name)"
+$assessments = @($inventory | Test-InductionHazard -Site $site -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)
+$rowErrors = @($failed | ForEach-Object { [pscustomobject]@{ Station = $_.TargetObject.Station; Error = $_.Exception.Message } })
 
 function Write-Atomically {
     param([string] $Path, [scriptblock] $Write)
@@ -44,10 +38,10 @@ function Write-Atomically {
     Move-Item -LiteralPath $temp -Destination $Path -Force
 }
 
-$csvPath = Join-Path $OutputDirectory 'marrowby-heath-audit.csv'
+$csvPath = Join-Path $OutputDirectory "$Name-audit.csv"
 Write-Atomically $csvPath {
     param($file)
-    $assessments | Select-Object SourceName, RowNumber, ItemName, Verdict, GoverningMechanism, MinimumMargin,
+    $assessments | Select-Object @{ n = 'Station'; e = { $inventory[$_.RowNumber - 1].Station } }, SourceName, RowNumber, ItemName, Verdict, GoverningMechanism, MinimumMargin,
         ShockMargin, BurnMargin, OverheatMargin, PeakEmfVolts, GapVoltageVolts, PeakCurrentAmperes,
         PeakTemperatureCelsius, EnergyDissipatedJoules, PolicyName, ModuleVersion, AssessedUtc |
         Export-Csv -Path $file -NoTypeInformation -Encoding utf8
@@ -58,9 +52,9 @@ function Format-Margin([double] $value) { [InductionHazard.Quantities.SiFormat]:
 
 $first = $assessments | Select-Object -First 1
 $md = [System.Text.StringBuilder]::new()
-$null = $md.AppendLine("# Induction hazard audit: $($site.Site)")
+$null = $md.AppendLine("# Induction hazard audit: $($site.Name)")
 $null = $md.AppendLine()
-$null = $md.AppendLine("Assessed $($inventory.Count) inventory items at $($site.Stations.Count) stations on $((Get-Date).ToUniversalTime().ToString('yyyy-MM-dd HH:mm')) UTC with InductionHazard $($first.ModuleVersion), policy: $($first.PolicyName), safety factor $($first.SafetyFactor).")
+$null = $md.AppendLine("Assessed $($inventory.Count) inventory items at the $($site.Stations.Count) stations they name, on $((Get-Date).ToUniversalTime().ToString('yyyy-MM-dd HH:mm')) UTC with InductionHazard $($first.ModuleVersion), policy: $($first.PolicyName), safety factor $($first.SafetyFactor).")
 $null = $md.AppendLine()
 $null = $md.AppendLine('## Cautions')
 $null = $md.AppendLine()
@@ -72,8 +66,10 @@ $null = $md.AppendLine('## Summary')
 $null = $md.AppendLine()
 $null = $md.AppendLine('| Station | Clear | Caution | Hazard | Indeterminate | Not assessed |')
 $null = $md.AppendLine('|---|---:|---:|---:|---:|---:|')
+function Get-StationAssessment([string] $station) { @($assessments | Where-Object { $inventory[$_.RowNumber - 1].Station -eq $station }) }
+
 foreach ($station in $site.Stations) {
-    $here = @($assessments | Where-Object SourceName -EQ $station.Name)
+    $here = Get-StationAssessment $station.Name
     $count = { param($v) @($here | Where-Object Verdict -EQ $v).Count }
     $missing = @($rowErrors | Where-Object Station -EQ $station.Name).Count
     $null = $md.AppendLine("| $($station.Name) | $(& $count 'Clear') | $(& $count 'Caution') | $(& $count 'Hazard') | $(& $count 'Indeterminate') | $missing |")
@@ -81,12 +77,12 @@ foreach ($station in $site.Stations) {
 $null = $md.AppendLine()
 
 foreach ($station in $site.Stations) {
-    $here = @($assessments | Where-Object SourceName -EQ $station.Name)
+    $here = Get-StationAssessment $station.Name
     $null = $md.AppendLine("## $($station.Name)")
     $null = $md.AppendLine()
-    $terms = ($here[0].Response.Scenario.Source.Terms | ForEach-Object { $_.Geometry.Describe() + ', ' + $_.Waveform.Describe() }) -join ' + '
-    $stayText = if ($station.ContainsKey('ExposureTime')) { " Time in the field: $($station.ExposureTime), then the cooling that follows." } else { '' }
-    $null = $md.AppendLine("$($station.Why) Field: $terms.$stayText")
+    $terms = ($station.Source.Terms | ForEach-Object { $_.Geometry.Describe() + ', ' + $_.Waveform.Describe() }) -join ' + '
+    $stayText = if ($null -ne $station.ExposureSeconds) { " Time in the field: $(Format-Si $station.ExposureSeconds 's'), then the cooling that follows." } else { '' }
+    $null = $md.AppendLine("$($station.Description) Field: $terms. Item centred at $($station.Placement.Centre) m.$stayText")
     $null = $md.AppendLine()
     $null = $md.AppendLine('| Row | Item | Verdict | Governing | Margin | Emf | Gap voltage | Current | Peak temperature |')
     $null = $md.AppendLine('|---:|---|---|---|---:|---:|---:|---:|---:|')
@@ -110,7 +106,7 @@ if ($rowErrors.Count) {
     $null = $md.AppendLine()
 }
 
-$reportPath = Join-Path $OutputDirectory 'marrowby-heath-audit.md'
+$reportPath = Join-Path $OutputDirectory "$Name-audit.md"
 Write-Atomically $reportPath { param($file) Set-Content -Path $file -Value $md.ToString() -Encoding utf8 }
 
 foreach ($group in $assessments | Group-Object Verdict | Sort-Object Name) { Write-Host ('{0,-14} {1,4}' -f $group.Name, $group.Count) }

@@ -1,24 +1,35 @@
 param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
 
 BeforeAll {
+    Import-Module $ModulePath -Force
     $root = Split-Path $PSScriptRoot -Parent
     $inventory = @(Import-Csv (Join-Path $root 'examples/marrowby-heath-inventory.csv'))
-    $stations = (Import-PowerShellDataFile (Join-Path $root 'examples/marrowby-heath-stations.psd1')).Stations
+    $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
 }
 
 Describe 'The example site audit' {
-    It 'has an inventory of at least 20 rings, bands and bracelets of several metals' {
+    It 'has an inventory of at least 20 rings, bands and bracelets of several metals, each at a station of the site' {
         $inventory.Count | Should -BeGreaterOrEqual 20
         @($inventory.Material | Sort-Object -Unique).Count | Should -BeGreaterOrEqual 6
+        foreach ($row in $inventory) { $row.Station | Should -BeIn $site.Stations.Name }
     }
 
-    It 'writes its report and its assessments, with every item at every station' {
+    It 'has the real sources of the site: a busbar that faults, a pulsed coil on a capacitor bank, a quench, a ramp, an induction heater' {
+        $forms = $site.Stations | ForEach-Object { $_.Source.Terms } | ForEach-Object { $_.Waveform.Form }
+        foreach ($f in 'Fault', 'Discharge', 'Decay', 'Ramp', 'Sine') { $forms | Should -Contain $f }
+        ($site.Stations | ForEach-Object { $_.Source.Kind }) | Should -Contain 'Busbar'
+        ($site.Stations | ForEach-Object { $_.Source.Kind }) | Should -Contain 'CircularCoil'
+    }
+
+    It 'writes its report and its assessments, with every item at its station' {
         $out = Join-Path $TestDrive 'demo'
         $null = & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out 6>$null
         $report = Get-Content (Join-Path $out 'marrowby-heath-audit.md') -Raw
         $report | Should -Match 'engineering estimates'
-        foreach ($s in $stations) { $report | Should -Match ([regex]::Escape($s.Name)) }
-        @(Import-Csv (Join-Path $out 'marrowby-heath-audit.csv')).Count | Should -Be ($inventory.Count * $stations.Count)
+        foreach ($s in $site.Stations) { $report | Should -Match ([regex]::Escape($s.Name)) }
+        $rows = @(Import-Csv (Join-Path $out 'marrowby-heath-audit.csv'))
+        $rows.Count | Should -Be $inventory.Count
+        $rows.Station | Should -Be $inventory.Station
         Test-Path (Join-Path $out 'marrowby-heath-audit.md.tmp') | Should -BeFalse
     }
 }

@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using System.Numerics;
 using System.Threading;
+using InductionHazard.Errors;
 using InductionHazard.Fields;
 using InductionHazard.Induction;
 using InductionHazard.Quantities;
@@ -22,30 +23,24 @@ public static class InductionEngine
     public static InductionResponse Respond(Scenario scenario, CancellationToken cancellation = default)
     {
         var c = new Common(scenario);
-        ModelValidity.Check(scenario.Item, c.Frequency, scenario.Source.IsSinusoidal, c.Start, c.Thermal, c.Issues, c.Notes);
         InductionResponse response;
-        if (scenario.Source.IsSinusoidal)
+        if (c.FieldFailed)
         {
-            response = Sinusoidal(c, cancellation);
-        }
-        else if (scenario.Source.Terms.All(t => !t.Waveform.IsPeriodic))
-        {
-            response = Transient(c, cancellation);
-        }
-        else
-        {
-            c.Issues.Add(new ValidityIssue("the source mixes alternating and transient terms, which this model does not solve", AffectedResults.All));
             response = Base(c) with
             {
-                Model = "not solved",
+                Model = "not solved: the source's field cannot be evaluated over the item",
                 PeakEmfVolts = double.NaN,
                 PeakCurrentAmperes = double.NaN,
                 EnergyDissipatedJoules = double.NaN,
                 PeakTemperatureCelsius = double.NaN,
                 FinalTemperatureCelsius = double.NaN,
             };
+            CheckFinite(response, c.Issues);
+            return response;
         }
 
+        ModelValidity.Check(scenario.Item, c.Frequency, scenario.Source.IsSinusoidal, c.Start, c.Thermal, c.Issues, c.Notes);
+        response = scenario.Source.IsSinusoidal ? Sinusoidal(c, cancellation) : Transient(c, cancellation);
         CheckFinite(response, c.Issues);
         return response;
     }
@@ -69,9 +64,14 @@ public static class InductionEngine
         double on = c.Scenario.Source.StartSeconds;
         double runs = c.Scenario.Source.EndSeconds - on;
         double inField = c.Scenario.ExposureSeconds ?? Math.Min(runs, Scenario.LongestExposureSeconds);
-        double off = on + Math.Min(inField, runs);
-        double end = on + inField + CoolingTail(c);
+        double leaving = c.Scenario.Leaves && inField < runs ? c.Scenario.LeaveSeconds : 0;
+        double off = on + Math.Min(inField + leaving, runs);
+        double end = on + inField + leaving + CoolingTail(c);
         c.Notes.Add("alternating drive at " + SiFormat.Format(f, "Hz") + ", periodic steady state (switch-on transients not modelled); the item is in the field for " + SiFormat.Format(off - on, "s") + ", then cools to " + SiFormat.Format(end - on, "s"));
+        if (leaving > 0)
+        {
+            c.Notes.Add("leaving the field takes " + SiFormat.Format(leaving, "s") + ", counted at the full field (the field falls as the item is carried out, so this overstates)");
+        }
 
         InductionResponse drive = Base(c) with
         {
@@ -111,21 +111,31 @@ public static class InductionEngine
         var terms = source.Terms;
         double begin = source.StartSeconds;
         double fieldEnd = source.EndSeconds;
-        double leave = begin + (c.Scenario.ExposureSeconds ?? (fieldEnd - begin));
-        double end = leave + CoolingTail(c);
-        double Emf(double t) => t >= leave ? 0 : -Sum(c.Coupling, k => terms[k].Waveform.Rate(t));
+        double runs = double.IsInfinity(fieldEnd) ? Scenario.LongestExposureSeconds : fieldEnd - begin;
+        double leave = begin + (c.Scenario.ExposureSeconds ?? runs);
+        double leaving = c.Scenario.Leaves ? c.Scenario.LeaveSeconds : 0;
+        double outside = leave + leaving;
+        double end = outside + CoolingTail(c);
         double Linked(double[] perUnitDrive, double t) => Sum(perUnitDrive, k => terms[k].Waveform.Value(t));
+        double fluxAtLeave = Linked(c.Coupling, leave);
 
-        double stop = Math.Min(leave, fieldEnd);
-        double[] breakpoints = source.BreakpointsBetween(begin, end).Append(leave).Where(t => t < end).Distinct().OrderBy(t => t).ToArray();
-        double[] times = new[] { begin }.Concat(breakpoints.Where(t => t < stop)).Append(stop).Distinct().OrderBy(t => t).ToArray();
-        double peakEmf = times.Zip(times.Skip(1), (a, b) => Math.Abs(Emf(0.5 * (a + b)))).DefaultIfEmpty(0).Max();
-        double fluxChange = Linked(c.Coupling, stop) - Linked(c.Coupling, begin);
-        c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s") + ", then cools to " + SiFormat.Format(end - begin, "s"));
-        if (leave < fieldEnd)
+        // Leaving is a flux change of its own: the flux the loop holds falls linearly to zero while it is carried out.
+        double Emf(double t) => t < leave ? -Sum(c.Coupling, k => terms[k].Waveform.Rate(t)) : t < outside ? fluxAtLeave / leaving : 0;
+
+        double[] breakpoints = source.BreakpointsBetween(begin, end).Where(t => t < leave).Append(leave).Append(outside).Where(t => t < end).Distinct().OrderBy(t => t).ToArray();
+        double[] times = DriveSampling.Times(terms.Select(t => t.Waveform).ToArray()).Where(t => t < leave).Append(begin).Append(leave).Distinct().OrderBy(t => t).ToArray();
+        double peakEmf = times.Max(t => Math.Abs(Emf(t)));
+        if (leaving > 0)
         {
-            c.Notes.Add("the item leaves before the drive ends: the drive is taken to stop for it then; the flux change of moving out of the field is not modelled");
+            peakEmf = Math.Max(peakEmf, Math.Abs(fluxAtLeave / leaving));
         }
+
+        double flux0 = Linked(c.Coupling, begin);
+        double fluxSwing = Math.Max(times.Max(t => Math.Abs(Linked(c.Coupling, t) - flux0)), leaving > 0 ? Math.Abs(flux0) : 0);
+        double fluxChange = (leaving > 0 ? 0 : fluxAtLeave) - flux0;
+        c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s")
+            + (leaving > 0 ? ", is carried out over " + SiFormat.Format(leaving, "s") + " (the flux it holds, " + SiFormat.Format(fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
+            + ", then cools to " + SiFormat.Format(end - begin, "s"));
 
         InductionResponse drive = Base(c) with
         {
@@ -139,11 +149,27 @@ public static class InductionEngine
         };
         if (c.Scenario.Item.IsSplit)
         {
-            return Open(drive, c, times.Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end);
+            double[] shown = times.Concat(new[] { outside, end }).Distinct().OrderBy(t => t).ToArray();
+            int stride = Math.Max(1, shown.Length / 4000);
+            return Open(drive, c, shown.Where((_, i) => i % stride == 0).Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end);
         }
 
-        TransientRun run = new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal) { StopAboveCelsius = c.MeltingCelsius }
-            .Run(Emf, breakpoints, begin, end, c.Start, cancellation);
+        double maxStep = terms.Min(t => t.Waveform.MaxStepSeconds);
+        int budget = HeatingIntegrator.DefaultMaxSteps + (4 * breakpoints.Length);
+        double curvedUntil = Math.Min(leave, fieldEnd);
+        bool overBudget = !double.IsInfinity(maxStep) && (curvedUntil - begin) / maxStep > budget;
+        if (overBudget)
+        {
+            c.Issues.Add(new ValidityIssue(
+                "the drive is curved (steps of at most " + SiFormat.Format(maxStep, "s") + ") over " + SiFormat.Format(curvedUntil - begin, "s") + ", more steps than the solver's budget of "
+                + budget.ToString("N0", System.Globalization.CultureInfo.InvariantCulture) + "; give an -ExposureTime that covers the transient, or assess an alternating part on its own",
+                AffectedResults.Current | AffectedResults.Heating));
+        }
+
+        TransientRun run = overBudget
+            ? new TransientRun { Heating = new[] { new HeatingSample(begin, double.NaN, 0) }, FinalCelsius = double.NaN, PeakCurrentAmperes = double.NaN, EnergyJoules = double.NaN }
+            : new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal) { StopAboveCelsius = c.MeltingCelsius, MaxStepSeconds = maxStep, CurvedUntilSeconds = curvedUntil, MaxSteps = budget }
+                .Run(Emf, breakpoints, begin, end, c.Start, cancellation);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
         double tau = c.Ldc / c.Rdc;
@@ -155,7 +181,7 @@ public static class InductionEngine
             Regime = Regime(tau / rampTime, "L/R / ramp time"),
             PeakCurrentAmperes = Math.Abs(run.PeakCurrentAmperes),
             NaiveCurrentAmperes = peakEmf / c.Rdc,
-            InductiveLimitCurrentAmperes = Math.Abs(fluxChange) / c.Ldc,
+            InductiveLimitCurrentAmperes = fluxSwing / c.Ldc,
             CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
         };
@@ -185,6 +211,7 @@ public static class InductionEngine
         ModelNotes = c.Notes,
         ValidityIssues = c.Issues,
         Normal = c.Normal,
+        Orientation = c.Orientation,
         LoopAreaSquareMeters = c.Scenario.Item.Ring.LoopAreaSquareMeters,
         FrequencyHertz = c.Frequency,
         ResistanceOhms = c.Rdc,
@@ -247,18 +274,22 @@ public static class InductionEngine
             .ToArray();
     }
 
-    /// <summary>Any result that is not a finite number makes the response Indeterminate, with the reason (added to the response's own list).</summary>
+    /// <summary>
+    /// Any result that is not a finite number, and that no recorded issue already covers, makes the response
+    /// Indeterminate with the reason (added to the response's own list).
+    /// </summary>
     private static void CheckFinite(InductionResponse r, List<ValidityIssue> issues)
     {
-        var failures = new (string Name, double? Value)[]
+        var failures = new (string Name, double? Value, AffectedResults Needs)[]
             {
-                ("the peak emf", r.PeakEmfVolts), ("the rms emf", r.RmsEmfVolts), ("the peak current", r.PeakCurrentAmperes),
-                ("the energy", r.EnergyDissipatedJoules), ("the peak temperature", r.PeakTemperatureCelsius), ("the final temperature", r.FinalTemperatureCelsius),
+                ("the peak emf", r.PeakEmfVolts, AffectedResults.Emf), ("the rms emf", r.RmsEmfVolts, AffectedResults.Emf),
+                ("the peak current", r.PeakCurrentAmperes, AffectedResults.Current), ("the energy", r.EnergyDissipatedJoules, AffectedResults.Current | AffectedResults.Heating),
+                ("the peak temperature", r.PeakTemperatureCelsius, AffectedResults.Heating), ("the final temperature", r.FinalTemperatureCelsius, AffectedResults.Heating),
             }
-            .Where(f => f.Value is { } v && !Finite.Is(v))
+            .Where(f => f.Value is { } v && !Finite.Is(v) && !issues.Any(i => (i.Affects & f.Needs) == f.Needs))
             .Select(f => f.Name + " is " + f.Value!.Value.ToString(System.Globalization.CultureInfo.InvariantCulture))
             .ToArray();
-        if (failures.Length > 0 && !issues.Any(i => i.Affects == AffectedResults.All))
+        if (failures.Length > 0)
         {
             issues.Add(new ValidityIssue("numerical failure: " + string.Join(", ", failures) + " (are the inputs physically sensible?)", AffectedResults.All));
         }
@@ -283,18 +314,47 @@ public static class InductionEngine
             Scenario = scenario;
             FieldSource source = scenario.Source;
             Vector3D centre = scenario.Placement.Centre;
-            Normal = scenario.Placement.ResolveNormal(source);
-            Coupling = source.Terms.Select(t => t.Geometry.FluxThroughDisc(centre, Normal, scenario.Item.Ring.LoopRadiusMeters)).ToArray();
-            NormalField = source.Terms.Select(t => t.Geometry.FieldPerUnitDrive(centre).Dot(Normal)).ToArray();
-            Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
-            FieldDirection = b.Length > 0 && b.IsFinite ? b.Normalized() : Normal;
+            double radius = scenario.Item.Ring.LoopRadiusMeters;
             Circuit = new RingCircuit(scenario.Item);
             Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Ring.SurfaceSquareMeters, scenario.Environment);
             Start = scenario.InitialCelsius;
             Rdc = Circuit.DcResistanceOhms(Start);
             Ldc = Circuit.DcInductanceHenries;
             Frequency = source.SignificantFrequencyHertz;
+            Normal = scenario.Placement.Normal ?? Vector3D.UnitZ;
+            FieldDirection = Normal;
+            Coupling = new double[source.Terms.Count];
+            NormalField = new double[source.Terms.Count];
+            try
+            {
+                if (scenario.Placement.Normal is null)
+                {
+                    Normal = FluxCoupling.WorstNormal(source, centre, radius);
+                    Orientation = "facing the largest flux change, normal " + Normal;
+                }
+                else
+                {
+                    Orientation = "as given, normal " + Normal;
+                }
+
+                Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, radius);
+                Vector3D[] b = source.FieldPerUnitDrive(centre);
+                NormalField = b.Select(v => v.Dot(Normal)).ToArray();
+                FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
+            }
+            catch (FieldEvaluationException ex)
+            {
+                FieldFailed = true;
+                Orientation = scenario.Placement.Normal is null ? "not found: the field cannot be evaluated" : "as given, normal " + Normal;
+                Issues.Add(new ValidityIssue(ex.Message, AffectedResults.All));
+            }
+
+            Notes.Add("placement: loop centre at " + centre + " m, " + Orientation);
         }
+
+        public bool FieldFailed { get; }
+
+        public string Orientation { get; } = string.Empty;
 
         public Scenario Scenario { get; }
 

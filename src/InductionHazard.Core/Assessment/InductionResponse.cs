@@ -41,6 +41,9 @@ public sealed record InductionResponse
     /// <summary>The loop's unit normal used.</summary>
     public Vector3D Normal { get; init; }
 
+    /// <summary>How the loop's orientation was chosen: given, or facing the largest flux change.</summary>
+    public string Orientation { get; init; } = string.Empty;
+
     /// <summary>The area of the loop, m^2.</summary>
     public double LoopAreaSquareMeters { get; init; }
 

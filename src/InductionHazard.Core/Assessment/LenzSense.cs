@@ -17,6 +17,11 @@ internal static class LenzSense
     public static string Transient(double peakCurrent, Vector3D normal, Vector3D fieldDirection)
     {
         double alignment = normal.Dot(fieldDirection);
+        if (!Finite.Is(peakCurrent) || !Finite.Is(alignment))
+        {
+            return "not known: the current could not be found";
+        }
+
         if (peakCurrent == 0 || Math.Abs(alignment) < 1e-12)
         {
             return "no current: no flux links the loop (its plane contains the field)";

@@ -19,10 +19,13 @@ public sealed class Scenario
     /// <param name="placement">Where the item is and how it faces; null: at the origin facing the field.</param>
     /// <param name="exposureSeconds">How long the item stays in the field from the start of the drive; null: as long as the drive changes (a continuous drive: 8 h). The cooling that follows is assessed too, as the item is still worn or held.</param>
     /// <param name="environment">The surroundings; null: still air at 20 °C.</param>
-    /// <exception cref="InvalidInputException">The exposure time is out of range.</exception>
-    public Scenario(ConductiveItem item, FieldSource source, Placement? placement = null, double? exposureSeconds = null, ThermalEnvironment? environment = null)
+    /// <param name="leaveSeconds">How long carrying the item out of the field takes, s (the flux it holds falls to zero over it); null: <see cref="DefaultLeaveSeconds"/>.</param>
+    /// <exception cref="InvalidInputException">The exposure or leave time is out of range.</exception>
+    public Scenario(ConductiveItem item, FieldSource source, Placement? placement = null, double? exposureSeconds = null, ThermalEnvironment? environment = null, double? leaveSeconds = null)
     {
         ValidateExposure(exposureSeconds);
+        ValidateLeave(leaveSeconds);
+        LeaveSeconds = leaveSeconds ?? DefaultLeaveSeconds;
         Item = item;
         Source = source;
         Placement = placement ?? Placement.FacingField;
@@ -42,6 +45,28 @@ public sealed class Scenario
             PhysicalRanges.ExposureTime.Check(e);
         }
     }
+
+    /// <summary>How long carrying an item out of a field takes by default, s: a brisk walk of 1 s (common practice).</summary>
+    public const double DefaultLeaveSeconds = 1.0;
+
+    /// <summary>Checks a leave time: from 0.1 s to 8 h, as an exposure.</summary>
+    /// <exception cref="InvalidInputException">It is out of range.</exception>
+    public static void ValidateLeave(double? leaveSeconds)
+    {
+        if (leaveSeconds is { } l)
+        {
+            PhysicalRanges.ExposureTime.For("LeaveTime").Check(l);
+        }
+    }
+
+    /// <summary>How long carrying the item out of the field takes, s.</summary>
+    public double LeaveSeconds { get; }
+
+    /// <summary>
+    /// True when the item is carried out of the field at the end of the exposure (worn, held or loose items), so the
+    /// flux it holds then falls to zero over <see cref="LeaveSeconds"/>; a fixed item stays.
+    /// </summary>
+    public bool Leaves => Item.Contact != ContactKind.Fixed;
 
     /// <summary>The source.</summary>
     public FieldSource Source { get; }

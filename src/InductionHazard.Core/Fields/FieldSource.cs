@@ -48,8 +48,29 @@ public sealed class FieldSource
     /// <summary>The terms that sum to the field.</summary>
     public IReadOnlyList<SourceTerm> Terms { get; }
 
-    /// <summary>The form of the source ("Uniform").</summary>
-    public string Kind => Terms.All(t => t.Geometry is UniformField) ? "Uniform" : "Composite";
+    /// <summary>The form of the source: "Uniform", "Conductor", "Coil" ... for one kind of geometry, "Composite" for a mix.</summary>
+    public string Kind
+    {
+        get
+        {
+            string[] kinds = Terms.Select(t => t.Geometry.GetType().Name.Replace("Field", string.Empty)).Distinct().ToArray();
+            return kinds.Length == 1 ? kinds[0] : "Composite";
+        }
+    }
+
+    /// <summary>Several sources as one: their terms summed (the field in air is linear in each drive).</summary>
+    /// <exception cref="InvalidInputException">No source is given.</exception>
+    public static FieldSource Combine(IReadOnlyList<FieldSource> sources, string? name = null)
+    {
+        if (sources.Count == 0)
+        {
+            throw new InvalidInputException("Source", "give at least one source");
+        }
+
+        return sources.Count == 1 && name is null
+            ? sources[0]
+            : new FieldSource(name ?? string.Join(" + ", sources.Select(s => s.Name)), sources.SelectMany(s => s.Terms).ToArray());
+    }
 
     /// <summary>Creates a uniform source along a direction driven by a waveform in tesla.</summary>
     public static FieldSource Uniform(string name, FieldWaveform waveform, Vector3D direction) =>
@@ -93,4 +114,8 @@ public sealed class FieldSource
 
     /// <summary>True when every term is a sinusoid of one frequency.</summary>
     public bool IsSinusoidal => IsPeriodic && Terms.All(t => t.Waveform is SineWaveform);
+
+    /// <summary>The field per unit drive of every term at a point.</summary>
+    /// <exception cref="FieldEvaluationException">The point is on a conductor, outside a map, or where a model does not hold.</exception>
+    public Vector3D[] FieldPerUnitDrive(Vector3D point) => Terms.Select(t => t.Geometry.FieldPerUnitDrive(point)).ToArray();
 }

@@ -35,8 +35,11 @@ public sealed class TransientLoopSolver
     /// <summary>The largest temperature change in one step, K.</summary>
     public double MaxStepKelvin { get; init; } = HeatingIntegrator.DefaultMaxStepKelvin;
 
-    /// <summary>The largest step, s (for drives that are not piecewise linear).</summary>
+    /// <summary>The largest step, s (for drives that are not piecewise linear), while the drive is curved.</summary>
     public double MaxStepSeconds { get; init; } = double.PositiveInfinity;
+
+    /// <summary>Until when <see cref="MaxStepSeconds"/> applies, s: after it the emf is piecewise linear (leaving, cooling).</summary>
+    public double CurvedUntilSeconds { get; init; } = double.PositiveInfinity;
 
     /// <summary>The most steps before the run gives up and says so.</summary>
     public int MaxSteps { get; init; } = HeatingIntegrator.DefaultMaxSteps;
@@ -66,7 +69,7 @@ public sealed class TransientLoopSolver
 
         foreach (double edge in edges)
         {
-            double h = FreshStep(temperature, edge - t);
+            double h = FreshStep(temperature, edge - t, t);
             while (t < edge)
             {
                 if (++steps > MaxSteps)
@@ -133,7 +136,7 @@ public sealed class TransientLoopSolver
                     break;
                 }
 
-                h = Math.Min(h * Growth, MaxStep(temperature));
+                h = Math.Min(h * Growth, MaxStep(temperature, t));
             }
 
             if (budgetExceeded || melted is not null || !IsFinite(i) || !IsFinite(temperature))
@@ -163,10 +166,11 @@ public sealed class TransientLoopSolver
         || Math.Abs(current - last.CurrentAmperes) > 0.02 * Math.Max(Math.Abs(current), Math.Abs(last.CurrentAmperes));
 
     /// <summary>The first step of a segment: an eighth of L/R, so the exponential is resolved from its start.</summary>
-    private double FreshStep(double celsius, double segment) =>
-        Math.Min(Math.Min(_inductance / _resistanceAt(celsius) / 8, segment), MaxStep(celsius));
+    private double FreshStep(double celsius, double segment, double t) =>
+        Math.Min(Math.Min(_inductance / _resistanceAt(celsius) / 8, segment), MaxStep(celsius, t));
 
-    private double MaxStep(double celsius) => Math.Min(MaxStepSeconds, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
+    private double MaxStep(double celsius, double t) =>
+        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
 
     /// <summary>One step with R at the mid-step temperature (predictor-corrector).</summary>
     private Step TakeStep(double i0, double celsius, double e0, double slope, double h)

@@ -1,5 +1,4 @@
 using InductionHazard.Errors;
-using InductionHazard.Fields;
 using InductionHazard.Quantities;
 
 namespace InductionHazard.Items;
@@ -31,19 +30,4 @@ public sealed class Placement
 
     /// <summary>The loop's unit normal, or null to face the field.</summary>
     public Vector3D? Normal { get; }
-
-    /// <summary>
-    /// The normal to use with a source: the given one, else the direction of the first term's field per unit
-    /// drive at the centre (the worst case for a single-term source); +z when that field is zero.
-    /// </summary>
-    public Vector3D ResolveNormal(FieldSource source)
-    {
-        if (Normal is { } n)
-        {
-            return n;
-        }
-
-        Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(Centre);
-        return b.Length > 0 && b.IsFinite ? b.Normalized() : Vector3D.UnitZ;
-    }
 }

@@ -59,4 +59,10 @@ public enum QuantityKind
 
     /// <summary>An angle; canonical unit degree (a bare number is in degrees).</summary>
     Angle,
+
+    /// <summary>A capacitance; canonical unit farad.</summary>
+    Capacitance,
+
+    /// <summary>An inductance; canonical unit henry.</summary>
+    Inductance,
 }

@@ -28,6 +28,8 @@ public sealed class QuantityKindInfo
         [QuantityKind.Energy] = new(QuantityKind.Energy, "an energy", "J", "'5 J'", EnergyUnit.Joule),
         [QuantityKind.Power] = new(QuantityKind.Power, "a power", "W", "'2 W'", PowerUnit.Watt),
         [QuantityKind.Angle] = new(QuantityKind.Angle, "an angle", "degrees", "'90 deg'", AngleUnit.Degree),
+        [QuantityKind.Capacitance] = new(QuantityKind.Capacitance, "a capacitance", "F", "'2 mF'", CapacitanceUnit.Farad),
+        [QuantityKind.Inductance] = new(QuantityKind.Inductance, "an inductance", "H", "'40 uH'", ElectricInductanceUnit.Henry),
     };
 
     private QuantityKindInfo(QuantityKind kind, string description, string canonicalSymbol, string example, Enum canonicalUnit)

@@ -25,6 +25,24 @@ public readonly struct DriveLevel : IEquatable<DriveLevel>
     /// <summary>Inequality of value or kind.</summary>
     public static bool operator !=(DriveLevel a, DriveLevel b) => !a.Equals(b);
 
+    /// <summary>Reads a level: a flux density ('3 T', '150 G'), a current ('40 kA'), a bare number, or a level.</summary>
+    /// <exception cref="Errors.QuantityFormatException">The value is neither.</exception>
+    public static DriveLevel Parse(object? input)
+    {
+        if (input is DriveLevel level)
+        {
+            return level;
+        }
+
+        (double value, QuantityKind? kind) = QuantityParser.ParseOneOf(input, QuantityKind.MagneticFluxDensity, QuantityKind.ElectricCurrent);
+        return new DriveLevel(value, kind switch
+        {
+            QuantityKind.MagneticFluxDensity => DriveKind.FluxDensity,
+            QuantityKind.ElectricCurrent => DriveKind.Current,
+            _ => DriveKind.Unspecified,
+        });
+    }
+
     /// <summary>The kind shared by two levels (a bare number takes the other's kind); null when they disagree.</summary>
     public static DriveKind? Common(DriveLevel a, DriveLevel b)
     {

@@ -56,6 +56,18 @@ public abstract class FieldWaveform
     /// <summary>The period of a periodic drive, s; NaN otherwise.</summary>
     public virtual double PeriodSeconds => double.NaN;
 
+    /// <summary>
+    /// The largest step a time-stepping solver may take so that the emf is linear over each step to engineering
+    /// accuracy: infinite for a piecewise-linear drive (every kink is a breakpoint), a fraction of the period or
+    /// time constant for a curved one.
+    /// </summary>
+    public virtual double MaxStepSeconds => double.PositiveInfinity;
+
+    /// <summary>The same drive shifted in phase (for the other phases of a three-phase set).</summary>
+    /// <exception cref="Errors.InvalidInputException">The form has no phase (only sines and faults do).</exception>
+    public virtual FieldWaveform WithPhaseShift(double radians) =>
+        throw new Errors.InvalidInputException("Waveform", "a " + Form.ToLowerInvariant() + " has no phase to shift; a three-phase set needs a sine or a fault waveform");
+
     /// <summary>The drive's unit symbol ("T", "A", or "" when unspecified).</summary>
     public string DriveUnit => Drive switch
     {

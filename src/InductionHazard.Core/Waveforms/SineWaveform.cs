@@ -92,6 +92,13 @@ public sealed class SineWaveform : FieldWaveform
     public override double Rate(double t) => AngularFrequency * Amplitude * Math.Cos((AngularFrequency * (t - StartSeconds)) + PhaseRadians);
 
     /// <inheritdoc />
+    public override double MaxStepSeconds => PeriodSeconds / 200;
+
+    /// <inheritdoc />
+    public override FieldWaveform WithPhaseShift(double radians) =>
+        new SineWaveform(Amplitude, FrequencyHertz, PhaseRadians + radians, DurationSeconds, StartSeconds, Drive);
+
+    /// <inheritdoc />
     public override string Describe() =>
         "sine " + SiFormat.Format(Amplitude, DriveUnit) + " peak at " + SiFormat.Format(FrequencyHertz, "Hz")
         + (DurationSeconds is { } d ? " for " + SiFormat.Format(d, "s") : " (continuous)");

@@ -11,6 +11,22 @@ internal static class ItemInput
     public static ConductiveItem ToItem(PSObject input, MaterialLibrary materials, int row) =>
         input.BaseObject is ConductiveItem item ? item : ItemRecordReader.Read(Records.From(input), materials, row);
 
+    /// <summary>The position and normal a row gives (X, Y, Z, NormalX, NormalY, NormalZ); none for an item object.</summary>
+    /// <exception cref="Errors.RecordException">The row gives some components but not all, or a malformed one.</exception>
+    public static (Quantities.Vector3D? Position, Quantities.Vector3D? Normal) PlacementOf(PSObject input, string label) =>
+        input.BaseObject is ConductiveItem ? (null, null) : PlacementRecordReader.Read(Records.From(input), label);
+
+    /// <summary>The station a row names in its Station column (aliases Place, Location); an item object names none.</summary>
+    /// <exception cref="Errors.RecordException">The row names no station.</exception>
+    public static string StationOf(PSObject input, string label, Assessment.HazardSite site)
+    {
+        string? name = input.BaseObject is ConductiveItem ? null : new Quantities.RecordFields(Records.From(input)).Text("Station", required: false, "Place", "Location");
+        return name ?? throw new Errors.RecordException(label, new[]
+        {
+            new Errors.FieldError("Station", "is missing: name one of the stations of " + site.Name + " (" + string.Join(", ", System.Linq.Enumerable.Select(site.Stations, s => s.Name)) + "), or give -Station", "InvalidInput"),
+        });
+    }
+
     /// <summary>How the input is named in messages: "row 7 ('Wedding band')".</summary>
     public static string Label(PSObject input, int row)
     {

@@ -1,79 +1,63 @@
 using System;
-using System.Collections;
-using System.Globalization;
-using System.Linq;
 using System.Management.Automation;
+using InductionHazard.Errors;
 using InductionHazard.Quantities;
 
 namespace InductionHazard.PowerShell.Binding;
 
 /// <summary>
 /// Turns an argument into a <see cref="Vector3D"/>: three numbers (0,0,1 or @(0,0,1)), a string "0,0,1", or an
-/// axis name ('z', '+x', '-y').
+/// axis name ('z', '+x', '-y'); for a position, three lengths with units ('300 mm, 0, 0'; bare numbers in metres).
 /// </summary>
 [AttributeUsage(AttributeTargets.Property | AttributeTargets.Field)]
 public sealed class VectorAttribute : ArgumentTransformationAttribute
 {
-    private static readonly char[] Separators = { ',', ' ', ';' };
+    /// <summary>A direction: plain numbers.</summary>
+    public VectorAttribute()
+    {
+    }
+
+    /// <summary>A vector whose components are quantities of a kind (Length for a position).</summary>
+    public VectorAttribute(QuantityKind componentKind)
+    {
+        ComponentKind = componentKind;
+    }
+
+    /// <summary>The quantity of each component, or null for plain numbers.</summary>
+    public QuantityKind? ComponentKind { get; }
+
+    /// <summary>True for a parameter that takes several vectors: each element of an array is then one vector, unless the array is three plain numbers.</summary>
+    public bool Many { get; set; }
+
+    private static readonly char[] Separators = { ',', ';' };
+
+    private static object? Unwrap(object? o) => QuantityAttribute.Unwrap(o);
 
     /// <inheritdoc />
     public override object? Transform(EngineIntrinsics engineIntrinsics, object? inputData)
     {
         object? value = QuantityAttribute.Unwrap(inputData);
-        switch (value)
+        if (value is null)
         {
-            case null:
-            case Vector3D:
-                return value;
-            case string text:
-                return Parse(text);
-            case IEnumerable items:
-                double[] numbers = items.Cast<object?>().Select(o => Number(QuantityAttribute.Unwrap(o))).ToArray();
-                return FromNumbers(numbers, value);
-            default:
-                throw Invalid(value);
-        }
-    }
-
-    private static Vector3D Parse(string text)
-    {
-        string t = text.Trim().ToLowerInvariant();
-        switch (t)
-        {
-            case "x" or "+x": return Vector3D.UnitX;
-            case "-x": return -Vector3D.UnitX;
-            case "y" or "+y": return Vector3D.UnitY;
-            case "-y": return -Vector3D.UnitY;
-            case "z" or "+z": return Vector3D.UnitZ;
-            case "-z": return -Vector3D.UnitZ;
+            return null;
         }
 
-        string[] parts = t.Trim('(', ')', '[', ']').Split(Separators, StringSplitOptions.RemoveEmptyEntries);
-        return FromNumbers(parts.Select(p => Number(p)).ToArray(), text);
-    }
-
-    private static Vector3D FromNumbers(double[] numbers, object original)
-    {
-        if (numbers.Length != 3 || numbers.Any(double.IsNaN))
+        try
         {
-            throw Invalid(original);
+            if (Many && value is System.Collections.IEnumerable items && value is not string)
+            {
+                object?[] elements = System.Linq.Enumerable.ToArray(System.Linq.Enumerable.Select(System.Linq.Enumerable.Cast<object?>(items), Unwrap));
+                bool oneVector = elements.Length == 3 && System.Linq.Enumerable.All(elements, e => e is not string s || s.IndexOfAny(Separators) < 0) && System.Linq.Enumerable.All(elements, e => e is not Vector3D and not System.Collections.IEnumerable || e is string);
+                return oneVector
+                    ? new[] { VectorParser.Parse(elements, "vector", ComponentKind) }
+                    : System.Linq.Enumerable.ToArray(System.Linq.Enumerable.Select(elements, e => VectorParser.Parse(e, "vector", ComponentKind)));
+            }
+
+            return VectorParser.Parse(value, "vector", ComponentKind);
         }
-
-        return new Vector3D(numbers[0], numbers[1], numbers[2]);
+        catch (InvalidInputException ex)
+        {
+            throw new ArgumentTransformationMetadataException(ex.Reason, ex);
+        }
     }
-
-    private static double Number(object? value) => value switch
-    {
-        double d => d,
-        int i => i,
-        long l => l,
-        float f => f,
-        decimal m => (double)m,
-        string s when double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out double parsed) => parsed,
-        _ => double.NaN,
-    };
-
-    private static ArgumentTransformationMetadataException Invalid(object original) =>
-        new("expected a direction as three numbers x,y,z (for example 0,0,1) or an axis ('z', '-x'); got '"
-            + (original is IEnumerable e && original is not string ? string.Join(",", e.Cast<object>()) : original) + "'");
 }

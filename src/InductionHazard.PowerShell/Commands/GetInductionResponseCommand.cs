@@ -4,7 +4,7 @@ using InductionHazard.Assessment;
 namespace InductionHazard.PowerShell.Commands;
 
 /// <summary>Get-InductionResponse: the physics of each item in a source's field (emf, current, heating, time series).</summary>
-[Cmdlet(VerbsCommon.Get, "InductionResponse")]
+[Cmdlet(VerbsCommon.Get, "InductionResponse", DefaultParameterSetName = SourceSet)]
 [OutputType(typeof(InductionResponse))]
 public sealed class GetInductionResponseCommand : ItemPipelineCommand
 {

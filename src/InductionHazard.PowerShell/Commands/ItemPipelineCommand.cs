@@ -24,20 +24,46 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
     private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
     private int _row;
+    private FieldSource _source = null!;
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [Alias("Item")]
     public PSObject[] InputObject { get; set; } = null!;
 
-    /// <summary>The field source, from New-FieldSource.</summary>
-    [Parameter(Mandatory = true, Position = 1)]
-    public FieldSource Source { get; set; } = null!;
+    /// <summary>The parameter set that takes the field from -Source.</summary>
+    protected const string SourceSet = "Source";
 
-    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the loop faces the field (the worst case).</summary>
+    /// <summary>The parameter set that takes the field from a site's stations.</summary>
+    protected const string SiteSet = "Site";
+
+    /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
+    [Parameter(Mandatory = true, Position = 1, ParameterSetName = SourceSet)]
+    public FieldSource[] Source { get; set; } = null!;
+
+    /// <summary>A site, from Import-HazardSite: each row is assessed at the station its Station column names (or at -Station).</summary>
+    [Parameter(Mandatory = true, ParameterSetName = SiteSet)]
+    public HazardSite Site { get; set; } = null!;
+
+    /// <summary>The station of -Site at which every item is assessed, in place of the rows' Station column.</summary>
+    [Parameter(ParameterSetName = SiteSet)]
+    [ArgumentCompleter(typeof(StationCompleter))]
+    public string? Station { get; set; }
+
+    /// <summary>Where the item's loop is centred, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres); the origin by default. Rows may give X, Y, Z instead.</summary>
+    [Parameter]
+    [Vector(QuantityKind.Length)]
+    public Vector3D? Position { get; set; }
+
+    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the orientation that links the largest flux change. Rows may give NormalX, NormalY, NormalZ instead.</summary>
     [Parameter]
     [Vector]
     public Vector3D? Normal { get; set; }
+
+    /// <summary>How long carrying the item out of the field takes ('1 s', a brisk walk, by default): the flux it holds falls to zero over it. Fixed items stay.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Time)]
+    public double? LeaveTime { get; set; }
 
     /// <summary>How long the item stays in the field from the start of the drive ('10 min'); by default while the drive changes, or 8 h for a field that runs on. The cooling after it is assessed too.</summary>
     [Parameter]
@@ -63,7 +89,17 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         try
         {
             _environment = new ThermalEnvironment(AmbientTemperature);
+            if (ParameterSetName == SourceSet)
+            {
+                _source = FieldSource.Combine(Source);
+            }
+            else if (Station is not null)
+            {
+                _ = Site.Find(Station);
+            }
+
             Scenario.ValidateExposure(ExposureTime);
+            Scenario.ValidateLeave(LeaveTime);
             if (Normal is { } n)
             {
                 Require.Direction("Normal", n);
@@ -93,7 +129,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             try
             {
                 ConductiveItem item = ItemInput.ToItem(input, _materials, _row);
-                var scenario = new Scenario(item, Source, new Placement(Vector3D.Zero, Normal), ExposureTime, _environment);
+                (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label);
+                Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
+                var placement = new Placement(
+                    rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
+                    rowNormal ?? Normal ?? station?.Placement.Normal);
+                var scenario = new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds);
                 InductionResponse response = InductionEngine.Respond(scenario, _cancellation.Token);
                 WriteVerbose(label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
                 Process(response, _row);

@@ -5,7 +5,7 @@ using InductionHazard.Criteria;
 namespace InductionHazard.PowerShell.Commands;
 
 /// <summary>Test-InductionHazard: a verdict for each item at a place (Clear, Caution, Hazard or Indeterminate), with margins per mechanism.</summary>
-[Cmdlet(VerbsDiagnostic.Test, "InductionHazard")]
+[Cmdlet(VerbsDiagnostic.Test, "InductionHazard", DefaultParameterSetName = SourceSet)]
 [OutputType(typeof(InductionAssessment))]
 public sealed class TestInductionHazardCommand : ItemPipelineCommand
 {

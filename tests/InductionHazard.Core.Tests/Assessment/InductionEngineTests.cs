@@ -99,7 +99,9 @@ public class InductionEngineTests
         Assert.StartsWith("clockwise", falling.CurrentSense, StringComparison.Ordinal);
         InductionResponse flipped = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(3, 0, 1), normal: -Vector3D.UnitZ);
         Assert.StartsWith("clockwise", flipped.CurrentSense, StringComparison.Ordinal);
-        InductionResponse rising = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(0, 3, 1));
+        // A fixed ring stays in the field: a worn one would be carried out after the ramp, and that falling flux
+        // (as large as the rise) drives the opposite sense.
+        InductionResponse rising = Fixtures.Respond(Fixtures.Ring(contact: "Fixed"), Fixtures.UniformRamp(0, 3, 1));
         Assert.StartsWith("anticlockwise", rising.CurrentSense, StringComparison.Ordinal);
     }
 

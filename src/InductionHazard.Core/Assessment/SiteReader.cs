@@ -1,0 +1,152 @@
+using System;
+using System.Collections;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// Builds a site from its data (a PowerShell data file read as data): Site (the name) and Stations, each a table
+/// with Name, Sources (tables of a source's values with a Waveform table), and optionally Position, Normal,
+/// ExposureTime, LeaveTime and Description. Every problem names the station and the value.
+/// </summary>
+public static class SiteReader
+{
+    /// <summary>The error id of a site file that cannot be used.</summary>
+    public const string ErrorId = "InvalidSiteFile";
+
+    /// <summary>Reads the site.</summary>
+    /// <param name="data">The file's top-level table.</param>
+    /// <param name="path">The file, for messages and to resolve relative capture and map paths.</param>
+    /// <exception cref="DataFileException">Something in the file cannot be used; the message names the station and value.</exception>
+    public static HazardSite Read(IDictionary data, string path)
+    {
+        string directory = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(path)) ?? ".";
+        try
+        {
+            var top = new RecordFields(Pairs(data));
+            string name = top.Text("Site", required: true, "Name") ?? "site";
+            object? rawStations = top.Raw("Stations", required: true);
+            WaveformRecordReader.Unused(top, "site file");
+            if (top.Errors.Count > 0)
+            {
+                throw new RecordException("site file", top.Errors);
+            }
+
+            var stations = new List<Station>();
+            int n = 0;
+            foreach (object? entry in List(rawStations))
+            {
+                n++;
+                stations.Add(ReadStation(entry, n, directory));
+            }
+
+            return new HazardSite(name, stations, path);
+        }
+        catch (Exception ex) when (ex is RecordException or InvalidInputException or QuantityFormatException or UnknownMaterialException)
+        {
+            throw new DataFileException(path, null, ex.Message, ErrorId);
+        }
+        catch (DataFileException ex) when (ex.ErrorId != ErrorId)
+        {
+            throw new DataFileException(path, null, ex.Message, ErrorId);
+        }
+    }
+
+    private static Station ReadStation(object? entry, int n, string directory)
+    {
+        if (entry is not IDictionary table)
+        {
+            throw new InvalidInputException("Stations", "entry " + n + " is not a table (@{ Name = ...; Sources = ... })");
+        }
+
+        var fields = new RecordFields(Pairs(table));
+        string label = "station " + n;
+        string? name = fields.Text("Name", required: true);
+        if (name is not null)
+        {
+            label = "station '" + name + "'";
+        }
+
+        object? rawSources = fields.Raw("Sources", required: true, "Source");
+        Vector3D position = Vector(fields, "Position", QuantityKind.Length, label) ?? Vector3D.Zero;
+        Vector3D? normal = Vector(fields, "Normal", null, label);
+        double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
+        double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
+        string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
+        WaveformRecordReader.Unused(fields, label);
+        if (fields.Errors.Count > 0 || name is null || rawSources is null)
+        {
+            throw new RecordException(label, fields.Errors);
+        }
+
+        var sources = new List<FieldSource>();
+        int k = 0;
+        foreach (object? s in List(rawSources))
+        {
+            k++;
+            string sourceLabel = label + " source " + k;
+            if (s is not IDictionary sourceTable)
+            {
+                throw new InvalidInputException("Sources", sourceLabel + " is not a table (@{ Form = 'Busbar'; ...; Waveform = @{ ... } })");
+            }
+
+            List<KeyValuePair<string, object?>> values = Pairs(sourceTable).ToList();
+            KeyValuePair<string, object?> waveformPair = values.FirstOrDefault(p => RecordFields.Normalize(p.Key) == "waveform");
+            if (waveformPair.Value is not IDictionary waveformTable)
+            {
+                throw new InvalidInputException("Waveform", sourceLabel + " needs a Waveform table (@{ Form = 'Fault'; Current = '40 kA'; ... })");
+            }
+
+            values.Remove(waveformPair);
+            FieldWaveform waveform = WaveformRecordReader.Read(Pairs(waveformTable), directory, sourceLabel + " waveform");
+            if (!values.Any(p => RecordFields.Normalize(p.Key) == "name"))
+            {
+                values.Add(new KeyValuePair<string, object?>("Name", name));
+            }
+
+            sources.Add(SourceRecordReader.Read(values, waveform, directory, sourceLabel));
+        }
+
+        Scenario.ValidateExposure(exposure);
+        Scenario.ValidateLeave(leave);
+        FieldSource source = FieldSource.Combine(sources, sources.Count == 1 ? sources[0].Name : name);
+        return new Station(name, source, new Placement(position, normal), exposure, leave, description);
+    }
+
+    private static Vector3D? Vector(RecordFields fields, string name, QuantityKind? kind, string label)
+    {
+        object? raw = fields.Raw(name, required: false);
+        if (raw is null)
+        {
+            return null;
+        }
+
+        try
+        {
+            return VectorParser.Parse(raw, name, kind);
+        }
+        catch (InvalidInputException ex)
+        {
+            fields.AddError(name, ex.Reason);
+            return null;
+        }
+    }
+
+    private static IEnumerable<object?> List(object? value) => value switch
+    {
+        null => Array.Empty<object?>(),
+        IDictionary single => new object?[] { single },
+        IEnumerable many when value is not string => many.Cast<object?>(),
+        _ => new[] { value },
+    };
+
+    private static IEnumerable<KeyValuePair<string, object?>> Pairs(IDictionary table) =>
+        table.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, table[k]));
+}

@@ -1,0 +1,92 @@
+using System;
+using System.Management.Automation;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.PowerShell.Binding;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>Get-FieldStrength: a source's field at points: peak |B|, peak |dB/dt|, the field vector at the peak, the governing frequency.</summary>
+[Cmdlet(VerbsCommon.Get, "FieldStrength", DefaultParameterSetName = PositionSet)]
+[OutputType(typeof(FieldStrength))]
+public sealed class GetFieldStrengthCommand : PSCmdlet
+{
+    private const string PositionSet = "Position";
+    private const string InputObjectSet = "InputObject";
+    private FieldSource _source = null!;
+    private int _row;
+
+    /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
+    [Parameter(Mandatory = true, Position = 0)]
+    public FieldSource[] Source { get; set; } = null!;
+
+    /// <summary>The points, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres).</summary>
+    [Parameter(Mandatory = true, Position = 1, ParameterSetName = PositionSet)]
+    [Vector(QuantityKind.Length, Many = true)]
+    public Vector3D[] Position { get; set; } = Array.Empty<Vector3D>();
+
+    /// <summary>Rows with X, Y, Z columns (Import-Csv output, hashtables), one result per row.</summary>
+    [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
+    public PSObject[] InputObject { get; set; } = null!;
+
+    /// <inheritdoc />
+    protected override void BeginProcessing()
+    {
+        try
+        {
+            _source = FieldSource.Combine(Source);
+        }
+        catch (InductionHazardException ex)
+        {
+            ThrowTerminatingError(ErrorRecords.From(ex, null));
+        }
+    }
+
+    /// <inheritdoc />
+    protected override void ProcessRecord()
+    {
+        if (ParameterSetName == PositionSet)
+        {
+            foreach (Vector3D point in Position)
+            {
+                Write(point, point, "position " + point);
+            }
+
+            return;
+        }
+
+        foreach (PSObject input in InputObject)
+        {
+            _row++;
+            string label = "row " + _row;
+            try
+            {
+                (Vector3D? position, _) = PlacementRecordReader.Read(Records.From(input), label);
+                if (position is null)
+                {
+                    throw new RecordException(label, new[] { new FieldError("X", "is missing: give the point as X, Y, Z", "InvalidInput") });
+                }
+
+                Write(position.Value, input, label);
+            }
+            catch (InductionHazardException ex)
+            {
+                WriteError(ErrorRecords.From(ex, input, label));
+            }
+        }
+    }
+
+    private void Write(Vector3D point, object target, string label)
+    {
+        try
+        {
+            WriteObject(FieldStrength.At(_source, point));
+        }
+        catch (FieldEvaluationException ex)
+        {
+            WriteError(ErrorRecords.From(new InvalidInputException("Position", ex.Message), target, label));
+        }
+    }
+}
