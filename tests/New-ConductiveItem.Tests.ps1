@@ -59,4 +59,15 @@ Describe 'New-ConductiveItem' {
         $completion.CompletionMatches.ListItemText | Should -Contain 'Titanium grade 2'
         $completion.CompletionMatches.ListItemText | Should -Contain 'Ti-6Al-4V'
     }
+
+    It 'makes a rectangular loop of round wire with its area and perimeter' {
+        $frame = New-ConductiveItem -Name 'Frame' -Shape RectangularLoop -Material Aluminium -Width '400 mm' -Height '300 mm' -WireDiameter '25 mm'
+        [math]::Abs($frame.Loop.LoopAreaSquareMeters - 0.12) | Should -BeLessThan 1e-12
+        [math]::Abs($frame.Loop.PathLengthMeters - 1.4) | Should -BeLessThan 1e-12
+        $frame.Describe() | Should -Match 'rectangle 400 mm x 300 mm'
+    }
+
+    It 'refuses a rectangular loop without its height, naming the field' {
+        { New-ConductiveItem -Shape RectangularLoop -Material Copper -Width '400 mm' -WireDiameter '4 mm' } | Should -Throw -ExpectedMessage '*Height*'
+    }
 }

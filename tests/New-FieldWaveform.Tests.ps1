@@ -57,4 +57,33 @@ Describe 'New-FieldWaveform' {
     ) {
         { New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' -PhaseDegrees $Given } | Should -Throw -ExpectedMessage '*PhaseDegrees*'
     }
+
+    It 'makes an IEC 60909 fault whose worst first peak is kappa sqrt2 Ik''' {
+        $f = New-FieldWaveform -Fault -Current '40 kA' -XOverR 14 -Frequency '50 Hz' -ClearingTime '200 ms'
+        $kappa = 1.02 + 0.98 * [math]::Exp(-3 / 14)
+        [math]::Abs($f.PeakFactor / $kappa - 1) | Should -BeLessThan 0.02
+        $f.Drive | Should -Be 'Current'
+        $f.Describe() | Should -Match 'the worst, by search'
+    }
+
+    It 'makes a crowbarred discharge train' {
+        $w = New-FieldWaveform -Discharge -Capacitance '2 mF' -Voltage '5 kV' -Inductance '50 uH' -Resistance '30 mohm' -Crowbar -Repeat 3 -Period '10 s'
+        $w.Form | Should -Be 'Discharge train'
+        $w.Count | Should -Be 3
+    }
+
+    It 'reads a capture with a header, and names the line of a bad sample' {
+        $good = Join-Path $TestDrive 'capture.csv'
+        Set-Content $good -Value "Time (s),B (mT)`n0,0`n0.001,40`n0.002,0"
+        $w = New-FieldWaveform -Path $good -Unit mT
+        $w.SampleCount | Should -Be 3
+        [math]::Abs($w.PeakValue - 0.04) | Should -BeLessThan 1e-15
+        $bad = Join-Path $TestDrive 'bad-capture.csv'
+        Set-Content $bad -Value "Time (s),B (mT)`n0,0`n0.001,40`n0.0005,0"
+        { New-FieldWaveform -Path $bad -Unit mT } | Should -Throw -ErrorId 'InvalidCapture,InductionHazard.PowerShell.Commands.NewFieldWaveformCommand' -ExpectedMessage '*line 4*strictly increasing*'
+    }
+
+    It 'refuses -Repeat without -Period' {
+        { New-FieldWaveform -Trapezoid -Amplitude '1 T' -RiseTime '1 ms' -FallTime '1 ms' -Repeat 3 } | Should -Throw -ExpectedMessage '*Period*'
+    }
 }

@@ -97,7 +97,7 @@ Describe 'Test-InductionHazard' {
             $thick = New-ConductiveItem -Name 'Thick ring' -Material Copper -Diameter '20 mm' -WireDiameter '6 mm'
             $a = Test-InductionHazard -Item $thick -Source $field -WarningVariable warned -WarningAction SilentlyContinue
             $a.Verdict | Should -Be 'Indeterminate'
-            ($a.Reasons -join ' ') | Should -Match 'thin-ring'
+            ($a.Reasons -join ' ') | Should -Match 'thin-loop'
             [double]::IsNaN($a.PeakTemperatureCelsius) | Should -BeTrue -Because 'no safe-looking number comes from a model outside its validity'
             ($warned -join ' ') | Should -Match 'Thick ring: Indeterminate'
         }
@@ -166,6 +166,26 @@ Describe 'Test-InductionHazard' {
             $a.Verdict | Should -Not -Be 'Indeterminate'
             $a.PeakCurrentAmperes | Should -Be 0
             [double]::IsNaN($a.PeakTemperatureCelsius) | Should -BeFalse
+        }
+    }
+
+    Context 'a busbar fault, from a CSV with positions' {
+        It 'assesses each row where it sits, nearer rows seeing more emf' {
+            $bar = New-FieldWaveform -Fault -Current '40 kA' -XOverR 14 -Frequency '50 Hz' -ClearingTime '200 ms' |
+                New-FieldSource -Busbar -Width '100 mm' -Thickness '10 mm' -Name 'Busbar B1'
+            $csv = Join-Path $TestDrive 'switchroom.csv'
+            Set-Content $csv -Value @'
+Name,Material,Diameter,WireDiameter,Gap,Contact,X,Y,Z
+Near bracelet,Copper,65 mm,4 mm,20 mm,Skin,150 mm,0,0
+Far bracelet,Copper,65 mm,4 mm,20 mm,Skin,600 mm,0,0
+Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
+'@
+            $a = @(Import-Csv $csv | Test-InductionHazard -Source $bar -WarningAction SilentlyContinue)
+            $a.Count | Should -Be 3
+            $a[0].GapVoltageVolts | Should -BeGreaterThan (2 * $a[1].GapVoltageVolts)
+            $a[2].PeakCurrentAmperes | Should -BeGreaterThan 0
+            $a.Verdict | Should -Not -Contain 'Indeterminate'
+            $a[0].Response.Orientation | Should -BeLike 'facing the largest flux change*'
         }
     }
 

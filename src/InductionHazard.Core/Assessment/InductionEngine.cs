@@ -6,6 +6,7 @@ using System.Threading;
 using InductionHazard.Errors;
 using InductionHazard.Fields;
 using InductionHazard.Induction;
+using InductionHazard.Items;
 using InductionHazard.Quantities;
 using InductionHazard.Thermal;
 using InductionHazard.Waveforms;
@@ -212,7 +213,7 @@ public static class InductionEngine
         ValidityIssues = c.Issues,
         Normal = c.Normal,
         Orientation = c.Orientation,
-        LoopAreaSquareMeters = c.Scenario.Item.Ring.LoopAreaSquareMeters,
+        LoopAreaSquareMeters = c.Scenario.Item.Loop.LoopAreaSquareMeters,
         FrequencyHertz = c.Frequency,
         ResistanceOhms = c.Rdc,
         InductanceHenries = c.Ldc,
@@ -314,9 +315,9 @@ public static class InductionEngine
             Scenario = scenario;
             FieldSource source = scenario.Source;
             Vector3D centre = scenario.Placement.Centre;
-            double radius = scenario.Item.Ring.LoopRadiusMeters;
+            LoopGeometry loop = scenario.Item.Loop;
             Circuit = new RingCircuit(scenario.Item);
-            Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Ring.SurfaceSquareMeters, scenario.Environment);
+            Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Loop.SurfaceSquareMeters, scenario.Environment);
             Start = scenario.InitialCelsius;
             Rdc = Circuit.DcResistanceOhms(Start);
             Ldc = Circuit.DcInductanceHenries;
@@ -329,7 +330,7 @@ public static class InductionEngine
             {
                 if (scenario.Placement.Normal is null)
                 {
-                    Normal = FluxCoupling.WorstNormal(source, centre, radius);
+                    Normal = FluxCoupling.WorstNormal(source, centre, loop);
                     Orientation = "facing the largest flux change, normal " + Normal;
                 }
                 else
@@ -337,7 +338,7 @@ public static class InductionEngine
                     Orientation = "as given, normal " + Normal;
                 }
 
-                Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, radius);
+                Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop);
                 Vector3D[] b = source.FieldPerUnitDrive(centre);
                 NormalField = b.Select(v => v.Dot(Normal)).ToArray();
                 FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;

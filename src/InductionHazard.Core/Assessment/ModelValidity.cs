@@ -49,7 +49,7 @@ public static class ModelValidity
         }
 
         double wavelength = PhysicalConstants.SpeedOfLight / frequencyHertz;
-        double size = item.Ring.LargestDimensionMeters;
+        double size = item.Loop.LargestDimensionMeters;
         if (size > QuasiStaticFraction * wavelength)
         {
             issues.Add(new ValidityIssue(
@@ -66,21 +66,21 @@ public static class ModelValidity
             return;
         }
 
-        double ratio = item.Ring.Section.GeometricMeanRadiusMeters / item.Ring.LoopRadiusMeters;
+        double ratio = item.Loop.Section.GeometricMeanRadiusMeters / item.Loop.HalfSpanMeters;
         if (ratio > MaxGmdToLoopRadius)
         {
             issues.Add(new ValidityIssue(
-                "the section is too thick for the thin-ring inductance formula: GMD / loop radius = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + " (for a round wire: a diameter above half the loop radius); a solid-body model is needed",
+                "the section is too thick for the thin-loop inductance formula: GMD / loop half-span = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + " (for a round wire: a diameter above half the loop's radius or half-side); a solid-body model is needed",
                 AffectedResults.Current | AffectedResults.Heating));
         }
         else
         {
-            notes.Add("thin-ring inductance (Grover 1946): GMD / loop radius = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
+            notes.Add("thin-loop inductance (Grover 1946): GMD / loop half-span = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
         }
 
         CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
 
-        double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Ring.VolumeCubicMeters, item.Ring.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
+        double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Loop.VolumeCubicMeters, item.Loop.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
         if (biot > LumpedThermalModel.LumpedBiotLimit)
         {
             issues.Add(new ValidityIssue("lumped heating does not hold: Biot number " + Num(biot) + " > 0.1", AffectedResults.Heating));
@@ -105,7 +105,7 @@ public static class ModelValidity
     {
         double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
         string at = " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(delta, "m") + ")";
-        if (item.Ring.Section is RoundWire wire)
+        if (item.Loop.Section is RoundWire wire)
         {
             if (alternating)
             {
@@ -125,7 +125,7 @@ public static class ModelValidity
             return;
         }
 
-        var band = (RectangularBand)item.Ring.Section;
+        var band = (RectangularBand)item.Loop.Section;
         if (band.ThicknessMeters > DcModelSkinDepths * delta || band.WidthMeters > 2 * DcModelSkinDepths * delta)
         {
             issues.Add(new ValidityIssue(

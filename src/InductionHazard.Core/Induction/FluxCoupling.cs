@@ -2,6 +2,7 @@ using System;
 using System.Linq;
 using System.Numerics;
 using InductionHazard.Fields;
+using InductionHazard.Items;
 using InductionHazard.Quantities;
 using InductionHazard.Waveforms;
 
@@ -15,16 +16,25 @@ public static class FluxCoupling
 {
     /// <summary>The flux through the loop per unit drive of each term (Wb per tesla or per ampere).</summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
-    public static double[] PerUnitDrive(FieldSource source, Vector3D centre, Vector3D normal, double radius)
+    public static double[] PerUnitDrive(FieldSource source, Vector3D centre, Vector3D normal, LoopGeometry loop)
     {
         var coupling = new double[source.Terms.Count];
         for (int k = 0; k < coupling.Length; k++)
         {
-            coupling[k] = source.Terms[k].Geometry.FluxThroughDisc(centre, normal, radius);
+            coupling[k] = Flux(source.Terms[k].Geometry, centre, normal, loop);
         }
 
         return coupling;
     }
+
+    /// <summary>The flux per unit drive of one geometry through the loop's outline: a disc, or a rectangle whose width lies along <see cref="RectangularLoopGeometry.WidthDirection"/>.</summary>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
+    public static double Flux(IFieldGeometry geometry, Vector3D centre, Vector3D normal, LoopGeometry loop) => loop switch
+    {
+        RectangularLoopGeometry r when geometry is UniformField u => u.Direction.Dot(normal) * r.LoopAreaSquareMeters,
+        RectangularLoopGeometry r => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal), r.WidthMeters, r.HeightMeters),
+        _ => geometry.FluxThroughDisc(centre, normal, loop.HalfSpanMeters),
+    };
 
     /// <summary>
     /// The unit normal that links the largest flux change: the flux per unit drive is found for loops facing x, y and
@@ -34,11 +44,11 @@ public static class FluxCoupling
     /// defined, so a positive drive gives a positive flux.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
-    public static Vector3D WorstNormal(FieldSource source, Vector3D centre, double radius)
+    public static Vector3D WorstNormal(FieldSource source, Vector3D centre, LoopGeometry loop)
     {
-        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, radius);
-        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, radius);
-        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, radius);
+        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
+        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
+        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, loop);
         Vector3D M(int k) => new(mx[k], my[k], mz[k]);
         int n = mx.Length;
         Vector3D best;

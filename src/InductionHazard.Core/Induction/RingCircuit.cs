@@ -6,7 +6,8 @@ namespace InductionHazard.Induction;
 
 /// <summary>
 /// The ring as a circuit: resistance around the loop with its temperature law, self-inductance, and the
-/// impedance at a frequency with skin effect (round wire) in the thin-ring approximation.
+/// impedance at a frequency with skin effect (round wire) in the thin-loop approximation; circles by Grover's ring
+/// formula, rectangles by his rectangle formula.
 /// </summary>
 public sealed class RingCircuit
 {
@@ -20,11 +21,14 @@ public sealed class RingCircuit
 
     /// <summary>The d.c. resistance around the loop at a temperature, rho(T) l / S, ohm.</summary>
     public double DcResistanceOhms(double celsius) =>
-        _item.Material.ResistivityAt(celsius) * _item.Ring.PathLengthMeters / _item.Ring.Section.AreaSquareMeters;
+        _item.Material.ResistivityAt(celsius) * _item.Loop.PathLengthMeters / _item.Loop.Section.AreaSquareMeters;
 
     /// <summary>The self-inductance for uniform current (the low-frequency value), H (Grover 1946, via the section's GMD).</summary>
-    public double DcInductanceHenries =>
-        RingInductance.UniformCurrentHenries(_item.Ring.LoopRadiusMeters, _item.Ring.Section.GeometricMeanRadiusMeters);
+    public double DcInductanceHenries => _item.Loop switch
+    {
+        RectangularLoopGeometry r => RectangleInductance.UniformCurrentHenries(r.WidthMeters, r.HeightMeters, r.Section.GeometricMeanRadiusMeters),
+        _ => RingInductance.UniformCurrentHenries(_item.Loop.HalfSpanMeters, _item.Loop.Section.GeometricMeanRadiusMeters),
+    };
 
     /// <summary>
     /// The loop impedance at a frequency and temperature, ohm. Round wire: R_dc(T) times the internal impedance
@@ -35,11 +39,13 @@ public sealed class RingCircuit
     {
         double omega = 2 * Math.PI * frequencyHertz;
         double rdc = DcResistanceOhms(celsius);
-        if (_item.Ring.Section is RoundWire wire)
+        if (_item.Loop.Section is RoundWire wire)
         {
             double delta = SkinEffect.SkinDepthMeters(_item.Material.ResistivityAt(celsius), frequencyHertz, _item.Material.RelativePermeability);
             Complex internalRatio = SkinEffect.RoundWireImpedanceRatio(wire.RadiusMeters, delta);
-            double external = RingInductance.ExternalHenries(_item.Ring.LoopRadiusMeters, wire.RadiusMeters);
+            double external = _item.Loop is RectangularLoopGeometry r
+                ? RectangleInductance.ExternalHenries(r.WidthMeters, r.HeightMeters, wire.RadiusMeters)
+                : RingInductance.ExternalHenries(_item.Loop.HalfSpanMeters, wire.RadiusMeters);
             return (rdc * internalRatio) + new Complex(0, omega * external);
         }
 

@@ -8,12 +8,12 @@ namespace InductionHazard.Items;
 /// </summary>
 public sealed class ConductiveItem
 {
-    internal ConductiveItem(string name, ItemShape shape, ConductorMaterial material, RingGeometry ring, double gapMeters, ContactKind contact)
+    internal ConductiveItem(string name, ItemShape shape, ConductorMaterial material, LoopGeometry loop, double gapMeters, ContactKind contact)
     {
         Name = name;
         Shape = shape;
         Material = material;
-        Ring = ring;
+        Loop = loop;
         GapMeters = gapMeters;
         Contact = contact;
     }
@@ -28,7 +28,7 @@ public sealed class ConductiveItem
     public ConductorMaterial Material { get; }
 
     /// <summary>The loop geometry.</summary>
-    public RingGeometry Ring { get; }
+    public LoopGeometry Loop { get; }
 
     /// <summary>The width of the gap in a split ring, m; zero for a closed loop.</summary>
     public double GapMeters { get; }
@@ -39,19 +39,19 @@ public sealed class ConductiveItem
     /// <summary>True for a split ring or open loop (a gap that carries the emf and no current).</summary>
     public bool IsSplit => GapMeters > 0;
 
-    /// <summary>The mean diameter, m.</summary>
-    public double MeanDiameterMeters => Ring.MeanDiameterMeters;
+    /// <summary>The mean diameter of a circular loop, m; NaN for another outline.</summary>
+    public double MeanDiameterMeters => Loop is RingGeometry r ? r.MeanDiameterMeters : double.NaN;
 
     /// <summary>The metal mass, kg (the gap's missing metal neglected).</summary>
-    public double MassKilograms => Ring.VolumeCubicMeters * Material.DensityKilogramsPerCubicMeter;
+    public double MassKilograms => Loop.VolumeCubicMeters * Material.DensityKilogramsPerCubicMeter;
 
     /// <summary>The d.c. resistance around the loop at 20 °C, rho l / S, ohm.</summary>
-    public double ResistanceOhms => Material.ResistivityOhmMeters * Ring.PathLengthMeters / Ring.Section.AreaSquareMeters;
+    public double ResistanceOhms => Material.ResistivityOhmMeters * Loop.PathLengthMeters / Loop.Section.AreaSquareMeters;
 
-    /// <summary>"Wedding band: Ring, Gold, D 19.8 mm, 4 mm x 1.6 mm band, closed, Skin".</summary>
+    /// <summary>"Wedding band: Ring, Gold, circle D 19.8 mm, 4 mm x 1.6 mm band, closed, Skin".</summary>
     public string Describe() =>
-        Name + ": " + Shape + ", " + Material.Name + ", D " + SiFormat.Format(MeanDiameterMeters, "m") + ", "
-        + Ring.Section.Describe() + ", " + (IsSplit ? "gap " + SiFormat.Format(GapMeters, "m") : "closed") + ", " + Contact;
+        Name + ": " + Shape + ", " + Material.Name + ", " + Loop.Describe() + ", "
+        + Loop.Section.Describe() + ", " + (IsSplit ? "gap " + SiFormat.Format(GapMeters, "m") : "closed") + ", " + Contact;
 
     /// <inheritdoc />
     public override string ToString() => Name;

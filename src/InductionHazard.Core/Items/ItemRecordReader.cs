@@ -11,7 +11,7 @@ namespace InductionHazard.Items;
 /// <summary>
 /// Builds a <see cref="ConductiveItem"/> from named values: a CSV row, a hashtable or the parameters of
 /// New-ConductiveItem. Columns: Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and
-/// Thickness, Gap, Contact (names match without regard to case, spaces and underscores; common spellings are
+/// Thickness, Gap, Contact; for a RectangularLoop Width and Height (its sides) and WireDiameter (names match without regard to case, spaces and underscores; common spellings are
 /// aliases). Other columns (location, asset tag, notes) are ignored. Every problem in the record is reported
 /// at once, naming the record and the field.
 /// </summary>
@@ -28,6 +28,7 @@ public static class ItemRecordReader
         ["WireDiameter"] = new[] { "Wire", "WireDia" },
         ["Width"] = new[] { "BandWidth" },
         ["Thickness"] = new[] { "BandThickness" },
+        ["Height"] = new[] { "LoopHeight" },
         ["Gap"] = new[] { "GapWidth", "Split" },
         ["Contact"] = new[] { "ContactKind", "Wear", "Worn" },
     };
@@ -52,11 +53,12 @@ public static class ItemRecordReader
         ContactKind contact = fields.Choice<ContactKind>("Contact", required: false, A("Contact")) ?? ContactKind.Skin;
 
         string label = Label(rowNumber, name);
-        CrossSection? section = ReadSection(fields, wire, width, thickness);
-        double? diameter = ReadDiameter(fields, mean, inner, section);
-        if (diameter is { } d)
+        LoopGeometry? loop = shape == ItemShape.RectangularLoop
+            ? ReadRectangle(fields, wire, width)
+            : ReadRing(fields, mean, inner, wire, width, thickness);
+        if (loop is not null)
         {
-            double circumference = Math.PI * d;
+            double perimeter = loop.PathLengthMeters;
             if (gap < 0)
             {
                 fields.AddError("Gap", "must be zero (a closed loop) or more; got " + Mm(gap));
@@ -65,9 +67,9 @@ public static class ItemRecordReader
             {
                 fields.AddError("Gap", gapProblem);
             }
-            else if (gap >= circumference)
+            else if (gap >= perimeter)
             {
-                fields.AddError("Gap", "(" + Mm(gap) + ") must be shorter than the loop's circumference (" + Mm(circumference) + ")");
+                fields.AddError("Gap", "(" + Mm(gap) + ") must be shorter than the loop's " + (shape == ItemShape.Ring ? "circumference" : "perimeter") + " (" + Mm(perimeter) + ")");
             }
         }
 
@@ -80,9 +82,48 @@ public static class ItemRecordReader
             string.IsNullOrWhiteSpace(name) ? (rowNumber is { } r ? "row " + r.ToString(CultureInfo.InvariantCulture) : "item") : name!,
             shape,
             material!,
-            new RingGeometry(diameter!.Value, section!),
+            loop!,
             gap,
             contact);
+    }
+
+    private static RingGeometry? ReadRing(RecordFields fields, double? mean, double? inner, double? wire, double? width, double? thickness)
+    {
+        CrossSection? section = ReadSection(fields, wire, width, thickness);
+        double? diameter = ReadDiameter(fields, mean, inner, section);
+        return diameter is { } d ? new RingGeometry(d, section!) : null;
+    }
+
+    /// <summary>A rectangular loop: Width and Height are the sides of its centre line, of round wire WireDiameter.</summary>
+    private static RectangularLoopGeometry? ReadRectangle(RecordFields fields, double? wire, double? width)
+    {
+        double? height = fields.Quantity("Height", QuantityKind.Length, required: true, A("Height"));
+        if (!fields.Has("WireDiameter", A("WireDiameter")))
+        {
+            fields.AddError("WireDiameter", "is missing (a rectangular loop is of round wire: give WireDiameter, and Width and Height for its sides)");
+        }
+
+        if (!fields.Has("Width", A("Width")))
+        {
+            fields.AddError("Width", "is missing (a rectangular loop needs Width and Height, the sides of its centre line)");
+        }
+
+        bool ok = Positive(fields, "WireDiameter", wire) & Positive(fields, "Width", width) & Positive(fields, "Height", height);
+        if (!ok)
+        {
+            return null;
+        }
+
+        foreach ((string field, double side) in new[] { ("Width", width!.Value), ("Height", height!.Value) })
+        {
+            if (side <= wire!.Value)
+            {
+                fields.AddError(field, "(" + Mm(side) + ") must exceed the wire diameter (" + Mm(wire.Value) + "): the loop would have no hole");
+                return null;
+            }
+        }
+
+        return new RectangularLoopGeometry(width!.Value, height!.Value, new RoundWire(wire!.Value));
     }
 
     /// <summary>The item name a record gives (through the Name column or its aliases), or null.</summary>

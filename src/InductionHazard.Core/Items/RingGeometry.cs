@@ -6,20 +6,17 @@ namespace InductionHazard.Items;
 /// A circular loop: its mean diameter D (the centre line of the wire or band) and cross-section. Rings are
 /// sized by inner diameter, as jewellers do; the loop is computed on the centre line.
 /// </summary>
-public sealed class RingGeometry
+public sealed class RingGeometry : LoopGeometry
 {
     /// <summary>Creates the geometry.</summary>
     public RingGeometry(double meanDiameterMeters, CrossSection section)
+        : base(section)
     {
         MeanDiameterMeters = meanDiameterMeters;
-        Section = section;
     }
 
     /// <summary>The mean (centre-line) diameter D, m.</summary>
     public double MeanDiameterMeters { get; }
-
-    /// <summary>The wire or band section.</summary>
-    public CrossSection Section { get; }
 
     /// <summary>The loop radius R = D / 2, m.</summary>
     public double LoopRadiusMeters => MeanDiameterMeters / 2;
@@ -31,17 +28,17 @@ public sealed class RingGeometry
     public double OuterDiameterMeters => MeanDiameterMeters + Section.RadialExtentMeters;
 
     /// <summary>The area the centre line encloses, pi (D/2)^2, m^2: the flux area of the loop.</summary>
-    public double LoopAreaSquareMeters => Math.PI * LoopRadiusMeters * LoopRadiusMeters;
+    public override double LoopAreaSquareMeters => Math.PI * LoopRadiusMeters * LoopRadiusMeters;
 
     /// <summary>The length of the centre line, pi D, m: the current path.</summary>
-    public double PathLengthMeters => Math.PI * MeanDiameterMeters;
-
-    /// <summary>The metal volume, section area times path length, m^3.</summary>
-    public double VolumeCubicMeters => Section.AreaSquareMeters * PathLengthMeters;
-
-    /// <summary>The outer surface, section perimeter times path length, m^2.</summary>
-    public double SurfaceSquareMeters => Section.PerimeterMeters * PathLengthMeters;
+    public override double PathLengthMeters => Math.PI * MeanDiameterMeters;
 
     /// <summary>The largest dimension of the item, m (the outer diameter).</summary>
-    public double LargestDimensionMeters => Math.Max(OuterDiameterMeters, Section.LargestDimensionMeters);
+    public override double LargestDimensionMeters => Math.Max(OuterDiameterMeters, Section.LargestDimensionMeters);
+
+    /// <summary>The loop radius.</summary>
+    public override double HalfSpanMeters => LoopRadiusMeters;
+
+    /// <inheritdoc />
+    public override string Describe() => "circle D " + Quantities.SiFormat.Format(MeanDiameterMeters, "m");
 }

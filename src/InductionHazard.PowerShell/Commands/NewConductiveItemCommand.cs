@@ -22,7 +22,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(ParameterSetName = ParametersSet, Position = 0)]
     public string? Name { get; set; }
 
-    /// <summary>The shape (Ring: a round-wire ring or a band; closed, or split when -Gap is given).</summary>
+    /// <summary>The shape: Ring (a round-wire ring or a band) or RectangularLoop (-Width x -Height of round wire); closed, or split when -Gap is given.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     public ItemShape Shape { get; set; } = ItemShape.Ring;
 
@@ -47,7 +47,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Quantity(QuantityKind.Length)]
     public double? WireDiameter { get; set; }
 
-    /// <summary>The width of a band, along the ring's axis.</summary>
+    /// <summary>The width of a band, along the ring's axis; for a rectangular loop, one side of its centre line.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]
     public double? Width { get; set; }
@@ -56,6 +56,11 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]
     public double? Thickness { get; set; }
+
+    /// <summary>The height of a rectangular loop (the side across -Width), on the wire's centre line.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Height { get; set; }
 
     /// <summary>The width of the gap of a split ring; omit or 0 for a closed ring.</summary>
     [Parameter(ParameterSetName = ParametersSet)]

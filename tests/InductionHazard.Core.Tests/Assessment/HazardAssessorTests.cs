@@ -76,7 +76,7 @@ public class HazardAssessorTests
         InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
         Assert.Equal(Verdict.Indeterminate, a.Verdict);
         Assert.True(double.IsNaN(a.MinimumMargin));
-        Assert.Contains(a.Reasons, r => r.Contains("thin-ring", StringComparison.Ordinal));
+        Assert.Contains(a.Reasons, r => r.Contains("thin-loop", StringComparison.Ordinal));
         Assert.Single(a.Reasons);
         Assert.True(double.IsNaN(a.PeakCurrentAmperes), "the current is not shown from a model outside its validity");
         Assert.True(double.IsNaN(a.PeakTemperatureCelsius), "nor the temperature");

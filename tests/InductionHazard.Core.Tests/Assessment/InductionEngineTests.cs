@@ -4,6 +4,7 @@ using InductionHazard.Assessment;
 using InductionHazard.Criteria;
 using InductionHazard.Fields;
 using InductionHazard.Waveforms;
+using InductionHazard.Induction;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
 using Xunit;
@@ -121,7 +122,7 @@ public class InductionEngineTests
     public void AThickSectionIsOutsideTheThinRingModel()
     {
         InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(0.01, 50));
-        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("thin-ring", StringComparison.Ordinal));
+        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("thin-loop", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -198,5 +199,79 @@ public class InductionEngineTests
         Within.Relative(at0.PeakCurrentAmperes, late.PeakCurrentAmperes, 1e-6, "peak current");
         Within.Relative(at0.PeakTemperatureCelsius, late.PeakTemperatureCelsius, 1e-6, "peak temperature");
         Assert.Equal(HazardAssessor.Assess(at0, HazardPolicy.Default).Verdict, HazardAssessor.Assess(late, HazardPolicy.Default).Verdict);
+    }
+
+    [Fact]
+    public void LeavingMidQuenchIsAFluxChangeOfItsOwn()
+    {
+        // A split ring carried out 1 s into a slow quench: the flux it holds then, B(1 s) A, falls to zero over the
+        // 1 s leave time, so the gap sees B(1 s) A / 1 s (Faraday's law), not nothing.
+        var quench = FieldSource.Uniform("quench", new DecayWaveform(7, 30, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        ConductiveItem split = Fixtures.Ring("Copper", 0.06, 0.002, gap: 0.005);
+        InductionResponse r = InductionEngine.Respond(new Scenario(split, quench, null, exposureSeconds: 1, leaveSeconds: 1));
+        double area = Math.PI * 0.03 * 0.03, held = 7 * Math.Exp(-1.0 / 30);
+        Within.Relative(held * area / 1.0, r.GapVoltageVolts!.Value, 1e-9, "gap voltage while leaving");
+        InductionResponse fixedRing = InductionEngine.Respond(new Scenario(Fixtures.Ring("Copper", 0.06, 0.002, gap: 0.005, contact: "Fixed"), quench, null, exposureSeconds: 1));
+        Within.Relative(7 * area / 30, fixedRing.GapVoltageVolts!.Value, 1e-6, "a fixed ring sees only the quench's own rate");
+    }
+
+    [Fact]
+    public void WithoutANormalTheLoopFacesTheLargestFluxChangeOfAConductor()
+    {
+        // A line current along z seen from (0.2, 0, 0): the field there is along +y (Ampere's law), and so is the worst normal.
+        var fault = new FaultWaveform(20e3, 10, 50, 0.1);
+        var source = new FieldSource("line", new[] { new SourceTerm(new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ)), fault) });
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.04, 0.002, gap: 0.002);
+        InductionResponse r = InductionEngine.Respond(new Scenario(ring, source, new Placement(new Vector3D(0.2, 0, 0))));
+        Within.Relative(1, r.Normal.Y, 1e-6, "normal along y");
+        Assert.StartsWith("facing the largest flux change", r.Orientation, StringComparison.Ordinal);
+        // Its coupling is the closed form mu0 (d - sqrt(d^2 - r^2)) per ampere (flux of a line through a coplanar disc).
+        double coupling = Mu0 * (0.2 - Math.Sqrt((0.2 * 0.2) - (0.02 * 0.02)));
+        Within.Relative(coupling * fault.PeakRate, r.PeakEmfVolts, 2e-3, "peak emf = M max|di/dt|");
+    }
+
+    [Fact]
+    public void AMixOfAnAlternatingAndATransientDriveIsSolvedInTime()
+    {
+        var terms = new[]
+        {
+            new SourceTerm(new UniformField(Vector3D.UnitZ), new SineWaveform(0.001, 50, durationSeconds: 0.2, drive: DriveKind.FluxDensity)),
+            new SourceTerm(new UniformField(Vector3D.UnitZ), new RampWaveform(0, 0.5, 0.1, drive: DriveKind.FluxDensity)),
+        };
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(contact: "Fixed"), new FieldSource("mix", terms));
+        Assert.Empty(r.ValidityIssues);
+        // Faraday's law: the emf's peak is at most the sum of the parts, omega B A + B' A.
+        double area = Math.PI * 0.01 * 0.01;
+        Assert.InRange(r.PeakEmfVolts, 0.5 / 0.1 * area, ((2 * Math.PI * 50 * 0.001) + (0.5 / 0.1)) * area * (1 + 1e-9));
+        Assert.True(r.PeakCurrentAmperes > 0);
+    }
+
+    [Fact]
+    public void ALoopThatReachesIntoAConductorIsIndeterminate()
+    {
+        var line = new FieldSource("line", new[] { new SourceTerm(new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ)), new SineWaveform(100, 50, drive: DriveKind.Current)) });
+        InductionResponse r = InductionEngine.Respond(new Scenario(Fixtures.Ring(), line, new Placement(new Vector3D(0.005, 0, 0), Vector3D.UnitY)));
+        Assert.Contains(r.ValidityIssues, i => i.Affects == AffectedResults.All);
+        Assert.Equal(Verdict.Indeterminate, HazardAssessor.Assess(r, HazardPolicy.Default).Verdict);
+    }
+
+    [Fact]
+    public void ARectangularLoopLinksItsAreaAndCarriesTheRlCurrentWithGroversInductance()
+    {
+        // Faraday's law for a w x h frame in a uniform sine: emf amplitude omega B w h; the phasor current
+        // E / |R + j omega L| with L from the rectangle formula and R = rho 2(w + h) / S (IEC 60028 copper).
+        ConductiveItem frame = ItemRecordReader.Read(
+            new System.Collections.Generic.Dictionary<string, object?> { ["Shape"] = "RectangularLoop", ["Material"] = "Copper", ["Width"] = "300 mm", ["Height"] = "200 mm", ["WireDiameter"] = "4 mm", ["Contact"] = "Fixed" },
+            MaterialLibrary.BuiltIn);
+        InductionResponse r = Fixtures.Respond(frame, Fixtures.UniformSine(1e-4, 50));
+        double omega = 2 * Math.PI * 50;
+        Within.Relative(omega * 1e-4 * 0.06, r.PeakEmfVolts, 1e-12, "emf");
+        double resistance = 1.7241e-8 * (1 + (0.00393 * (r.InitialTemperatureCelsius - 20))) * 1.0 / (Math.PI * 0.002 * 0.002);
+        double inductance = RectangleInductance.UniformCurrentHenries(0.3, 0.2, 0.002 * Math.Exp(-0.25));
+        double expected = r.PeakEmfVolts / Math.Sqrt((resistance * resistance) + Math.Pow(omega * inductance, 2));
+        Within.Relative(expected, r.PeakCurrentAmperes, 2e-3, "current (internal impedance by Kelvin functions, near d.c. here)");
+        Assert.Throws<Errors.RecordException>(() => ItemRecordReader.Read(
+            new System.Collections.Generic.Dictionary<string, object?> { ["Shape"] = "RectangularLoop", ["Material"] = "Copper", ["Width"] = "300 mm", ["WireDiameter"] = "4 mm" },
+            MaterialLibrary.BuiltIn));
     }
 }

@@ -16,7 +16,7 @@ public class ItemRecordReaderTests
     {
         ConductiveItem ring = Read(new() { ["Name"] = "Band", ["Material"] = "gold", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Contact"] = "held" });
         Assert.Equal(0.02, ring.MeanDiameterMeters, 15);
-        Assert.IsType<RoundWire>(ring.Ring.Section);
+        Assert.IsType<RoundWire>(ring.Loop.Section);
         Assert.Equal(ContactKind.Held, ring.Contact);
         Assert.False(ring.IsSplit);
     }
@@ -28,7 +28,7 @@ public class ItemRecordReaderTests
         Assert.Equal(0.0188, wire.MeanDiameterMeters, 12);
         ConductiveItem band = Read(new() { ["Material"] = "Silver", ["ID"] = "17.3 mm", ["Width"] = "5 mm", ["Thickness"] = "2 mm" });
         Assert.Equal(0.0193, band.MeanDiameterMeters, 12);
-        Assert.Equal(0.0173, band.Ring.InnerDiameterMeters, 12);
+        Assert.Equal(0.0173, ((RingGeometry)band.Loop).InnerDiameterMeters, 12);
     }
 
     [Fact]
@@ -45,7 +45,7 @@ public class ItemRecordReaderTests
         ConductiveItem ring = Read(new() { ["Material"] = "Copper", ["Diameter"] = 0.02, ["WireDiameter"] = 0.002 });
         double pathLength = System.Math.PI * 0.02;
         double section = System.Math.PI * 0.001 * 0.001;
-        Within.Relative(System.Math.PI * 0.01 * 0.01, ring.Ring.LoopAreaSquareMeters, 1e-12, "loop area pi (D/2)^2");
+        Within.Relative(System.Math.PI * 0.01 * 0.01, ring.Loop.LoopAreaSquareMeters, 1e-12, "loop area pi (D/2)^2");
         Within.Relative(1.7241e-8 * pathLength / section, ring.ResistanceOhms, 1e-4, "R = rho l / S");
         Within.Relative(8890 * pathLength * section, ring.MassKilograms, 1e-12, "mass");
     }
@@ -121,6 +121,6 @@ public class ItemRecordReaderTests
     public void TwoColumnsForOneFieldThatAgreeAreRead()
     {
         ConductiveItem ring = Read(new() { ["Material"] = "Copper", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Wire Diameter"] = " 2 mm " });
-        Assert.Equal(0.002, ((RoundWire)ring.Ring.Section).DiameterMeters, 15);
+        Assert.Equal(0.002, ((RoundWire)ring.Loop.Section).DiameterMeters, 15);
     }
 }

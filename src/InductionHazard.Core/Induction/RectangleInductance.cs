@@ -1,0 +1,31 @@
+using System;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// Self-inductance of a rectangular loop, sides a and b, by Maxwell's GMD method as Grover builds it (Inductance
+/// Calculations, 1946): the four straight sides, each side's self-inductance the mutual inductance of two parallel
+/// filaments of its length one GMD apart, less the mutual inductances of the opposite sides (which carry opposite
+/// currents); perpendicular sides do not couple. L = 2 M(a, g) + 2 M(b, g) - 2 M(a, b) - 2 M(b, a), with
+/// M(l, d) = (mu0 / 2 pi) [l asinh(l / d) - sqrt(l^2 + d^2) + d] for parallel filaments (Grover). Keeping the
+/// "+ d" terms, this is Grover's rectangle formula without its thin-wire truncation.
+/// </summary>
+public static class RectangleInductance
+{
+    /// <summary>The inductance for a uniform current: g is the section's geometric-mean radius (a e^(-1/4) for a round wire), H.</summary>
+    public static double UniformCurrentHenries(double a, double b, double gmdRadiusMeters) => Loop(a, b, gmdRadiusMeters);
+
+    /// <summary>The external inductance of round wire of radius rho (surface current, the high-frequency limit), H.</summary>
+    public static double ExternalHenries(double a, double b, double wireRadiusMeters) => Loop(a, b, wireRadiusMeters);
+
+    /// <summary>Mutual inductance of two parallel straight filaments of length l, d apart, side by side (Grover 1946), H.</summary>
+    public static double ParallelFilamentsHenries(double l, double d) =>
+        PhysicalConstants.VacuumPermeability / (2 * Math.PI) * ((l * Asinh(l / d)) - Math.Sqrt((l * l) + (d * d)) + d);
+
+    private static double Loop(double a, double b, double g) =>
+        (2 * ParallelFilamentsHenries(a, g)) + (2 * ParallelFilamentsHenries(b, g)) - (2 * ParallelFilamentsHenries(a, b)) - (2 * ParallelFilamentsHenries(b, a));
+
+    /// <summary>asinh x = ln(x + sqrt(x^2 + 1)) (netstandard2.0 has no Math.Asinh).</summary>
+    private static double Asinh(double x) => Math.Log(x + Math.Sqrt((x * x) + 1));
+}

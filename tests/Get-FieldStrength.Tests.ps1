@@ -1,0 +1,32 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $mu0 = 4e-7 * [math]::PI
+    $line = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Axis z -Name 'Feeder'
+}
+
+Describe 'Get-FieldStrength' {
+    It 'gives a line current''s field by Ampere''s law at each point, in order' {
+        $s = @(Get-FieldStrength -Source $line -Position '100 mm,0,0', '0,400 mm,0')
+        $s.Count | Should -Be 2
+        [math]::Abs($s[0].PeakFluxDensityTesla / ($mu0 * 1000 / (2 * [math]::PI * 0.1)) - 1) | Should -BeLessThan 1e-4
+        [math]::Abs($s[1].PeakFluxDensityTesla / ($mu0 * 1000 / (2 * [math]::PI * 0.4)) - 1) | Should -BeLessThan 1e-4
+        [math]::Abs($s[0].PeakRateTeslaPerSecond / (2 * [math]::PI * 50 * $s[0].PeakFluxDensityTesla) - 1) | Should -BeLessThan 1e-3
+        $s[0].FrequencyHertz | Should -Be 50
+    }
+
+    It 'reads points from rows with X, Y, Z and sums several sources' {
+        $return = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' -PhaseDegrees 180 | New-FieldSource -Conductor -Axis z -Center '20 mm,0,0'
+        $one = @{ X = '200 mm'; Y = 0; Z = 0 } | Get-FieldStrength -Source $line
+        $pair = @{ X = '200 mm'; Y = 0; Z = 0 } | Get-FieldStrength -Source $line, $return
+        $pair.PeakFluxDensityTesla | Should -BeLessThan (0.2 * $one.PeakFluxDensityTesla) -Because 'a go-and-return pair cancels far away'
+    }
+
+    It 'writes an error naming the point on a conductor, and goes on' {
+        $s = @(Get-FieldStrength -Source $line -Position '0,0,1', '0.1,0,0' -ErrorVariable bad -ErrorAction SilentlyContinue)
+        $s.Count | Should -Be 1
+        $bad.Count | Should -Be 1
+        $bad[0].Exception.Message | Should -BeLike 'Position:*on the conductor*'
+    }
+}
