@@ -9,6 +9,8 @@
            PowerShell, and ends with one line: "N passed, N failed" (both suites counted).
     Demo   builds and runs the example audit of the invented site (examples/Invoke-SiteAudit.ps1), which
            writes its report under out/demo.
+    Bench  runs the engine's benchmarks (tests/InductionHazard.Benchmarks, BenchmarkDotNet, short jobs) and the
+           peak-memory comparison of loading a 1,000,000-row capture; results under out/bench.
     Clean  removes out/ and the bin and obj folders.
     Needs only the .NET SDK: run it as  dotnet tool restore && dotnet pwsh -NoProfile -File build.ps1 Test
 .EXAMPLE
@@ -17,7 +19,7 @@
 [CmdletBinding()]
 param(
     [Parameter(Position = 0)]
-    [ValidateSet('Build', 'Test', 'Demo', 'Clean')]
+    [ValidateSet('Build', 'Test', 'Demo', 'Bench', 'Clean')]
     [string[]] $Task = 'Build',
 
     [ValidateSet('Debug', 'Release')]
@@ -136,6 +138,16 @@ function Invoke-Demo {
     if ($LASTEXITCODE -ne 0) { throw "The demo audit failed (exit code $LASTEXITCODE)." }
 }
 
+function Invoke-Bench {
+    $project = Join-Path $root 'tests/InductionHazard.Benchmarks'
+    $artifacts = Join-Path $out 'bench'
+    Invoke-Native 'Building the benchmarks' { dotnet build $project -c Release --nologo -v quiet }
+    Invoke-Native 'The benchmarks' { dotnet run --project $project -c Release --no-build -- --filter '*' --job short --artifacts $artifacts }
+    foreach ($loader in 'baseline', 'capture') {
+        Invoke-Native "The memory run ($loader)" { dotnet run --project $project -c Release --no-build -- memory $loader }
+    }
+}
+
 function Invoke-Clean {
     if (Test-Path $out) { Remove-Item $out -Recurse -Force }
     Get-ChildItem $root -Include bin, obj -Recurse -Directory | Remove-Item -Recurse -Force
@@ -146,6 +158,7 @@ foreach ($t in $Task) {
         'Build' { Invoke-Build }
         'Test' { Invoke-Test }
         'Demo' { Invoke-Demo }
+        'Bench' { Invoke-Bench }
         'Clean' { Invoke-Clean }
     }
 }
