@@ -186,7 +186,7 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $a[0].GapVoltageVolts | Should -BeGreaterThan (2 * $a[1].GapVoltageVolts)
             $a[2].PeakCurrentAmperes | Should -BeGreaterThan 0
             $a.Verdict | Should -Not -Contain 'Indeterminate'
-            $a[0].Response.Orientation | Should -BeLike 'facing the largest flux change*'
+            $a[0].Orientation | Should -BeLike 'facing the largest flux change*'
         }
     }
 

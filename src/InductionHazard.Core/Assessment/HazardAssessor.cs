@@ -52,6 +52,7 @@ public static class HazardAssessor
             ItemName = response.ItemName,
             RowNumber = rowNumber,
             SourceName = response.SourceName,
+            Orientation = response.Orientation,
             Verdict = verdict,
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,

@@ -19,6 +19,9 @@ public sealed class InductionAssessment
     /// <summary>The source's name.</summary>
     public string SourceName { get; init; } = string.Empty;
 
+    /// <summary>How the item's loop was oriented: as given, or facing the largest flux change (with the normal).</summary>
+    public string Orientation { get; init; } = string.Empty;
+
     /// <summary>The overall verdict.</summary>
     public Verdict Verdict { get; init; }
 
