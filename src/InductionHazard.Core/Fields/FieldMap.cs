@@ -64,11 +64,7 @@ public sealed class FieldMap : IFieldGeometry
             throw new DataFileException(path, null, "the file does not exist", ErrorId);
         }
 
-        var config = new CsvConfiguration(CultureInfo.InvariantCulture)
-        {
-            HasHeaderRecord = false, DetectDelimiter = true, DetectDelimiterValues = new[] { ",", ";", "\t" },
-            IgnoreBlankLines = true, BadDataFound = null, MissingFieldFound = null, TrimOptions = TrimOptions.Trim,
-        };
+        CsvConfiguration config = DelimitedText.Configuration();
         using var reader = new StreamReader(path);
         using var parser = new CsvParser(reader, config);
         if (!parser.Read())

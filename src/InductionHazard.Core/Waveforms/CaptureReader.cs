@@ -37,16 +37,7 @@ public static class CaptureReader
 
         var times = new List<double>(1024);
         var values = new List<double>(1024);
-        var config = new CsvConfiguration(CultureInfo.InvariantCulture)
-        {
-            HasHeaderRecord = false,
-            DetectDelimiter = true,
-            DetectDelimiterValues = new[] { ",", ";", "\t" },
-            IgnoreBlankLines = true,
-            BadDataFound = null,
-            MissingFieldFound = null,
-            TrimOptions = TrimOptions.Trim,
-        };
+        CsvConfiguration config = DelimitedText.Configuration();
         using var reader = new StreamReader(path);
         using var parser = new CsvParser(reader, config);
         string[]? header = null;
