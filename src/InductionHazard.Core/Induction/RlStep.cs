@@ -11,7 +11,10 @@ namespace InductionHazard.Induction;
 /// </summary>
 internal static class RlStep
 {
-    private static readonly GaussLegendreRule Rule = new(0, 1, 8);
+    /// <summary>The 8-point Gauss-Legendre rule on [0, 1], read once (the library's getters copy the arrays on every read).</summary>
+    private static readonly double[] Nodes = new GaussLegendreRule(0, 1, 8).Abscissas;
+
+    private static readonly double[] Weights = new GaussLegendreRule(0, 1, 8).Weights;
 
     /// <summary>The current after s seconds.</summary>
     public static double Current(double l, double r, double i0, double e0, double slope, double s)
@@ -27,10 +30,10 @@ internal static class RlStep
     public static double Energy(double l, double r, double i0, double e0, double slope, double h)
     {
         double sum = 0;
-        for (int k = 0; k < Rule.Order; k++)
+        for (int k = 0; k < Nodes.Length; k++)
         {
-            double i = Current(l, r, i0, e0, slope, Rule.Abscissas[k] * h);
-            sum += Rule.Weights[k] * i * i;
+            double i = Current(l, r, i0, e0, slope, Nodes[k] * h);
+            sum += Weights[k] * i * i;
         }
 
         return r * sum * h;

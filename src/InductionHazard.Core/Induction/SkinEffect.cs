@@ -24,7 +24,8 @@ public static class SkinEffect
     /// R / R_dc = (x/2)(ber x bei' x - bei x ber' x) / (ber'^2 x + bei'^2 x),
     /// omega L_int / R_dc = (x/2)(ber x ber' x + bei x bei' x) / (ber'^2 x + bei'^2 x).
     /// Tends to 1 + j x^2/8 for a &lt;&lt; delta (the d.c. internal inductance mu0/(8 pi) per metre) and to
-    /// a/(2 delta) + 1/4 + j a/(2 delta) for a &gt;&gt; delta. Kelvin functions from MathNet.Numerics.
+    /// a/(2 delta) + 1/4 + j a/(2 delta) for a &gt;&gt; delta. Kelvin functions by their power series up to x = 8
+    /// (<see cref="KelvinSeries"/>), from MathNet.Numerics above.
     /// </summary>
     public static Complex RoundWireImpedanceRatio(double wireRadiusMeters, double skinDepthMeters)
     {
@@ -41,10 +42,9 @@ public static class SkinEffect
             return new Complex(1.0, x * x / 8);
         }
 
-        double ber = SpecialFunctions.KelvinBer(x);
-        double bei = SpecialFunctions.KelvinBei(x);
-        double berP = SpecialFunctions.KelvinBerPrime(x);
-        double beiP = SpecialFunctions.KelvinBeiPrime(x);
+        (double ber, double bei, double berP, double beiP) = x <= KelvinSeries.MaxX
+            ? KelvinSeries.Evaluate(x)
+            : (SpecialFunctions.KelvinBer(x), SpecialFunctions.KelvinBei(x), SpecialFunctions.KelvinBerPrime(x), SpecialFunctions.KelvinBeiPrime(x));
         double denominator = (berP * berP) + (beiP * beiP);
         return new Complex(
             x / 2 * ((ber * beiP) - (bei * berP)) / denominator,

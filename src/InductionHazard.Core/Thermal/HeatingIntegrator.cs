@@ -20,6 +20,9 @@ public static class HeatingIntegrator
     /// </summary>
     public const int DefaultMaxSteps = 200_000;
 
+    /// <summary>The longest step by default, s: 10 minutes.</summary>
+    public const double DefaultLongestStepSeconds = 600;
+
     /// <summary>
     /// Integrates from t0 to t1 and appends samples. Stops early, and says so, when the temperature passes
     /// <paramref name="stopAboveCelsius"/> (the melting point: a molten loop opens and the model ends there), when the
@@ -33,7 +36,7 @@ public static class HeatingIntegrator
     /// <param name="samples">Receives a sample at each accepted step.</param>
     /// <param name="cancellation">Stops the run.</param>
     /// <param name="maxStepKelvin">The largest temperature change in one step, K.</param>
-    /// <param name="maxStepSeconds">The largest step, s (default: a tenth of the cooling time constant).</param>
+    /// <param name="maxStepSeconds">The largest step, s (default: <see cref="DefaultLongestStepSeconds"/>).</param>
     /// <param name="stopAboveCelsius">The run stops at the first step that ends above this temperature, °C.</param>
     /// <param name="maxSteps">The step budget.</param>
     public static HeatingIntegration Run(
@@ -52,7 +55,10 @@ public static class HeatingIntegrator
         double t = t0;
         double temperature = celsius0;
         double energy = 0;
-        double cap = maxStepSeconds ?? Math.Min(model.TimeConstantSeconds(celsius0) / 10, 600);
+        // Each step is the exact solution of the linearised equation with the power at its mean: accurate however
+        // long while the temperature moves little, so the step is bounded by the temperature change (maxStepKelvin),
+        // not by the cooling time constant; 10 min at most keeps the history readable for the contact checks.
+        double cap = maxStepSeconds ?? DefaultLongestStepSeconds;
         if (!(cap > 0) || double.IsInfinity(cap))
         {
             cap = Math.Max((t1 - t0) / 1000, 1e-9);

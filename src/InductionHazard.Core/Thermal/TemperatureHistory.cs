@@ -50,39 +50,151 @@ public static class TemperatureHistory
     /// history stays at or above L over some interval of that length, °C. NaN when the history is shorter.
     /// A contact of that duration at that moment sees at least L throughout.
     /// </summary>
-    public static double SustainedFor(IReadOnlyList<HeatingSample> history, double seconds)
+    /// <remarks>
+    /// Exact for the piecewise-linear history, in one sweep: it is the largest, over window starts s, of the
+    /// window's minimum min(T(s), T(s + d), the samples inside). Between the starts where s or s + d meets a
+    /// sample, T(s) and T(s + d) are linear and the samples inside fixed, so the largest minimum lies at an end of
+    /// that stretch or where the two lines cross; the samples inside are kept in a monotonic queue.
+    /// </remarks>
+    public static double SustainedFor(IReadOnlyList<HeatingSample> history, double seconds) =>
+        SustainedFor(history, new[] { seconds })[0];
+
+    /// <summary>The highest temperature held for each of several durations, °C (one copy of the history, one sweep each).</summary>
+    public static double[] SustainedFor(IReadOnlyList<HeatingSample> history, IReadOnlyList<double> durations)
     {
-        if (history.Count < 2 || history[history.Count - 1].TimeSeconds - history[0].TimeSeconds < seconds)
+        int n = history.Count;
+        var times = new double[n];
+        var temps = new double[n];
+        for (int k = 0; k < n; k++)
+        {
+            times[k] = history[k].TimeSeconds;
+            temps[k] = history[k].TemperatureCelsius;
+        }
+
+        var result = new double[durations.Count];
+        var queue = new int[n];
+        for (int k = 0; k < result.Length; k++)
+        {
+            result[k] = Sustained(times, temps, durations[k], queue);
+        }
+
+        return result;
+    }
+
+    private static double Sustained(double[] times, double[] temps, double seconds, int[] queue)
+    {
+        int n = times.Length;
+        if (n < 2 || times[n - 1] - times[0] < seconds)
         {
             return double.NaN;
         }
 
-        double low = double.PositiveInfinity, high = double.NegativeInfinity;
-        foreach (HeatingSample s in history)
+        double first = times[0], lastStart = times[n - 1] - seconds;
+        if (seconds <= 0)
         {
-            low = Math.Min(low, s.TemperatureCelsius);
-            high = Math.Max(high, s.TemperatureCelsius);
-        }
-
-        if (LongestRunAtOrAbove(history, high) >= seconds)
-        {
-            return high;
-        }
-
-        for (int iteration = 0; iteration < 60 && high - low > 1e-9 * Math.Max(1, Math.Abs(high)); iteration++)
-        {
-            double mid = 0.5 * (low + high);
-            if (LongestRunAtOrAbove(history, mid) >= seconds)
+            double peak = double.NegativeInfinity;
+            foreach (double t in temps)
             {
-                low = mid;
+                peak = double.IsNaN(t) ? double.NaN : Math.Max(peak, t);
             }
-            else
-            {
-                high = mid;
-            }
+
+            return peak;
         }
 
-        return low;
+        // The window starts where s or s + d meets a sample: two sorted sequences, merged as they are read.
+        int head = 0, tail = 0;
+        int j = 0, m = 0, pushed = 0, forward = 1, backward = 0;
+        double a = first, best = double.NegativeInfinity;
+        while (true)
+        {
+            // The next event after a: the next sample time, or the next sample time less d, within the starts.
+            while (forward < n && times[forward] <= a)
+            {
+                forward++;
+            }
+
+            while (backward < n && times[backward] - seconds <= a)
+            {
+                backward++;
+            }
+
+            double next = lastStart;
+            if (forward < n)
+            {
+                next = Math.Min(next, times[forward]);
+            }
+
+            if (backward < n)
+            {
+                next = Math.Min(next, times[backward] - seconds);
+            }
+
+            double b = Math.Max(a, next);
+            double mid = 0.5 * (a + b);
+            while (j + 2 < n && times[j + 1] <= mid)
+            {
+                j++;
+            }
+
+            while (m + 2 < n && times[m + 1] <= mid + seconds)
+            {
+                m++;
+            }
+
+            // The samples strictly inside the window: indices j+1 .. m, their minimum at the queue's head.
+            while (pushed <= m)
+            {
+                while (tail > head && temps[queue[tail - 1]] >= temps[pushed])
+                {
+                    tail--;
+                }
+
+                queue[tail++] = pushed++;
+            }
+
+            while (tail > head && queue[head] <= j)
+            {
+                head++;
+            }
+
+            double interior = tail > head ? temps[queue[head]] : double.PositiveInfinity;
+            double startA = Linear(times, temps, j, a), startB = Linear(times, temps, j, b);
+            double endA = Linear(times, temps, m, a + seconds), endB = Linear(times, temps, m, b + seconds);
+            best = Math.Max(best, Math.Min(interior, Math.Max(Math.Min(startA, endA), Math.Min(startB, endB))));
+            double da = startA - endA, db = startB - endB;
+            if (da * db < 0)
+            {
+                // The two lines cross inside: there the window's minimum of its two ends is largest.
+                double f = da / (da - db);
+                best = Math.Max(best, Math.Min(interior, startA + (f * (startB - startA))));
+            }
+
+            if (double.IsNaN(best))
+            {
+                return double.NaN;
+            }
+
+            if (b >= lastStart)
+            {
+                break;
+            }
+
+            a = b;
+        }
+
+        return best;
+    }
+
+    /// <summary>The history's value at t on the piece from sample k to k + 1 (held at the ends outside it).</summary>
+    private static double Linear(double[] times, double[] temps, int k, double t)
+    {
+        double ta = times[k], tb = times[k + 1];
+        if (t <= ta || tb <= ta)
+        {
+            return t <= ta ? temps[k] : temps[k + 1];
+        }
+
+        return t >= tb ? temps[k + 1] : temps[k] + ((temps[k + 1] - temps[k]) * (t - ta) / (tb - ta));
     }
 
     /// <summary>The longest continuous time the history spends at or above a level, s.</summary>

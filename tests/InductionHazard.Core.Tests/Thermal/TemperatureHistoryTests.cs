@@ -30,4 +30,61 @@ public class TemperatureHistoryTests
         Assert.Null(TemperatureHistory.FirstReaching(Triangle, 71));
         Assert.Equal(100, TemperatureHistory.LongestRunAtOrAbove(Triangle, 50), 12);
     }
+
+    /// <summary>
+    /// An independent definition of the same quantity: bisection on the level L for the longest run at or above L
+    /// (the largest L whose longest run is at least the duration).
+    /// </summary>
+    private static double ByBisection(HeatingSample[] history, double seconds)
+    {
+        double low = double.PositiveInfinity, high = double.NegativeInfinity;
+        foreach (HeatingSample s in history)
+        {
+            low = System.Math.Min(low, s.TemperatureCelsius);
+            high = System.Math.Max(high, s.TemperatureCelsius);
+        }
+
+        if (TemperatureHistory.LongestRunAtOrAbove(history, high) >= seconds)
+        {
+            return high;
+        }
+
+        for (int i = 0; i < 200 && high - low > 1e-12; i++)
+        {
+            double mid = 0.5 * (low + high);
+            if (TemperatureHistory.LongestRunAtOrAbove(history, mid) >= seconds)
+            {
+                low = mid;
+            }
+            else
+            {
+                high = mid;
+            }
+        }
+
+        return low;
+    }
+
+    [Fact]
+    public void TheOneSweepAnswerEqualsBisectionOnTheLongestRunForRandomHistories()
+    {
+        var random = new System.Random(20261201);
+        for (int trial = 0; trial < 300; trial++)
+        {
+            int n = random.Next(2, 40);
+            var history = new HeatingSample[n];
+            double t = 0;
+            for (int k = 0; k < n; k++)
+            {
+                t += k == 0 ? 0 : 0.1 + (random.NextDouble() * 10);
+                history[k] = new HeatingSample(t, 30 + (random.NextDouble() * 40), 0);
+            }
+
+            foreach (double fraction in new[] { 0.0, 0.01, 0.1, 0.37, 0.8, 1.0 })
+            {
+                double d = fraction * t;
+                Within.Absolute(ByBisection(history, d), TemperatureHistory.SustainedFor(history, d), 1e-9, "trial " + trial + ", " + d + " s");
+            }
+        }
+    }
 }

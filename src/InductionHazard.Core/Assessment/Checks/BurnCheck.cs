@@ -63,9 +63,12 @@ public sealed class BurnCheck : IHazardCheck
 
         // The contact-time threshold: the worst contact duration over the curve's range.
         (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
-        foreach (double d in Durations(curve, span))
+        double[] durations = Durations(curve, span).ToArray();
+        double[] sustained = TemperatureHistory.SustainedFor(history, durations);
+        for (int k = 0; k < durations.Length; k++)
         {
-            double held = TemperatureHistory.SustainedFor(history, d);
+            double d = durations[k];
+            double held = sustained[k];
             double threshold = curve.CelsiusFor(d);
             double m = RiseMargin(threshold, held, start);
             if (double.IsNaN(m) || m < worst.margin)
