@@ -6,8 +6,8 @@ namespace InductionHazard.Waveforms;
 
 /// <summary>
 /// Times at which to look at a set of drives to find their extremes: every breakpoint, and between breakpoints
-/// steps no longer than each curved drive's <see cref="FieldWaveform.MaxStepSeconds"/>; one period of a drive
-/// that runs on. Bounded in number, so a long capture is thinned rather than read point by point twice.
+/// steps no longer than each curved drive's <see cref="FieldWaveform.MaxStepSeconds"/> (the midpoints alone when
+/// every drive is piecewise linear); two periods of a drive that runs on. Bounded in number, so a long capture is thinned rather than read point by point twice.
 /// </summary>
 public static class DriveSampling
 {
@@ -33,9 +33,30 @@ public static class DriveSampling
 
         double step = drives.Min(d => d.MaxStepSeconds);
         double span = end - start;
-        if (double.IsInfinity(step) || span / step > MaxTimes)
+        times.Add(start);
+        times.Add(end);
+        if (double.IsInfinity(step))
         {
-            step = span / Math.Min(MaxTimes, Math.Max(1000, 4 * times.Count));
+            // Piecewise-linear drives: values are extreme at breakpoints and rates constant between them, so the
+            // breakpoints and the midpoints between them are every time that matters.
+            times.Sort();
+            double[] corners = times.Distinct().ToArray();
+            var all = new List<double>(2 * corners.Length);
+            for (int k = 0; k < corners.Length; k++)
+            {
+                all.Add(corners[k]);
+                if (k + 1 < corners.Length)
+                {
+                    all.Add(0.5 * (corners[k] + corners[k + 1]));
+                }
+            }
+
+            return all.ToArray();
+        }
+
+        if (span / step > MaxTimes)
+        {
+            step = span / MaxTimes;
         }
 
         if (step > 0 && Quantities.Finite.Is(step))
@@ -46,7 +67,6 @@ public static class DriveSampling
             }
         }
 
-        times.Add(end);
         times.Sort();
         return times.Distinct().ToArray();
     }
