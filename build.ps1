@@ -9,6 +9,7 @@
            PowerShell, and ends with one line: "N passed, N failed" (both suites counted).
     Demo   builds and runs the example audit of the invented site (examples/Invoke-SiteAudit.ps1), which
            writes its report under out/demo.
+    Validation  regenerates docs/validation.md from the tests' [Validates] tags (the test run checks it).
     Bench  runs the engine's benchmarks (tests/InductionHazard.Benchmarks, BenchmarkDotNet, short jobs) and the
            peak-memory comparison of loading a 1,000,000-row capture; results under out/bench.
     Clean  removes out/ and the bin and obj folders.
@@ -19,7 +20,7 @@
 [CmdletBinding()]
 param(
     [Parameter(Position = 0)]
-    [ValidateSet('Build', 'Test', 'Demo', 'Bench', 'Clean')]
+    [ValidateSet('Build', 'Test', 'Demo', 'Bench', 'Validation', 'Clean')]
     [string[]] $Task = 'Build',
 
     [ValidateSet('Debug', 'Release')]
@@ -148,6 +149,15 @@ function Invoke-Bench {
     }
 }
 
+function Invoke-Validation {
+    $env:INDUCTIONHAZARD_WRITE_VALIDATION = '1'
+    try {
+        Invoke-Native 'Writing docs/validation.md' { dotnet test (Join-Path $root 'tests/InductionHazard.Core.Tests') -c $Configuration --nologo --filter 'FullyQualifiedName~ValidationTableTests' }
+    }
+    finally { Remove-Item Env:INDUCTIONHAZARD_WRITE_VALIDATION }
+    Write-Host 'docs/validation.md regenerated from the tagged tests.'
+}
+
 function Invoke-Clean {
     if (Test-Path $out) { Remove-Item $out -Recurse -Force }
     Get-ChildItem $root -Include bin, obj -Recurse -Directory | Remove-Item -Recurse -Force
@@ -159,6 +169,7 @@ foreach ($t in $Task) {
         'Test' { Invoke-Test }
         'Demo' { Invoke-Demo }
         'Bench' { Invoke-Bench }
+        'Validation' { Invoke-Validation }
         'Clean' { Invoke-Clean }
     }
 }

@@ -7,6 +7,7 @@ BeforeAll {
 }
 
 Describe 'Get-FieldStrength' {
+    # Validates: the cmdlet's peak B and dB/dt | Ampere's law | 1e-4, 1e-3
     It 'gives a line current''s field by Ampere''s law at each point, in order' {
         $s = @(Get-FieldStrength -Source $line -Position '100 mm,0,0', '0,400 mm,0')
         $s.Count | Should -Be 2

@@ -7,6 +7,7 @@ BeforeAll {
 }
 
 Describe 'Get-InductionResponse' {
+    # Validates: emf of a split ring from the cmdlet | Faraday's law | 1e-12
     It 'gives the emf amplitude omega B A of a loop facing a sinusoidal uniform field (Faraday)' {
         $field = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
         $r = Get-InductionResponse -Item $split -Source $field

@@ -58,6 +58,7 @@ Describe 'New-FieldWaveform' {
         { New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' -PhaseDegrees $Given } | Should -Throw -ExpectedMessage '*PhaseDegrees*'
     }
 
+    # Validates: kappa through the cmdlet | IEC 60909-0 | 2 %
     It 'makes an IEC 60909 fault whose worst first peak is kappa sqrt2 Ik''' {
         $f = New-FieldWaveform -Fault -Current '40 kA' -XOverR 14 -Frequency '50 Hz' -ClearingTime '200 ms'
         $kappa = 1.02 + 0.98 * [math]::Exp(-3 / 14)

@@ -191,6 +191,7 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
     }
 
     Context 'limits from published standards' {
+        # Validates: Shock margin 1 through the cmdlets | IEC 61140 | 1e-6
         It 'puts a split ring whose gap sees 50 V rms exactly at the extra-low-voltage limit (IEC 61140)' {
             # 50 V rms across the gap: B = 50 sqrt2 / (omega A) for a 65 mm ring at 50 Hz.
             $area = [math]::PI * 0.065 * 0.065 / 4

@@ -10,6 +10,7 @@ public class HazardAssessorTests
 {
     private static InductionAssessment Assess(InductionResponse r) => HazardAssessor.Assess(r, HazardPolicy.Default);
 
+    [Validates("Shock margin 1 at 50 V rms", "IEC 61140 / IEC 60364-4-41", "1e-9")]
     [Theory]
     [InlineData(1.0, Verdict.Caution)]
     [InlineData(0.5, Verdict.Clear)]
@@ -26,6 +27,7 @@ public class HazardAssessorTests
         Assert.Null(a.BurnMargin);
     }
 
+    [Validates("Shock margin 2 at 60 V d.c.", "IEC 61140 (120 V ripple-free d.c.)", "1e-9")]
     [Fact]
     public void AUnidirectionalPulseIsJudgedAgainstTheDirectCurrentLimit()
     {

@@ -35,6 +35,7 @@ public class CircularCoilTests
         yield return new object[] { 0.2, 0.0 };
     }
 
+    [Validates("coil field at 20 points inside and outside the winding", "Biot-Savart law summed over 200,000 pieces (independent)", "1e-7")]
     [Theory]
     [MemberData(nameof(Points))]
     public void TheOffAxisFieldMatchesADirectBiotSavartIntegration(double rho, double z)
@@ -47,6 +48,7 @@ public class CircularCoilTests
         Assert.True(error < 1e-7, "field at rho " + rho + ", z " + z + ": off by " + error.ToString("G3", System.Globalization.CultureInfo.InvariantCulture));
     }
 
+    [Validates("mu0 N I a^2 / (2 (a^2 + z^2)^1.5)", "textbook closed form", "1e-12")]
     [Theory]
     [InlineData(0.0)]
     [InlineData(0.05)]
@@ -65,6 +67,7 @@ public class CircularCoilTests
         Assert.Throws<FieldEvaluationException>(() => Coil.FieldPerUnitDrive(new Vector3D(A, 0, 0)));
     }
 
+    [Validates("disc quadrature of the coil field against M = mu0 sqrt(ab)[(2/k - k)K - (2/k)E]", "Maxwell; Grover (1946), K and E by Simpson's rule", "1e-6")]
     [Theory]
     [InlineData(0.02, 0.0)]
     [InlineData(0.05, 0.03)]
@@ -81,6 +84,7 @@ public class CircularCoilTests
         Within.Relative(maxwell, flux, 1e-6, "mutual inductance per turn");
     }
 
+    [Validates("K(m), E(m) by the AGM", "Abramowitz and Stegun 17.3, by Simpson's rule", "1e-9")]
     [Theory]
     [InlineData(0.0)]
     [InlineData(0.3)]

@@ -12,6 +12,7 @@ public class DipoleAndMapTests
 {
     private const double Mu0 = 4e-7 * Math.PI;
 
+    [Validates("coil far field against the dipole's; axial 2 mu0 m / (4 pi r^3)", "Jackson 5.56", "3 (a/r)^2; 1e-12")]
     [Theory]
     [InlineData(2.0)]
     [InlineData(5.0)]
@@ -58,6 +59,7 @@ public class DipoleAndMapTests
         return path;
     }
 
+    [Validates("trilinear interpolation of a linear field", "exactness of trilinear interpolation", "1e-12")]
     [Fact]
     public void AMapReproducesAFieldThatIsLinearInPositionAndRefusesPointsOutside()
     {

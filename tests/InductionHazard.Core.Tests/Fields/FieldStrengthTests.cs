@@ -10,6 +10,7 @@ public class FieldStrengthTests
 {
     private const double Mu0 = 4e-7 * Math.PI;
 
+    [Validates("peak", "B", "= mu0 ip / (2 pi rho)")]
     [Fact]
     public void AFaultOnALineGivesItsFirstPeakOverTwoPiRho()
     {
@@ -22,6 +23,7 @@ public class FieldStrengthTests
         Assert.Equal(50, s.FrequencyHertz);
     }
 
+    [Validates("1/r^2 fall-off of a balanced set", "superposition", "5 %")]
     [Fact]
     public void AFlatThreePhaseSetsFieldCancelsFarAway()
     {

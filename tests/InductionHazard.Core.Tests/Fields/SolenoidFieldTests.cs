@@ -9,6 +9,7 @@ public class SolenoidFieldTests
 {
     private const double Mu0 = 4e-7 * Math.PI;
 
+    [Validates("centre field of a 4 m solenoid", "Ampere's law, long-solenoid limit", "1e-4")]
     [Fact]
     public void ALongSolenoidsCentreFieldIsMu0NIOverL()
     {
@@ -20,6 +21,7 @@ public class SolenoidFieldTests
         Within.Absolute(0, s.FieldPerUnitDrive(new Vector3D(0.01, 0, 0)).X, 1e-9, "no radial field at the centre plane");
     }
 
+    [Validates("loop quadrature against the on-axis closed form", "textbook closed form", "1e-7")]
     [Theory]
     [InlineData(0.0)]
     [InlineData(0.08)]

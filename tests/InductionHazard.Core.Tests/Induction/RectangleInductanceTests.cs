@@ -39,6 +39,7 @@ public class RectangleInductanceTests
     private static double Neumann(double a, double b, double g) =>
         (2 * ParallelFilaments(a, g)) + (2 * ParallelFilaments(b, g)) - (2 * ParallelFilaments(a, b)) - (2 * ParallelFilaments(b, a));
 
+    [Validates("rectangle L against Neumann's integrals over the sides; against Grover's truncated formula", "Neumann (independent); Grover (1946)", "1e-4; 8 rho/a")]
     [Theory]
     [InlineData(0.4, 0.3, 0.005)]
     [InlineData(0.2, 0.2, 0.001)]
@@ -55,6 +56,7 @@ public class RectangleInductanceTests
         Within.Relative(truncated, grover, 8 * wireRadius / Math.Min(a, b), "against the truncated formula");
     }
 
+    [Validates("mu0 h ln(b/a) / (2 pi)", "Ampere's law integrated over the loop", "1e-7")]
     [Fact]
     public void ARectangleCoplanarWithALongWireLinksMu0HLnBOverAOverTwoPi()
     {

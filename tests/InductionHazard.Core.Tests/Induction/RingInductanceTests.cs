@@ -10,6 +10,7 @@ public class RingInductanceTests
 {
     private const double Mu0 = 4e-7 * Math.PI;
 
+    [Validates("L = mu0 R (ln(8R/a) - 7/4)", "Grover, Inductance Calculations (1946)", "1e-12")]
     [Theory]
     [InlineData(0.02, 0.002)]
     [InlineData(0.065, 0.004)]
@@ -30,6 +31,7 @@ public class RingInductanceTests
         Within.Relative(Mu0 * 0.01 * (Math.Log(80) - 2), RingInductance.ExternalHenries(0.01, 0.001), 1e-12, "external L");
     }
 
+    [Validates("thin-ring L against the mutual inductance of two filaments one GMD apart", "Maxwell's GMD method; Neumann's formula by independent quadrature", "2e-4")]
     [Theory]
     [InlineData(0.1, 0.0005)]
     [InlineData(0.01, 0.0002)]
@@ -52,6 +54,7 @@ public class RingInductanceTests
         Within.Relative(neumann, RingInductance.UniformCurrentHenries(r, gmd), 2e-4, "L from the thin-ring formula against Neumann's integral");
     }
 
+    [Validates("GMD 0.2235 (w + t); thin-strip limit e^(-3/2)", "Grover (1946)", "2e-3")]
     [Fact]
     public void ABandUsesTheGeometricMeanDistanceOfItsSection()
     {

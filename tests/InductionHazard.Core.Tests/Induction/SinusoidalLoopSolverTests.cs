@@ -9,6 +9,7 @@ namespace InductionHazard.Tests.Induction;
 
 public class SinusoidalLoopSolverTests
 {
+    [Validates("|I| = |E|/|Z|, i(t), energy |I|^2 Re Z / 2", "phasor analysis", "1e-12, 1e-9")]
     [Fact]
     public void TheCurrentIsThePhasorQuotientOfEmfAndImpedance()
     {
@@ -26,6 +27,7 @@ public class SinusoidalLoopSolverTests
         }
     }
 
+    [Validates("T(t) = Ta + (P/hA)(1 - e^(-t/tau))", "Newton's law of cooling", "1e-4")]
     [Fact]
     public void HeatingApproachesNewtonsSteadyState()
     {

@@ -16,6 +16,7 @@ public class TransientLoopSolverTests
     private static TransientLoopSolver FixedResistance(double maxStep = double.PositiveInfinity) =>
         new(L, _ => R, new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0))) { MaxStepSeconds = maxStep };
 
+    [Validates("i(t) = (e/R)(1 - exp(-tR/L))", "RL circuit theory (closed form)", "1e-9")]
     [Fact]
     public void ARampGivesTheExponentialRiseOfAnRlCircuit()
     {
@@ -31,6 +32,7 @@ public class TransientLoopSolverTests
         Within.Relative(e / R * (1 - Math.Exp(-20)), run.PeakCurrentAmperes, 1e-9, "peak current at the end of the ramp");
     }
 
+    [Validates("exponential decay after the ramp", "RL circuit theory", "1e-8")]
     [Fact]
     public void AfterTheRampTheCurrentDecaysWithTimeConstantLOverR()
     {
@@ -43,6 +45,7 @@ public class TransientLoopSolverTests
         }
     }
 
+    [Validates("peak current against Delta Phi / L", "inductive limit of an RL circuit", "1e-3")]
     [Fact]
     public void ARampMuchFasterThanLOverRDrivesTheFluxChangeOverL()
     {
@@ -53,6 +56,7 @@ public class TransientLoopSolverTests
         Assert.True(run.PeakCurrentAmperes < 0.01 * e / R, "the naive e/R overstates the current a thousandfold");
     }
 
+    [Validates("energy balance, (e^2/R)(T - tau(1 - e^(-T/tau)))", "RL circuit theory", "1e-9")]
     [Fact]
     public void EnergyDissipatedEqualsEnergyDeliveredByTheEmf()
     {
@@ -64,6 +68,7 @@ public class TransientLoopSolverTests
         Within.Relative(delivered, run.EnergyJoules, 1e-9, "energy dissipated");
     }
 
+    [Validates("stepped solution against E/sqrt(R^2 + (wL)^2)", "phasor analysis", "2e-3")]
     [Fact]
     public void ASinusoidalEmfSettlesToThePhasorAmplitude()
     {

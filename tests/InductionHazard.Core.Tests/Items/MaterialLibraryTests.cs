@@ -49,6 +49,7 @@ public class MaterialLibraryTests
         }
     }
 
+    [Validates("rho20 1.7241e-8 ohm m, alpha 0.00393 /K", "IEC 60028", "1e-4")]
     [Fact]
     public void CopperIsTheInternationalAnnealedCopperStandard()
     {

@@ -8,6 +8,7 @@ public class QuantityParserTests
 {
     // Conversions follow the SI prefixes and the definitions of the gauss (1 G = 1e-4 T) and the Celsius scale
     // (T/K = t/°C + 273.15): SI Brochure, 9th edition (2019).
+    [Validates("unit conversions (prefixes, gauss, Celsius, 1 rad = 180/pi degrees)", "SI Brochure, 9th edition", "1e-12")]
     [Theory]
     [InlineData("20 mm", QuantityKind.Length, 0.02)]
     [InlineData("20mm", QuantityKind.Length, 0.02)]

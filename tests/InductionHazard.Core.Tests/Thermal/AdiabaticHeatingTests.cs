@@ -11,6 +11,7 @@ public class AdiabaticHeatingTests
     private const double CopperQc = 3.45e6, CopperBeta = 234.5, CopperRho = 1.7241e-8;
     private const double AluminiumQc = 2.5e6, AluminiumBeta = 228, AluminiumRho = 2.8264e-8;
 
+    [Validates("k = 115, 143, 159, 138, 228", "IEC 60364-4-43 table 43A; IEC 60364-5-54 table A.54", "±1")]
     [Theory]
     [InlineData(70, 160, 115)]   // PVC-insulated copper, IEC 60364-4-43 table 43A
     [InlineData(90, 250, 143)]   // XLPE-insulated copper, IEC 60364-4-43 table 43A
@@ -23,6 +24,7 @@ public class AdiabaticHeatingTests
         Within.Absolute(tabulated, k, 1.0, "k of copper " + initial + " -> " + final + " °C");
     }
 
+    [Validates("k = 76, 94", "IEC 60364-4-43 table 43A", "±1")]
     [Theory]
     [InlineData(70, 160, 76)]    // PVC-insulated aluminium, IEC 60364-4-43 table 43A
     [InlineData(90, 250, 94)]    // XLPE-insulated aluminium, IEC 60364-4-43 table 43A
@@ -32,6 +34,7 @@ public class AdiabaticHeatingTests
         Within.Absolute(tabulated, k, 1.0, "k of aluminium " + initial + " -> " + final + " °C");
     }
 
+    [Validates("lumped heating with rho(T) against I^2 t = k^2 S^2, 30 -> 200 °C", "IEC 60949 / IEC 60364-5-54 Annex A", "±0.05 K")]
     [Fact]
     public void TheLumpedModelWithRhoOfTReproducesTheAdiabaticLaw()
     {

@@ -10,6 +10,7 @@ public class HeatingIntegratorTests
     // 1 g of copper-like metal (c = 385 J/(kg K)) with no cooling at all: the case that used to run for ever.
     private static LumpedThermalModel Uncooled() => new(0.001 * 385, 1e-4, new ThermalEnvironment(20, 0, 0));
 
+    [Validates("time to melting of an uncooled item, m c (Tm - T0) / P", "energy balance (first law)", "1 %")]
     [Fact]
     public void AnUncooledItemStopsAtItsMeltingPoint()
     {

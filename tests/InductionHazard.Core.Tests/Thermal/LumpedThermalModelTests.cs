@@ -6,6 +6,7 @@ namespace InductionHazard.Tests.Thermal;
 
 public class LumpedThermalModelTests
 {
+    [Validates("exponential cooling", "Newton's law of cooling", "1e-12")]
     [Fact]
     public void CoolingFollowsNewtonsLaw()
     {
@@ -28,6 +29,7 @@ public class LumpedThermalModelTests
         Within.Relative(20 + (3.0 * 10 / 0.5), model.Advance(20, 3.0, 10), 1e-12, "dT = P t / (m c)");
     }
 
+    [Validates("eps sigma (T^4 - Ta^4)", "Stefan-Boltzmann law (CODATA sigma)", "1e-12")]
     [Fact]
     public void RadiationAddsTheStefanBoltzmannLoss()
     {

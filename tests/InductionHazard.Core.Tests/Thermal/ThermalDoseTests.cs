@@ -8,6 +8,7 @@ namespace InductionHazard.Tests.Thermal;
 public class ThermalDoseTests
 {
     // Sapareto and Dewey (1984): CEM43 = sum R^(43 - T) dt in minutes, R = 0.5 at or above 43 °C, 0.25 below.
+    [Validates("CEM43 of plateaus", "Sapareto and Dewey (1984)", "1e-12")]
     [Theory]
     [InlineData(43, 10, 10)]
     [InlineData(45, 10, 40)]
@@ -21,6 +22,7 @@ public class ThermalDoseTests
         Within.Relative(expected, ThermalDose.Cem43Minutes(plateau), 1e-12, "CEM43 of the plateau history");
     }
 
+    [Validates("exact integration against fine sampling", "the definition", "1e-6")]
     [Fact]
     public void ALinearRampIsIntegratedExactlyAcrossTheBreakpoint()
     {

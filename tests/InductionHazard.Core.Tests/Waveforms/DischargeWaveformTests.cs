@@ -38,6 +38,7 @@ public class DischargeWaveformTests
         return (peakAt, peak, energy);
     }
 
+    [Validates("first peak and its time, under-, critically and over-damped", "series RLC equations by fourth-order Runge-Kutta (independent)", "1e-5, 1e-4")]
     [Theory]
     [InlineData(4e-3, 6000, 120e-6, 0.04)]   // underdamped
     [InlineData(1e-3, 1000, 100e-6, 0.632455532)]   // critically damped: R = 2 sqrt(L/C)
@@ -50,6 +51,7 @@ public class DischargeWaveformTests
         Within.Relative(at, d.FirstPeakSeconds, 1e-4, d.Damping + " time of the first peak");
     }
 
+    [Validates("C V0^2 / 2 = integral of R i^2 dt", "energy conservation", "1e-4")]
     [Theory]
     [InlineData(4e-3, 6000, 120e-6, 0.04)]
     [InlineData(1e-3, 1000, 100e-6, 2.0)]
@@ -68,6 +70,7 @@ public class DischargeWaveformTests
         Within.Relative(d.StoredEnergyJoules, loss, 1e-4, "energy balance, " + d.Damping);
     }
 
+    [Validates("i_pk e^(-1) one L/R after the peak", "RL circuit theory", "1e-12")]
     [Fact]
     public void ACrowbarTurnsTheRingingIntoAnLOverRDecayAfterTheFirstPeak()
     {

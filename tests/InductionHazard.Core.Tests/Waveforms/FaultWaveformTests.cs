@@ -8,6 +8,7 @@ public class FaultWaveformTests
 {
     private const double Ik = 40e3;
 
+    [Validates("peak / (sqrt2 Ik'') against kappa = 1.02 + 0.98 e^(-3R/X), R/X 0.05 to 1", "IEC 60909-0 (2016) 8.1; the formula's accuracy of about 2 % from memory", "2 %")]
     [Theory]
     [InlineData(0.05)]
     [InlineData(0.1)]
@@ -26,6 +27,7 @@ public class FaultWaveformTests
         Within.Relative(kappa, fault.PeakFactor, 0.02, "peak factor at R/X = " + rOverX);
     }
 
+    [Validates("worst first peak against a 0.1 degree sweep of closing angles", "brute-force search (independent)", "0.1 %")]
     [Theory]
     [InlineData(2.0)]
     [InlineData(10.0)]
@@ -48,6 +50,7 @@ public class FaultWaveformTests
         Within.Relative(best, worst.PeakValue, 1e-3, "worst first peak against a brute-force sweep");
     }
 
+    [Validates("d.c. component -sqrt2 Ik'' sin(psi - phik) e^(-t R omega / X)", "IEC 60909-0; RL circuit theory", "1e-9")]
     [Fact]
     public void TheDcComponentDecaysWithXOverOmegaR()
     {
