@@ -57,6 +57,20 @@ Describe 'Test-InductionHazard' {
         }
     }
 
+    Context 'on several threads' {
+        It 'gives with -ThrottleLimit 4 the same assessments in the same order as a serial run, bad rows included' {
+            $rows = @(Import-Csv $inventoryPath) + @([pscustomobject]@{ Name = 'Bad'; Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' }) + @(Import-Csv $inventoryPath)
+            $serial = @($rows | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable serialErrors)
+            $parallel = @($rows | Test-InductionHazard -Source $pulse -ThrottleLimit 4 -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable parallelErrors)
+            $parallel.Count | Should -Be $serial.Count
+            $parallel.RowNumber | Should -Be $serial.RowNumber
+            $parallel.Verdict | Should -Be $serial.Verdict
+            ($parallel.MinimumMargin | ForEach-Object { "$_" }) | Should -Be ($serial.MinimumMargin | ForEach-Object { "$_" }) -Because "NaN (Indeterminate) compares equal only as text"
+            $parallelErrors.Count | Should -Be $serialErrors.Count
+            $parallelErrors[0].Exception.Message | Should -Be $serialErrors[0].Exception.Message
+        }
+    }
+
     Context 'rows that cannot be assessed' {
         BeforeAll {
             $badPath = Join-Path $PSScriptRoot 'data/inventory-with-bad-rows.csv'

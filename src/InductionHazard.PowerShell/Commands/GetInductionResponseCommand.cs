@@ -9,5 +9,5 @@ namespace InductionHazard.PowerShell.Commands;
 public sealed class GetInductionResponseCommand : ItemPipelineCommand
 {
     /// <inheritdoc />
-    protected override void Process(InductionResponse response, int row) => WriteObject(response);
+    protected override object Compute(InductionResponse response, int row) => response;
 }

@@ -1,7 +1,9 @@
 using System;
 using System.Diagnostics;
 using System.Management.Automation;
+using System.Collections.Generic;
 using System.Threading;
+using System.Threading.Tasks;
 using InductionHazard.Assessment;
 using InductionHazard.Errors;
 using InductionHazard.Fields;
@@ -25,6 +27,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
     private int _row;
     private FieldSource _source = null!;
+    private readonly Queue<Pending> _pending = new();
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
@@ -80,9 +83,6 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Material]
     public ConductorMaterial[]? AdditionalMaterial { get; set; }
 
-    /// <summary>What the command does with one item's response.</summary>
-    protected abstract void Process(InductionResponse response, int row);
-
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
@@ -124,24 +124,74 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         foreach (PSObject input in InputObject)
         {
             _row++;
-            string label = ItemInput.Label(input, _row);
+            int row = _row;
+            string label = ItemInput.Label(input, row);
             ShowProgress(label);
+            Task<(object Result, string Verbose)> work;
             try
             {
-                ConductiveItem item = ItemInput.ToItem(input, _materials, _row);
-                (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label);
-                Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
-                var placement = new Placement(
-                    rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
-                    rowNormal ?? Normal ?? station?.Placement.Normal);
-                var scenario = new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds);
-                InductionResponse response = InductionEngine.Respond(scenario, _cancellation.Token);
-                WriteVerbose(label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
-                Process(response, _row);
+                Scenario scenario = ScenarioOf(input, label, row);
+                CancellationToken token = _cancellation.Token;
+                work = ThrottleLimit > 1
+                    ? Task.Run(() => Solve(scenario, row, label, token), token)
+                    : Task.FromResult(Solve(scenario, row, label, token));
+            }
+            catch (Exception ex) when (ex is not PipelineStoppedException)
+            {
+                var failed = new TaskCompletionSource<(object, string)>();
+                failed.SetException(ex);
+                work = failed.Task;
+            }
+
+            _pending.Enqueue(new Pending(work, input, label));
+            Drain(wait: _pending.Count > 2 * ThrottleLimit);
+        }
+    }
+
+    /// <summary>Items assessed at once on as many threads; results still come out in input order, as a serial run gives them.</summary>
+    [Parameter]
+    [ValidateRange(1, 64)]
+    public int ThrottleLimit { get; set; } = 1;
+
+    /// <summary>What the command makes of one item's response (called on any thread: no writing here).</summary>
+    protected abstract object Compute(InductionResponse response, int row);
+
+    /// <summary>Writes one result to the pipeline (called on the pipeline thread, in input order).</summary>
+    protected virtual void Emit(object result) => WriteObject(result);
+
+    private (object Result, string Verbose) Solve(Scenario scenario, int row, string label, CancellationToken token)
+    {
+        InductionResponse response = InductionEngine.Respond(scenario, token);
+        return (Compute(response, row), label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
+    }
+
+    private Scenario ScenarioOf(PSObject input, string label, int row)
+    {
+        ConductiveItem item = ItemInput.ToItem(input, _materials, row);
+        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label);
+        Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
+        var placement = new Placement(
+            rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
+            rowNormal ?? Normal ?? station?.Placement.Normal);
+        return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds);
+    }
+
+    /// <summary>Writes the finished results at the head of the queue, in order; with <paramref name="wait"/>, waits for the head first.</summary>
+    private void Drain(bool wait)
+    {
+        while (_pending.Count > 0 && (wait || _pending.Peek().Work.IsCompleted))
+        {
+            Pending next = _pending.Dequeue();
+            wait = false;
+            try
+            {
+                (object result, string verbose) = next.Work.GetAwaiter().GetResult();
+                WriteVerbose(verbose);
+                Emit(result);
             }
             catch (InductionHazardException ex)
             {
-                WriteError(ErrorRecords.From(ex, input, label));
+                WriteError(ErrorRecords.From(ex, next.Input, next.Label));
             }
             catch (OperationCanceledException)
             {
@@ -150,13 +200,38 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             catch (Exception ex) when (ErrorRecords.IsRecordFailure(ex))
             {
                 // Whatever one record does, the run goes on: the failure is that record's error, not the pipeline's.
-                WriteError(ErrorRecords.Unexpected(ex, input, label));
+                WriteError(ErrorRecords.Unexpected(ex, next.Input, next.Label));
             }
         }
     }
 
+    /// <summary>One input on its way: its work (done, failed or running) and what names it in errors.</summary>
+    private sealed class Pending
+    {
+        public Pending(Task<(object Result, string Verbose)> work, PSObject input, string label)
+        {
+            Work = work;
+            Input = input;
+            Label = label;
+        }
+
+        public Task<(object Result, string Verbose)> Work { get; }
+
+        public PSObject Input { get; }
+
+        public string Label { get; }
+    }
+
     /// <inheritdoc />
-    protected override void EndProcessing() => CompleteProgress();
+    protected override void EndProcessing()
+    {
+        while (_pending.Count > 0)
+        {
+            Drain(wait: true);
+        }
+
+        CompleteProgress();
+    }
 
     /// <inheritdoc />
     protected override void StopProcessing() => _cancellation.Cancel();

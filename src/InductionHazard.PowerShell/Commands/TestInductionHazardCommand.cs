@@ -10,9 +10,12 @@ namespace InductionHazard.PowerShell.Commands;
 public sealed class TestInductionHazardCommand : ItemPipelineCommand
 {
     /// <inheritdoc />
-    protected override void Process(InductionResponse response, int row)
+    protected override object Compute(InductionResponse response, int row) => HazardAssessor.Assess(response, HazardPolicy.Default, row);
+
+    /// <inheritdoc />
+    protected override void Emit(object result)
     {
-        InductionAssessment assessment = HazardAssessor.Assess(response, HazardPolicy.Default, row);
+        var assessment = (InductionAssessment)result;
         if (assessment.Verdict == Verdict.Indeterminate)
         {
             WriteWarning(assessment.ItemName + ": Indeterminate: " + string.Join("; ", assessment.Reasons));
