@@ -1,0 +1,103 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using CsCheck;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Properties;
+
+/// <summary>
+/// Hostile rows: every cell drawn from sensible values, absurd ones and garbage (NaN, infinities, zero, negatives,
+/// huge and tiny numbers, wrong units, digits of other scripts). Each row must give an assessment or one of the
+/// module's own exceptions, never anything else, and a Clear only when every margin is a number at least the
+/// safety factor (infinite only where the field adds nothing at all: a rise or a voltage of exactly zero).
+/// </summary>
+public class HostileInputPropertyTests
+{
+    private static readonly object?[] GoodLengths = { "20 mm", "2 mm", "0.5 mm", "65 mm", 0.02, 0.002, "1 mm", "20mm", "3 mm" };
+
+    private static readonly object?[] BadLengths =
+    {
+        "1 nm", "5 A", "3 T", "", "  ", null, "NaN", double.NaN, double.PositiveInfinity, -0.02, 0.0, 5e-324, 1e300, "1e308 km",
+        "١٨ mm", "0x10", "20 MM", "1,5 mm", "-3 mm", "180 m",
+    };
+
+    private static readonly object?[] GoodMaterials = { "Copper", "Gold", "SS304", "Titanium", "Silver", "Brass" };
+
+    private static readonly object?[] BadMaterials = { "mild steel", "Unobtainium", string.Empty, null, 42 };
+
+    private static readonly object?[] Contacts = { "Skin", "Held", "Free", "Fixed", "Worn", null, string.Empty };
+
+    /// <summary>A value that is sensible four times in five and hostile once.</summary>
+    private static Gen<object?> Pick(object?[] good, object?[] bad) =>
+        Gen.Frequency((4, Gen.Int[0, good.Length - 1].Select(i => good[i])), (1, Gen.Int[0, bad.Length - 1].Select(i => bad[i])));
+
+    private static readonly Gen<Dictionary<string, object?>> Rows =
+        Gen.Select(Pick(GoodLengths, BadLengths), Pick(GoodLengths, BadLengths), Pick(GoodLengths, BadLengths), Pick(GoodMaterials, BadMaterials), Gen.Int[0, Contacts.Length - 1], Gen.Bool)
+            .Select((d, w, g, m, c, gap) => new Dictionary<string, object?>
+            {
+                ["Name"] = "fuzz",
+                ["Material"] = m,
+                ["Diameter"] = d,
+                ["WireDiameter"] = w,
+                ["Gap"] = gap ? g : null,
+                ["Contact"] = Contacts[c],
+            });
+
+    private static readonly FieldSource[] Sources =
+    {
+        FieldSource.Uniform("ramp", new RampWaveform(0, 3, 0.01, drive: DriveKind.FluxDensity), Vector3D.UnitZ),
+        FieldSource.Uniform("sine", new SineWaveform(0.004, 12000, drive: DriveKind.FluxDensity), Vector3D.UnitZ),
+        new FieldSource("fault", new[] { new SourceTerm(new LineConductor(new Axis(new Vector3D(0.1, 0, 0), Vector3D.UnitZ)), new FaultWaveform(40e3, 14, 50, 0.2)) }),
+    };
+
+    [Fact]
+    public void EveryHostileRowGivesAnAssessmentOrTheModulesOwnErrorAndNeverAnUnfoundedClear()
+    {
+        int assessed = 0, refused = 0;
+        Gen.Select(Rows, Gen.Int[0, Sources.Length - 1]).Sample((row, s) =>
+        {
+            InductionAssessment a;
+            try
+            {
+                ConductiveItem item = ItemRecordReader.Read(row, MaterialLibrary.BuiltIn, 1);
+                a = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(item, Sources[s])), HazardPolicy.Default);
+            }
+            catch (InductionHazardException)
+            {
+                System.Threading.Interlocked.Increment(ref refused);
+                return;
+            }
+
+            System.Threading.Interlocked.Increment(ref assessed);
+            if (a.Verdict == Verdict.Clear)
+            {
+                Assert.True(!double.IsNaN(a.MinimumMargin) && a.MinimumMargin >= a.SafetyFactor, "Clear with a minimum margin of " + a.MinimumMargin);
+                foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies))
+                {
+                    Assert.True(!double.IsNaN(m.Margin) && m.Margin >= a.SafetyFactor, m.Mechanism + " margin " + m.Margin);
+                    if (double.IsInfinity(m.Margin))
+                    {
+                        double added = m.Unit == "°C" ? m.Predicted - a.Response.InitialTemperatureCelsius : m.Predicted;
+                        Assert.True(added == 0, m.Mechanism + ": an infinite margin beside a predicted " + m.Predicted + " " + m.Unit);
+                    }
+                }
+                Assert.True(Finite.Is(a.PeakEmfVolts), "Clear beside an emf of " + a.PeakEmfVolts);
+                Assert.True(Finite.Is(a.PeakTemperatureCelsius), "Clear beside a temperature of " + a.PeakTemperatureCelsius);
+            }
+
+            if (double.IsNaN(a.MinimumMargin))
+            {
+                Assert.Equal(Verdict.Indeterminate, a.Verdict);
+            }
+        }, seed: "0N0XIzNsQ1A1", iter: 2000, threads: 1);
+        Assert.True(assessed > 100 && refused > 100, assessed + " assessed, " + refused + " refused: the corpus should exercise both");
+    }
+}

@@ -1,0 +1,191 @@
+using System;
+using System.Collections.Generic;
+using CsCheck;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Properties;
+
+/// <summary>
+/// Properties the physics must have for any input in range, each sampled over random rings and drives (CsCheck,
+/// fixed seeds so a failure is reproducible; CsCheck shrinks a failing case to a small one).
+/// </summary>
+public class PhysicsPropertyTests
+{
+    private const long Iterations = 60;
+
+    private static readonly Gen<(double Diameter, double Wire, double Tesla, double Seconds, int Material)> Rings =
+        Gen.Select(Gen.Double[0.012, 0.12], Gen.Double[0.02, 0.12], Gen.Double[1e-3, 5], Gen.Double[1e-3, 10], Gen.Int[0, 3])
+            .Select((d, w, b, t, m) => (d, d * w, b, t, m));
+
+    private static readonly string[] Materials = { "Copper", "Gold", "Silver", "Titanium" };
+
+    private static ConductiveItem Ring(double diameter, double wire, int material, string contact = "Fixed", double gap = 0) =>
+        ItemRecordReader.Read(
+            new Dictionary<string, object?> { ["Material"] = Materials[material], ["Diameter"] = diameter, ["WireDiameter"] = wire, ["Contact"] = contact, ["Gap"] = gap },
+            MaterialLibrary.BuiltIn);
+
+    private static FieldSource Ramp(double tesla, double seconds, double start = 0) =>
+        FieldSource.Uniform("ramp", new RampWaveform(0, tesla, seconds, start, DriveKind.FluxDensity), Vector3D.UnitZ);
+
+    private static InductionResponse Respond(ConductiveItem item, FieldSource source) => InductionEngine.Respond(new Scenario(item, source));
+
+    private static int Severity(Verdict v) => v switch { Verdict.Clear => 0, Verdict.Caution => 1, _ => 2 };
+
+    [Fact]
+    public void TheEmfScalesWithTheAreaAndTheRateOfChange()
+    {
+        // Faraday's law: emf = A dB/dt for a flat loop facing a uniform ramp; doubling the rate doubles it, and the
+        // emf over area is the same for every loop.
+        Rings.Sample(c =>
+        {
+            ConductiveItem ring = Ring(c.Diameter, c.Wire, c.Material, gap: 0.001);
+            double emf = Respond(ring, Ramp(c.Tesla, c.Seconds)).PeakEmfVolts;
+            double faster = Respond(ring, Ramp(c.Tesla, c.Seconds / 2)).PeakEmfVolts;
+            Within.Relative(2 * emf, faster, 1e-9, "emf at twice the rate");
+            Within.Relative(c.Tesla / c.Seconds, emf / ring.Loop.LoopAreaSquareMeters, 1e-9, "emf per area");
+        }, seed: "0N0XIzNsQ0O2", iter: Iterations);
+    }
+
+    [Fact]
+    public void TheCurrentNeverExceedsTheNaiveCurrentNorTheInductiveLimit()
+    {
+        // An RL loop driven by a step of emf rises toward e/R and never passes it; nor can it pass |Delta Phi| / L.
+        Rings.Sample(c =>
+        {
+            InductionResponse r = Respond(Ring(c.Diameter, c.Wire, c.Material), Ramp(c.Tesla, c.Seconds));
+            if (!r.IsValid)
+            {
+                return;
+            }
+
+            Assert.True(r.PeakCurrentAmperes <= r.NaiveCurrentAmperes!.Value * (1 + 1e-9), "current " + r.PeakCurrentAmperes + " above e/R " + r.NaiveCurrentAmperes);
+            Assert.True(r.PeakCurrentAmperes <= r.InductiveLimitCurrentAmperes!.Value * (1 + 1e-9), "current above the inductive limit");
+        }, seed: "0N0XIzNsQ0O3", iter: Iterations);
+    }
+
+    [Fact]
+    public void TheEnergyDissipatedNeverExceedsTheResistiveBound()
+    {
+        // With e = L di/dt + R i and i(0) = 0, the Cauchy-Schwarz inequality gives integral R i^2 dt <= integral e^2 / R dt:
+        // the loop can never dissipate more than a pure resistance would (R taken at its coldest, the largest e^2/R).
+        Rings.Sample(c =>
+        {
+            InductionResponse r = Respond(Ring(c.Diameter, c.Wire, c.Material), Ramp(c.Tesla, c.Seconds));
+            if (!r.IsValid)
+            {
+                return;
+            }
+
+            double bound = r.PeakEmfVolts * r.PeakEmfVolts / r.ResistanceOhms * (c.Seconds + r.Scenario.LeaveSeconds);
+            Assert.True(r.EnergyDissipatedJoules <= bound * (1 + 1e-6), "energy " + r.EnergyDissipatedJoules + " above " + bound);
+        }, seed: "0N0XIzNsQ0O4", iter: Iterations);
+    }
+
+    [Fact]
+    public void AConductorsFieldFallsWithDistance()
+    {
+        // Ampere's law: 1/rho for a line; a bar's field outside it falls too.
+        Gen.Select(Gen.Double[0.05, 1], Gen.Double[1.01, 5]).Sample((rho, factor) =>
+        {
+            var line = new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ));
+            var bar = new BusbarField(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.05, 0.01);
+            var near = new Vector3D(rho, 0.3 * rho, 0);
+            var far = factor * near;
+            Assert.True(line.FieldPerUnitDrive(far).Length < line.FieldPerUnitDrive(near).Length);
+            Assert.True(bar.FieldPerUnitDrive(far).Length < bar.FieldPerUnitDrive(near).Length);
+        }, seed: "0N0XIzNsQ0O5", iter: Iterations);
+    }
+
+    [Fact]
+    public void ALargerOrFasterFieldChangeNeverGivesASaferVerdict()
+    {
+        Rings.Sample(c =>
+        {
+            ConductiveItem ring = Ring(c.Diameter, c.Wire, c.Material, "Skin");
+            ConductiveItem split = Ring(c.Diameter, c.Wire, c.Material, "Skin", 0.001);
+            foreach (ConductiveItem item in new[] { ring, split })
+            {
+                InductionAssessment baseCase = HazardAssessor.Assess(Respond(item, Ramp(c.Tesla, c.Seconds)), HazardPolicy.Default);
+                InductionAssessment larger = HazardAssessor.Assess(Respond(item, Ramp(2 * c.Tesla, c.Seconds)), HazardPolicy.Default);
+                InductionAssessment faster = HazardAssessor.Assess(Respond(item, Ramp(c.Tesla, c.Seconds / 2)), HazardPolicy.Default);
+                if (baseCase.Verdict == Verdict.Indeterminate || larger.Verdict == Verdict.Indeterminate || faster.Verdict == Verdict.Indeterminate)
+                {
+                    continue;
+                }
+
+                Assert.True(Severity(larger.Verdict) >= Severity(baseCase.Verdict), "a larger change gave " + larger.Verdict + " against " + baseCase.Verdict);
+                Assert.True(Severity(faster.Verdict) >= Severity(baseCase.Verdict), "a faster change gave " + faster.Verdict + " against " + baseCase.Verdict);
+            }
+        }, seed: "0N0XIzNsQ0O6", iter: Iterations / 2);
+    }
+
+    [Fact]
+    public void DoublingTheLimitsNeverGivesAWorseVerdict()
+    {
+        var relaxed = new HazardPolicy
+        {
+            Name = "doubled",
+            AlternatingVoltageLimitRms = 2 * HazardPolicy.Default.AlternatingVoltageLimitRms,
+            DirectVoltageLimit = 2 * HazardPolicy.Default.DirectVoltageLimit,
+            ThermalDoseLimitMinutes = 2 * HazardPolicy.Default.ThermalDoseLimitMinutes,
+        };
+        Rings.Sample(c =>
+        {
+            foreach (ConductiveItem item in new[] { Ring(c.Diameter, c.Wire, c.Material, "Skin"), Ring(c.Diameter, c.Wire, c.Material, "Skin", 0.001) })
+            {
+                InductionResponse r = Respond(item, Ramp(c.Tesla, c.Seconds));
+                Verdict strict = HazardAssessor.Assess(r, HazardPolicy.Default).Verdict, loose = HazardAssessor.Assess(r, relaxed).Verdict;
+                Assert.Equal(strict == Verdict.Indeterminate, loose == Verdict.Indeterminate);
+                Assert.True(Severity(loose) <= Severity(strict), "doubled limits gave " + loose + " against " + strict);
+            }
+        }, seed: "0N0XIzNsQ0O7", iter: Iterations);
+    }
+
+    [Fact]
+    public void TheResultDoesNotDependOnTheUnitsTheInputsWereGivenIn()
+    {
+        Rings.Sample(c =>
+        {
+            ConductiveItem metres = Ring(c.Diameter, c.Wire, c.Material, "Skin");
+            ConductiveItem written = ItemRecordReader.Read(
+                new Dictionary<string, object?>
+                {
+                    ["Material"] = Materials[c.Material],
+                    ["Diameter"] = (c.Diameter * 1000).ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " mm",
+                    ["WireDiameter"] = (c.Wire * 100).ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " cm",
+                    ["Contact"] = "Skin",
+                },
+                MaterialLibrary.BuiltIn);
+            var gauss = FieldSource.Uniform("ramp", new RampWaveform(0, QuantityParser.Parse((c.Tesla * 1e4).ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " G", QuantityKind.MagneticFluxDensity), QuantityParser.Parse((c.Seconds * 1000).ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " ms", QuantityKind.Time), drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+            InductionAssessment a = HazardAssessor.Assess(Respond(metres, Ramp(c.Tesla, c.Seconds)), HazardPolicy.Default);
+            InductionAssessment b = HazardAssessor.Assess(Respond(written, gauss), HazardPolicy.Default);
+            Assert.Equal(a.Verdict, b.Verdict);
+            if (Finite.Is(a.MinimumMargin))
+            {
+                Within.Relative(a.MinimumMargin, b.MinimumMargin, 1e-6, "margin");
+            }
+        }, seed: "0N0XIzNsQ0O8", iter: Iterations);
+    }
+
+    [Fact]
+    public void TheResultDoesNotDependOnWhenTheDriveStarts()
+    {
+        Gen.Select(Rings, Gen.Double[-1e5, 1e5]).Sample((c, start) =>
+        {
+            ConductiveItem ring = Ring(c.Diameter, c.Wire, c.Material, "Skin");
+            InductionAssessment a = HazardAssessor.Assess(Respond(ring, Ramp(c.Tesla, c.Seconds)), HazardPolicy.Default);
+            InductionAssessment b = HazardAssessor.Assess(Respond(ring, Ramp(c.Tesla, c.Seconds, start)), HazardPolicy.Default);
+            Assert.Equal(a.Verdict, b.Verdict);
+            if (Finite.Is(a.MinimumMargin))
+            {
+                Within.Relative(a.MinimumMargin, b.MinimumMargin, 1e-5, "margin at a start of " + start + " s");
+            }
+        }, seed: "0N0XIzNsQ0O9", iter: Iterations);
+    }
+}
