@@ -46,4 +46,11 @@ Describe 'Import-HazardSite' {
         $bad.Count | Should -Be 1
         $bad[0].Exception.Message | Should -BeLike "*'Nowhere' is not a station*Switchroom B busbar*"
     }
+
+    It 'shows the site and its stations in words, not type names' {
+        $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
+        ($site | Out-String -Width 100) | Should -Not -Match 'InductionHazard\.'
+        ($site.Stations | Out-String -Width 100) | Should -Not -Match 'InductionHazard\.'
+        ($site.Stations | Out-String -Width 100) | Should -Match 'Busbar B1|bar 120 mm'
+    }
 }
