@@ -57,6 +57,36 @@ Describe 'Test-InductionHazard' {
         }
     }
 
+    Context 'bare numbers in a spreadsheet' {
+        BeforeAll {
+            $bare = Join-Path $TestDrive 'bare.csv'
+            Set-Content $bare -Value "Name,Material,InnerDiameter,Width,Thickness`nBand,Gold,18,4,1.6`nWire ring,Silver,17,,"
+            $headed = Join-Path $TestDrive 'headed.csv'
+            Set-Content $headed -Value "Name,Material,InnerDiameter (mm),Width [mm],Thickness_mm`nBand,Gold,18,4,1.6"
+            $written = Join-Path $TestDrive 'written.csv'
+            Set-Content $written -Value "Name,Material,InnerDiameter,Width,Thickness`nBand,Gold,18 mm,4 mm,1.6 mm"
+        }
+
+        It 'refuses every bare dimension row by row, naming the column and both fixes' {
+            $out = Import-Csv $bare | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue -WarningAction SilentlyContinue
+            $out | Should -BeNullOrEmpty
+            $bad.Count | Should -Be 2
+            $bad[0].Exception.Message | Should -BeLike "row 1 ('Band'): InnerDiameter: '18' has no unit*'InnerDiameter (mm)'*-Unit @{ InnerDiameter = 'mm' }*"
+            $bad[0].FullyQualifiedErrorId | Should -BeLike 'MissingUnit,*'
+        }
+
+        It 'reads the same inventory the same way with the units in the headers, in a -Unit table, or in the cells' {
+            $fromCells = Import-Csv $written | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue
+            $fromHeaders = Import-Csv $headed | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue
+            $fromTable = Import-Csv $bare | Select-Object -First 1 | Test-InductionHazard -Source $pulse -Unit @{ InnerDiameter = 'mm'; Width = 'mm'; Thickness = 'mm' } -WarningAction SilentlyContinue
+            $fromHeaders.Response.Item.MeanDiameterMeters | Should -Be $fromCells.Response.Item.MeanDiameterMeters
+            $fromTable.Response.Item.MeanDiameterMeters | Should -Be $fromCells.Response.Item.MeanDiameterMeters
+            $fromHeaders.Verdict | Should -Be $fromCells.Verdict
+            $fromTable.MinimumMargin | Should -Be $fromCells.MinimumMargin
+            [math]::Abs($fromCells.Response.Item.MeanDiameterMeters - 0.0196) | Should -BeLessThan 1e-12
+        }
+    }
+
     Context 'on several threads' {
         It 'gives with -ThrottleLimit 4 the same assessments in the same order as a serial run, bad rows included' {
             $rows = @(Import-Csv $inventoryPath) + @([pscustomobject]@{ Name = 'Bad'; Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' }) + @(Import-Csv $inventoryPath)

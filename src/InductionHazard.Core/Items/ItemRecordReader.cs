@@ -37,10 +37,11 @@ public static class ItemRecordReader
     /// <param name="record">The named values.</param>
     /// <param name="materials">Where material names are looked up.</param>
     /// <param name="rowNumber">The record's position in its input (1-based), for messages; null for a single item.</param>
+    /// <param name="units">The unit of each field's bare numbers where the column names do not say (a -Unit table).</param>
     /// <exception cref="RecordException">Something in the record is missing, malformed or out of range.</exception>
-    public static ConductiveItem Read(IEnumerable<KeyValuePair<string, object?>> record, MaterialLibrary materials, int? rowNumber = null)
+    public static ConductiveItem Read(IEnumerable<KeyValuePair<string, object?>> record, MaterialLibrary materials, int? rowNumber = null, IReadOnlyDictionary<string, string>? units = null)
     {
-        var fields = new RecordFields(record);
+        var fields = new RecordFields(record, units);
         string? name = fields.Text("Name", required: false, A("Name"));
         ItemShape shape = fields.Choice<ItemShape>("Shape", required: false, A("Shape")) ?? ItemShape.Ring;
         ConductorMaterial? material = ReadMaterial(fields, materials);

@@ -5,7 +5,8 @@ using InductionHazard.Quantities;
 namespace InductionHazard.Items;
 
 /// <summary>
-/// Reads where an item sits from a data record: X, Y, Z (lengths such as '300 mm'; a bare number is in metres)
+/// Reads where an item sits from a data record: X, Y, Z (lengths such as '300 mm'; a bare number in a text cell
+/// needs the unit in its column's name or the -Unit table, as for the item's sizes)
 /// and NormalX, NormalY, NormalZ (a direction). A record that gives none leaves the placement to the command's
 /// parameters.
 /// </summary>
@@ -27,9 +28,9 @@ public static class PlacementRecordReader
 
     /// <summary>The position and normal a record gives, each null when the record gives none of its components.</summary>
     /// <exception cref="RecordException">Some but not all components are given, or one is malformed.</exception>
-    public static (Vector3D? Position, Vector3D? Normal) Read(IEnumerable<KeyValuePair<string, object?>> record, string label)
+    public static (Vector3D? Position, Vector3D? Normal) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
     {
-        var fields = new RecordFields(record);
+        var fields = new RecordFields(record, units);
         Vector3D? position = Vector(fields, Position, QuantityKind.Length);
         Vector3D? normal = Vector(fields, Normal, null);
         if (normal is { } n && (n.X == 0 && n.Y == 0 && n.Z == 0))

@@ -88,7 +88,8 @@ public static class QuantityParser
             kinds[0]);
     }
 
-    private static bool IsBareNumber(string text)
+    /// <summary>True when the text is a number with no unit ("18", " 0.5 ").</summary>
+    public static bool IsBareNumber(string text)
     {
         Match m = NumberAndUnit.Match(text);
         return m.Success && m.Groups["unit"].Value.Length == 0;
@@ -235,6 +236,9 @@ public static class QuantityParser
         };
         return new[] { unitText.Trim(), s, micro, words };
     }
+
+    /// <summary>True when the text is a unit of the kind ("mm" for a length), as a column header may name it.</summary>
+    public static bool IsUnitOf(string unitText, QuantityKind kind) => TryUnit(unitText, QuantityKindInfo.Of(kind), out _);
 
     /// <summary>Names the dimension of a unit string when UnitsNet knows the unit, else an empty string.</summary>
     private static string DimensionOf(string unitOrQuantity)

@@ -19,13 +19,38 @@ public sealed class RecordFields
     private readonly List<FieldError> _errors = new();
     private readonly List<KeyValuePair<string, object?>> _shadowed = new();
     private readonly HashSet<string> _conflictsReported = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, string> _unitByKey = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, string> _defaultUnits = new(StringComparer.Ordinal);
+
+    /// <summary>The units a name may carry after an underscore ("Diameter_mm"): a short list, so that "Holder_A" stays a name.</summary>
+    private static readonly HashSet<string> UnderscoreUnits = new(StringComparer.Ordinal) { "mm", "cm", "um", "µm", "m", "in", "ms", "us", "s", "min", "degC", "mT", "uT", "kA", "Hz", "kHz" };
+
+    private static readonly System.Text.RegularExpressions.Regex UnitInName = new(
+        @"^\s*(?<name>[^\(\[]+?)\s*[\(\[]\s*(?<unit>[^\)\]]+?)\s*[\)\]]\s*$", System.Text.RegularExpressions.RegexOptions.CultureInvariant);
 
     /// <summary>Reads a record given as name-value pairs.</summary>
-    public RecordFields(IEnumerable<KeyValuePair<string, object?>> record)
+    /// <param name="record">The named values. A name may carry the unit of its bare numbers: "Diameter (mm)", "Diameter [mm]", "Diameter_mm".</param>
+    /// <param name="defaultUnits">The unit of each field's bare numbers where the names do not say (a -Unit table), by field name.</param>
+    public RecordFields(IEnumerable<KeyValuePair<string, object?>> record, IReadOnlyDictionary<string, string>? defaultUnits = null)
     {
-        foreach (KeyValuePair<string, object?> pair in record)
+        if (defaultUnits is not null)
         {
+            foreach (KeyValuePair<string, string> unit in defaultUnits)
+            {
+                _defaultUnits[Normalize(unit.Key)] = unit.Value;
+            }
+        }
+
+        foreach (KeyValuePair<string, object?> given in record)
+        {
+            (string name, string? unitOfName) = SplitUnit(given.Key);
+            var pair = new KeyValuePair<string, object?>(name, given.Value);
             string key = Normalize(pair.Key);
+            if (unitOfName is not null && !_unitByKey.ContainsKey(key))
+            {
+                _unitByKey[key] = unitOfName;
+            }
+
             if (!_values.ContainsKey(key))
             {
                 _values[key] = pair.Value;
@@ -54,6 +79,29 @@ public sealed class RecordFields
             return null;
         }
 
+        if (raw is string text && QuantityParser.IsBareNumber(text) && !IsZero(text))
+        {
+            // A spreadsheet's bare number is never taken to be SI: it takes the unit its column names, or the
+            // -Unit table's, or it is refused with both fixes.
+            string? unit = UnitOf(field, aliases);
+            if (unit is null)
+            {
+                _errors.Add(new FieldError(
+                    field,
+                    "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + text.Trim() + " " + QuantityKindInfo.Of(kind).CanonicalSymbol + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
+                    "MissingUnit"));
+                return null;
+            }
+
+            if (!QuantityParser.IsUnitOf(unit, kind))
+            {
+                _errors.Add(new FieldError(field, "the unit '" + unit + "' named for this column is not a unit of " + QuantityKindInfo.Of(kind).Description.Substring(QuantityKindInfo.Of(kind).Description.IndexOf(' ') + 1), "InvalidQuantity"));
+                return null;
+            }
+
+            raw = text.Trim() + " " + unit;
+        }
+
         if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
         {
             return value;
@@ -61,6 +109,62 @@ public sealed class RecordFields
 
         _errors.Add(new FieldError(field, error!, "InvalidQuantity"));
         return null;
+    }
+
+    /// <summary>The unit the record's names or the -Unit table give a field's bare numbers, or null.</summary>
+    private string? UnitOf(string field, string[] aliases)
+    {
+        foreach (string name in new[] { field }.Concat(aliases))
+        {
+            string key = Normalize(name);
+            if (_values.TryGetValue(key, out object? v) && !IsEmpty(v) && _unitByKey.TryGetValue(key, out string? unit))
+            {
+                return unit;
+            }
+        }
+
+        foreach (string name in new[] { field }.Concat(aliases))
+        {
+            if (_defaultUnits.TryGetValue(Normalize(name), out string? unit))
+            {
+                return unit;
+            }
+        }
+
+        return null;
+    }
+
+    private static bool IsZero(string text) =>
+        double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && v == 0;
+
+    private static string Example(QuantityKind kind) => kind switch
+    {
+        QuantityKind.Length => "mm",
+        QuantityKind.Time => "s",
+        QuantityKind.Temperature => "degC",
+        _ => QuantityKindInfo.Of(kind).CanonicalSymbol,
+    };
+
+    /// <summary>"Diameter (mm)", "Diameter [mm]" and "Diameter_mm" are the field Diameter with bare numbers in mm.</summary>
+    private static (string Name, string? Unit) SplitUnit(string name)
+    {
+        System.Text.RegularExpressions.Match m = UnitInName.Match(name);
+        if (m.Success)
+        {
+            return (m.Groups["name"].Value, m.Groups["unit"].Value);
+        }
+
+        int underscore = name.LastIndexOf('_');
+        if (underscore > 0 && underscore < name.Length - 1)
+        {
+            string suffix = name.Substring(underscore + 1);
+            if (UnderscoreUnits.Contains(suffix))
+            {
+                return (name.Substring(0, underscore), suffix);
+            }
+        }
+
+        return (name, null);
     }
 
     /// <summary>Reads a plain number (dimensionless or in a stated unit); null when absent.</summary>

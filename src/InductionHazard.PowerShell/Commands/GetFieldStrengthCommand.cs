@@ -31,6 +31,10 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     public PSObject[] InputObject { get; set; } = null!;
 
+    /// <summary>The unit of bare numbers in the rows' X, Y, Z where the headers do not name it: @{ X = 'mm'; Y = 'mm'; Z = 'mm' }.</summary>
+    [Parameter(ParameterSetName = InputObjectSet)]
+    public System.Collections.Hashtable? Unit { get; set; }
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
@@ -63,7 +67,7 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
             string label = "row " + _row;
             try
             {
-                (Vector3D? position, _) = PlacementRecordReader.Read(Records.From(input), label);
+                (Vector3D? position, _) = PlacementRecordReader.Read(Records.From(input), label, ItemInput.UnitsOf(Unit));
                 if (position is null)
                 {
                     throw new RecordException(label, new[] { new FieldError("X", "is missing: give the point as X, Y, Z", "InvalidInput") });

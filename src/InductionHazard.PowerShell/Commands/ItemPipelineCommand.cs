@@ -78,6 +78,10 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Quantity(QuantityKind.Temperature)]
     public double AmbientTemperature { get; set; } = 20.0;
 
+    /// <summary>The unit of the bare numbers in data rows, by column, where the headers do not name it: @{ Diameter = 'mm'; WireDiameter = 'mm' }.</summary>
+    [Parameter]
+    public System.Collections.Hashtable? Unit { get; set; }
+
     /// <summary>Materials that data rows may name besides the built-in ones (hashtables or materials).</summary>
     [Parameter]
     [Material]
@@ -167,8 +171,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     private Scenario ScenarioOf(PSObject input, string label, int row)
     {
-        ConductiveItem item = ItemInput.ToItem(input, _materials, row);
-        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label);
+        IReadOnlyDictionary<string, string>? units = ItemInput.UnitsOf(Unit);
+        ConductiveItem item = ItemInput.ToItem(input, _materials, row, units);
+        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, units);
         Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,

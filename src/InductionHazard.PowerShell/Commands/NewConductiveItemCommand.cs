@@ -75,6 +75,10 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     public PSObject[] InputObject { get; set; } = null!;
 
+    /// <summary>The unit of the bare numbers in data rows, by column, where the headers do not name it: @{ Diameter = 'mm' }.</summary>
+    [Parameter(ParameterSetName = InputObjectSet)]
+    public System.Collections.Hashtable? Unit { get; set; }
+
     /// <summary>Materials that data rows may name besides the built-in ones (hashtables or materials).</summary>
     [Parameter(ParameterSetName = InputObjectSet)]
     [Material]
@@ -111,7 +115,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
             _row++;
             try
             {
-                WriteObject(ItemInput.ToItem(input, _materials, _row));
+                WriteObject(ItemInput.ToItem(input, _materials, _row, ItemInput.UnitsOf(Unit)));
             }
             catch (InductionHazardException ex)
             {
