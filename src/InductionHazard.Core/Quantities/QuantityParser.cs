@@ -21,6 +21,16 @@ public static class QuantityParser
         @"^\s*(?<number>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$",
         RegexOptions.CultureInvariant);
 
+    private static readonly Regex DecimalComma = new(@"^[+-]?[0-9]+,[0-9]+(\s*[^0-9,].*)?$", RegexOptions.CultureInvariant);
+
+    private static readonly Regex Fraction = new(@"^(?<whole>[0-9]+)?(?:\s+|-)?(?<num>[0-9]+)/(?<den>[0-9]+)\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant);
+
+    /// <summary>Gauss with an SI prefix, which UnitsNet does not know ("15 kG" is kilogauss, not kilograms): factor to gauss.</summary>
+    private static readonly System.Collections.Generic.Dictionary<string, double> PrefixedGauss = new(StringComparer.Ordinal)
+    {
+        ["kG"] = 1e3, ["mG"] = 1e-3, ["uG"] = 1e-6, ["µG"] = 1e-6, ["μG"] = 1e-6,
+    };
+
     private static readonly Regex Ohm = new(@"(?i:ohms?)(?![a-z])", RegexOptions.CultureInvariant);
 
     private static readonly Regex OhmMetre = new(@"Ω\s*[\*\.\-·× ]?\s*(?<len>c?m)$", RegexOptions.CultureInvariant);
@@ -112,6 +122,28 @@ public static class QuantityParser
             return false;
         }
 
+        if (DecimalComma.IsMatch(trimmed))
+        {
+            error = "'" + trimmed + "' has a decimal comma, which could also be a thousands separator; write a decimal point ('" + trimmed.Replace(',', '.') + "'); expected " + Expectation(info);
+            return false;
+        }
+
+        Match fraction = Fraction.Match(trimmed);
+        if (fraction.Success)
+        {
+            // Fractions as jewellers and fitters write them: '3/4 in', '1 3/4 in', '1-3/4 in'.
+            double den = double.Parse(fraction.Groups["den"].Value, CultureInfo.InvariantCulture);
+            if (den == 0)
+            {
+                error = "'" + trimmed + "' divides by zero; expected " + Expectation(info);
+                return false;
+            }
+
+            double whole = fraction.Groups["whole"].Success ? double.Parse(fraction.Groups["whole"].Value, CultureInfo.InvariantCulture) : 0;
+            double sum = whole + (double.Parse(fraction.Groups["num"].Value, CultureInfo.InvariantCulture) / den);
+            return TryParseText(sum.ToString("R", CultureInfo.InvariantCulture) + " " + fraction.Groups["unit"].Value, info, out value, out error);
+        }
+
         if (HasOtherDigits(trimmed))
         {
             error = "'" + trimmed + "' has digits other than 0-9 (write the number with the digits 0-9); expected " + Expectation(info);
@@ -138,6 +170,12 @@ public static class QuantityParser
             return CheckFinite(value, trimmed, out error);
         }
 
+        if (info.Kind == QuantityKind.MagneticFluxDensity && PrefixedGauss.TryGetValue(unitText.Trim(), out double gauss))
+        {
+            value = number * gauss * 1e-4;
+            return CheckFinite(value, trimmed, out error);
+        }
+
         if (TryUnit(unitText, info, out Enum? unit))
         {
             try
@@ -160,6 +198,13 @@ public static class QuantityParser
         }
 
         string dimension = DimensionOf(unitText);
+        string? meant = CaseInsensitiveMatch(unitText, info);
+        if (meant is not null)
+        {
+            error = "'" + unitText + "' is not a unit: unit symbols are case-sensitive (m is milli, M mega); did you mean '" + meant + "'? expected " + Expectation(info);
+            return false;
+        }
+
         error = dimension.Length > 0
             ? "expected " + Expectation(info) + "; got '" + trimmed + "', which is " + dimension
             : "'" + unitText + "' is not a unit of " + info.Description.Substring(info.Description.IndexOf(' ') + 1)
@@ -190,12 +235,16 @@ public static class QuantityParser
     private static string Expectation(QuantityKindInfo info) =>
         info.Description + " such as " + info.Example + " or a number in " + info.CanonicalSymbol;
 
-    /// <summary>Tries the unit as typed, then its ASCII spellings normalised to UnitsNet symbols.</summary>
+    /// <summary>
+    /// Tries the unit as typed, then its ASCII spellings normalised to UnitsNet symbols. A symbol must match in case
+    /// ('MM' is not 'mm', '10 MS' is not milliseconds): UnitsNet also matches regardless of case, and such a
+    /// match is refused here rather than silently reinterpreted.
+    /// </summary>
     private static bool TryUnit(string unitText, QuantityKindInfo info, out Enum? unit)
     {
         foreach (string candidate in Spellings(unitText, info.Kind))
         {
-            if (UnitParser.Default.TryParse(candidate, info.UnitType, Invariant, out Enum? parsed))
+            if (UnitParser.Default.TryParse(candidate, info.UnitType, Invariant, out Enum? parsed) && ExactSymbol(candidate, info, parsed!))
             {
                 unit = parsed;
                 return true;
@@ -204,6 +253,24 @@ public static class QuantityParser
 
         unit = null;
         return false;
+    }
+
+    private static bool ExactSymbol(string candidate, QuantityKindInfo info, Enum parsed) =>
+        UnitsNet.UnitAbbreviationsCache.Default.GetUnitAbbreviations(info.UnitType, Convert.ToInt32(parsed, Invariant), Invariant)
+            .Any(a => string.Equals(a, candidate, StringComparison.Ordinal));
+
+    /// <summary>The symbol a unit matches only when case is ignored ('ms' for 'MS'), or null.</summary>
+    private static string? CaseInsensitiveMatch(string unitText, QuantityKindInfo info)
+    {
+        foreach (string candidate in Spellings(unitText, info.Kind))
+        {
+            if (UnitParser.Default.TryParse(candidate, info.UnitType, Invariant, out Enum? parsed))
+            {
+                return UnitsNet.UnitAbbreviationsCache.Default.GetDefaultAbbreviation(info.UnitType, Convert.ToInt32(parsed, Invariant), Invariant);
+            }
+        }
+
+        return null;
     }
 
     private static string[] Spellings(string unitText, QuantityKind kind)

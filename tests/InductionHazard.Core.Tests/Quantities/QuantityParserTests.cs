@@ -139,4 +139,36 @@ public class QuantityParserTests
     {
         Within.Relative(degrees, QuantityParser.Parse(text, QuantityKind.Angle), 1e-12, text);
     }
+
+    // Unit strings as people type them. Conversions: SI Brochure, 9th edition (prefixes; 1 G = 1e-4 T); the inch is
+    // 25.4 mm exactly (international yard and pound agreement, 1959).
+    [Validates("unit strings as typed: prefixed gauss, fractions of an inch", "SI Brochure, 9th edition; 1 in = 25.4 mm (1959 agreement)", "1e-12")]
+    [Theory]
+    [InlineData("15 kG", QuantityKind.MagneticFluxDensity, 1.5)]
+    [InlineData("500 mG", QuantityKind.MagneticFluxDensity, 5e-5)]
+    [InlineData("3/4 in", QuantityKind.Length, 0.01905)]
+    [InlineData("1 3/4 in", QuantityKind.Length, 0.04445)]
+    [InlineData("1-1/2 in", QuantityKind.Length, 0.0381)]
+    [InlineData("20 mm", QuantityKind.Length, 0.02)]
+    [InlineData("10 ms", QuantityKind.Time, 0.01)]
+    [InlineData("12 KHZ", QuantityKind.Frequency, 12000)]
+    public void UnitStringsAsPeopleTypeThemAreRead(string text, QuantityKind kind, double expected)
+    {
+        Within.Relative(expected, QuantityParser.Parse(text, kind), 1e-12, text);
+    }
+
+    // Never silently reinterpreted: a symbol that matches only when case is ignored, or a decimal comma, is refused
+    // with what was read and what was meant.
+    [Theory]
+    [InlineData("20 MM", QuantityKind.Length, "is not a unit of length")]
+    [InlineData("10 MS", QuantityKind.Time, "did you mean 'ms'")]
+    [InlineData("1,5 mm", QuantityKind.Length, "decimal comma")]
+    [InlineData("1,5 T", QuantityKind.MagneticFluxDensity, "decimal point ('1.5 T')")]
+    [InlineData("3/0 in", QuantityKind.Length, "divides by zero")]
+    [InlineData("15 kg", QuantityKind.MagneticFluxDensity, "a mass")]
+    public void AmbiguousUnitStringsAreRefusedWithTheReason(string text, QuantityKind kind, string reason)
+    {
+        Assert.False(QuantityParser.TryParse(text, kind, out _, out string? error));
+        Assert.Contains(reason, error, System.StringComparison.Ordinal);
+    }
 }
