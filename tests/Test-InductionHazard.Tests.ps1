@@ -87,6 +87,24 @@ Describe 'Test-InductionHazard' {
         }
     }
 
+    Context 'inventories as people keep them' {
+        It 'says a semicolon-separated file read without -Delimiter is probably that' {
+            $semi = Join-Path $TestDrive 'semi.csv'
+            Set-Content $semi -Value "Name;Material;Diameter;WireDiameter`nRing;Copper;20 mm;2 mm"
+            $null = Import-Csv $semi | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue
+            $bad[0].Exception.Message | Should -BeLike "*semicolon-separated; read it with Import-Csv -Delimiter ';'*"
+            @(Import-Csv $semi -Delimiter ';' | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue).Count | Should -Be 1
+        }
+
+        It 'reads contact as people say it: <Word> is <Kind>' -TestCases @(
+            @{ Word = 'Worn'; Kind = 'Skin' }, @{ Word = 'Loose'; Kind = 'Free' }, @{ Word = 'held'; Kind = 'Held' }, @{ Word = 'Installed'; Kind = 'Fixed' }
+        ) {
+            $a = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; Contact = $Word } |
+                Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue
+            $a.Response.Item.Contact | Should -Be $Kind
+        }
+    }
+
     Context 'on several threads' {
         It 'gives with -ThrottleLimit 4 the same assessments in the same order as a serial run, bad rows included' {
             $rows = @(Import-Csv $inventoryPath) + @([pscustomobject]@{ Name = 'Bad'; Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' }) + @(Import-Csv $inventoryPath)

@@ -51,7 +51,7 @@ public static class ItemRecordReader
         double? width = fields.Quantity("Width", QuantityKind.Length, required: false, A("Width"));
         double? thickness = fields.Quantity("Thickness", QuantityKind.Length, required: false, A("Thickness"));
         double gap = fields.Quantity("Gap", QuantityKind.Length, required: false, A("Gap")) ?? 0.0;
-        ContactKind contact = fields.Choice<ContactKind>("Contact", required: false, A("Contact")) ?? ContactKind.Skin;
+        ContactKind contact = ReadContact(fields);
 
         string label = Label(rowNumber, name);
         LoopGeometry? loop = shape == ItemShape.RectangularLoop
@@ -76,6 +76,7 @@ public static class ItemRecordReader
 
         if (fields.Errors.Count > 0)
         {
+            AddDelimiterHint(fields, record);
             throw new RecordException(label, fields.Errors);
         }
 
@@ -86,6 +87,42 @@ public static class ItemRecordReader
             loop!,
             gap,
             contact);
+    }
+
+    /// <summary>The words people use for contact, beside the enumeration's own: Worn is Skin, Loose is Free.</summary>
+    private static readonly Dictionary<string, ContactKind> ContactWords = new(StringComparer.OrdinalIgnoreCase)
+    {
+        ["Worn"] = ContactKind.Skin, ["Wearing"] = ContactKind.Skin, ["Carried"] = ContactKind.Held, ["Hand"] = ContactKind.Held,
+        ["Loose"] = ContactKind.Free, ["Installed"] = ContactKind.Fixed, ["Mounted"] = ContactKind.Fixed,
+    };
+
+    private static ContactKind ReadContact(RecordFields fields)
+    {
+        object? raw = fields.Raw("Contact", required: false, A("Contact"));
+        if (raw is string text && ContactWords.TryGetValue(text.Trim(), out ContactKind word))
+        {
+            return word;
+        }
+
+        if (raw is null)
+        {
+            return ContactKind.Skin;
+        }
+
+        return fields.Choice<ContactKind>("Contact", required: false, A("Contact")) ?? ContactKind.Skin;
+    }
+
+    /// <summary>A row read with the wrong delimiter arrives as one column whose name holds ';' or a tab: say so.</summary>
+    private static void AddDelimiterHint(RecordFields fields, IEnumerable<KeyValuePair<string, object?>> record)
+    {
+        KeyValuePair<string, object?>[] pairs = record.ToArray();
+        KeyValuePair<string, object?> joined = pairs.FirstOrDefault(p => p.Key.IndexOf(';') >= 0 || p.Key.IndexOf('\t') >= 0);
+        if (joined.Key is not null && fields.Errors.Any(e => e.Message.StartsWith("is missing", StringComparison.Ordinal)))
+        {
+            string delimiter = joined.Key.IndexOf(';') >= 0 ? "';'" : "\"`t\"";
+            fields.AddError("Delimiter", "the column '" + (joined.Key.Length > 60 ? joined.Key.Substring(0, 60) + "..." : joined.Key) + "' holds " + (delimiter == "';'" ? "semicolons" : "tabs")
+                + ": the file is probably " + (delimiter == "';'" ? "semicolon" : "tab") + "-separated; read it with Import-Csv -Delimiter " + delimiter);
+        }
     }
 
     private static RingGeometry? ReadRing(RecordFields fields, double? mean, double? inner, double? wire, double? width, double? thickness)
