@@ -9,6 +9,8 @@
            PowerShell, and ends with one line: "N passed, N failed" (both suites counted).
     Demo   builds and runs the example audit of the invented site (examples/Invoke-SiteAudit.ps1), which
            writes its report under out/demo.
+    Install  builds and copies the module folder into the current user's module path (the first entry of
+           PSModulePath), so that Import-Module InductionHazard finds it from any PowerShell 7 shell.
     Validation  regenerates docs/validation.md from the tests' [Validates] tags (the test run checks it).
     Bench  runs the engine's benchmarks (tests/InductionHazard.Benchmarks, BenchmarkDotNet, short jobs) and the
            peak-memory comparison of loading a 1,000,000-row capture; results under out/bench.
@@ -20,7 +22,7 @@
 [CmdletBinding()]
 param(
     [Parameter(Position = 0)]
-    [ValidateSet('Build', 'Test', 'Demo', 'Bench', 'Validation', 'Clean')]
+    [ValidateSet('Build', 'Test', 'Demo', 'Bench', 'Validation', 'Install', 'Clean')]
     [string[]] $Task = 'Build',
 
     [ValidateSet('Debug', 'Release')]
@@ -158,6 +160,16 @@ function Invoke-Validation {
     Write-Host 'docs/validation.md regenerated from the tagged tests.'
 }
 
+function Invoke-Install {
+    Invoke-Build
+    $userModules = @($env:PSModulePath -split [IO.Path]::PathSeparator | Where-Object { $_ })[0]
+    $target = Join-Path $userModules (Join-Path 'InductionHazard' (Get-ModuleVersion))
+    if (Test-Path $target) { Remove-Item $target -Recurse -Force }
+    $null = New-Item -ItemType Directory -Path $target -Force
+    Copy-Item (Join-Path $moduleDir '*') $target -Recurse
+    Write-Host "Installed in $target; in any PowerShell 7 shell: Import-Module InductionHazard"
+}
+
 function Invoke-Clean {
     if (Test-Path $out) { Remove-Item $out -Recurse -Force }
     Get-ChildItem $root -Include bin, obj -Recurse -Directory | Remove-Item -Recurse -Force
@@ -170,6 +182,7 @@ foreach ($t in $Task) {
         'Demo' { Invoke-Demo }
         'Bench' { Invoke-Bench }
         'Validation' { Invoke-Validation }
+        'Install' { Invoke-Install }
         'Clean' { Invoke-Clean }
     }
 }
