@@ -34,6 +34,78 @@ public static class ThermalDose
         return minutes;
     }
 
+    /// <summary>
+    /// The highest temperature of the range the dose relation was fitted on, °C: about 40-57 °C (from memory;
+    /// Sapareto and Dewey 1984 and the data behind it). Above it the relation is extrapolation, and the contact
+    /// temperature criterion governs instead.
+    /// </summary>
+    public const double FittedUpToCelsius = 57.0;
+
+    /// <summary>
+    /// The dose the heating adds over its baseline: CEM43 of the history less CEM43 of the item held at its
+    /// starting temperature for the same time, minutes.
+    /// </summary>
+    public static double AddedCem43Minutes(IReadOnlyList<HeatingSample> history, double startCelsius) =>
+        Scaled(history, startCelsius, 1) - Scaled(history, startCelsius, 0);
+
+    /// <summary>
+    /// The margin on the rise for a dose limit: the factor k on the temperature rise the field adds (T' = start +
+    /// k (T - start)) at which the added dose reaches the limit, by bisection on the exactly integrated dose
+    /// (which grows with k). Infinity when nothing is added. Null when that factor would take the history above
+    /// <see cref="FittedUpToCelsius"/>, where the relation does not hold: the dose cannot then be the criterion.
+    /// </summary>
+    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes)
+    {
+        double peak = double.NegativeInfinity;
+        foreach (HeatingSample s in history)
+        {
+            peak = Math.Max(peak, s.TemperatureCelsius);
+        }
+
+        double rise = peak - startCelsius;
+        if (!(rise > 0))
+        {
+            return double.PositiveInfinity;
+        }
+
+        double baseline = Scaled(history, startCelsius, 0);
+        double Added(double k) => Scaled(history, startCelsius, k) - baseline;
+        double inRange = (FittedUpToCelsius - startCelsius) / rise;
+        if (!(inRange > 0) || Added(inRange) < limitMinutes)
+        {
+            return null;
+        }
+
+        double low = 0, high = inRange;
+        for (int i = 0; i < 200 && high - low > 1e-12 * high; i++)
+        {
+            double mid = 0.5 * (low + high);
+            if (Added(mid) < limitMinutes)
+            {
+                low = mid;
+            }
+            else
+            {
+                high = mid;
+            }
+        }
+
+        return 0.5 * (low + high);
+    }
+
+    /// <summary>The dose of the history with its rise over the start scaled by k, minutes.</summary>
+    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k)
+    {
+        double minutes = 0;
+        for (int i = 1; i < history.Count; i++)
+        {
+            HeatingSample a = history[i - 1], b = history[i];
+            minutes += Segment(a.TimeSeconds, startCelsius + (k * (a.TemperatureCelsius - startCelsius)), b.TimeSeconds, startCelsius + (k * (b.TemperatureCelsius - startCelsius)));
+        }
+
+        return minutes;
+    }
+
     /// <summary>The dose of a constant temperature held for a time, minutes.</summary>
     public static double Cem43Minutes(double celsius, double seconds) =>
         Math.Pow(Rate(celsius), BreakpointCelsius - celsius) * seconds / 60.0;

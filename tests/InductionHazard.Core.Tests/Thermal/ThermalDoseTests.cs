@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Linq;
 using InductionHazard.Thermal;
@@ -30,5 +31,43 @@ public class ThermalDoseTests
         var coarse = new[] { new HeatingSample(0, 40, 0), new HeatingSample(600, 46, 0) };
         var fine = Enumerable.Range(0, 600001).Select(k => new HeatingSample(k / 1000.0, 40 + (6 * k / 600000.0), 0)).ToArray();
         Within.Relative(ThermalDose.Cem43Minutes(fine), ThermalDose.Cem43Minutes(coarse), 1e-6, "dose of the ramp");
+    }
+
+    private static HeatingSample[] Plateau(double start, double plateau, double minutes) => new[]
+    {
+        new HeatingSample(0, start, 0), new HeatingSample(60, plateau, 0), new HeatingSample(60 + (minutes * 60), plateau, 0), new HeatingSample(120 + (minutes * 60), start, 0),
+    };
+
+    [Validates("a dose margin is the factor on the rise that brings the added CEM43 to its limit", "Sapareto and Dewey (1984), solved; van Rhoon et al. (2013) limit", "1e-9")]
+    [Theory]
+    [InlineData(44.0, 10.0)]
+    [InlineData(42.0, 60.0)]
+    [InlineData(47.0, 2.0)]
+    public void TheDoseMarginIsTheFactorOnTheRiseThatMeetsTheLimit(double plateau, double minutes)
+    {
+        HeatingSample[] history = Plateau(33, plateau, minutes);
+        double margin = ThermalDose.RiseMargin(history, 33, 2.0)!.Value;
+        var scaled = Array.ConvertAll(history, s => new HeatingSample(s.TimeSeconds, 33 + (margin * (s.TemperatureCelsius - 33)), 0));
+        Within.Relative(2.0, ThermalDose.AddedCem43Minutes(scaled, 33), 1e-9, "added dose at the margin");
+    }
+
+    [Fact]
+    public void NoRiseAddsNoDoseWhateverTheRoom()
+    {
+        // A 45 °C room and no field change: the field adds nothing, so the dose margin is unbounded (the baseline is
+        // the room's, not the field's).
+        HeatingSample[] hot = { new(0, 45, 0), new(8 * 3600, 45, 0) };
+        Assert.Equal(0, ThermalDose.AddedCem43Minutes(hot, 45));
+        Assert.Equal(double.PositiveInfinity, ThermalDose.RiseMargin(hot, 45, 2.0));
+    }
+
+    [Fact]
+    public void ADoseLimitBeyondTheFittedRangeIsNotUsed()
+    {
+        // A 2 ms spike from 33 to 50 °C adds far less than 2 CEM43 even when scaled to peak at 57 °C (1 s at 57 °C is
+        // 273 CEM43, 2 ms about 0.1): the limit would be met only outside the relation's range, so the dose is not
+        // the criterion there.
+        HeatingSample[] brief = { new(0, 33, 0), new(0.001, 50, 0), new(0.002, 33, 0) };
+        Assert.Null(ThermalDose.RiseMargin(brief, 33, 2.0));
     }
 }

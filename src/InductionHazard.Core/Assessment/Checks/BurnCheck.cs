@@ -88,15 +88,20 @@ public sealed class BurnCheck : IHazardCheck
             worst = (RiseMargin(worst.threshold, peak, start), span, peak, worst.threshold);
         }
 
-        double dose = ThermalDose.Cem43Minutes(history);
-        double doseMargin = VerdictRules.Margin(policy.ThermalDoseLimitMinutes, dose);
-        string doseText = "thermal dose " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin " + SiFormat.Plain(doseMargin) + ")";
+        // The dose the field adds over the baseline (the item held at its starting temperature), judged by the factor
+        // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
+        // fitted on, beyond which the contact-temperature criterion above governs alone.
+        double dose = ThermalDose.AddedCem43Minutes(history, start);
+        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes);
+        string doseText = doseMargin is { } dm
+            ? "thermal dose added " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
+            : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
         string contactText = "held " + SiFormat.Celsius(worst.held) + " for " + SiFormat.Format(worst.seconds, "s") + " against the threshold "
             + SiFormat.Celsius(worst.threshold) + " for that contact time (margin " + SiFormat.Plain(worst.margin) + ")";
         IReadOnlyList<string> basis = SourcesOf(policy);
-        if (double.IsNaN(doseMargin) || doseMargin < worst.margin)
+        if (doseMargin is { } byDose && (double.IsNaN(byDose) || byDose < worst.margin))
         {
-            return MechanismResult.Judged(Mechanism, "thermal dose", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", doseMargin, policy.SafetyFactor, basis,
+            return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", byDose, policy.SafetyFactor, basis,
                 "skin in contact: " + doseText + "; " + contactText);
         }
 
