@@ -28,6 +28,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private int _row;
     private FieldSource _source = null!;
     private readonly Queue<Pending> _pending = new();
+    private IReadOnlyDictionary<string, string>? _units;
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
@@ -93,6 +94,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         try
         {
             _environment = new ThermalEnvironment(AmbientTemperature);
+            _units = ItemInput.UnitsOf(Unit);
             if (ParameterSetName == SourceSet)
             {
                 _source = FieldSource.Combine(Source);
@@ -171,9 +173,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     private Scenario ScenarioOf(PSObject input, string label, int row)
     {
-        IReadOnlyDictionary<string, string>? units = ItemInput.UnitsOf(Unit);
-        ConductiveItem item = ItemInput.ToItem(input, _materials, row, units);
-        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, units);
+        ConductiveItem item = ItemInput.ToItem(input, _materials, row, _units);
+        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, _units);
         Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
