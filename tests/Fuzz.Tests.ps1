@@ -1,0 +1,104 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+# A fixed-seed corpus of hostile inputs through the cmdlets as a user drives them. INDUCTIONHAZARD_FUZZ_ROWS and
+# INDUCTIONHAZARD_FUZZ_SETS (and INDUCTIONHAZARD_FUZZ_SEED) make a longer or different run on demand.
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $seed = if ($env:INDUCTIONHAZARD_FUZZ_SEED) { [int] $env:INDUCTIONHAZARD_FUZZ_SEED } else { 20261201 }
+    $rowCount = if ($env:INDUCTIONHAZARD_FUZZ_ROWS) { [int] $env:INDUCTIONHAZARD_FUZZ_ROWS } else { 10000 }
+    $setCount = if ($env:INDUCTIONHAZARD_FUZZ_SETS) { [int] $env:INDUCTIONHAZARD_FUZZ_SETS } else { 1000 }
+    $random = [System.Random]::new($seed)
+    function Pick([object[]] $values) { $values[$random.Next($values.Count)] }
+    $goodLengths = '20 mm', '2 mm', '1.5 mm', '65 mm', '0.02', '18 mm', '4 mm', '3/4 in'
+    $badLengths = '', ' ', 'NaN', '-Infinity', '1e400', '1e308 km', '١٨ mm', '0x10', '20 MM', '1,5 mm', '-3 mm', '180 m', '5 A', '3 T', '1 nm', 'abc', '18', '0', '1e-300 m'
+    function Length { if ($random.Next(5) -eq 0) { Pick $badLengths } else { Pick $goodLengths } }
+    $materials = 'Copper', 'Gold', 'Silver', 'SS304', 'Titanium', 'Brass', 'Aluminium', 'mild steel', 'Unobtainium', '', 'COPPER', 'Ti-6Al-4V'
+    $contacts = 'Skin', 'Held', 'Free', 'Fixed', 'Worn', 'Loose', '', 'Sideways'
+    $shapes = 'Ring', 'Ring', 'Ring', 'RectangularLoop', 'Disc', ''
+    $sources = @(
+        (New-FieldWaveform -Ramp -From '0 T' -To '3 T' -Duration '10 ms' | New-FieldSource -Name 'ramp')
+        (New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' -Duration '1 min' | New-FieldSource -Name 'heater')
+        (New-FieldWaveform -Fault -Current '40 kA' -XOverR 14 -Frequency '50 Hz' -ClearingTime '200 ms' | New-FieldSource -Conductor -Center '0, 100 mm, 0' -Name 'feeder')
+    )
+    function Show-Counts([string] $what, [int] $inputs, [int] $outputs, [object[]] $errors) {
+        Write-Host "$what`: $inputs inputs, $outputs outputs, $($errors.Count) errors"
+        $errors | Group-Object { $_.FullyQualifiedErrorId.Split(',')[0] } | Sort-Object Count -Descending |
+            ForEach-Object { Write-Host ('  {0,-22} {1,6}' -f $_.Name, $_.Count) }
+    }
+}
+
+Describe 'Hostile input (fixed-seed corpus)' {
+    It 'gives every one of the rows exactly one assessment or one error naming the row, and never an unfounded Clear' {
+        $rows = foreach ($k in 1..$rowCount) {
+            # Three rows in four are items people keep (a wire ring, a band, a frame) with the odd hostile cell; the
+            # fourth is any mix of columns at all.
+            $kind = $random.Next(4)
+            $row = [ordered]@{ Name = "fuzz $k"; Shape = 'Ring'; Material = Pick $materials; Diameter = ''; WireDiameter = ''; Width = ''; Thickness = ''; Height = ''; Gap = ''; Contact = Pick $contacts; X = ''; Y = ''; Z = '' }
+            switch ($kind) {
+                0 { $row.Diameter = Length; $row.WireDiameter = Length }
+                1 { $row.Diameter = Length; $row.Width = Length; $row.Thickness = Length }
+                2 { $row.Shape = 'RectangularLoop'; $row.Width = Pick '300 mm', '400 mm', '1 m', (Length); $row.Height = Pick '200 mm', '60 mm', (Length); $row.WireDiameter = Length }
+                default { $row.Shape = Pick $shapes; $row.Diameter = Length; $row.WireDiameter = Length; $row.Width = Length; $row.Height = Length; $row.Thickness = Length }
+            }
+
+            if ($random.Next(3) -eq 0) { $row.Gap = Length }
+            if ($random.Next(2) -eq 0) { $row.X = Pick '0', '300 mm', '0.5 m', '200 mm', 'NaN', '1e400 mm'; $row.Y = Pick '0', '0', '10 mm', '100 mm', ''; $row.Z = '0' }
+            [pscustomobject]$row
+        }
+        $perSource = [math]::Ceiling($rows.Count / $sources.Count)
+        $outputs = 0
+        $allErrors = [System.Collections.Generic.List[object]]::new()
+        for ($s = 0; $s -lt $sources.Count; $s++) {
+            $slice = @($rows | Select-Object -Skip ($s * $perSource) -First $perSource)
+            # A row at X = 0, Y = 100 mm sits on the feeder, which must be an error or Indeterminate, never a number.
+            $results = @($slice | Test-InductionHazard -Source $sources[$s] -ThrottleLimit 2 -ErrorVariable bad -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
+            $outputs += $results.Count
+            $allErrors.AddRange(@($bad))
+            ($results.Count + $bad.Count) | Should -Be $slice.Count -Because "every input of source $s gives one output or one error"
+            foreach ($a in $results | Where-Object Verdict -EQ 'Clear') {
+                [double]::IsNaN($a.MinimumMargin) | Should -BeFalse
+                $a.MinimumMargin | Should -BeGreaterOrEqual $a.SafetyFactor
+                [double]::IsNaN($a.PeakEmfVolts) | Should -BeFalse
+            }
+            foreach ($e in $bad) {
+                $e.FullyQualifiedErrorId | Should -Not -BeLike 'AssessmentFailed*' -Because "an unexpected failure is a defect: $($e.Exception.Message)"
+                $e.Exception.Message | Should -Match '^row \d+' -Because 'an error names its row'
+            }
+        }
+        Show-Counts 'rows' $rows.Count $outputs $allErrors.ToArray()
+        ($outputs + $allErrors.Count) | Should -Be $rows.Count
+    }
+
+    It 'answers every one of the parameter sets with an object or an error of its own, never an unhandled exception' {
+        $values = @('1 T', '0 T', '40 kA', '50 Hz', '10 ms', '2 s', '', 'NaN', '1e400', '-5 T', '0', '1e17 s', '3 mm', 'abc', '١ T', '15 kG', '1,5 T', '1/2 s', $null, 1, -1, 0, 1e300)
+        $objects = 0
+        $errors = [System.Collections.Generic.List[object]]::new()
+        foreach ($k in 1..$setCount) {
+            $form = Pick 'Ramp', 'Sine', 'Fault', 'Discharge', 'Decay', 'Trapezoid', 'Item', 'Source'
+            $p = switch ($form) {
+                'Ramp' { @{ Ramp = $true; From = Pick $values; To = Pick $values; Duration = Pick $values; Start = Pick $values } }
+                'Sine' { @{ Sine = $true; Amplitude = Pick $values; Frequency = Pick $values; PhaseDegrees = Pick $values } }
+                'Fault' { @{ Fault = $true; Current = Pick $values; XOverR = Pick 14, 0, -1, 1e9, 0.5; Frequency = Pick $values; ClearingTime = Pick $values } }
+                'Discharge' { @{ Discharge = $true; Capacitance = Pick '2 mF', '0 F', '-1 F', 'abc'; Voltage = Pick '5 kV', '', '1e400 V'; Inductance = Pick '50 uH', '0 H'; Resistance = Pick '30 mohm', '-1 ohm' } }
+                'Decay' { @{ Decay = $true; From = Pick $values; TimeConstant = Pick $values } }
+                'Trapezoid' { @{ Trapezoid = $true; Amplitude = Pick $values; RiseTime = Pick $values; FallTime = Pick $values; FlatTime = Pick $values } }
+                'Item' { @{ Name = 'fuzz'; Material = Pick $materials; Diameter = Length; WireDiameter = Length; Gap = Pick '0', '1 mm', '1 nm', 'NaN' } }
+                'Source' { @{ Conductor = $true; Waveform = (New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz'); Axis = Pick 'z', '1e200,0,0', '0,0,0', 'NaN,0,0', 'q'; Center = Pick '0,0,0', '1e308 km,0,0', '3 T,0,0' } }
+            }
+            foreach ($key in @($p.Keys)) { if ($null -eq $p[$key]) { $p[$key] = '' } }
+            $command = switch ($form) { 'Item' { 'New-ConductiveItem' } 'Source' { 'New-FieldSource' } default { 'New-FieldWaveform' } }
+            try {
+                $result = & $command @p -ErrorAction Stop
+                if ($null -ne $result) { $objects++ }
+            }
+            catch [System.Management.Automation.ParameterBindingException] { $errors.Add($_) }
+            catch {
+                $_.FullyQualifiedErrorId | Should -Match '^(InvalidInput|InvalidQuantity|InvalidRecord|MissingUnit|UnknownMaterial|FieldNotEvaluable|ParameterArgumentTransformationError|ParameterArgumentValidationError|MissingArgument|MissingMandatoryParameter|AmbiguousParameterSet|NamedParameterNotFound|CannotConvertArgumentNoMessage|PositionalParameterNotFound)' -Because "$command $($p.Keys -join ' ') failed with: $($_.Exception.Message)"
+                $errors.Add($_)
+            }
+        }
+        Show-Counts 'parameter sets' $setCount $objects $errors.ToArray()
+        ($objects + $errors.Count) | Should -Be $setCount
+    }
+}
