@@ -101,4 +101,43 @@ Describe 'Hostile input (fixed-seed corpus)' {
         Show-Counts 'parameter sets' $setCount $objects $errors.ToArray()
         ($objects + $errors.Count) | Should -Be $setCount
     }
+
+    It 'reads every one of 200 hostile site files or refuses it as an invalid site file' {
+        $fragments = @(
+            "Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' }"
+            "Form = 'Coil'; Radius = '50 mm'; Turns = 3; Waveform = @{ Form = 'Ramp'; From = '0 A'; To = '1 kA'; Duration = '1 s' }"
+            "Form = 'Busbar'; Width = '100 mm'; Thickness = '10 mm'; Waveform = @{ Form = 'Fault'; Current = '40 kA'; XOverR = 14; Frequency = '50 Hz' }"
+            "Form = 'Coil'; Radius = '50 mm'; Waveform = @{ Form = 'Sine'; Amplitude = '1 T'; Frequency = '50 Hz' }"
+            "Form = 'Warp'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' }"
+            "Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = (Get-Date); Frequency = '50 Hz' }"
+            "Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = `$env:PATH; Frequency = '50 Hz' }"
+            "Form = 'Uniform'"
+            "Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = 'NaN'; Frequency = '50 Hz' }"
+            "Form = 'Map'; Path = 'no-such-map.csv'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' }"
+        )
+        $extras = @('', "Position = '0, 300 mm, 0'", "Position = 'x'", "ExposureTime = '2 min'", "ExposureTime = '1 ms'", "Normal = 'z'", "Normal = '0,0,0'", "Colour = 'red'")
+        $read = 0
+        $refused = [System.Collections.Generic.List[object]]::new()
+        foreach ($k in 1..200) {
+            $stations = foreach ($n in 1..($random.Next(3) + 1)) {
+                "@{ Name = 'Station $n'; Sources = @(@{ $(Pick $fragments) }); $(Pick $extras) }"
+            }
+            $body = if ($random.Next(10) -eq 0) { "Write-Host 'hello'" } else { "@{ Site = 'Fuzz $k'; Stations = @($($stations -join '; ')) }" }
+            $file = Join-Path $TestDrive "site-$k.psd1"
+            Set-Content $file -Value $body
+            try {
+                $site = Import-HazardSite $file
+                $site.Stations.Count | Should -BeGreaterThan 0
+                $read++
+            }
+            catch {
+                $_.FullyQualifiedErrorId | Should -BeLike 'InvalidSiteFile,*' -Because $_.Exception.Message
+                $refused.Add($_)
+            }
+        }
+
+        Show-Counts 'site files' 200 $read $refused.ToArray()
+        $read | Should -BeGreaterThan 10
+        $refused.Count | Should -BeGreaterThan 10
+    }
 }
