@@ -69,13 +69,21 @@ public static class ThermalDose
         }
 
         double baseline = Scaled(history, startCelsius, 0);
-        double Added(double k) => Scaled(history, startCelsius, k) - baseline;
+        double Added(double k)
+        {
+            // A scaled history far beyond the range overflows the exponential: that dose is beyond any limit.
+            double added = Scaled(history, startCelsius, k) - baseline;
+            return double.IsNaN(added) ? double.PositiveInfinity : added;
+        }
+
         double inRange = (FittedUpToCelsius - startCelsius) / rise;
         if (!(inRange > 0) || Added(inRange) < limitMinutes)
         {
             return null;
         }
 
+        // The added dose grows with k from 0 at k = 0: bisection on the bracket [0, inRange], which, unlike the
+        // library's root finders, tolerates the infinite dose of a scaled history that overflows.
         double low = 0, high = inRange;
         for (int i = 0; i < 200 && high - low > 1e-12 * high; i++)
         {

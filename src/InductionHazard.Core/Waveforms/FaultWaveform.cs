@@ -161,14 +161,14 @@ public sealed class FaultWaveform : FieldWaveform
         + ", cleared at " + SiFormat.Format(EndSeconds - StartSeconds, "s");
 
     /// <summary>
-    /// The closing angle with the largest first peak |i|, by golden-section search of the first peak over
+    /// The closing angle with the largest first peak |i|, by golden-section search (MathNet.Numerics) of the first peak over
     /// psi - phik in [-pi, 0] (the worst lies near -pi/2, exactly there only as X/R tends to infinity).
     /// </summary>
     private double WorstClosingAngle(double xOverR)
     {
         double phik = Math.Atan(xOverR);
         double PeakAt(double offset) => Math.Abs(FirstPeak(offset).Amperes);
-        double best = GoldenSection.Maximize(PeakAt, -Math.PI, 0, 1e-10);
+        double best = MathNet.Numerics.FindMinimum.OfScalarFunctionConstrained(offset => -PeakAt(offset), -Math.PI, 0, 1e-9);
         return best + phik;
     }
 
@@ -198,7 +198,7 @@ public sealed class FaultWaveform : FieldWaveform
         }
 
         double a = (best - 1) * h, b = (best + 1) * h;
-        double at = Math.Sign(RateAt(a)) != Math.Sign(RateAt(b)) ? Bisect(RateAt, a, b) : best * h;
+        double at = Math.Sign(RateAt(a)) != Math.Sign(RateAt(b)) ? Root(RateAt, a, b) : best * h;
         return (Current(at, offset), at);
     }
 
@@ -219,7 +219,7 @@ public sealed class FaultWaveform : FieldWaveform
             double now = Current(s, _offsetAngle);
             if (Math.Sign(now) != Math.Sign(previous))
             {
-                return Bisect(x => Current(x, _offsetAngle), s - h, s);
+                return Root(x => Current(x, _offsetAngle), s - h, s);
             }
 
             previous = now;
@@ -241,24 +241,7 @@ public sealed class FaultWaveform : FieldWaveform
         return largest;
     }
 
-    private static double Bisect(Func<double, double> f, double a, double b)
-    {
-        double fa = f(a);
-        for (int i = 0; i < 200 && b - a > 1e-15 * Math.Max(1, Math.Abs(b)); i++)
-        {
-            double m = 0.5 * (a + b);
-            double fm = f(m);
-            if (Math.Sign(fm) == Math.Sign(fa))
-            {
-                a = m;
-                fa = fm;
-            }
-            else
-            {
-                b = m;
-            }
-        }
-
-        return 0.5 * (a + b);
-    }
+    /// <summary>The root of f between a and b, where f changes sign (Brent's method, MathNet.Numerics).</summary>
+    private static double Root(Func<double, double> f, double a, double b) =>
+        MathNet.Numerics.RootFinding.Brent.TryFindRoot(f, a, b, 1e-15 * Math.Max(1, Math.Abs(b)), 200, out double root) ? root : 0.5 * (a + b);
 }
