@@ -55,6 +55,20 @@ public sealed class HazardSite
             ? s
             : throw new InvalidInputException("Station", "'" + name + "' is not a station of " + Name + " (its stations: " + string.Join(", ", Stations.Select(x => x.Name)) + ")");
 
+    /// <summary>The station a data record names in its Station column (aliases Place, Location).</summary>
+    /// <exception cref="RecordException">The record names no station.</exception>
+    /// <exception cref="InvalidInputException">It names one the site does not have.</exception>
+    public Station StationOf(IEnumerable<KeyValuePair<string, object?>> record, string label)
+    {
+        string? name = new RecordFields(record).Text("Station", required: false, "Place", "Location");
+        return name is null
+            ? throw new RecordException(label, new[]
+            {
+                new FieldError("Station", "is missing: name one of the stations of " + Name + " (" + string.Join(", ", Stations.Select(s => s.Name)) + "), or give -Station", "InvalidInput"),
+            })
+            : Find(name);
+    }
+
     /// <inheritdoc />
     public override string ToString() => Name;
 }

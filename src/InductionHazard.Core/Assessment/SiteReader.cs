@@ -33,7 +33,7 @@ public static class SiteReader
             var top = new RecordFields(Pairs(data));
             string name = top.Text("Site", required: true, "Name") ?? "site";
             object? rawStations = top.Raw("Stations", required: true);
-            WaveformRecordReader.Unused(top, "site file");
+            top.RejectUnused("is not a value of a site file (it has Site and Stations)");
             if (top.Errors.Count > 0)
             {
                 throw new RecordException("site file", top.Errors);
@@ -80,7 +80,7 @@ public static class SiteReader
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
         double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
         string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
-        WaveformRecordReader.Unused(fields, label);
+        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description)");
         if (fields.Errors.Count > 0 || name is null || rawSources is null)
         {
             throw new RecordException(label, fields.Errors);

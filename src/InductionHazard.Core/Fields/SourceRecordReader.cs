@@ -31,7 +31,7 @@ public static class SourceRecordReader
     public static FieldSource Read(IEnumerable<KeyValuePair<string, object?>> values, FieldWaveform waveform, string baseDirectory, string label = "source")
     {
         var fields = new RecordFields(values);
-        string form = WaveformRecordReader.FormOf(fields, Forms, label);
+        string form = fields.Form(Forms, label);
         string? name = fields.Text("Name", required: false);
         Vector3D centre = Vector(fields, "Center", QuantityKind.Length, Vector3D.Zero, "Centre", "Position");
         Vector3D axisDirection = Vector(fields, "Axis", null, Vector3D.UnitZ);
@@ -57,7 +57,7 @@ public static class SourceRecordReader
 
         if (terms is not null)
         {
-            WaveformRecordReader.Unused(fields, label);
+            fields.RejectUnused("is not a value of this " + label + " (check the spelling)");
         }
 
         if (fields.Errors.Count > 0 || terms is null)

@@ -86,10 +86,7 @@ public sealed class MaterialLibrary
             }
         }
 
-        foreach (string unknown in fields.UnusedNames())
-        {
-            fields.AddError(unknown, "is not a material property (use Name, Resistivity, TemperatureCoefficient, Density, SpecificHeat, ThermalConductivity, RelativePermeability, MeltingTemperature, Source)");
-        }
+        fields.RejectUnused("is not a material property (use Name, Resistivity, TemperatureCoefficient, Density, SpecificHeat, ThermalConductivity, RelativePermeability, MeltingTemperature, Source)");
 
         if (fields.Errors.Count > 0)
         {

@@ -243,6 +243,44 @@ public sealed class RecordFields
     public void AddError(string field, string message, string errorId = "InvalidInput") =>
         _errors.Add(new FieldError(field, message, errorId));
 
+    /// <summary>The form a record names: a Form value (aliases Kind, Type), or exactly one true switch named after a form.</summary>
+    /// <exception cref="RecordException">No form, an unknown one, or more than one.</exception>
+    public string Form(IReadOnlyList<string> forms, string label)
+    {
+        string? named = Text("Form", required: false, "Kind", "Type");
+        if (named is not null)
+        {
+            string? match = forms.FirstOrDefault(f => string.Equals(f, named, StringComparison.OrdinalIgnoreCase));
+            return match ?? throw new RecordException(label, new[] { new FieldError("Form", "'" + named + "' is not one of " + string.Join(", ", forms), "InvalidInput") });
+        }
+
+        string[] switched = forms.Where(f => Raw(f, required: false) is { } v && IsTrue(v)).ToArray();
+        if (switched.Length != 1)
+        {
+            throw new RecordException(label, new[] { new FieldError("Form", (switched.Length == 0 ? "is missing" : "names more than one form") + ": give one of " + string.Join(", ", forms), "InvalidInput") });
+        }
+
+        return switched[0];
+    }
+
+    /// <summary>Records an error for every value no read has used, so that a misspelt name does not pass silently.</summary>
+    /// <param name="message">What is wrong with such a value, after its name.</param>
+    public void RejectUnused(string message)
+    {
+        foreach (string name in UnusedNames().ToArray())
+        {
+            AddError(name, message);
+        }
+    }
+
+    /// <summary>True for a switch's value: true, "true" or "1".</summary>
+    public static bool IsTrue(object value) => value switch
+    {
+        bool b => b,
+        string s => string.Equals(s.Trim(), "true", StringComparison.OrdinalIgnoreCase) || s.Trim() == "1",
+        _ => string.Equals(value.ToString(), "True", StringComparison.OrdinalIgnoreCase),
+    };
+
     /// <summary>The record's field names (as given) that no read has used.</summary>
     public IEnumerable<string> UnusedNames() =>
         _values.Where(p => !_used.Contains(p.Key) && !IsEmpty(p.Value)).Select(p => _keyByName[p.Key]);

@@ -27,7 +27,7 @@ public static class WaveformRecordReader
     public static FieldWaveform Read(IEnumerable<KeyValuePair<string, object?>> values, string baseDirectory, string label = "waveform")
     {
         var fields = new RecordFields(values);
-        string form = FormOf(fields, Forms, label);
+        string form = fields.Form(Forms, label);
         double start = fields.Quantity("Start", QuantityKind.Time, required: false) ?? 0.0;
         FieldWaveform? waveform = form switch
         {
@@ -41,7 +41,7 @@ public static class WaveformRecordReader
         };
         int? repeat = Count(fields);
         double? period = fields.Quantity("Period", QuantityKind.Time, required: repeat is not null);
-        Unused(fields, label);
+        fields.RejectUnused("is not a value of this " + label + " (check the spelling)");
         if (fields.Errors.Count > 0 || waveform is null)
         {
             throw new RecordException(label, fields.Errors);
@@ -49,41 +49,6 @@ public static class WaveformRecordReader
 
         return repeat is { } n ? new RepeatedWaveform(waveform, n, period!.Value) : waveform;
     }
-
-    /// <summary>The form a record names: a Form value, or exactly one true switch named after a form.</summary>
-    internal static string FormOf(RecordFields fields, IReadOnlyList<string> forms, string label)
-    {
-        string? named = fields.Text("Form", required: false, "Kind", "Type");
-        if (named is not null)
-        {
-            string? match = forms.FirstOrDefault(f => string.Equals(f, named, StringComparison.OrdinalIgnoreCase));
-            return match ?? throw new RecordException(label, new[] { new FieldError("Form", "'" + named + "' is not one of " + string.Join(", ", forms), "InvalidInput") });
-        }
-
-        string[] switched = forms.Where(f => fields.Raw(f, required: false) is { } v && IsTrue(v)).ToArray();
-        if (switched.Length != 1)
-        {
-            throw new RecordException(label, new[] { new FieldError("Form", (switched.Length == 0 ? "is missing" : "names more than one form") + ": give one of " + string.Join(", ", forms), "InvalidInput") });
-        }
-
-        return switched[0];
-    }
-
-    /// <summary>Records an error for every value no read used: a misspelt name must not pass silently.</summary>
-    internal static void Unused(RecordFields fields, string label)
-    {
-        foreach (string name in fields.UnusedNames())
-        {
-            fields.AddError(name, "is not a value of this " + label + " (check the spelling)");
-        }
-    }
-
-    private static bool IsTrue(object value) => value switch
-    {
-        bool b => b,
-        string s => string.Equals(s.Trim(), "true", StringComparison.OrdinalIgnoreCase) || s.Trim() == "1",
-        _ => string.Equals(value.ToString(), "True", StringComparison.OrdinalIgnoreCase),
-    };
 
     private static RampWaveform? Ramp(RecordFields f, double start)
     {
@@ -133,7 +98,7 @@ public static class WaveformRecordReader
         double? v = f.Quantity("Voltage", QuantityKind.Voltage, required: true);
         double? l = f.Quantity("Inductance", QuantityKind.Inductance, required: true);
         double? r = f.Quantity("Resistance", QuantityKind.Resistance, required: true);
-        bool crowbar = f.Raw("Crowbar", required: false) is { } cb && IsTrue(cb);
+        bool crowbar = f.Raw("Crowbar", required: false) is { } cb && RecordFields.IsTrue(cb);
         return c is null || v is null || l is null || r is null ? null : new DischargeWaveform(c.Value, v.Value, l.Value, r.Value, crowbar, start);
     }
 

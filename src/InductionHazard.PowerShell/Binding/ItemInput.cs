@@ -35,16 +35,12 @@ internal static class ItemInput
         return units;
     }
 
-    /// <summary>The station a row names in its Station column (aliases Place, Location); an item object names none.</summary>
-    /// <exception cref="Errors.RecordException">The row names no station.</exception>
-    public static string StationOf(PSObject input, string label, Assessment.HazardSite site)
-    {
-        string? name = input.BaseObject is ConductiveItem ? null : new Quantities.RecordFields(Records.From(input)).Text("Station", required: false, "Place", "Location");
-        return name ?? throw new Errors.RecordException(label, new[]
-        {
-            new Errors.FieldError("Station", "is missing: name one of the stations of " + site.Name + " (" + string.Join(", ", System.Linq.Enumerable.Select(site.Stations, s => s.Name)) + "), or give -Station", "InvalidInput"),
-        });
-    }
+    /// <summary>The station of the site at which a row is assessed: -Station, else the row's Station column.</summary>
+    /// <exception cref="Errors.InductionHazardException">The row names no station, or one the site does not have.</exception>
+    public static Assessment.Station StationOf(PSObject input, string label, Assessment.HazardSite site, string? station) =>
+        station is not null ? site.Find(station)
+        : input.BaseObject is ConductiveItem ? site.StationOf(System.Array.Empty<KeyValuePair<string, object?>>(), label)
+        : site.StationOf(Records.From(input), label);
 
     /// <summary>How the input is named in messages: "row 7 ('Wedding band')".</summary>
     public static string Label(PSObject input, int row)

@@ -175,7 +175,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     {
         ConductiveItem item = ItemInput.ToItem(input, _materials, row, _units);
         (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, _units);
-        Station? station = ParameterSetName == SiteSet ? Site.Find(Station ?? ItemInput.StationOf(input, label, Site)) : null;
+        Station? station = ParameterSetName == SiteSet ? ItemInput.StationOf(input, label, Site, Station) : null;
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal);
