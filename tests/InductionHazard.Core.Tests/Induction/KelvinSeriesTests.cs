@@ -6,6 +6,7 @@ namespace InductionHazard.Tests.Induction;
 
 public class KelvinSeriesTests
 {
+    [Validates("ber, bei and their derivatives by power series, x from 0.01 to 8", "A&S 9.9.10 against MathNet.Numerics' Kelvin functions", "1e-11, 1e-10")]
     [Theory]
     [InlineData(0.01)]
     [InlineData(0.15)]

@@ -37,6 +37,7 @@ public class PhysicsPropertyTests
 
     private static int Severity(Verdict v) => v switch { Verdict.Clear => 0, Verdict.Caution => 1, _ => 2 };
 
+    [Validates("emf = A dB/dt for random rings and ramps; twice the rate, twice the emf (property)", "Faraday's law", "1e-9")]
     [Fact]
     public void TheEmfScalesWithTheAreaAndTheRateOfChange()
     {
@@ -52,6 +53,7 @@ public class PhysicsPropertyTests
         }, seed: "0N0XIzNsQ0O2", iter: Iterations);
     }
 
+    [Validates("peak current <= e/R and <= |Delta Phi|/L for random rings and ramps (property)", "RL circuit theory", "1e-9")]
     [Fact]
     public void TheCurrentNeverExceedsTheNaiveCurrentNorTheInductiveLimit()
     {
@@ -69,6 +71,7 @@ public class PhysicsPropertyTests
         }, seed: "0N0XIzNsQ0O3", iter: Iterations);
     }
 
+    [Validates("integral R i^2 dt <= integral e^2/R dt for random rings and ramps (property)", "RL circuit theory with the Cauchy-Schwarz inequality", "1e-6")]
     [Fact]
     public void TheEnergyDissipatedNeverExceedsTheResistiveBound()
     {
@@ -87,6 +90,7 @@ public class PhysicsPropertyTests
         }, seed: "0N0XIzNsQ0O4", iter: Iterations);
     }
 
+    [Validates("a line's and a bar's field fall with distance (property)", "Ampere's law", "strict")]
     [Fact]
     public void AConductorsFieldFallsWithDistance()
     {

@@ -65,6 +65,7 @@ public class TemperatureHistoryTests
         return low;
     }
 
+    [Validates("the highest temperature held for a contact time, one exact sweep, 300 random histories", "bisection on the longest run at or above a level (independent algorithm)", "1e-9")]
     [Fact]
     public void TheOneSweepAnswerEqualsBisectionOnTheLongestRunForRandomHistories()
     {
