@@ -317,7 +317,12 @@ public static class InductionEngine
             Vector3D centre = scenario.Placement.Centre;
             LoopGeometry loop = scenario.Item.Loop;
             Circuit = new RingCircuit(scenario.Item);
-            Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Loop.SurfaceSquareMeters, scenario.Environment);
+            // A worn or held item sits on skin that blood flow holds near 33 °C: it cannot cool below its starting
+            // temperature, so it exchanges heat with surroundings at that temperature (less cooling than room air:
+            // the safe side). A loose or fixed item starts at, and cools to, the room.
+            ThermalEnvironment surroundings = scenario.Environment;
+            var cooling = new ThermalEnvironment(scenario.InitialCelsius, surroundings.ConvectionWattsPerSquareMeterKelvin, surroundings.Emissivity);
+            Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Loop.SurfaceSquareMeters, cooling);
             Start = scenario.InitialCelsius;
             Rdc = Circuit.DcResistanceOhms(Start);
             Ldc = Circuit.DcInductanceHenries;

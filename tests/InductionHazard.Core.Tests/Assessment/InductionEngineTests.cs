@@ -285,4 +285,16 @@ public class InductionEngineTests
             new System.Collections.Generic.Dictionary<string, object?> { ["Shape"] = "RectangularLoop", ["Material"] = "Copper", ["Width"] = "300 mm", ["WireDiameter"] = "4 mm" },
             MaterialLibrary.BuiltIn));
     }
+
+    [Fact]
+    public void AWornRingNeverCoolsBelowTheSkinItSitsOn()
+    {
+        // Skin is held near 33 °C by blood flow (common practice): a worn ring starts there and cannot cool below it,
+        // so the heating the field adds is never hidden by a fall toward the 20 °C room.
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Gold", 0.1, 0.009), Fixtures.UniformRamp(0, 1.75, 2.5));
+        Assert.All(r.HeatingSeries, s => Assert.True(s.TemperatureCelsius >= r.InitialTemperatureCelsius - 1e-12, s.TemperatureCelsius + " °C"));
+        Assert.True(r.PeakTemperatureCelsius > r.InitialTemperatureCelsius);
+        InductionAssessment a = HazardAssessor.Assess(r, HazardPolicy.Default);
+        Assert.True(Finite.Is(a.BurnMargin!.Value), "a burn margin of " + a.BurnMargin + " beside a current of " + a.PeakCurrentAmperes + " A");
+    }
 }
