@@ -26,7 +26,12 @@ Describe 'Get-InductionResponse' {
         $fast = New-FieldWaveform -Ramp -From 0 -To '1 T' -Duration '100 ns' | New-FieldSource -Uniform
         $r = Get-InductionResponse -Item $ring -Source $fast
         $r.NaiveCurrentAmperes | Should -BeGreaterThan (100 * $r.PeakCurrentAmperes)
-        [math]::Abs($r.PeakCurrentAmperes / $r.InductiveLimitCurrentAmperes - 1) | Should -BeLessThan 0.01
+        # The skin depth of a 100 ns ramp (about 20 um) puts the current on the wire's surface (filaments over its
+        # section); the surface resistance lets it decay by a few per cent during the ramp, so the peak lies just
+        # below the inductive limit.
+        $r.PathCount | Should -BeGreaterThan 1
+        $r.PeakCurrentAmperes | Should -BeLessThan $r.InductiveLimitCurrentAmperes
+        (1 - $r.PeakCurrentAmperes / $r.InductiveLimitCurrentAmperes) | Should -BeLessThan 0.05
         $r.Regime | Should -Match '^inductive'
     }
 

@@ -36,6 +36,20 @@ internal static class Fixtures
             },
             MaterialLibrary.BuiltIn);
 
+    public static ConductiveItem Frame(string material, double width, double height, double wire, string contact = "Skin") =>
+        ItemRecordReader.Read(
+            new Dictionary<string, object?>
+            {
+                ["Name"] = "test frame",
+                ["Shape"] = "RectangularLoop",
+                ["Material"] = material,
+                ["Width"] = width,
+                ["Height"] = height,
+                ["WireDiameter"] = wire,
+                ["Contact"] = contact,
+            },
+            MaterialLibrary.BuiltIn);
+
     public static FieldSource UniformSine(double peakTesla, double frequency, double? duration = null) =>
         FieldSource.Uniform("sine", new SineWaveform(peakTesla, frequency, durationSeconds: duration, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
 

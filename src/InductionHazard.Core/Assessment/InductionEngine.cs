@@ -40,7 +40,12 @@ public static class InductionEngine
             return response;
         }
 
-        ModelValidity.Check(scenario.Item, c.Frequency, scenario.Source.IsSinusoidal, c.Start, c.Thermal, c.Issues, c.Notes);
+        bool thin = ModelValidity.Check(scenario.Item, c.Frequency, scenario.Source.IsSinusoidal, c.Start, c.Thermal, c.Issues, c.Notes);
+        if (!scenario.Item.IsSplit)
+        {
+            c.BuildPaths(thin);
+        }
+
         response = scenario.Source.IsSinusoidal ? Sinusoidal(c, cancellation) : Transient(c, cancellation);
         CheckFinite(response, c.Issues);
         return response;
@@ -89,20 +94,52 @@ public static class InductionEngine
             return Open(drive, c, OnePeriod(t => (emf * Complex.FromPolarCoordinates(1, omega * t)).Imaginary, f, on, c.Start), on, end);
         }
 
-        SinusoidalRun run = new SinusoidalLoopSolver(t => c.Circuit.ImpedanceOhms(f, t), c.Thermal).Run(emf, f, on, off, end, c.Start, cancellation, c.MeltingCelsius);
+        if (c.PathProblem(drive) is { } unsolved)
+        {
+            return unsolved;
+        }
+
+        Func<double, SteadyState> steady;
+        if (c.Paths!.IsSingle && c.Scenario.Item.Loop is not BodyGeometry)
+        {
+            // One path keeps the round wire's own skin effect (Kelvin functions) in its impedance.
+            steady = SinusoidalPathSolver.Loop(t => c.Circuit.ImpedanceOhms(f, t), emf);
+        }
+        else
+        {
+            var drives = new Complex[terms.Count];
+            Vector3D crossRe = Vector3D.Zero, crossIm = Vector3D.Zero;
+            for (int k = 0; k < terms.Count; k++)
+            {
+                var sine = (SineWaveform)terms[k].Waveform;
+                // u_k = -d_k' has the phasor -j omega D_k.
+                drives[k] = -Complex.ImaginaryOne * omega * Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (omega * sine.StartSeconds));
+                crossRe += drives[k].Real * c.CrossCoupling[k];
+                crossIm += drives[k].Imaginary * c.CrossCoupling[k];
+            }
+
+            double crossAtUnitScale = 0.5 * c.CrossPowerFactor * (crossRe.Dot(crossRe) + crossIm.Dot(crossIm));
+            steady = ItemPaths.Steady(c.Modal!, drives, omega, c.Paths.ScaleAt, crossAtUnitScale);
+        }
+
+        SinusoidalRun run = new SinusoidalPathSolver(steady, c.Thermal).Run(emf, f, on, off, end, c.Start, cancellation, c.MeltingCelsius);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the heating integrator");
         Complex z = run.Impedance;
+        bool single = c.Paths.IsSingle;
         return Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
-            Model = "thin ring (Grover 1946) in periodic steady state: phasor current with skin effect (Kelvin functions); lumped heating with rho(T) and cooling, cycle-averaged",
-            AcResistanceOhms = z.Real,
-            InductanceHenries = z.Imaginary / omega,
-            TimeConstantSeconds = z.Imaginary / omega / z.Real,
-            Regime = Regime(z.Imaginary / z.Real, "omega L / R"),
+            Model = single
+                ? "thin ring (Grover 1946) in periodic steady state: phasor current with skin effect (Kelvin functions); lumped heating with rho(T) and cooling, cycle-averaged"
+                : c.Paths.Description + " (Maxwell mutual inductances), in periodic steady state by phasors over the modes of the (L, R) pencil" + CrossWords(c) + "; lumped heating with rho(T) and cooling, cycle-averaged",
+            AcResistanceOhms = single ? z.Real : null,
+            InductanceHenries = single ? z.Imaginary / omega : c.Ldc,
+            TimeConstantSeconds = single ? z.Imaginary / omega / z.Real : c.Ldc / c.Rdc,
+            Regime = Regime(z.Imaginary / z.Real, single ? "omega L / R" : "omega L / R of the whole"),
             PeakCurrentAmperes = run.PeakCurrentAmperes,
             NaiveCurrentAmperes = emf.Magnitude / c.Rdc,
             CurrentSense = LenzSense.Alternating(f, Math.Atan2(z.Imaginary, z.Real), c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
+            PathCount = c.Paths.Paths!.Count,
         };
     }
 
@@ -132,7 +169,14 @@ public static class InductionEngine
         }
 
         double flux0 = Linked(c.Coupling, begin);
-        double fluxSwing = Math.Max(times.Max(t => Math.Abs(Linked(c.Coupling, t) - flux0)), leaving > 0 ? Math.Abs(flux0) : 0);
+        double swingAt = times.OrderByDescending(t => Math.Abs(Linked(c.Coupling, t) - flux0)).First();
+        double fluxSwing = Math.Abs(Linked(c.Coupling, swingAt) - flux0);
+        double[] driveSwing = terms.Select(term => term.Waveform.Value(swingAt) - term.Waveform.Value(begin)).ToArray();
+        if (leaving > 0 && Math.Abs(flux0) > fluxSwing)
+        {
+            fluxSwing = Math.Abs(flux0);
+            driveSwing = terms.Select(term => -term.Waveform.Value(begin)).ToArray();
+        }
         double fluxChange = (leaving > 0 ? 0 : fluxAtLeave) - flux0;
         c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s")
             + (leaving > 0 ? ", is carried out over " + SiFormat.Format(leaving, "s") + " (the flux it holds, " + SiFormat.Format(fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
@@ -155,6 +199,11 @@ public static class InductionEngine
             return Open(drive, c, shown.Where((_, i) => i % stride == 0).Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end);
         }
 
+        if (c.PathProblem(drive) is { } unsolved)
+        {
+            return unsolved;
+        }
+
         double maxStep = terms.Min(t => t.Waveform.MaxStepSeconds);
         int budget = HeatingIntegrator.DefaultMaxSteps + (4 * breakpoints.Length);
         double curvedUntil = Math.Min(leave, fieldEnd);
@@ -167,26 +216,72 @@ public static class InductionEngine
                 AffectedResults.Current | AffectedResults.Heating));
         }
 
+        // u_k(t): the emf per unit flux coupling of term k; while leaving, the flux each term put through falls linearly to zero.
+        var drives = new Func<double, double>[terms.Count];
+        for (int k = 0; k < terms.Count; k++)
+        {
+            FieldWaveform waveform = terms[k].Waveform;
+            double heldAtLeave = waveform.Value(leave);
+            drives[k] = t => t < leave ? -waveform.Rate(t) : t < outside ? heldAtLeave / leaving : 0;
+        }
+
         TransientRun run = overBudget
             ? new TransientRun { Heating = new[] { new HeatingSample(begin, double.NaN, 0) }, FinalCelsius = double.NaN, PeakCurrentAmperes = double.NaN, EnergyJoules = double.NaN }
-            : new TransientLoopSolver(c.Ldc, c.Circuit.DcResistanceOhms, c.Thermal) { StopAboveCelsius = c.MeltingCelsius, MaxStepSeconds = maxStep, CurvedUntilSeconds = curvedUntil, MaxSteps = budget }
-                .Run(Emf, breakpoints, begin, end, c.Start, cancellation);
+            : new TransientPathSolver(c.Modal!, c.Paths!.ScaleAt, c.Thermal)
+            {
+                StopAboveCelsius = c.MeltingCelsius,
+                MaxStepSeconds = maxStep,
+                CurvedUntilSeconds = curvedUntil,
+                MaxSteps = budget,
+                CrossCoupling = c.CrossCoupling,
+                CrossPowerFactor = c.CrossPowerFactor,
+            }.Run(drives, Emf, breakpoints, begin, end, c.Start, cancellation);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
         double tau = c.Ldc / c.Rdc;
         double rampTime = terms.Min(t => t.Waveform.TimeScales[0].Seconds);
-        c.Notes.Add("circuit: " + run.Steps + " exact exponential steps, L = " + SiFormat.Format(c.Ldc, "H") + ", L/R = " + SiFormat.Format(tau, "s"));
+        bool single = c.Paths!.IsSingle;
+        c.Notes.Add("circuit: " + run.Steps + " exact exponential steps over " + c.Modal!.Count + (single ? " mode" : " modes") + ", L = " + SiFormat.Format(c.Ldc, "H") + ", L/R = " + SiFormat.Format(tau, "s") + (single ? string.Empty : " (the leading mode's)"));
         return Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
-            Model = "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling",
+            Model = single
+                ? "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling"
+                : c.Paths.Description + " (Maxwell mutual inductances), exact exponential steps over the modes of the (L, R) pencil with R(T)" + CrossWords(c) + "; lumped heating with rho(T) and cooling",
             Regime = Regime(tau / rampTime, "L/R / ramp time"),
             PeakCurrentAmperes = Math.Abs(run.PeakCurrentAmperes),
             NaiveCurrentAmperes = peakEmf / c.Rdc,
-            InductiveLimitCurrentAmperes = fluxSwing / c.Ldc,
+            InductiveLimitCurrentAmperes = single ? fluxSwing / c.Ldc : InductiveLimit(c.Modal, driveSwing),
             CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
+            PathCount = c.Paths.Paths!.Count,
         };
     }
+
+    /// <summary>
+    /// The total current of a path set when its resistance is negligible against the change (the inductive limit):
+    /// each mode then carries z_k = -(C Delta d)_k / lambda_k, and the total is t . z. For one path, Delta Phi / L.
+    /// </summary>
+    private static double InductiveLimit(ModalCircuit modal, double[] driveSwing)
+    {
+        double total = 0;
+        for (int k = 0; k < modal.Count; k++)
+        {
+            double forcing = 0;
+            for (int j = 0; j < driveSwing.Length; j++)
+            {
+                forcing += modal.Coupling[k, j] * driveSwing[j];
+            }
+
+            total += modal.TotalWeights[k] * forcing / modal.Lambdas[k];
+        }
+
+        return Math.Abs(total);
+    }
+
+    /// <summary>The words for the cross-axis heating, when the field has a part across a body's axis.</summary>
+    private static string CrossWords(Common c) => c.CrossPowerFactor > 0 && c.CrossCoupling.Any(v => v.Length > 0)
+        ? ", plus the heating by the field across the axis bounded from above at its low-frequency value (Thomson's minimum-dissipation principle)"
+        : string.Empty;
 
     /// <summary>
     /// A run that melted the item stops there (a molten loop opens, and nothing after it is modelled); one that ran
@@ -331,12 +426,14 @@ public static class InductionEngine
             FieldDirection = Normal;
             Coupling = new double[source.Terms.Count];
             NormalField = new double[source.Terms.Count];
+            CrossCoupling = new Vector3D[source.Terms.Count];
             try
             {
-                if (scenario.Placement.Normal is null)
+                if (scenario.Placement.Normal is null || loop is SphereBody)
                 {
+                    // A sphere has no axis of its own: its filaments' axis follows the largest flux change.
                     Normal = FluxCoupling.WorstNormal(source, centre, loop);
-                    Orientation = "facing the largest flux change, normal " + Normal;
+                    Orientation = (loop is SphereBody ? "axis " : string.Empty) + "facing the largest flux change, normal " + Normal;
                 }
                 else
                 {
@@ -347,6 +444,12 @@ public static class InductionEngine
                 Vector3D[] b = source.FieldPerUnitDrive(centre);
                 NormalField = b.Select(v => v.Dot(Normal)).ToArray();
                 FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
+                if (loop is BodyGeometry)
+                {
+                    // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the methods).
+                    Vector3D n = Normal;
+                    CrossCoupling = b.Select(v => v - (v.Dot(n) * n)).ToArray();
+                }
             }
             catch (FieldEvaluationException ex)
             {
@@ -357,6 +460,106 @@ public static class InductionEngine
 
             Notes.Add("placement: loop centre at " + centre + " m, " + Orientation);
         }
+
+        /// <summary>
+        /// Builds the item's current paths for a closed item: one for a thin loop, filaments otherwise. A body's
+        /// resistance and inductance are then the equivalents of its low-frequency loss and its leading mode.
+        /// </summary>
+        public void BuildPaths(bool thin)
+        {
+            Paths = ItemPaths.For(Scenario.Item, Frequency, Start, thin);
+            Notes.Add("current paths: " + Paths.Description);
+            if (Paths.Problem is not null || Paths.Modes is null || FieldFailed)
+            {
+                return;
+            }
+
+            try
+            {
+                double[,] pathCoupling = Paths.Coupling(Scenario.Source, Scenario.Placement.Centre, Normal);
+                Modal = Paths.Modes.Drive(pathCoupling);
+            }
+            catch (FieldEvaluationException ex)
+            {
+                Issues.Add(new ValidityIssue(ex.Message, AffectedResults.Current | AffectedResults.Heating));
+                return;
+            }
+
+            if (Scenario.Item.Loop is BodyGeometry body)
+            {
+                (double across, double along) = body.SecondMoments;
+                CrossPowerFactor = across * along / (across + along) / Paths.ReferenceResistivityOhmMeters;
+                (Rdc, Ldc) = Equivalent(Paths, body);
+            }
+        }
+
+        /// <summary>
+        /// A body's equivalent single turn on its outline: R such that (pi R_out^2 B')^2 / R is the filaments'
+        /// low-frequency loss in a uniform axial field, and L that with R gives the leading mode's time constant.
+        /// </summary>
+        private static (double R, double L) Equivalent(ItemPaths paths, BodyGeometry body)
+        {
+            IReadOnlyList<Filament> cells = paths.Paths!.Filaments!;
+            double conductance = 0;
+            var uniform = new double[cells.Count, 1];
+            for (int i = 0; i < cells.Count; i++)
+            {
+                double area = Math.PI * cells[i].RadiusMeters * cells[i].RadiusMeters;
+                uniform[i, 0] = area;
+                conductance += area * area / (paths.ReferenceResistivityOhmMeters * paths.Paths.LengthOverArea[i]);
+            }
+
+            double outline = body.LoopAreaSquareMeters;
+            double r = outline * outline / conductance;
+            ModalCircuit axial = paths.Modes!.Drive(uniform);
+            double lead = 0, best = -1;
+            for (int k = 0; k < axial.Count; k++)
+            {
+                double weight = axial.Coupling[k, 0] * axial.Coupling[k, 0] * axial.Lambdas[k];
+                if (weight > best)
+                {
+                    (best, lead) = (weight, axial.Lambdas[k]);
+                }
+            }
+
+            return (r, lead * r);
+        }
+
+        /// <summary>
+        /// When the paths cannot be solved: the issue recorded and a response whose current and heating are not
+        /// numbers; null when they can.
+        /// </summary>
+        public InductionResponse? PathProblem(InductionResponse drive)
+        {
+            if (Modal is not null)
+            {
+                return null;
+            }
+
+            if (Paths?.Problem is { } problem)
+            {
+                Issues.Add(new ValidityIssue(problem, AffectedResults.Current | AffectedResults.Heating));
+            }
+
+            return drive with
+            {
+                Model = "not solved: " + (Paths?.Problem ?? "the item's current paths could not be coupled to the source"),
+                PeakCurrentAmperes = double.NaN,
+                EnergyDissipatedJoules = double.NaN,
+                PeakTemperatureCelsius = double.NaN,
+                FinalTemperatureCelsius = double.NaN,
+            };
+        }
+
+        public ItemPaths? Paths { get; private set; }
+
+        public ModalCircuit? Modal { get; private set; }
+
+        /// <summary>The field across a body's axis at its centre per unit drive of each term (zero for a loop).</summary>
+        public Vector3D[] CrossCoupling { get; }
+
+        /// <summary>The cross-axis low-frequency loss factor at the reference resistivity, W per (T/s)^2 (zero for a loop).</summary>
+        public double CrossPowerFactor { get; private set; }
 
         public bool FieldFailed { get; }
 
@@ -380,9 +583,9 @@ public static class InductionEngine
 
         public double Start { get; }
 
-        public double Rdc { get; }
+        public double Rdc { get; private set; }
 
-        public double Ldc { get; }
+        public double Ldc { get; private set; }
 
         public double Frequency { get; }
 

@@ -89,6 +89,9 @@ public sealed record InductionResponse
     /// <summary>Whether resistance or inductance limits the current, with the ratio that says so.</summary>
     public string Regime { get; init; } = string.Empty;
 
+    /// <summary>The number of current paths the item was solved with: 1 for a thin loop, the filament count for a thick section or a body; 0 when not solved.</summary>
+    public int PathCount { get; init; }
+
     /// <summary>The largest current around the loop, A (zero for a split ring).</summary>
     public double PeakCurrentAmperes { get; init; }
 

@@ -30,7 +30,12 @@ public static class ModelValidity
     /// </summary>
     public const double DcModelSkinDepths = 1.0;
 
-    /// <summary>Checks the scenario's assumptions.</summary>
+    /// <summary>
+    /// Checks the scenario's assumptions. Returns true when the item is a loop thin against its span and against the
+    /// skin depth, so that one path holds; false when the item needs filaments over its section (a thick ring or
+    /// band, a body), which is a change of model, not a broken assumption. A rectangular loop has no filament model:
+    /// its broken assumptions are issues.
+    /// </summary>
     /// <param name="item">The item.</param>
     /// <param name="frequencyHertz">The drive's highest significant frequency.</param>
     /// <param name="alternating">True when the drive is sinusoidal (round wires then carry skin effect through the Kelvin functions).</param>
@@ -38,7 +43,7 @@ public static class ModelValidity
     /// <param name="thermal">The lumped heating model of the item.</param>
     /// <param name="issues">Receives the broken assumptions.</param>
     /// <param name="notes">Receives what was checked and holds.</param>
-    public static void Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    public static bool Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
     {
         ConductorMaterial material = item.Material;
         if (material.IsFerromagnetic)
@@ -63,10 +68,25 @@ public static class ModelValidity
             // assumptions have nothing to act on, and its zero current and unchanged temperature are exact.
             notes.Add("split ring: open circuit, so the inductance, skin-effect and heating models are not needed; the gap emf is taken around the loop's mean outline");
             CheckTemperatureCoefficient(material, notes);
-            return;
+            return true;
+        }
+
+        CheckBiot(item, startCelsius, thermal, issues, notes);
+        CheckTemperatureCoefficient(material, notes);
+        if (item.Loop is BodyGeometry)
+        {
+            notes.Add("solid body: eddy currents in coaxial filaments over its section, axis along the placement's normal");
+            return false;
         }
 
         double ratio = item.Loop.Section.GeometricMeanRadiusMeters / item.Loop.HalfSpanMeters;
+        bool ring = item.Loop is RingGeometry;
+        if (ratio > MaxGmdToLoopRadius && ring)
+        {
+            notes.Add("the section is thick for the thin-ring formula (GMD / loop radius = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + "): filaments over the section");
+            return false;
+        }
+
         if (ratio > MaxGmdToLoopRadius)
         {
             issues.Add(new ValidityIssue(
@@ -78,8 +98,12 @@ public static class ModelValidity
             notes.Add("thin-loop inductance (Grover 1946): GMD / loop half-span = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
         }
 
-        CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
+        return CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
+    }
 
+    private static void CheckBiot(ConductiveItem item, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    {
+        ConductorMaterial material = item.Material;
         double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Loop.VolumeCubicMeters, item.Loop.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
         if (biot > LumpedThermalModel.LumpedBiotLimit)
         {
@@ -89,8 +113,6 @@ public static class ModelValidity
         {
             notes.Add("lumped heating: Biot number " + Num(biot) + " < 0.1");
         }
-
-        CheckTemperatureCoefficient(material, notes);
     }
 
     private static void CheckTemperatureCoefficient(ConductorMaterial material, ICollection<string> notes)
@@ -101,12 +123,19 @@ public static class ModelValidity
         }
     }
 
-    private static void CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    private static bool CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, ICollection<string> notes)
     {
         double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
         string at = " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(delta, "m") + ")";
+        bool ring = item.Loop is RingGeometry;
         if (item.Loop.Section is RoundWire wire)
         {
+            if (ring && wire.RadiusMeters > DcModelSkinDepths * delta)
+            {
+                notes.Add("the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": filaments over the wire's section resolve the current's crowding");
+                return false;
+            }
+
             if (alternating)
             {
                 notes.Add("skin effect by the Kelvin-function formula: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
@@ -122,12 +151,18 @@ public static class ModelValidity
                 notes.Add("d.c. resistance and inductance hold: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
             }
 
-            return;
+            return true;
         }
 
         var band = (RectangularBand)item.Loop.Section;
         if (band.ThicknessMeters > DcModelSkinDepths * delta || band.WidthMeters > 2 * DcModelSkinDepths * delta)
         {
+            if (ring)
+            {
+                notes.Add("the band (" + band.Describe() + ") is not thin against the skin depth" + at + ": filaments over the band's section");
+                return false;
+            }
+
             issues.Add(new ValidityIssue(
                 "the band (" + band.Describe() + ") is not thin against the skin depth" + at + ": the d.c. resistance and inductance do not hold (a filament model is needed)",
                 AffectedResults.Current | AffectedResults.Heating));
@@ -136,6 +171,8 @@ public static class ModelValidity
         {
             notes.Add("d.c. resistance and inductance hold: band thickness / skin depth = " + Num(band.ThicknessMeters / delta) + at);
         }
+
+        return true;
     }
 
     private static string Num(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);

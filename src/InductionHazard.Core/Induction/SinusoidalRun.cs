@@ -4,13 +4,13 @@ using InductionHazard.Thermal;
 
 namespace InductionHazard.Induction;
 
-/// <summary>What <see cref="SinusoidalLoopSolver"/> found.</summary>
+/// <summary>What <see cref="SinusoidalPathSolver"/> found.</summary>
 public sealed class SinusoidalRun
 {
-    /// <summary>The current phasor at the start temperature (peak value; i(t) = Im(I e^(j omega t))), A.</summary>
+    /// <summary>The total current phasor at the start temperature (peak value; i(t) = Im(I e^(j omega t))), A.</summary>
     public Complex CurrentPhasor { get; init; }
 
-    /// <summary>The loop impedance at the start temperature, ohm.</summary>
+    /// <summary>The emf around the outline over the total current at the start temperature, ohm: the loop impedance of one path, an equivalent for a set.</summary>
     public Complex Impedance { get; init; }
 
     /// <summary>The largest current amplitude over the heating history, A.</summary>
@@ -34,3 +34,8 @@ public sealed class SinusoidalRun
     /// <summary>True when the heating ran out of steps before the end (the result is then incomplete).</summary>
     public bool BudgetExceeded { get; init; }
 }
+
+/// <summary>The periodic steady state of a path set at one temperature.</summary>
+/// <param name="PowerWatts">The cycle-averaged power dissipated, W.</param>
+/// <param name="CurrentPhasor">The total current phasor (peak), A.</param>
+public readonly record struct SteadyState(double PowerWatts, Complex CurrentPhasor);

@@ -3,7 +3,7 @@ using InductionHazard.Thermal;
 
 namespace InductionHazard.Induction;
 
-/// <summary>What <see cref="TransientLoopSolver"/> found.</summary>
+/// <summary>What <see cref="TransientPathSolver"/> found.</summary>
 public sealed class TransientRun
 {
     /// <summary>The electrical time series (thinned to what a chart needs; peaks are exact, not sampled).</summary>
@@ -12,7 +12,7 @@ public sealed class TransientRun
     /// <summary>The temperature history.</summary>
     public IReadOnlyList<HeatingSample> Heating { get; init; } = System.Array.Empty<HeatingSample>();
 
-    /// <summary>The current of largest magnitude (signed), A.</summary>
+    /// <summary>The total current around the loop or axis of largest magnitude (signed), A.</summary>
     public double PeakCurrentAmperes { get; init; }
 
     /// <summary>When the peak current occurs, s.</summary>
@@ -26,6 +26,9 @@ public sealed class TransientRun
 
     /// <summary>When the item passed its melting point and the run stopped, s; null when it did not.</summary>
     public double? MeltedAtSeconds { get; init; }
+
+    /// <summary>The modal amplitudes z at the end (path currents i = W z).</summary>
+    public double[] FinalModalAmplitudes { get; init; } = System.Array.Empty<double>();
 
     /// <summary>The steps taken.</summary>
     public int Steps { get; init; }

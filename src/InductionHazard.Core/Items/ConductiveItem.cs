@@ -51,7 +51,7 @@ public sealed class ConductiveItem
     /// <summary>"Wedding band: Ring, Gold, circle D 19.8 mm, 4 mm x 1.6 mm band, closed, Skin".</summary>
     public string Describe() =>
         Name + ": " + Shape + ", " + Material.Name + ", " + Loop.Describe() + ", "
-        + Loop.Section.Describe() + ", " + (IsSplit ? "gap " + SiFormat.Format(GapMeters, "m") : "closed") + ", " + Contact;
+        + Loop.Section.Describe() + ", " + (Loop is BodyGeometry ? string.Empty : IsSplit ? "gap " + SiFormat.Format(GapMeters, "m") + ", " : "closed, ") + Contact;
 
     /// <inheritdoc />
     public override string ToString() => Name;

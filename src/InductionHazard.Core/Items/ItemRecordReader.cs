@@ -29,6 +29,8 @@ public static class ItemRecordReader
         ["Width"] = new[] { "BandWidth" },
         ["Thickness"] = new[] { "BandThickness" },
         ["Height"] = new[] { "LoopHeight" },
+        ["Length"] = new[] { "Len", "Long" },
+        ["WallThickness"] = new[] { "Wall", "WallThick" },
         ["Gap"] = new[] { "GapWidth", "Split" },
         ["Contact"] = new[] { "ContactKind", "Wear", "Worn" },
     };
@@ -54,10 +56,17 @@ public static class ItemRecordReader
         ContactKind contact = ReadContact(fields);
 
         string label = Label(rowNumber, name);
-        LoopGeometry? loop = shape == ItemShape.RectangularLoop
-            ? ReadRectangle(fields, wire, width)
-            : ReadRing(fields, mean, inner, wire, width, thickness);
-        if (loop is not null)
+        LoopGeometry? loop = shape switch
+        {
+            ItemShape.RectangularLoop => ReadRectangle(fields, wire, width),
+            ItemShape.Ring => ReadRing(fields, mean, inner, wire, width, thickness),
+            _ => ReadBody(fields, shape, mean, thickness),
+        };
+        if (loop is BodyGeometry && gap > 0)
+        {
+            fields.AddError("Gap", "applies to a ring or a loop; a " + shape.ToString().ToLowerInvariant() + " has no gap");
+        }
+        else if (loop is not null)
         {
             double perimeter = loop.PathLengthMeters;
             if (gap < 0)
@@ -131,6 +140,82 @@ public static class ItemRecordReader
         double? diameter = ReadDiameter(fields, mean, inner, section);
         return diameter is { } d ? new RingGeometry(d, section!) : null;
     }
+
+    /// <summary>
+    /// A body of revolution: a Disc (Diameter, Thickness), a Cylinder (Diameter, Length), a Tube (Diameter outside,
+    /// WallThickness, Length) or a Sphere (Diameter). A field that belongs to another shape is refused, not ignored.
+    /// </summary>
+    private static BodyGeometry? ReadBody(RecordFields fields, ItemShape shape, double? diameter, double? thickness)
+    {
+        string word = shape.ToString();
+        foreach (string other in new[] { "InnerDiameter", "WireDiameter", "Width", "Height" })
+        {
+            if (fields.Has(other, A(other)))
+            {
+                fields.AddError(other, "does not apply to a " + word.ToLowerInvariant() + " (give " + BodyFields(shape) + ")");
+            }
+        }
+
+        if (shape != ItemShape.Disc && fields.Has("Thickness", A("Thickness")))
+        {
+            fields.AddError("Thickness", "does not apply to a " + word.ToLowerInvariant() + " (give " + BodyFields(shape) + ")");
+        }
+
+        bool needsLength = shape is ItemShape.Cylinder or ItemShape.Tube;
+        double? length = needsLength || fields.Has("Length", A("Length")) ? fields.Quantity("Length", QuantityKind.Length, required: needsLength, A("Length")) : null;
+        if (!needsLength && length is not null)
+        {
+            fields.AddError("Length", "does not apply to a " + word.ToLowerInvariant() + " (give " + BodyFields(shape) + ")");
+        }
+
+        double? wall = shape == ItemShape.Tube ? fields.Quantity("WallThickness", QuantityKind.Length, required: true, A("WallThickness")) : null;
+        if (shape != ItemShape.Tube && fields.Has("WallThickness", A("WallThickness")))
+        {
+            fields.AddError("WallThickness", "does not apply to a " + word.ToLowerInvariant() + " (give " + BodyFields(shape) + ")");
+        }
+
+        if (!fields.Has("Diameter", A("Diameter")))
+        {
+            fields.AddError("Diameter", "is missing (a " + word.ToLowerInvariant() + " needs " + BodyFields(shape) + ")");
+        }
+
+        if (shape == ItemShape.Disc && !fields.Has("Thickness", A("Thickness")))
+        {
+            fields.AddError("Thickness", "is missing (a disc needs " + BodyFields(shape) + ")");
+        }
+
+        bool ok = Positive(fields, "Diameter", diameter);
+        switch (shape)
+        {
+            case ItemShape.Disc:
+                return ok & Positive(fields, "Thickness", thickness) && fields.Errors.Count == 0 ? new CylinderBody(diameter!.Value, thickness!.Value, "disc") : null;
+            case ItemShape.Cylinder:
+                return ok & Positive(fields, "Length", length) && fields.Errors.Count == 0 ? new CylinderBody(diameter!.Value, length!.Value, "cylinder") : null;
+            case ItemShape.Tube:
+                if (!(ok & Positive(fields, "WallThickness", wall) & Positive(fields, "Length", length)))
+                {
+                    return null;
+                }
+
+                if (2 * wall!.Value >= diameter!.Value)
+                {
+                    fields.AddError("WallThickness", "(" + Mm(wall.Value) + ") must be less than half the outside diameter (" + Mm(diameter.Value) + "); a tube this thick is a Cylinder");
+                    return null;
+                }
+
+                return fields.Errors.Count == 0 ? new TubeBody(diameter.Value, wall.Value, length!.Value) : null;
+            default:
+                return ok && fields.Errors.Count == 0 ? new SphereBody(diameter!.Value) : null;
+        }
+    }
+
+    private static string BodyFields(ItemShape shape) => shape switch
+    {
+        ItemShape.Disc => "Diameter and Thickness",
+        ItemShape.Cylinder => "Diameter and Length",
+        ItemShape.Tube => "Diameter (outside), WallThickness and Length",
+        _ => "Diameter",
+    };
 
     /// <summary>A rectangular loop: Width and Height are the sides of its centre line, of round wire WireDiameter.</summary>
     private static RectangularLoopGeometry? ReadRectangle(RecordFields fields, double? wire, double? width)

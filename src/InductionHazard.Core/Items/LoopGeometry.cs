@@ -1,3 +1,5 @@
+using System.Collections.Generic;
+
 namespace InductionHazard.Items;
 
 /// <summary>
@@ -30,11 +32,19 @@ public abstract class LoopGeometry
     /// <summary>The largest dimension of the item, m.</summary>
     public abstract double LargestDimensionMeters { get; }
 
-    /// <summary>The metal volume, section area times path length, m^3.</summary>
-    public double VolumeCubicMeters => Section.AreaSquareMeters * PathLengthMeters;
+    /// <summary>The metal volume, m^3: section area times path length for a loop.</summary>
+    public virtual double VolumeCubicMeters => Section.AreaSquareMeters * PathLengthMeters;
 
-    /// <summary>The outer surface, section perimeter times path length, m^2.</summary>
-    public double SurfaceSquareMeters => Section.PerimeterMeters * PathLengthMeters;
+    /// <summary>The outer surface, m^2: section perimeter times path length for a loop.</summary>
+    public virtual double SurfaceSquareMeters => Section.PerimeterMeters * PathLengthMeters;
+
+    /// <summary>
+    /// The item as coaxial current paths (filaments over its meridional (r, z) section, z along the axis), cells no
+    /// thicker than <paramref name="surfaceCellMeters"/> at every surface and growing inward, and at least
+    /// <paramref name="refinement"/> times the fewest cells across each dimension (a finer mesh to show convergence); null for an outline
+    /// that is not a body of revolution (a rectangular loop is one path).
+    /// </summary>
+    public virtual IReadOnlyList<Filament>? Filaments(double surfaceCellMeters, int refinement = 1) => null;
 
     /// <summary>"circle D 20 mm" or "rectangle 300 mm x 400 mm".</summary>
     public abstract string Describe();

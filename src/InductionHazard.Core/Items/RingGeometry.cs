@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 
 namespace InductionHazard.Items;
 
@@ -38,6 +39,18 @@ public sealed class RingGeometry : LoopGeometry
 
     /// <summary>The loop radius.</summary>
     public override double HalfSpanMeters => LoopRadiusMeters;
+
+    /// <summary>
+    /// The ring as coaxial filaments over its section: polar cells over a round wire's disc, rectangular cells over a
+    /// band (width along the axis, thickness radial), graded toward every surface.
+    /// </summary>
+    public override IReadOnlyList<Filament> Filaments(double surfaceCellMeters, int refinement = 1) => Section switch
+    {
+        RoundWire wire => FilamentMesh.Polar(LoopRadiusMeters, wire.RadiusMeters, 0, 2 * Math.PI, surfaceCellMeters, refinement * FilamentMesh.MinimumCells),
+        RectangularBand band => FilamentMesh.Rectangle(
+            LoopRadiusMeters - (band.ThicknessMeters / 2), LoopRadiusMeters + (band.ThicknessMeters / 2), -band.WidthMeters / 2, band.WidthMeters / 2, surfaceCellMeters, innerSurface: true, outerSurface: true, endSurfaces: true, minimumCells: refinement * FilamentMesh.MinimumCells),
+        _ => throw new InvalidOperationException("unknown section " + Section.GetType().Name),
+    };
 
     /// <inheritdoc />
     public override string Describe() => "circle D " + Quantities.SiFormat.Format(MeanDiameterMeters, "m");

@@ -8,7 +8,7 @@ using InductionHazard.Quantities;
 
 namespace InductionHazard.PowerShell.Commands;
 
-/// <summary>New-ConductiveItem: a ring, band or bracelet, from parameters or from data rows.</summary>
+/// <summary>New-ConductiveItem: a ring, band, loop or solid body, from parameters or from data rows.</summary>
 [Cmdlet(VerbsCommon.New, "ConductiveItem", DefaultParameterSetName = ParametersSet)]
 [OutputType(typeof(ConductiveItem))]
 public sealed class NewConductiveItemCommand : PSCmdlet
@@ -22,7 +22,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(ParameterSetName = ParametersSet, Position = 0)]
     public string? Name { get; set; }
 
-    /// <summary>The shape: Ring (a round-wire ring or a band) or RectangularLoop (-Width x -Height of round wire); closed, or split when -Gap is given.</summary>
+    /// <summary>The shape: Ring (a round-wire ring or a band) or RectangularLoop (-Width x -Height of round wire), closed or split (-Gap); or a solid body: Disc (-Diameter -Thickness), Cylinder (-Diameter -Length), Tube (-Diameter -WallThickness -Length) or Sphere (-Diameter).</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     public ItemShape Shape { get; set; } = ItemShape.Ring;
 
@@ -32,7 +32,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [ArgumentCompleter(typeof(MaterialCompleter))]
     public ConductorMaterial Material { get; set; } = null!;
 
-    /// <summary>The loop's mean diameter (the centre line of the wire or band), for example '20 mm'.</summary>
+    /// <summary>The loop's mean diameter (the centre line of the wire or band), for example '20 mm'; a body's outside diameter.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]
     public double? Diameter { get; set; }
@@ -52,7 +52,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Quantity(QuantityKind.Length)]
     public double? Width { get; set; }
 
-    /// <summary>The radial thickness of a band.</summary>
+    /// <summary>The radial thickness of a band; the thickness of a Disc.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]
     public double? Thickness { get; set; }
@@ -61,6 +61,16 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]
     public double? Height { get; set; }
+
+    /// <summary>The length of a Cylinder or Tube along its axis.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? Length { get; set; }
+
+    /// <summary>The wall thickness of a Tube.</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    [Quantity(QuantityKind.Length)]
+    public double? WallThickness { get; set; }
 
     /// <summary>The width of the gap of a split ring; omit or 0 for a closed ring.</summary>
     [Parameter(ParameterSetName = ParametersSet)]

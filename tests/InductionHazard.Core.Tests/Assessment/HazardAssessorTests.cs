@@ -75,7 +75,8 @@ public class HazardAssessorTests
     [Fact]
     public void AnInvalidModelIsIndeterminateWithItsReasonNeverClear()
     {
-        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
+        // A rectangular loop whose wire is too thick for the thin-loop formula has no filament model: outside validity.
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Frame("Copper", 0.02, 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
         Assert.Equal(Verdict.Indeterminate, a.Verdict);
         Assert.True(double.IsNaN(a.MinimumMargin));
         Assert.Contains(a.Reasons, r => r.Contains("thin-loop", StringComparison.Ordinal));

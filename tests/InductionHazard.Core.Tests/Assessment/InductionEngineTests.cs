@@ -82,17 +82,23 @@ public class InductionEngineTests
         Assert.Contains("anticlockwise", r.CurrentSense, StringComparison.Ordinal);
     }
 
-    [Validates("ring current against Delta Phi / L", "inductive limit", "2e-3")]
+    [Validates("thick-wire ring in a 0.1 us ramp (filaments) against Delta Phi / L_surface", "Grover 1946, surface-current ring inductance (Y = 0)", "3 %, and below it")]
     [Fact]
     public void ARampMuchFasterThanLOverRDrivesNearDeltaPhiOverL()
     {
-        // The inductive limit: I -> Delta Phi / L; the naive e/R is far larger.
-        double d = 0.02, a = 0.001, deltaB = 1.0, ramp = 1e-7;
-        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 1.75);
+        // The inductive limit: I -> Delta Phi / L; the naive e/R is far larger. A 0.1 us ramp puts the skin depth
+        // (about 20 um) far inside a 0.5 mm wire, so the current flows on the wire's surface and L is Grover's
+        // surface-current value mu0 R (ln(8R/a) - 2) (Grover 1946, Y = 0), solved here by filaments over the section.
+        double d = 0.02, a = 0.0005, deltaB = 1.0, ramp = 1e-7;
+        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 2);
         InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", d, 2 * a, contact: "Free"), Fixtures.UniformRamp(0, deltaB, ramp));
         double limit = Math.PI * d * d / 4 * deltaB / inductance;
-        Within.Relative(limit, r.InductiveLimitCurrentAmperes!.Value, 1e-12, "Delta Phi / L");
-        Within.Relative(limit, r.PeakCurrentAmperes, 2e-3, "peak current against Delta Phi / L");
+        Assert.True(r.PathCount > 1, "filaments over the wire's section");
+        Assert.True(r.IsValid, string.Join("; ", r.ValidityIssues.Select(i => i.Reason)));
+        // Tolerance: the current also decays through the surface resistance during the ramp, by about T / (2 L/R_surface)
+        // = 2 % here (R_surface = rho 2 pi R / (2 pi a delta)), and the thin-ring formula neglects terms of order (a/R)^2.
+        Assert.True(r.PeakCurrentAmperes < limit, "never above the inductive limit");
+        Within.Relative(limit, r.PeakCurrentAmperes, 3e-2, "peak current against Delta Phi / L_surface");
         Assert.True(r.NaiveCurrentAmperes > 100 * r.PeakCurrentAmperes);
         Assert.Contains("inductive", r.Regime, StringComparison.Ordinal);
     }
@@ -126,10 +132,12 @@ public class InductionEngineTests
     }
 
     [Fact]
-    public void AThickSectionIsOutsideTheThinRingModel()
+    public void AThickSectionIsSolvedWithFilamentsNotTheThinRingFormula()
     {
         InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.006), Fixtures.UniformSine(0.01, 50));
-        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("thin-loop", StringComparison.Ordinal));
+        Assert.True(r.PathCount > 1, "filaments over the section");
+        Assert.True(r.IsValid, string.Join("; ", r.ValidityIssues.Select(i => i.Reason)));
+        Assert.Contains(r.ModelNotes, n => n.Contains("thick for the thin-ring formula", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -140,10 +148,11 @@ public class InductionEngineTests
     }
 
     [Fact]
-    public void AFastPulseInAThickWireIsOutsideTheDcModel()
+    public void AFastPulseInAThickWireIsSolvedWithFilaments()
     {
         InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.002), Fixtures.UniformRamp(0, 1, 1e-5));
-        Assert.Contains(r.ValidityIssues, i => i.Reason.Contains("skin depth", StringComparison.Ordinal));
+        Assert.True(r.PathCount > 1, "filaments over the wire's section");
+        Assert.Contains(r.ModelNotes, n => n.Contains("exceeds the skin depth", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -7,29 +7,38 @@ using InductionHazard.Thermal;
 namespace InductionHazard.Induction;
 
 /// <summary>
-/// A closed loop in a sinusoidal field, in periodic steady state: the phasor current I = E / Z(f, T) with the
-/// loop's impedance including skin effect, and lumped heating with the cycle-averaged power
-/// P(T) = |E|^2 Re Z(T) / (2 |Z(T)|^2). Two time scales: the cycle is solved exactly by phasors, the heating
-/// over minutes by <see cref="HeatingIntegrator"/>.
+/// A closed loop or path set in a sinusoidal field, in periodic steady state: the response at each temperature
+/// (the cycle-averaged power and the total current phasor, from phasors) and lumped heating with that power. Two time
+/// scales: the cycle is solved exactly by phasors, the heating over minutes by <see cref="HeatingIntegrator"/>.
 /// </summary>
-public sealed class SinusoidalLoopSolver
+public sealed class SinusoidalPathSolver
 {
     private const int SamplesPerPeriod = 128;
 
-    private readonly Func<double, Complex> _impedanceAt;
+    private readonly Func<double, SteadyState> _responseAt;
     private readonly LumpedThermalModel _thermal;
 
     /// <summary>Creates the solver.</summary>
-    /// <param name="impedanceAtCelsius">The loop impedance at the drive frequency as a function of temperature, ohm.</param>
-    /// <param name="thermal">The lumped heating of the loop.</param>
-    public SinusoidalLoopSolver(Func<double, Complex> impedanceAtCelsius, LumpedThermalModel thermal)
+    /// <param name="responseAtCelsius">The steady response at a temperature: cycle-averaged power and total current phasor.</param>
+    /// <param name="thermal">The lumped heating of the item.</param>
+    public SinusoidalPathSolver(Func<double, SteadyState> responseAtCelsius, LumpedThermalModel thermal)
     {
-        _impedanceAt = impedanceAtCelsius;
+        _responseAt = responseAtCelsius;
         _thermal = thermal;
     }
 
+    /// <summary>
+    /// The steady response of one loop of impedance Z(T) to an emf phasor E: I = E / Z, P = |E|^2 Re Z / (2 |Z|^2).
+    /// </summary>
+    public static Func<double, SteadyState> Loop(Func<double, Complex> impedanceAtCelsius, Complex emfPhasor) => celsius =>
+    {
+        Complex z = impedanceAtCelsius(celsius);
+        double e2 = emfPhasor.Magnitude * emfPhasor.Magnitude;
+        return new SteadyState(0.5 * e2 * z.Real / (z.Magnitude * z.Magnitude), emfPhasor / z);
+    };
+
     /// <summary>Runs the heating while the field is on and the cooling after it, to the end of the exposure.</summary>
-    /// <param name="emfPhasor">The emf phasor E (peak), e(t) = Im(E e^(j omega (t - t0))), V.</param>
+    /// <param name="emfPhasor">The emf phasor E (peak) around the outline, e(t) = Im(E e^(j omega (t - t0))), V.</param>
     /// <param name="frequencyHertz">The drive frequency.</param>
     /// <param name="fieldOn">When the field starts, s.</param>
     /// <param name="fieldOff">When the field stops, s (no later than <paramref name="exposureEnd"/>).</param>
@@ -39,7 +48,6 @@ public sealed class SinusoidalLoopSolver
     /// <param name="stopAboveCelsius">The melting point: the run stops when the item passes it (a molten loop opens).</param>
     public SinusoidalRun Run(Complex emfPhasor, double frequencyHertz, double fieldOn, double fieldOff, double exposureEnd, double celsius0, CancellationToken cancellation, double stopAboveCelsius = double.PositiveInfinity)
     {
-        double emfSquared = emfPhasor.Magnitude * emfPhasor.Magnitude;
         double peakCurrent = 0;
         double Power(double t, double celsius)
         {
@@ -48,10 +56,9 @@ public sealed class SinusoidalLoopSolver
                 return 0;
             }
 
-            Complex z = _impedanceAt(celsius);
-            double amplitude = emfPhasor.Magnitude / z.Magnitude;
-            peakCurrent = Math.Max(peakCurrent, amplitude);
-            return 0.5 * emfSquared * z.Real / (z.Magnitude * z.Magnitude);
+            SteadyState state = _responseAt(celsius);
+            peakCurrent = Math.Max(peakCurrent, state.CurrentPhasor.Magnitude);
+            return state.PowerWatts;
         }
 
         var heating = new List<HeatingSample> { new(fieldOn, celsius0, Power(fieldOn, celsius0)) };
@@ -62,12 +69,11 @@ public sealed class SinusoidalLoopSolver
             last = HeatingIntegrator.Run(_thermal, (_, _) => 0.0, fieldOff, exposureEnd, on.FinalCelsius, heating, cancellation);
         }
 
-        Complex z0 = _impedanceAt(celsius0);
-        Complex current = emfPhasor / z0;
+        Complex current = _responseAt(celsius0).CurrentPhasor;
         return new SinusoidalRun
         {
             CurrentPhasor = current,
-            Impedance = z0,
+            Impedance = emfPhasor / current,
             PeakCurrentAmperes = Math.Max(peakCurrent, current.Magnitude),
             Circuit = OnePeriod(emfPhasor, current, frequencyHertz, fieldOn, celsius0),
             Heating = heating,

@@ -7,14 +7,14 @@ using Xunit;
 
 namespace InductionHazard.Tests.Induction;
 
-public class TransientLoopSolverTests
+public class TransientPathSolverTests
 {
     private const double L = 3.3e-8, R = 3.6e-4;
     private static readonly double Tau = L / R;
 
     /// <summary>A solver whose loop does not heat (an enormous heat capacity), so R stays fixed.</summary>
-    private static TransientLoopSolver FixedResistance(double maxStep = double.PositiveInfinity) =>
-        new(L, _ => R, new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0))) { MaxStepSeconds = maxStep };
+    private static TransientPathSolver FixedResistance(double maxStep = double.PositiveInfinity) =>
+        new(ModalCircuit.OneLoop(L, R), _ => 1, new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0))) { MaxStepSeconds = maxStep };
 
     [Validates("i(t) = (e/R)(1 - exp(-tR/L))", "RL circuit theory (closed form)", "1e-9")]
     [Fact]
@@ -84,7 +84,7 @@ public class TransientLoopSolverTests
     {
         // A loop whose resistance follows rho(T) carries less current as it heats under a constant emf.
         var thermal = new LumpedThermalModel(1e-3, 1e-4, new ThermalEnvironment(20, 0, 0));
-        var solver = new TransientLoopSolver(L, t => R * (1 + (0.00393 * (t - 20))), thermal);
+        var solver = new TransientPathSolver(ModalCircuit.OneLoop(L, R), t => 1 + (0.00393 * (t - 20)), thermal);
         double e = 0.05, ramp = 0.05;
         TransientRun run = solver.Run(t => t < ramp ? e : 0, new[] { ramp }, 0, ramp, 20, CancellationToken.None);
         Assert.True(run.FinalCelsius > 100, "the loop heats");

@@ -7,7 +7,7 @@ using Xunit;
 
 namespace InductionHazard.Tests.Induction;
 
-public class SinusoidalLoopSolverTests
+public class SinusoidalPathSolverTests
 {
     [Validates("|I| = |E|/|Z|, i(t), energy |I|^2 Re Z / 2", "phasor analysis", "1e-12, 1e-9")]
     [Fact]
@@ -16,7 +16,7 @@ public class SinusoidalLoopSolverTests
         var z = new Complex(3.6e-4, 2e-3);
         var thermal = new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0));
         var emf = new Complex(0, -0.05);
-        SinusoidalRun run = new SinusoidalLoopSolver(_ => z, thermal).Run(emf, 10000, 0, 1, 1, 20, CancellationToken.None);
+        SinusoidalRun run = new SinusoidalPathSolver(SinusoidalPathSolver.Loop(_ => z, emf), thermal).Run(emf, 10000, 0, 1, 1, 20, CancellationToken.None);
         Within.Relative(emf.Magnitude / z.Magnitude, run.PeakCurrentAmperes, 1e-12, "|I| = |E| / |Z|");
         Within.Relative(0.5 * Math.Pow(emf.Magnitude / z.Magnitude, 2) * z.Real, run.EnergyJoules, 1e-9, "energy = |I|^2 Re Z / 2 over 1 s");
         double lag = Math.Atan2(z.Imaginary, z.Real);
@@ -37,7 +37,7 @@ public class SinusoidalLoopSolverTests
         var z = new Complex(1e-3, 0);
         var emf = new Complex(0.01, 0);
         double power = 0.5 * 0.01 * 0.01 / 1e-3, tau = Capacity / (H * Area);
-        SinusoidalRun run = new SinusoidalLoopSolver(_ => z, thermal).Run(emf, 50, 0, 3 * tau, 3 * tau, 20, CancellationToken.None);
+        SinusoidalRun run = new SinusoidalPathSolver(SinusoidalPathSolver.Loop(_ => z, emf), thermal).Run(emf, 50, 0, 3 * tau, 3 * tau, 20, CancellationToken.None);
         Within.Relative(20 + (power / (H * Area) * (1 - Math.Exp(-3))), run.FinalCelsius, 1e-4, "temperature after 3 time constants");
     }
 }

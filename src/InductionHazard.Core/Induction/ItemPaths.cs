@@ -1,0 +1,179 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Numerics;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// The current paths an item is solved with, chosen per scenario: one path for a loop that is thin against its own
+/// span and against the skin depth; coaxial filaments over the section of a thick ring or band and of every body of
+/// revolution, cells a third of the skin depth thick at each surface. Holds the set, its modes at the starting
+/// resistivity and what the notes say of it.
+/// </summary>
+public sealed class ItemPaths
+{
+    /// <summary>The filament cells at a surface are at most this fraction of the skin depth thick.</summary>
+    public const double SurfaceCellSkinDepths = 1.0 / 3;
+
+    /// <summary>
+    /// The most filaments solved: the inductance matrix grows as the square and its modes as the cube of the count.
+    /// A section that needs more (a thick body at a high frequency) is refused, not solved coarsely.
+    /// </summary>
+    public const int MaxPaths = 700;
+
+    private ItemPaths(ConductiveItem item, PathSet? paths, PathModes? modes, string description, string? problem, double referenceResistivity)
+    {
+        Item = item;
+        Paths = paths;
+        Modes = modes;
+        Description = description;
+        Problem = problem;
+        ReferenceResistivityOhmMeters = referenceResistivity;
+    }
+
+    /// <summary>The item.</summary>
+    public ConductiveItem Item { get; }
+
+    /// <summary>The path set; null when it could not be built (see <see cref="Problem"/>).</summary>
+    public PathSet? Paths { get; }
+
+    /// <summary>Its modes at the reference resistivity; null when not found.</summary>
+    public PathModes? Modes { get; }
+
+    /// <summary>True for one path (a thin loop).</summary>
+    public bool IsSingle => Paths is { Count: 1 };
+
+    /// <summary>What was built and why, for the notes.</summary>
+    public string Description { get; }
+
+    /// <summary>Why no solution can be given with these paths; null when they hold.</summary>
+    public string? Problem { get; }
+
+    /// <summary>The resistivity the modes were found at (the item's at its starting temperature), ohm m.</summary>
+    public double ReferenceResistivityOhmMeters { get; }
+
+    /// <summary>s(T) = rho(T) / rho_ref: every path's resistance relative to the reference.</summary>
+    public double ScaleAt(double celsius) => Item.Material.ResistivityAt(celsius) / ReferenceResistivityOhmMeters;
+
+    /// <summary>Chooses and builds the paths for an item at a drive's significant frequency.</summary>
+    /// <param name="item">The item (closed).</param>
+    /// <param name="frequencyHertz">The drive's significant frequency.</param>
+    /// <param name="startCelsius">The item's starting temperature (the modes' reference resistivity).</param>
+    /// <param name="thinLoop">True when the loop is thin against its span and the skin depth (one path holds).</param>
+    /// <param name="refinement">Multiplies the fewest cells across each dimension, and divides the surface cell (to show convergence).</param>
+    public static ItemPaths For(ConductiveItem item, double frequencyHertz, double startCelsius, bool thinLoop, int refinement = 1)
+    {
+        double rho = item.Material.ResistivityAt(startCelsius);
+        if (thinLoop || item.Loop is RectangularLoopGeometry)
+        {
+            var circuit = new RingCircuit(item);
+            PathSet single = PathSet.OnePath(circuit.DcInductanceHenries, item.Loop.PathLengthMeters / item.Loop.Section.AreaSquareMeters, "one path");
+            return new ItemPaths(item, single, single.Modes(rho), "one path: the loop as a thin ring (Grover 1946)", null, rho);
+        }
+
+        double delta = SkinEffect.SkinDepthMeters(rho, frequencyHertz, item.Material.RelativePermeability);
+        double cell = SurfaceCellSkinDepths * delta / refinement;
+        IReadOnlyList<Filament>? cells = item.Loop.Filaments(cell, refinement);
+        if (cells is null)
+        {
+            return new ItemPaths(item, null, null, "no filament model for this outline", "no filament model exists for a " + item.Loop.Describe(), rho);
+        }
+
+        if (cells.Count > MaxPaths)
+        {
+            return new ItemPaths(
+                item,
+                null,
+                null,
+                cells.Count.ToString(CultureInfo.InvariantCulture) + " filaments needed",
+                "the skin depth (" + SiFormat.Format(delta, "m") + " at " + SiFormat.Format(frequencyHertz, "Hz") + ") is so small against the item that resolving it needs "
+                + cells.Count.ToString("N0", CultureInfo.InvariantCulture) + " filaments, more than the " + MaxPaths.ToString(CultureInfo.InvariantCulture) + " the filament model solves",
+                rho);
+        }
+
+        PathSet set = PathSet.Coaxial(cells, cells.Count.ToString(CultureInfo.InvariantCulture) + " coaxial filaments");
+        PathModes? modes = set.Modes(rho);
+        string description = cells.Count.ToString(CultureInfo.InvariantCulture) + " coaxial filaments over the section, cells at most "
+            + SiFormat.Format(Math.Min(cell, double.MaxValue), "m") + " (a third of the skin depth " + SiFormat.Format(delta, "m") + ") at each surface, growing " + FilamentMesh.Growth.ToString(CultureInfo.InvariantCulture) + "x inward";
+        return modes is null
+            ? new ItemPaths(item, set, null, description, "the filament inductance matrix is not positive definite (the mesh cannot represent this section)", rho)
+            : new ItemPaths(item, set, modes, description, null, rho);
+    }
+
+    /// <summary>
+    /// The flux per unit drive of each term through each path (paths x terms), Wb per drive unit: through the disc
+    /// of each filament (radius r_i, at z_i along the normal), or through the loop's own outline for one path.
+    /// </summary>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over a path.</exception>
+    public double[,] Coupling(FieldSource source, Vector3D centre, Vector3D normal)
+    {
+        int terms = source.Terms.Count;
+        if (Paths?.Filaments is not { } cells)
+        {
+            double[] outline = FluxCoupling.PerUnitDrive(source, centre, normal, Item.Loop);
+            var single = new double[1, terms];
+            for (int j = 0; j < terms; j++)
+            {
+                single[0, j] = outline[j];
+            }
+
+            return single;
+        }
+
+        // A cell of uniform current density I/S takes in the power I times the cell's mean emf, so its coupling is the
+        // flux averaged over the cell: by 2 x 2 Gauss-Legendre points, exact for the r^2 of a uniform field.
+        var coupling = new double[cells.Count, terms];
+        for (int j = 0; j < terms; j++)
+        {
+            IFieldGeometry geometry = source.Terms[j].Geometry;
+            for (int i = 0; i < cells.Count; i++)
+            {
+                double sum = 0;
+                foreach ((double r, double z, double weight) in cells[i].GaussSamples())
+                {
+                    sum += weight * geometry.FluxThroughDisc(centre + (z * normal), normal, Math.Max(r, 0));
+                }
+
+                coupling[i, j] = sum;
+            }
+        }
+
+        return coupling;
+    }
+
+    /// <summary>
+    /// The steady response of the modes at a temperature to drives with phasors U_j (of u_j = -d_j'): mode k carries
+    /// z_k = F_k / (s + j omega lambda_k), F = C U; the power is s |z|^2 / 2 plus the cross-axis part, and the total
+    /// current t . z.
+    /// </summary>
+    public static Func<double, SteadyState> Steady(ModalCircuit circuit, Complex[] drivePhasors, double omega, Func<double, double> scaleAt, double crossPowerAtUnitScale)
+    {
+        var forcing = new Complex[circuit.Count];
+        for (int k = 0; k < circuit.Count; k++)
+        {
+            for (int j = 0; j < drivePhasors.Length; j++)
+            {
+                forcing[k] += circuit.Coupling[k, j] * drivePhasors[j];
+            }
+        }
+
+        return celsius =>
+        {
+            double s = scaleAt(celsius);
+            double power = 0;
+            Complex total = Complex.Zero;
+            for (int k = 0; k < forcing.Length; k++)
+            {
+                Complex z = forcing[k] / new Complex(s, omega * circuit.Lambdas[k]);
+                power += (z.Real * z.Real) + (z.Imaginary * z.Imaginary);
+                total += circuit.TotalWeights[k] * z;
+            }
+
+            return new SteadyState((0.5 * s * power) + (crossPowerAtUnitScale / s), total);
+        };
+    }
+}

@@ -1,0 +1,167 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Items;
+using MathNet.Numerics.LinearAlgebra;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// An item as N coupled current paths: the N x N inductance matrix L, and for each path the ratio of its length
+/// to its section (so that R_i(T) = rho(T) l_i / S_i). One path for a thin loop; coaxial filaments over the
+/// section of a thick ring or a body of revolution. The solvers never ask which shape built it.
+/// </summary>
+public sealed class PathSet
+{
+    private PathSet(double[,] inductance, double[] lengthOverArea, IReadOnlyList<Filament>? filaments, string description)
+    {
+        InductanceHenries = inductance;
+        LengthOverArea = lengthOverArea;
+        Filaments = filaments;
+        Description = description;
+    }
+
+    /// <summary>The number of paths.</summary>
+    public int Count => LengthOverArea.Length;
+
+    /// <summary>The inductance matrix, self terms on the diagonal, H.</summary>
+    public double[,] InductanceHenries { get; }
+
+    /// <summary>Each path's length over its conducting section, 1/m: R_i = rho l_i / S_i.</summary>
+    public double[] LengthOverArea { get; }
+
+    /// <summary>The filaments, for a coaxial set; null for a single path of another outline.</summary>
+    public IReadOnlyList<Filament>? Filaments { get; }
+
+    /// <summary>How the set was built, for the model notes.</summary>
+    public string Description { get; }
+
+    /// <summary>One path: a thin loop with inductance L and resistance rho l / S.</summary>
+    public static PathSet OnePath(double inductanceHenries, double lengthOverArea, string description) =>
+        new(new[,] { { inductanceHenries } }, new[] { lengthOverArea }, null, description);
+
+    /// <summary>
+    /// Coaxial filaments: self terms from each cell's section (<see cref="CoaxialInductance.SelfHenries"/>), mutual
+    /// terms by Maxwell's formula (averaged over sub-filaments for neighbouring cells), R_i = rho 2 pi r_i / S_i.
+    /// </summary>
+    public static PathSet Coaxial(IReadOnlyList<Filament> cells, string description)
+    {
+        int n = cells.Count;
+        var l = new double[n, n];
+        var g = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            Filament p = cells[i];
+            l[i, i] = CoaxialInductance.SelfHenries(p);
+            g[i] = p.PathLengthMeters / p.AreaSquareMeters;
+            for (int j = i + 1; j < n; j++)
+            {
+                Filament q = cells[j];
+                double m = CoaxialInductance.MutualHenries(p, q);
+                l[i, j] = m;
+                l[j, i] = m;
+            }
+        }
+
+        return new PathSet(l, g, cells, description);
+    }
+
+    /// <summary>
+    /// The modes of the (L, R) pencil at a reference resistivity: with R0 = rho_ref diag(l/S), the symmetric matrix
+    /// R0^(-1/2) L R0^(-1/2) = Q diag(lambda) Q^T. Null when L is not positive definite (a mesh too coarse for its
+    /// inductances to be physical), which the caller reports rather than solves.
+    /// </summary>
+    public PathModes? Modes(double referenceResistivityOhmMeters)
+    {
+        int n = Count;
+        var scale = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            scale[i] = 1 / Math.Sqrt(referenceResistivityOhmMeters * LengthOverArea[i]);
+        }
+
+        if (n == 1)
+        {
+            double lambda = InductanceHenries[0, 0] * scale[0] * scale[0];
+            return lambda > 0 ? new PathModes(new[] { lambda }, new[,] { { scale[0] } }) : null;
+        }
+
+        Matrix<double> a = Matrix<double>.Build.Dense(n, n, (i, j) => scale[i] * InductanceHenries[i, j] * scale[j]);
+        var evd = a.Evd(Symmetricity.Symmetric);
+        Vector<double> values = evd.EigenValues.Real();
+        Matrix<double> q = evd.EigenVectors;
+        var lambdas = new double[n];
+        var w = new double[n, n];
+        for (int k = 0; k < n; k++)
+        {
+            lambdas[k] = values[k];
+            if (!(lambdas[k] > 0))
+            {
+                return null;
+            }
+
+            for (int i = 0; i < n; i++)
+            {
+                w[i, k] = scale[i] * q[i, k];
+            }
+        }
+
+        return new PathModes(lambdas, w);
+    }
+}
+
+/// <summary>
+/// The modes of a path set: with path currents i = W z, the circuit L i' + s R0 i = e becomes
+/// lambda_k z_k' + s z_k = (W^T e)_k, one RL circuit per mode with inductance lambda_k and resistance s, and the power
+/// i^T R i = s z^T z. W = R0^(-1/2) Q.
+/// </summary>
+/// <param name="Lambdas">Each mode's inductance lambda_k at the reference resistivity (its time constant at s = 1), s.</param>
+/// <param name="Weights">W, paths x modes: path current per unit modal amplitude.</param>
+public sealed record PathModes(double[] Lambdas, double[,] Weights)
+{
+    /// <summary>The number of modes.</summary>
+    public int Count => Lambdas.Length;
+
+    /// <summary>
+    /// The circuit of the modes driven by source terms: modal coupling C = W^T M (modes x terms) from the paths'
+    /// flux per unit drive M (paths x terms), and the weights of the total current sum_i i_i.
+    /// </summary>
+    public ModalCircuit Drive(double[,] pathCoupling)
+    {
+        int paths = Weights.GetLength(0), modes = Count, terms = pathCoupling.GetLength(1);
+        var c = new double[modes, terms];
+        var total = new double[modes];
+        for (int k = 0; k < modes; k++)
+        {
+            for (int i = 0; i < paths; i++)
+            {
+                total[k] += Weights[i, k];
+                for (int j = 0; j < terms; j++)
+                {
+                    c[k, j] += Weights[i, k] * pathCoupling[i, j];
+                }
+            }
+        }
+
+        return new ModalCircuit(Lambdas, c, total);
+    }
+}
+
+/// <summary>
+/// Modes driven by source terms: mode k obeys lambda_k z_k' + s(T) z_k = sum_j C_kj u_j(t), where u_j is the emf
+/// per unit flux coupling of term j (minus the rate of its drive); the total current around the axis is t . z.
+/// </summary>
+/// <param name="Lambdas">Each mode's inductance at s = 1.</param>
+/// <param name="Coupling">C, modes x terms.</param>
+/// <param name="TotalWeights">t: the total current sum_i i_i per unit modal amplitude.</param>
+public sealed record ModalCircuit(double[] Lambdas, double[,] Coupling, double[] TotalWeights)
+{
+    /// <summary>The number of modes.</summary>
+    public int Count => Lambdas.Length;
+
+    /// <summary>The number of source terms.</summary>
+    public int Terms => Coupling.GetLength(1);
+
+    /// <summary>One mode for one loop of inductance L and resistance R0 coupled with M to one term (z = sqrt(R0) i).</summary>
+    public static ModalCircuit OneLoop(double inductanceHenries, double resistanceOhms, double coupling = 1) =>
+        new(new[] { inductanceHenries / resistanceOhms }, new[,] { { coupling / Math.Sqrt(resistanceOhms) } }, new[] { 1 / Math.Sqrt(resistanceOhms) });
+}

@@ -1,0 +1,329 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Threading;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// Any path set in time: L i' + s(T) R0 i = M u(t), coupled to lumped heating, solved in the modes of the (L, R)
+/// pencil (<see cref="ModalCircuit"/>), where it is one RL circuit per mode. Because every path of an item shares
+/// its temperature, R(T) = s(T) R0 scales all paths alike and the modes do not change as the item heats. Each step is
+/// the exact exponential update (<see cref="RlStep"/>) of every mode for drives linear over the step, exact for
+/// piecewise-linear drives since steps land on every breakpoint; s(T) is taken at the mid-step temperature by a
+/// predictor-corrector, and steps are halved until the temperature changes by no more than a set amount. A thin
+/// loop is the one-mode case.
+/// </summary>
+public sealed class TransientPathSolver
+{
+    private const double Growth = 1.25;
+    private const int MaxRecordedSamples = 4000;
+
+    private readonly ModalCircuit _circuit;
+    private readonly Func<double, double> _scaleAt;
+    private readonly LumpedThermalModel _thermal;
+    private readonly double _leadTimeConstant;
+
+    /// <summary>Creates the solver.</summary>
+    /// <param name="circuit">The modes and their coupling to the drives.</param>
+    /// <param name="scaleAtCelsius">s(T) = rho(T) / rho_ref: the resistance of every path relative to the one the modes were found at.</param>
+    /// <param name="thermal">The lumped heating of the item.</param>
+    public TransientPathSolver(ModalCircuit circuit, Func<double, double> scaleAtCelsius, LumpedThermalModel thermal)
+    {
+        _circuit = circuit;
+        _scaleAt = scaleAtCelsius;
+        _thermal = thermal;
+        // The time constant of the mode that stores most energy for a sudden unit drive (sum_j C_kj^2 lambda_k).
+        double best = -1;
+        for (int k = 0; k < circuit.Count; k++)
+        {
+            double weight = 0;
+            for (int j = 0; j < circuit.Terms; j++)
+            {
+                weight += circuit.Coupling[k, j] * circuit.Coupling[k, j];
+            }
+
+            if (weight * circuit.Lambdas[k] > best)
+            {
+                best = weight * circuit.Lambdas[k];
+                _leadTimeConstant = circuit.Lambdas[k];
+            }
+        }
+    }
+
+    /// <summary>The largest temperature change in one step, K.</summary>
+    public double MaxStepKelvin { get; init; } = HeatingIntegrator.DefaultMaxStepKelvin;
+
+    /// <summary>The largest step, s (for drives that are not piecewise linear), while the drive is curved.</summary>
+    public double MaxStepSeconds { get; init; } = double.PositiveInfinity;
+
+    /// <summary>Until when <see cref="MaxStepSeconds"/> applies, s: after it the emf is piecewise linear (leaving, cooling).</summary>
+    public double CurvedUntilSeconds { get; init; } = double.PositiveInfinity;
+
+    /// <summary>The most steps before the run gives up and says so.</summary>
+    public int MaxSteps { get; init; } = HeatingIntegrator.DefaultMaxSteps;
+
+    /// <summary>The run stops at the first step that ends above this temperature, °C: the melting point, where a molten loop opens.</summary>
+    public double StopAboveCelsius { get; init; } = double.PositiveInfinity;
+
+    /// <summary>
+    /// Heating besides the modes' own, from eddy currents the paths do not carry (a field across a body's axis):
+    /// power = <see cref="CrossPowerFactor"/> |sum_j CrossCoupling_j u_j(t)|^2 / s(T), W.
+    /// </summary>
+    public Vector3D[]? CrossCoupling { get; init; }
+
+    /// <summary>The factor of the cross-axis heating at s = 1, W per (T/s)^2.</summary>
+    public double CrossPowerFactor { get; init; }
+
+    /// <summary>Runs one loop driven by one emf (coupling 1): the thin-loop case.</summary>
+    public TransientRun Run(Func<double, double> emf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation) =>
+        Run(new[] { emf }, emf, breakpoints, tStart, tEnd, celsius0, cancellation);
+
+    /// <summary>Runs from tStart to tEnd with every current zero at the start.</summary>
+    /// <param name="drives">u_j(t): the emf per unit flux coupling of each term (minus the rate of its drive), 1/s or V/Wb.</param>
+    /// <param name="outlineEmf">The emf around the item's outline, recorded beside the current for charts, V.</param>
+    /// <param name="breakpoints">Times where a drive's slope may jump; steps land on each.</param>
+    /// <param name="tStart">Start time, s.</param>
+    /// <param name="tEnd">End time, s.</param>
+    /// <param name="celsius0">The item's temperature at the start, °C.</param>
+    /// <param name="cancellation">Stops the run.</param>
+    /// <remarks>The run stops early, and says so, when the step budget runs out, when time stops advancing, or when the item passes <see cref="StopAboveCelsius"/>.</remarks>
+    public TransientRun Run(Func<double, double>[] drives, Func<double, double> outlineEmf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation)
+    {
+        int modes = _circuit.Count, terms = drives.Length;
+        double[] edges = breakpoints.Where(b => b > tStart && b < tEnd).Append(tEnd).Distinct().OrderBy(b => b).ToArray();
+        var circuit = new List<CircuitSample> { new(tStart, outlineEmf(tStart), 0, celsius0) };
+        var heating = new List<HeatingSample> { new(tStart, celsius0, 0) };
+        double recordSpacing = (tEnd - tStart) / MaxRecordedSamples;
+        var z = new double[modes];
+        var work = new StepWork(modes, terms);
+        double t = tStart, temperature = celsius0, energy = 0, total = 0;
+        (double current, double at) peak = (0, tStart);
+        int steps = 0;
+        bool budgetExceeded = false;
+        double? melted = null;
+
+        foreach (double edge in edges)
+        {
+            double h = FreshStep(temperature, edge - t, t);
+            while (t < edge)
+            {
+                if (++steps > MaxSteps)
+                {
+                    budgetExceeded = true;
+                    break;
+                }
+
+                if ((steps & 1023) == 0)
+                {
+                    cancellation.ThrowIfCancellationRequested();
+                }
+
+                h = Math.Min(h, edge - t);
+                if (edge - t - h < 1e-12 * Math.Max(1, Math.Abs(edge)))
+                {
+                    h = edge - t;
+                }
+
+                if (!(t + h > t))
+                {
+                    // Time no longer advances at this magnitude: stop and say so rather than loop.
+                    budgetExceeded = true;
+                    break;
+                }
+
+                // Each drive over the step as a line through its values at h/4 and 3h/4: exact for linear drives.
+                for (int j = 0; j < terms; j++)
+                {
+                    work.DriveA[j] = drives[j](t + (h / 4));
+                    work.DriveB[j] = drives[j](t + (3 * h / 4));
+                }
+
+                for (int k = 0; k < modes; k++)
+                {
+                    double ea = 0, eb = 0;
+                    for (int j = 0; j < terms; j++)
+                    {
+                        ea += _circuit.Coupling[k, j] * work.DriveA[j];
+                        eb += _circuit.Coupling[k, j] * work.DriveB[j];
+                    }
+
+                    work.Slope[k] = (eb - ea) / (h / 2);
+                    work.Start[k] = ea - (work.Slope[k] * h / 4);
+                }
+
+                double cross = CrossEnergyAtUnitScale(work, h);
+
+                // Predictor at the start temperature, corrector at the mid-step temperature.
+                double s0 = _scaleAt(temperature);
+                double predicted = _thermal.Advance(temperature, Sweep(z, work, s0, h, cross) / h, h);
+                double s = _scaleAt(0.5 * (temperature + predicted));
+                double stepEnergy = Sweep(z, work, s, h, cross);
+                double next = _thermal.Advance(temperature, stepEnergy / h, h);
+                if (Math.Abs(next - temperature) > MaxStepKelvin && h > 1e-15 * Math.Max(1, Math.Abs(t)))
+                {
+                    h /= 2;
+                    continue;
+                }
+
+                (double stepPeak, double stepPeakAt) = PeakWithin(z, work, s, h, total);
+                Array.Copy(work.Next, z, modes);
+                total = Total(z);
+                if (Math.Abs(stepPeak) > Math.Abs(peak.current))
+                {
+                    peak = (stepPeak, t + stepPeakAt);
+                }
+
+                t += h;
+                energy += stepEnergy;
+                temperature = next;
+                bool melting = temperature > StopAboveCelsius;
+                if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
+                {
+                    circuit.Add(new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature));
+                    heating.Add(new HeatingSample(t, temperature, stepEnergy / h));
+                }
+
+                if (!Finite.Is(total) || !Finite.Is(temperature))
+                {
+                    break;
+                }
+
+                if (melting)
+                {
+                    melted = t;
+                    break;
+                }
+
+                h = Math.Min(h * Growth, MaxStep(temperature, t));
+            }
+
+            if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))
+            {
+                break;
+            }
+        }
+
+        return new TransientRun
+        {
+            Circuit = circuit,
+            Heating = heating,
+            PeakCurrentAmperes = peak.current,
+            PeakCurrentSeconds = peak.at,
+            EnergyJoules = energy,
+            FinalCelsius = temperature,
+            FinalModalAmplitudes = z,
+            Steps = steps,
+            BudgetExceeded = budgetExceeded,
+            MeltedAtSeconds = melted,
+        };
+    }
+
+    /// <summary>
+    /// The energy of one step over every mode at scale s (plus the cross-axis heating), J; the modal amplitudes at
+    /// the end of the step go to the work's Next.
+    /// </summary>
+    private double Sweep(double[] z, StepWork work, double s, double h, double crossAtUnitScale)
+    {
+        double energy = crossAtUnitScale / s;
+        for (int k = 0; k < z.Length; k++)
+        {
+            (double end, double stepEnergy) = RlStep.Advance(_circuit.Lambdas[k], s, z[k], work.Start[k], work.Slope[k], h);
+            work.Next[k] = end;
+            energy += stepEnergy;
+        }
+
+        return energy;
+    }
+
+    /// <summary>
+    /// The largest total current within the step and where: exact for one mode (the ends or the one interior
+    /// extremum); for several, the larger of the step's midpoint and end.
+    /// </summary>
+    private (double Current, double At) PeakWithin(double[] z, StepWork work, double s, double h, double total0)
+    {
+        if (z.Length == 1)
+        {
+            double w = _circuit.TotalWeights[0];
+            (double peak, double at) = RlStep.Peak(_circuit.Lambdas[0], s, z[0], work.Start[0], work.Slope[0], h);
+            return (w * peak, at);
+        }
+
+        double mid = 0, end = Total(work.Next);
+        for (int k = 0; k < z.Length; k++)
+        {
+            mid += _circuit.TotalWeights[k] * RlStep.Current(_circuit.Lambdas[k], s, z[k], work.Start[k], work.Slope[k], h / 2);
+        }
+
+        (double best, double bestAt) = Math.Abs(mid) > Math.Abs(total0) ? (mid, h / 2) : (total0, 0.0);
+        return Math.Abs(end) > Math.Abs(best) ? (end, h) : (best, bestAt);
+    }
+
+    /// <summary>The cross-axis heating energy of the step at s = 1: the factor times the integral of |v(t)|^2, v linear over the step.</summary>
+    private double CrossEnergyAtUnitScale(StepWork work, double h)
+    {
+        if (CrossCoupling is null || CrossPowerFactor == 0)
+        {
+            return 0;
+        }
+
+        Vector3D va = Vector3D.Zero, vb = Vector3D.Zero;
+        for (int j = 0; j < CrossCoupling.Length; j++)
+        {
+            va += work.DriveA[j] * CrossCoupling[j];
+            vb += work.DriveB[j] * CrossCoupling[j];
+        }
+
+        // v(x) = v0 + v1 x on [0, 1] through v(1/4) = va, v(3/4) = vb; the integral of |v|^2 is |v0|^2 + v0.v1 + |v1|^2 / 3.
+        Vector3D v1 = 2 * (vb - va);
+        Vector3D v0 = va - (0.25 * v1);
+        return CrossPowerFactor * h * (v0.Dot(v0) + v0.Dot(v1) + (v1.Dot(v1) / 3));
+    }
+
+    private double Total(double[] z)
+    {
+        double total = 0;
+        for (int k = 0; k < z.Length; k++)
+        {
+            total += _circuit.TotalWeights[k] * z[k];
+        }
+
+        return total;
+    }
+
+    private static bool Changed(CircuitSample last, double current, double temperature) =>
+        Math.Abs(temperature - last.TemperatureCelsius) > 0.5
+        || Math.Abs(current - last.CurrentAmperes) > 0.02 * Math.Max(Math.Abs(current), Math.Abs(last.CurrentAmperes));
+
+    /// <summary>The first step of a segment: an eighth of the leading mode's time constant, so its exponential is resolved from its start.</summary>
+    private double FreshStep(double celsius, double segment, double t) =>
+        Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / 8, segment), MaxStep(celsius, t));
+
+    private double MaxStep(double celsius, double t) =>
+        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
+
+    /// <summary>Per-step arrays, allocated once per run.</summary>
+    private sealed class StepWork
+    {
+        public StepWork(int modes, int terms)
+        {
+            DriveA = new double[terms];
+            DriveB = new double[terms];
+            Start = new double[modes];
+            Slope = new double[modes];
+            Next = new double[modes];
+        }
+
+        public double[] Next { get; }
+
+        public double[] DriveA { get; }
+
+        public double[] DriveB { get; }
+
+        public double[] Start { get; }
+
+        public double[] Slope { get; }
+    }
+}
