@@ -12,8 +12,8 @@ namespace InductionHazard.Induction;
 /// pencil (<see cref="ModalCircuit"/>), where it is one RL circuit per mode. Because every path of an item shares
 /// its temperature, R(T) = s(T) R0 scales all paths alike and the modes do not change as the item heats. Each step is
 /// the exact exponential update (<see cref="RlStep"/>) of every mode for drives linear over the step, exact for
-/// piecewise-linear drives since steps land on every breakpoint; s(T) is taken at the mid-step temperature by a
-/// predictor-corrector, and steps are halved until the temperature changes by no more than a set amount. A thin
+/// piecewise-linear drives since steps land on every breakpoint; s(T) is taken at the mid-step temperature
+/// (predicted from the last step's power, corrected when the step's own energy says otherwise), and steps are halved until the temperature changes by no more than a set amount. A thin
 /// loop is the one-mode case.
 /// </summary>
 public sealed class TransientPathSolver
@@ -99,7 +99,7 @@ public sealed class TransientPathSolver
         double recordSpacing = (tEnd - tStart) / MaxRecordedSamples;
         var z = new double[modes];
         var work = new StepWork(modes, terms);
-        double t = tStart, temperature = celsius0, energy = 0, total = 0;
+        double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
         int steps = 0;
         bool budgetExceeded = false;
@@ -156,12 +156,19 @@ public sealed class TransientPathSolver
 
                 double cross = CrossEnergyAtUnitScale(work, h);
 
-                // Predictor at the start temperature, corrector at the mid-step temperature.
-                double s0 = _scaleAt(temperature);
-                double predicted = _thermal.Advance(temperature, Sweep(z, work, s0, h, cross) / h, h);
+                // s(T) at the mid-step temperature: predicted with the last step's power, then corrected once more
+                // only when the step's own energy moves the end temperature by more than a hundredth of the step limit.
+                double predicted = _thermal.Advance(temperature, lastPower, h);
                 double s = _scaleAt(0.5 * (temperature + predicted));
                 double stepEnergy = Sweep(z, work, s, h, cross);
                 double next = _thermal.Advance(temperature, stepEnergy / h, h);
+                if (Math.Abs(next - predicted) > 0.01 * MaxStepKelvin)
+                {
+                    s = _scaleAt(0.5 * (temperature + next));
+                    stepEnergy = Sweep(z, work, s, h, cross);
+                    next = _thermal.Advance(temperature, stepEnergy / h, h);
+                }
+
                 if (Math.Abs(next - temperature) > MaxStepKelvin && h > 1e-15 * Math.Max(1, Math.Abs(t)))
                 {
                     h /= 2;
@@ -178,6 +185,7 @@ public sealed class TransientPathSolver
 
                 t += h;
                 energy += stepEnergy;
+                lastPower = stepEnergy / h;
                 temperature = next;
                 bool melting = temperature > StopAboveCelsius;
                 if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
@@ -240,7 +248,8 @@ public sealed class TransientPathSolver
 
     /// <summary>
     /// The largest total current within the step and where: exact for one mode (the ends or the one interior
-    /// extremum); for several, the larger of the step's midpoint and end.
+    /// extremum); for several, the ends or the extremum of the cubic through the total current and its rate at both
+    /// ends (each mode's rate from its equation, lambda z' = e - s z), which is within the step's own smoothness.
     /// </summary>
     private (double Current, double At) PeakWithin(double[] z, StepWork work, double s, double h, double total0)
     {
@@ -251,14 +260,57 @@ public sealed class TransientPathSolver
             return (w * peak, at);
         }
 
-        double mid = 0, end = Total(work.Next);
+        double end = 0, rate0 = 0, rate1 = 0;
+        double[] weights = _circuit.TotalWeights, lambdas = _circuit.Lambdas;
         for (int k = 0; k < z.Length; k++)
         {
-            mid += _circuit.TotalWeights[k] * RlStep.Current(_circuit.Lambdas[k], s, z[k], work.Start[k], work.Slope[k], h / 2);
+            double next = work.Next[k];
+            end += weights[k] * next;
+            rate0 += weights[k] * (work.Start[k] - (s * z[k])) / lambdas[k];
+            rate1 += weights[k] * (work.Start[k] + (work.Slope[k] * h) - (s * next)) / lambdas[k];
         }
 
-        (double best, double bestAt) = Math.Abs(mid) > Math.Abs(total0) ? (mid, h / 2) : (total0, 0.0);
-        return Math.Abs(end) > Math.Abs(best) ? (end, h) : (best, bestAt);
+        (double best, double bestAt) = Math.Abs(end) > Math.Abs(total0) ? (end, h) : (total0, 0.0);
+
+        // Hermite cubic on u in [0, 1]: p(u) = total0 h00 + h rate0 h10 + end h01 + h rate1 h11; its extrema from p'(u) = 0.
+        double m0 = h * rate0, m1 = h * rate1;
+        double a = (6 * total0) + (3 * m0) - (6 * end) + (3 * m1);
+        double b = (-6 * total0) - (4 * m0) + (6 * end) - (2 * m1);
+        double c = m0;
+        (double first, double second) = QuadraticRoots(a, b, c);
+        for (int root = 0; root < 2; root++)
+        {
+            double u = root == 0 ? first : second;
+            if (u > 0 && u < 1)
+            {
+                double u2 = u * u, u3 = u2 * u;
+                double p = (total0 * ((2 * u3) - (3 * u2) + 1)) + (m0 * (u3 - (2 * u2) + u)) + (end * ((-2 * u3) + (3 * u2))) + (m1 * (u3 - u2));
+                if (Math.Abs(p) > Math.Abs(best))
+                {
+                    (best, bestAt) = (p, u * h);
+                }
+            }
+        }
+
+        return (best, bestAt);
+    }
+
+    /// <summary>The real roots of a u^2 + b u + c = 0, NaN where there is none (the stable form q = -(b + sign(b) sqrt(d))/2).</summary>
+    private static (double First, double Second) QuadraticRoots(double a, double b, double c)
+    {
+        if (Math.Abs(a) < 1e-300)
+        {
+            return (Math.Abs(b) < 1e-300 ? double.NaN : -c / b, double.NaN);
+        }
+
+        double d = (b * b) - (4 * a * c);
+        if (d < 0)
+        {
+            return (double.NaN, double.NaN);
+        }
+
+        double q = -0.5 * (b + ((b < 0 ? -1 : 1) * Math.Sqrt(d)));
+        return q == 0 ? (0.0, double.NaN) : (q / a, c / q);
     }
 
     /// <summary>The cross-axis heating energy of the step at s = 1: the factor times the integral of |v(t)|^2, v linear over the step.</summary>

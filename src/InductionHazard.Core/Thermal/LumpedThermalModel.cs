@@ -66,7 +66,7 @@ public sealed class LumpedThermalModel
             return celsius + (net * dtSeconds / HeatCapacityJoulesPerKelvin);
         }
 
-        return celsius + (net / g * -MathNet.Numerics.SpecialFunctions.Expm1(-rate));
+        return celsius + (net / g * -Quantities.Exponential.Minus1(-rate));
     }
 
     /// <summary>

@@ -143,7 +143,7 @@ public static class ThermalDose
         double minutes = (t1 - t0) / 60.0;
         double k = -Math.Log(r) * (c1 - c0);  // exponent change over the piece
         double start = Math.Pow(r, BreakpointCelsius - c0);
-        double factor = Math.Abs(k) < 1e-12 ? 1.0 : SpecialFunctions.Expm1(k) / k;
+        double factor = Math.Abs(k) < 1e-12 ? 1.0 : Quantities.Exponential.Minus1(k) / k;
         return start * minutes * factor;
     }
 }
