@@ -11,7 +11,7 @@ namespace InductionHazard.Assessment;
 /// <summary>Turns a response into an assessment: each mechanism's check, the combined verdict, the cautions.</summary>
 public static class HazardAssessor
 {
-    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck() };
+    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck() };
 
     /// <summary>The module's version, as recorded in assessments.</summary>
     public static string ModuleVersion { get; } =
@@ -61,6 +61,9 @@ public static class HazardAssessor
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             BurnMargin = MarginOf(results, HazardMechanism.Burn),
             OverheatMargin = MarginOf(results, HazardMechanism.Overheat),
+            ForceMargin = MarginOf(results, HazardMechanism.Force),
+            TorqueMargin = MarginOf(results, HazardMechanism.Torque),
+            PeakForceNewtons = Trusted(response, AffectedResults.Current, response.PeakForceNewtons),
             PeakEmfVolts = Trusted(response, AffectedResults.Emf, response.PeakEmfVolts),
             GapVoltageVolts = response.GapVoltageVolts is { } gap ? Trusted(response, AffectedResults.Emf, gap) : null,
             PeakCurrentAmperes = Trusted(response, AffectedResults.Current, response.PeakCurrentAmperes),

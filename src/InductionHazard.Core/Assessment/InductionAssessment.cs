@@ -46,6 +46,15 @@ public sealed class InductionAssessment
     /// <summary>The Overheat margin; null when it does not apply.</summary>
     public double? OverheatMargin { get; init; }
 
+    /// <summary>The Force margin (the item's weight over the peak force), or null when it does not apply.</summary>
+    public double? ForceMargin { get; init; }
+
+    /// <summary>The Torque margin (the gravitational torque over the peak torque), or null when it does not apply.</summary>
+    public double? TorqueMargin { get; init; }
+
+    /// <summary>The peak force on the item, N (NaN when the current is not trusted).</summary>
+    public double PeakForceNewtons { get; init; }
+
     /// <summary>The peak emf around the loop, V. Like the other numbers here, NaN when a broken model assumption affects it.</summary>
     public double PeakEmfVolts { get; init; }
 

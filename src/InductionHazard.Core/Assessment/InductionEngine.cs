@@ -123,10 +123,11 @@ public static class InductionEngine
         }
 
         SinusoidalRun run = new SinusoidalPathSolver(steady, c.Thermal).Run(emf, f, on, off, end, c.Start, cancellation, c.MeltingCelsius);
+        SteadyMechanics mechanics = SteadyForces(c, run.CurrentPhasor, omega);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the heating integrator");
         Complex z = run.Impedance;
         bool single = c.Paths.IsSingle;
-        return Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
+        return (Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
             Model = single
                 ? "thin ring (Grover 1946) in periodic steady state: phasor current with skin effect (Kelvin functions); lumped heating with rho(T) and cooling, cycle-averaged"
@@ -140,7 +141,7 @@ public static class InductionEngine
             CurrentSense = LenzSense.Alternating(f, Math.Atan2(z.Imaginary, z.Real), c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
-        };
+        }).WithForces(mechanics.PeakForce, null, mechanics.PeakTorqueNewtonMeters, mechanics.MeanForce);
     }
 
     private static InductionResponse Transient(Common c, CancellationToken cancellation)
@@ -225,6 +226,16 @@ public static class InductionEngine
             drives[k] = t => t < leave ? -waveform.Rate(t) : t < outside ? heldAtLeave / leaving : 0;
         }
 
+        // d_k(t) as the item sees it: the drive while in place, falling linearly to zero while carried out; held after
+        // the exposure for a fixed item.
+        var values = new Func<double, double>[terms.Count];
+        for (int k = 0; k < terms.Count; k++)
+        {
+            FieldWaveform waveform = terms[k].Waveform;
+            double heldAtLeave = waveform.Value(leave);
+            values[k] = t => t < leave ? waveform.Value(t) : leaving <= 0 ? heldAtLeave : t < outside ? heldAtLeave * (1 - ((t - leave) / leaving)) : 0;
+        }
+
         TransientRun run = overBudget
             ? new TransientRun { Heating = new[] { new HeatingSample(begin, double.NaN, 0) }, FinalCelsius = double.NaN, PeakCurrentAmperes = double.NaN, EnergyJoules = double.NaN }
             : new TransientPathSolver(c.Modal!, c.Paths!.ScaleAt, c.Thermal)
@@ -235,6 +246,8 @@ public static class InductionEngine
                 MaxSteps = budget,
                 CrossCoupling = c.CrossCoupling,
                 CrossPowerFactor = c.CrossPowerFactor,
+                DriveValues = values,
+                TorqueField = c.TorqueField,
             }.Run(drives, Emf, breakpoints, begin, end, c.Start, cancellation);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
@@ -242,7 +255,7 @@ public static class InductionEngine
         double rampTime = terms.Min(t => t.Waveform.TimeScales[0].Seconds);
         bool single = c.Paths!.IsSingle;
         c.Notes.Add("circuit: " + run.Steps + " exact exponential steps over " + c.Modal!.Count + (single ? " mode" : " modes") + ", L = " + SiFormat.Format(c.Ldc, "H") + ", L/R = " + SiFormat.Format(tau, "s") + (single ? string.Empty : " (the leading mode's)"));
-        return Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
+        return (Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
             Model = single
                 ? "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling"
@@ -254,7 +267,47 @@ public static class InductionEngine
             CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
-        };
+        }).WithForces(run.PeakForce, run.Impulse, run.PeakTorqueNewtonMeters, null);
+    }
+
+    /// <summary>
+    /// The force and torque over one cycle at the starting temperature: the modal amplitudes from the steady state
+    /// (one path: the total current over its weight), the drive phasors D_k of d_k(t) = Im(D_k e^(j omega t)).
+    /// </summary>
+    private static SteadyMechanics SteadyForces(Common c, Complex totalCurrent, double omega)
+    {
+        var terms = c.Scenario.Source.Terms;
+        ModalCircuit modal = c.Modal!;
+        var drives = new Complex[terms.Count];
+        var rates = new Complex[terms.Count];
+        for (int k = 0; k < terms.Count; k++)
+        {
+            var sine = (SineWaveform)terms[k].Waveform;
+            drives[k] = Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (omega * sine.StartSeconds));
+            rates[k] = -Complex.ImaginaryOne * omega * drives[k];
+        }
+
+        var amplitudes = new Complex[modal.Count];
+        if (modal.Count == 1)
+        {
+            amplitudes[0] = totalCurrent / modal.TotalWeights[0];
+        }
+        else
+        {
+            double s = c.Paths!.ScaleAt(c.Start);
+            for (int k = 0; k < modal.Count; k++)
+            {
+                Complex forcing = Complex.Zero;
+                for (int j = 0; j < terms.Count; j++)
+                {
+                    forcing += modal.Coupling[k, j] * rates[j];
+                }
+
+                amplitudes[k] = forcing / new Complex(s, omega * modal.Lambdas[k]);
+            }
+        }
+
+        return SteadyMechanics.Of(modal, amplitudes, drives, c.TorqueField);
     }
 
     /// <summary>
@@ -427,6 +480,7 @@ public static class InductionEngine
             Coupling = new double[source.Terms.Count];
             NormalField = new double[source.Terms.Count];
             CrossCoupling = new Vector3D[source.Terms.Count];
+            TorqueField = new Vector3D[source.Terms.Count];
             try
             {
                 if (scenario.Placement.Normal is null || loop is SphereBody)
@@ -443,6 +497,8 @@ public static class InductionEngine
                 Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop);
                 Vector3D[] b = source.FieldPerUnitDrive(centre);
                 NormalField = b.Select(v => v.Dot(Normal)).ToArray();
+                Vector3D facing = Normal;
+                TorqueField = b.Select(v => facing.Cross(v)).ToArray();
                 FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
                 if (loop is BodyGeometry)
                 {
@@ -477,7 +533,8 @@ public static class InductionEngine
             try
             {
                 double[,] pathCoupling = Paths.Coupling(Scenario.Source, Scenario.Placement.Centre, Normal);
-                Modal = Paths.Modes.Drive(pathCoupling);
+                Vector3D[,] gradient = Paths.CouplingGradient(Scenario.Source, Scenario.Placement.Centre, Normal);
+                Modal = Paths.Modes.Drive(pathCoupling, gradient, Paths.PathAreas());
             }
             catch (FieldEvaluationException ex)
             {
@@ -554,6 +611,9 @@ public static class InductionEngine
         public ItemPaths? Paths { get; private set; }
 
         public ModalCircuit? Modal { get; private set; }
+
+        /// <summary>n x b_j: the normal crossed with each term's field per unit drive at the centre (the torque on the item's moment).</summary>
+        public Vector3D[] TorqueField { get; } = Array.Empty<Vector3D>();
 
         /// <summary>The field across a body's axis at its centre per unit drive of each term (zero for a loop).</summary>
         public Vector3D[] CrossCoupling { get; }

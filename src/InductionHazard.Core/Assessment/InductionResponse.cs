@@ -89,6 +89,50 @@ public sealed record InductionResponse
     /// <summary>Whether resistance or inductance limits the current, with the ratio that says so.</summary>
     public string Regime { get; init; } = string.Empty;
 
+    /// <summary>The largest force on the item, N (zero in a uniform field; from the induced currents in the source's field gradient).</summary>
+    public double PeakForceNewtons { get; init; }
+
+    /// <summary>The direction of the peak force (a unit vector; zero when there is no force).</summary>
+    public Vector3D PeakForceDirection { get; init; }
+
+    /// <summary>The cycle-averaged force while an alternating field runs, N (a steady push or pull); null for a transient drive.</summary>
+    public double? MeanForceNewtons { get; init; }
+
+    /// <summary>The impulse, the magnitude of the integral of the force over the run, N s; null for an alternating drive.</summary>
+    public double? ImpulseNewtonSeconds { get; init; }
+
+    /// <summary>The speed the impulse gives a free (loose) item at rest, |J| / m, m/s; null for an item held, worn or fixed, or an alternating drive.</summary>
+    public double? LaunchSpeedMetersPerSecond { get; init; }
+
+    /// <summary>The peak force over the item's weight m g (g = 9.80665 m/s^2).</summary>
+    public double ForceToWeightRatio { get; init; }
+
+    /// <summary>The largest torque on the item's magnetic moment, |m x B|, N m.</summary>
+    public double PeakTorqueNewtonMeters { get; init; }
+
+    /// <summary>The item's mass, kg.</summary>
+    public double MassKilograms => Scenario.Item.MassKilograms;
+
+    /// <summary>
+    /// This response with its forces: the peak force and its direction, the ratio to the item's weight, the impulse
+    /// and the launch speed of a free item (a transient drive), the mean force (an alternating one), the peak torque.
+    /// </summary>
+    public InductionResponse WithForces(Vector3D peakForce, Vector3D? impulse, double peakTorque, Vector3D? meanForce)
+    {
+        double mass = Scenario.Item.MassKilograms;
+        double impulseSize = impulse?.Length ?? double.NaN;
+        return this with
+        {
+            PeakForceNewtons = peakForce.Length,
+            PeakForceDirection = peakForce.Length > 0 ? peakForce.Normalized() : Vector3D.Zero,
+            ForceToWeightRatio = peakForce.Length / (mass * PhysicalConstants.StandardGravity),
+            ImpulseNewtonSeconds = impulse is null ? null : impulseSize,
+            LaunchSpeedMetersPerSecond = impulse is null || Scenario.Item.Contact != Items.ContactKind.Free ? null : impulseSize / mass,
+            MeanForceNewtons = meanForce?.Length,
+            PeakTorqueNewtonMeters = peakTorque,
+        };
+    }
+
     /// <summary>The number of current paths the item was solved with: 1 for a thin loop, the filament count for a thick section or a body; 0 when not solved.</summary>
     public int PathCount { get; init; }
 

@@ -18,6 +18,12 @@ public static class Standards
     /// <summary>Melting points and solidus temperatures of the materials.</summary>
     public const string Melting = "material melting point or solidus (see Get-ConductorMaterial for each value's source)";
 
+    /// <summary>The force criterion.</summary>
+    public const string ForceAgainstWeight = "ASTM F2052 criterion (magnetically induced force below the item's weight)";
+
+    /// <summary>The torque criterion.</summary>
+    public const string TorqueAgainstGravity = "ASTM F2213 criterion (magnetically induced torque below the worst-case gravitational torque, taken as m g L/2)";
+
     /// <summary>The safety factor between Clear and Caution.</summary>
     public const string SafetyFactor = "site policy (default 2)";
 }

@@ -31,17 +31,38 @@ public static class CoaxialInductance
     }
 
     /// <summary>
-    /// The mutual inductance of two cells carrying uniform current densities: the Maxwell formula averaged over the
-    /// near-square sub-filaments of each cell when the cells are near (centres closer than twice the larger side),
-    /// where a filament at each centroid would misplace the current; at the centroids otherwise.
+    /// Rectangular cells whose centres lie further from the axis than this many times their longest side take the
+    /// closed-form GMD correction; nearer the axis, sub-cells.
+    /// </summary>
+    private const double GmdFromRadiusOverSide = 1.5;
+
+    /// <summary>
+    /// The mutual inductance of two cells carrying uniform current densities. Far apart (centres further than six
+    /// times the larger side for rectangles off the axis, where the correction below falls under 1e-3 of the log,
+    /// twice for others): the Maxwell formula at the centroids. Near: for rectangular cells well off the axis, the
+    /// Maxwell formula at the centroids plus the log singularity's correction mu0 sqrt(r_p r_q) ln(d / GMD), with
+    /// d the centroids' distance and the GMD of the two rectangles in closed form (<see cref="RectangleGmd"/>): the
+    /// ring kernel is mu0 sqrt(ab)(ln(8 sqrt(ab)/d) - 2) plus a part smooth over the cells; otherwise the Maxwell
+    /// formula averaged over near-square sub-filaments of each cell.
     /// </summary>
     public static double MutualHenries(in Filament p, in Filament q)
     {
         double dr = p.RadiusMeters - q.RadiusMeters, dz = p.AxialMeters - q.AxialMeters;
-        double near = 2 * Math.Max(p.LargestSideMeters, q.LargestSideMeters);
-        if ((dr * dr) + (dz * dz) > near * near)
+        double side = Math.Max(p.LargestSideMeters, q.LargestSideMeters);
+        double distanceSquared = (dr * dr) + (dz * dz);
+        bool rectangles = OffAxisRectangle(p, q.LargestSideMeters) && OffAxisRectangle(q, p.LargestSideMeters);
+        if (distanceSquared > (rectangles ? 36 : 4) * side * side)
         {
             return MutualHenries(p.RadiusMeters, q.RadiusMeters, dz);
+        }
+
+        if (rectangles)
+        {
+            double logGmd = RectangleGmd.LogGmd(
+                p.RadiusMeters - (p.WidthMeters / 2), p.RadiusMeters + (p.WidthMeters / 2), p.AxialMeters - (p.HeightMeters / 2), p.AxialMeters + (p.HeightMeters / 2),
+                q.RadiusMeters - (q.WidthMeters / 2), q.RadiusMeters + (q.WidthMeters / 2), q.AxialMeters - (q.HeightMeters / 2), q.AxialMeters + (q.HeightMeters / 2));
+            double d = Math.Sqrt((dr * dr) + (dz * dz));
+            return MutualHenries(p.RadiusMeters, q.RadiusMeters, dz) + (PhysicalConstants.VacuumPermeability * Math.Sqrt(p.RadiusMeters * q.RadiusMeters) * (Math.Log(d) - logGmd));
         }
 
         SubCell[] a = SubCells(p), b = SubCells(q);
@@ -58,13 +79,20 @@ public static class CoaxialInductance
     }
 
     /// <summary>
-    /// The self-inductance of a cell carrying a uniform current density, on the same sub-filaments as its mutual
-    /// terms (so that the matrix is built from one consistent model): each near-square sub-cell's own ring inductance
-    /// by Grover's formula mu0 r (ln(8r/g) - 2) with its GMD, plus the Maxwell mutual terms between sub-cells, weighted
-    /// by the square of the current each carries.
+    /// The self-inductance of a cell carrying a uniform current density, on the same model as its mutual terms (so
+    /// that the matrix is consistent): off the axis, Grover's ring formula mu0 r (ln(8r/g) - 2) with the rectangle's
+    /// exact GMD g; near the axis or for a polar cell, each near-square sub-cell's own ring inductance (Grover, with its
+    /// GMD) plus the Maxwell mutual terms between sub-cells, weighted by the square of the current each carries.
     /// </summary>
     public static double SelfHenries(in Filament p)
     {
+        if (OffAxisRectangle(p, 0))
+        {
+            // Grover's ring formula with the rectangle's exact GMD from itself (the same closed form as its neighbours').
+            double logGmd = RectangleGmd.LogGmd(0, p.WidthMeters, 0, p.HeightMeters, 0, p.WidthMeters, 0, p.HeightMeters);
+            return PhysicalConstants.VacuumPermeability * p.RadiusMeters * (Math.Log(8 * p.RadiusMeters) - logGmd - 2);
+        }
+
         SubCell[] subs = SubCells(p);
         double sum = 0;
         for (int a = 0; a < subs.Length; a++)
@@ -79,6 +107,10 @@ public static class CoaxialInductance
 
         return sum / (subs.Length * subs.Length);
     }
+
+    /// <summary>A rectangular (not polar) cell whose centre is further from the axis than 1.5 times its own and its neighbour's longest side.</summary>
+    private static bool OffAxisRectangle(in Filament f, double neighbourSide) =>
+        f.SectorRadians == 0 && f.AngleRadians == 0 && f.RadiusMeters > GmdFromRadiusOverSide * Math.Max(f.LargestSideMeters, neighbourSide);
 
     /// <summary>A cell split into near-square sub-cells (two across its shorter side), each at its centre.</summary>
     private static SubCell[] SubCells(in Filament f)

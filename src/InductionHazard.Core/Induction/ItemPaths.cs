@@ -146,6 +146,75 @@ public sealed class ItemPaths
     }
 
     /// <summary>
+    /// The gradient of each path's flux per unit drive with respect to the item's position (paths x terms), Wb per
+    /// drive unit per metre: the force on path currents i in drives d is F = sum_i i_i sum_j d_j grad M_ij (the force on
+    /// a rigid circuit, F = I grad Phi). Central differences over a step of a thousandth of the item's size, which
+    /// the fields of this module vary over smoothly; zero for a source whose every term is uniform.
+    /// </summary>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over a displaced path.</exception>
+    public Vector3D[,] CouplingGradient(FieldSource source, Vector3D centre, Vector3D normal)
+    {
+        int paths = Paths?.Count ?? 1, terms = source.Terms.Count;
+        var gradient = new Vector3D[paths, terms];
+        bool uniform = true;
+        foreach (SourceTerm term in source.Terms)
+        {
+            uniform &= term.Geometry is UniformField;
+        }
+
+        if (uniform)
+        {
+            return gradient;
+        }
+
+        double step = 1e-3 * Item.Loop.LargestDimensionMeters;
+        Vector3D[] axes = { Vector3D.UnitX, Vector3D.UnitY, Vector3D.UnitZ };
+        var components = new double[3][,];
+        for (int a = 0; a < 3; a++)
+        {
+            double[,] ahead = Coupling(source, centre + (step * axes[a]), normal);
+            double[,] behind = Coupling(source, centre - (step * axes[a]), normal);
+            var d = new double[paths, terms];
+            for (int i = 0; i < paths; i++)
+            {
+                for (int j = 0; j < terms; j++)
+                {
+                    d[i, j] = (ahead[i, j] - behind[i, j]) / (2 * step);
+                }
+            }
+
+            components[a] = d;
+        }
+
+        for (int i = 0; i < paths; i++)
+        {
+            for (int j = 0; j < terms; j++)
+            {
+                gradient[i, j] = new Vector3D(components[0][i, j], components[1][i, j], components[2][i, j]);
+            }
+        }
+
+        return gradient;
+    }
+
+    /// <summary>The area each path encloses, m^2: pi r_i^2 for a filament, the loop's own area for one path (its magnetic moment per ampere).</summary>
+    public double[] PathAreas()
+    {
+        if (Paths?.Filaments is not { } cells)
+        {
+            return new[] { Item.Loop.LoopAreaSquareMeters };
+        }
+
+        var areas = new double[cells.Count];
+        for (int i = 0; i < cells.Count; i++)
+        {
+            areas[i] = Math.PI * cells[i].RadiusMeters * cells[i].RadiusMeters;
+        }
+
+        return areas;
+    }
+
+    /// <summary>
     /// The steady response of the modes at a temperature to drives with phasors U_j (of u_j = -d_j'): mode k carries
     /// z_k = F_k / (s + j omega lambda_k), F = C U; the power is s |z|^2 / 2 plus the cross-axis part, and the total
     /// current t . z.

@@ -125,7 +125,14 @@ public sealed record PathModes(double[] Lambdas, double[,] Weights)
     /// The circuit of the modes driven by source terms: modal coupling C = W^T M (modes x terms) from the paths'
     /// flux per unit drive M (paths x terms), and the weights of the total current sum_i i_i.
     /// </summary>
-    public ModalCircuit Drive(double[,] pathCoupling)
+    public ModalCircuit Drive(double[,] pathCoupling) => Drive(pathCoupling, null, null);
+
+    /// <summary>
+    /// The circuit of the modes with, besides the coupling, the force coupling G_kj = sum_i W_ik grad M_ij (so that the
+    /// force is sum_j d_j sum_k G_kj z_k) and the moment weights a_k = sum_i W_ik A_i (the magnetic moment per unit normal
+    /// is sum_k a_k z_k).
+    /// </summary>
+    public ModalCircuit Drive(double[,] pathCoupling, Quantities.Vector3D[,]? pathGradient, double[]? pathAreas)
     {
         int paths = Weights.GetLength(0), modes = Count, terms = pathCoupling.GetLength(1);
         var c = new double[modes, terms];
@@ -142,7 +149,39 @@ public sealed record PathModes(double[] Lambdas, double[,] Weights)
             }
         }
 
-        return new ModalCircuit(Lambdas, c, total);
+        Quantities.Vector3D[,]? force = null;
+        double[]? moment = null;
+        if (pathGradient is not null)
+        {
+            force = new Quantities.Vector3D[modes, terms];
+            for (int k = 0; k < modes; k++)
+            {
+                for (int j = 0; j < terms; j++)
+                {
+                    Quantities.Vector3D sum = Quantities.Vector3D.Zero;
+                    for (int i = 0; i < paths; i++)
+                    {
+                        sum += Weights[i, k] * pathGradient[i, j];
+                    }
+
+                    force[k, j] = sum;
+                }
+            }
+        }
+
+        if (pathAreas is not null)
+        {
+            moment = new double[modes];
+            for (int k = 0; k < modes; k++)
+            {
+                for (int i = 0; i < paths; i++)
+                {
+                    moment[k] += Weights[i, k] * pathAreas[i];
+                }
+            }
+        }
+
+        return new ModalCircuit(Lambdas, c, total) { ForceCoupling = force, MomentWeights = moment };
     }
 }
 
@@ -160,6 +199,12 @@ public sealed record ModalCircuit(double[] Lambdas, double[,] Coupling, double[]
 
     /// <summary>The number of source terms.</summary>
     public int Terms => Coupling.GetLength(1);
+
+    /// <summary>G, modes x terms: the force is sum_j d_j(t) sum_k G_kj z_k, N; null when not asked for.</summary>
+    public Quantities.Vector3D[,]? ForceCoupling { get; init; }
+
+    /// <summary>a_k: the magnetic moment along the item's normal is sum_k a_k z_k, A m^2; null when not asked for.</summary>
+    public double[]? MomentWeights { get; init; }
 
     /// <summary>One mode for one loop of inductance L and resistance R0 coupled with M to one term (z = sqrt(R0) i).</summary>
     public static ModalCircuit OneLoop(double inductanceHenries, double resistanceOhms, double coupling = 1) =>

@@ -77,6 +77,15 @@ public sealed class TransientPathSolver
     /// <summary>The factor of the cross-axis heating at s = 1, W per (T/s)^2.</summary>
     public double CrossPowerFactor { get; init; }
 
+    /// <summary>
+    /// d_j(t): each term's drive as the item sees it (falling to zero while it is carried out), for the force
+    /// sum_j d_j sum_k G_kj z_k and the torque; no force is followed without it and the circuit's force coupling.
+    /// </summary>
+    public Func<double, double>[]? DriveValues { get; init; }
+
+    /// <summary>n x b_j: the item's normal crossed with each term's field per unit drive at its centre; the torque on the moment m n is m n x B.</summary>
+    public Vector3D[]? TorqueField { get; init; }
+
     /// <summary>Runs one loop driven by one emf (coupling 1): the thin-loop case.</summary>
     public TransientRun Run(Func<double, double> emf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation) =>
         Run(new[] { emf }, emf, breakpoints, tStart, tEnd, celsius0, cancellation);
@@ -101,6 +110,7 @@ public sealed class TransientPathSolver
         var work = new StepWork(modes, terms);
         double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
+        var mechanics = new Mechanics(this, _circuit, terms);
         int steps = 0;
         bool budgetExceeded = false;
         double? melted = null;
@@ -186,6 +196,7 @@ public sealed class TransientPathSolver
                 t += h;
                 energy += stepEnergy;
                 lastPower = stepEnergy / h;
+                mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h);
                 temperature = next;
                 bool melting = temperature > StopAboveCelsius;
                 if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
@@ -223,6 +234,10 @@ public sealed class TransientPathSolver
             EnergyJoules = energy,
             FinalCelsius = temperature,
             FinalModalAmplitudes = z,
+            PeakForce = mechanics.PeakForce,
+            PeakForceSeconds = mechanics.PeakForceAt,
+            Impulse = mechanics.Impulse,
+            PeakTorqueNewtonMeters = mechanics.PeakTorque,
             Steps = steps,
             BudgetExceeded = budgetExceeded,
             MeltedAtSeconds = melted,
@@ -355,6 +370,92 @@ public sealed class TransientPathSolver
 
     private double MaxStep(double celsius, double t) =>
         Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
+
+    /// <summary>
+    /// The force and torque on the paths at each step's end: the peak force and when, the impulse (the trapezoid
+    /// rule over the steps) and the peak torque.
+    /// </summary>
+    private sealed class Mechanics
+    {
+        private readonly TransientPathSolver _solver;
+        private readonly ModalCircuit _circuit;
+        private readonly double[] _drive;
+        private Vector3D _last;
+
+        public Mechanics(TransientPathSolver solver, ModalCircuit circuit, int terms)
+        {
+            _solver = solver;
+            _circuit = circuit;
+            _drive = new double[terms];
+        }
+
+        public Vector3D PeakForce { get; private set; }
+
+        public double PeakForceAt { get; private set; }
+
+        public Vector3D Impulse { get; private set; }
+
+        public double PeakTorque { get; private set; }
+
+        /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
+        public void Record(double[] z, double driveAt, double t, double h)
+        {
+            if (_solver.DriveValues is not { } values)
+            {
+                return;
+            }
+
+            for (int j = 0; j < _drive.Length; j++)
+            {
+                _drive[j] = values[j](driveAt);
+            }
+
+            if (_circuit.ForceCoupling is { } g)
+            {
+                Vector3D force = Vector3D.Zero;
+                for (int j = 0; j < _drive.Length; j++)
+                {
+                    if (_drive[j] == 0)
+                    {
+                        continue;
+                    }
+
+                    Vector3D perDrive = Vector3D.Zero;
+                    for (int k = 0; k < z.Length; k++)
+                    {
+                        perDrive += z[k] * g[k, j];
+                    }
+
+                    force += _drive[j] * perDrive;
+                }
+
+                Impulse += 0.5 * h * (force + _last);
+                _last = force;
+                if (force.Length > PeakForce.Length)
+                {
+                    PeakForce = force;
+                    PeakForceAt = t;
+                }
+            }
+
+            if (_circuit.MomentWeights is { } a && _solver.TorqueField is { } nxb)
+            {
+                double moment = 0;
+                for (int k = 0; k < z.Length; k++)
+                {
+                    moment += a[k] * z[k];
+                }
+
+                Vector3D torque = Vector3D.Zero;
+                for (int j = 0; j < _drive.Length; j++)
+                {
+                    torque += (moment * _drive[j]) * nxb[j];
+                }
+
+                PeakTorque = Math.Max(PeakTorque, torque.Length);
+            }
+        }
+    }
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork

@@ -30,6 +30,18 @@ public sealed class TransientRun
     /// <summary>The modal amplitudes z at the end (path currents i = W z).</summary>
     public double[] FinalModalAmplitudes { get; init; } = System.Array.Empty<double>();
 
+    /// <summary>The force of largest magnitude on the item at a step's end, N (zero when forces were not followed).</summary>
+    public Quantities.Vector3D PeakForce { get; init; }
+
+    /// <summary>When the peak force occurs, s.</summary>
+    public double PeakForceSeconds { get; init; }
+
+    /// <summary>The impulse, the integral of the force over the run, N s.</summary>
+    public Quantities.Vector3D Impulse { get; init; }
+
+    /// <summary>The largest torque on the item's moment, N m.</summary>
+    public double PeakTorqueNewtonMeters { get; init; }
+
     /// <summary>The steps taken.</summary>
     public int Steps { get; init; }
 

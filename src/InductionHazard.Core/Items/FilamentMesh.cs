@@ -65,18 +65,24 @@ public static class FilamentMesh
     }
 
     /// <summary>
-    /// Rectangular cells over [r0, r1] x [z0, z1], graded toward the named surfaces: the smallest cell is the surface
-    /// cell (or less, so that r has at least <paramref name="minimumCells"/> cells and z two), and no cell is longer
-    /// than <see cref="MaxAspect"/> times it.
+    /// Rectangular cells over [r0, r1] x [z0, z1], graded toward the named surfaces. The smallest cell is the surface
+    /// cell (or less, so that r has at least <paramref name="minimumCells"/> cells and z two); across r no cell is longer
+    /// than <see cref="MaxAspect"/> times it. Along z, where a body's current varies slowly, cells may be longer: up to
+    /// a third of the inner radius for a hollow section (every cell then lies well off the axis, where neighbours'
+    /// inductances take the closed-form GMD), and for a solid one up to <see cref="MaxAspect"/> times the cell at the
+    /// axis and half the outer radius.
     /// </summary>
     public static List<Filament> Rectangle(double r0, double r1, double z0, double z1, double surfaceCell, bool innerSurface, bool outerSurface, bool endSurfaces, int minimumCells = MinimumCells)
     {
         double lr = r1 - r0, lz = z1 - z0;
         // At low frequency the eddy current varies across r (as r in a body), not along z: r takes the fewest cells.
         double smallest = Math.Min(surfaceCell, Math.Min(lr / minimumCells, lz / 2));
-        double largest = Math.Max(smallest, Math.Min(MaxAspect * smallest, Math.Max(lr, lz) / minimumCells));
-        double[] r = Divide(lr, smallest, largest, innerSurface, outerSurface);
-        double[] z = Divide(lz, smallest, largest, endSurfaces, endSurfaces);
+        double largestAcross = Math.Max(smallest, Math.Min(MaxAspect * smallest, lr / minimumCells));
+        double[] r = Divide(lr, smallest, largestAcross, innerSurface, outerSurface);
+        double first = r[1] - r[0];
+        double along = r0 > 0 ? r0 / 3 : Math.Min(MaxAspect * first, 0.5 * (r1 - smallest));
+        double largestAlong = Math.Max(smallest, Math.Min(Math.Max(MaxAspect * smallest, along), Math.Max(lz / minimumCells, MaxAspect * smallest)));
+        double[] z = Divide(lz, smallest, largestAlong, endSurfaces, endSurfaces);
         var cells = new List<Filament>((r.Length - 1) * (z.Length - 1));
         for (int i = 0; i + 1 < r.Length; i++)
         {

@@ -1,0 +1,50 @@
+using InductionHazard.Criteria;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment.Checks;
+
+/// <summary>
+/// Force: the peak force on the item's induced currents in the source's field gradient against the item's own
+/// weight m g, the criterion of ASTM F2052 (a force below the weight moves an item no more than gravity does). A
+/// fixed item's force is taken by its mounting; a uniform field exerts no net force.
+/// </summary>
+public sealed class ForceCheck : IHazardCheck
+{
+    private static readonly string[] Sources = { Standards.ForceAgainstWeight };
+
+    /// <inheritdoc />
+    public HazardMechanism Mechanism => HazardMechanism.Force;
+
+    /// <inheritdoc />
+    public MechanismResult Evaluate(InductionResponse response, HazardPolicy policy)
+    {
+        if (response.Item.IsSplit)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "open loop: no current flows, so no force acts on it");
+        }
+
+        if (response.Item.Contact == ContactKind.Fixed)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "fixed item: its mounting takes the force (" + SiFormat.Format(response.PeakForceNewtons, "N") + " at peak); check the mounting's rating");
+        }
+
+        var issues = response.IssuesAffecting(AffectedResults.Current);
+        if (issues.Count > 0)
+        {
+            return MechanismResult.Indeterminate(Mechanism, Sources, issues);
+        }
+
+        if (response.PeakForceNewtons == 0)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "the field has no gradient over the item (uniform), so the induced currents feel no net force");
+        }
+
+        double weight = response.MassKilograms * PhysicalConstants.StandardGravity;
+        double margin = VerdictRules.Margin(weight, response.PeakForceNewtons);
+        string detail = "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + response.PeakForceDirection
+            + " against the item's weight " + SiFormat.Format(weight, "N")
+            + (response.LaunchSpeedMetersPerSecond is { } v ? "; a loose item would leave at " + SiFormat.Format(v, "m/s") : string.Empty);
+        return MechanismResult.Judged(Mechanism, "peak force", response.PeakForceNewtons, weight, "N", margin, policy.SafetyFactor, Sources, detail);
+    }
+}

@@ -1,0 +1,49 @@
+using InductionHazard.Criteria;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment.Checks;
+
+/// <summary>
+/// Torque: the peak torque on the item's induced magnetic moment, |m x B|, against the gravitational torque of the
+/// item about its centre, m g L / 2 with L its largest dimension: the comparison ASTM F2213 makes for magnetically
+/// induced torque (the L / 2 lever is the worst case of an item pivoting at its centre; from memory of the
+/// standard's method). A fixed item's torque is taken by its mounting.
+/// </summary>
+public sealed class TorqueCheck : IHazardCheck
+{
+    private static readonly string[] Sources = { Standards.TorqueAgainstGravity };
+
+    /// <inheritdoc />
+    public HazardMechanism Mechanism => HazardMechanism.Torque;
+
+    /// <inheritdoc />
+    public MechanismResult Evaluate(InductionResponse response, HazardPolicy policy)
+    {
+        if (response.Item.IsSplit)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "open loop: no current flows, so no torque acts on it");
+        }
+
+        if (response.Item.Contact == ContactKind.Fixed)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "fixed item: its mounting takes the torque");
+        }
+
+        var issues = response.IssuesAffecting(AffectedResults.Current);
+        if (issues.Count > 0)
+        {
+            return MechanismResult.Indeterminate(Mechanism, Sources, issues);
+        }
+
+        if (response.PeakTorqueNewtonMeters == 0)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "the item's induced moment lies along the field, so it feels no torque");
+        }
+
+        double gravitational = response.MassKilograms * PhysicalConstants.StandardGravity * response.Item.Loop.LargestDimensionMeters / 2;
+        double margin = VerdictRules.Margin(gravitational, response.PeakTorqueNewtonMeters);
+        string detail = "peak torque " + SiFormat.Format(response.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(gravitational, "N·m");
+        return MechanismResult.Judged(Mechanism, "peak torque", response.PeakTorqueNewtonMeters, gravitational, "N·m", margin, policy.SafetyFactor, Sources, detail);
+    }
+}

@@ -1,0 +1,71 @@
+using System;
+using System.Numerics;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// The force and torque on a path set in a periodic steady state: with drives d_j(t) = Im(D_j e^(j omega t)) and modal
+/// amplitudes z_k(t) = Im(Z_k e^(j omega t)), the force sum_j d_j(t) sum_k G_kj z_k(t) is a product of two sinusoids: a
+/// mean and a part at twice the frequency. Both, and the peak over the cycle, from 64 samples of one period.
+/// </summary>
+/// <param name="PeakForce">The force of largest magnitude over the cycle, N.</param>
+/// <param name="MeanForce">The cycle-averaged force, N: a steady push or pull while the field runs.</param>
+/// <param name="PeakTorqueNewtonMeters">The largest torque on the item's moment over the cycle, N m.</param>
+public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanForce, double PeakTorqueNewtonMeters)
+{
+    private const int Samples = 64;
+
+    /// <summary>The force and torque over one cycle.</summary>
+    /// <param name="circuit">The modes with their force coupling and moment weights.</param>
+    /// <param name="modal">The modal amplitude phasors Z_k.</param>
+    /// <param name="drives">The drive phasors D_j.</param>
+    /// <param name="torqueField">n x b_j per term (null for no torque).</param>
+    public static SteadyMechanics Of(ModalCircuit circuit, Complex[] modal, Complex[] drives, Vector3D[]? torqueField)
+    {
+        int terms = drives.Length;
+        var forceRe = new Vector3D[terms];
+        var forceIm = new Vector3D[terms];
+        Complex moment = Complex.Zero;
+        for (int k = 0; k < modal.Length; k++)
+        {
+            for (int j = 0; j < terms && circuit.ForceCoupling is { } g; j++)
+            {
+                forceRe[j] += modal[k].Real * g[k, j];
+                forceIm[j] += modal[k].Imaginary * g[k, j];
+            }
+
+            if (circuit.MomentWeights is { } a)
+            {
+                moment += a[k] * modal[k];
+            }
+        }
+
+        Vector3D peak = Vector3D.Zero, mean = Vector3D.Zero;
+        double peakTorque = 0;
+        for (int n = 0; n < Samples; n++)
+        {
+            double phase = 2 * Math.PI * n / Samples;
+            Complex rotor = Complex.FromPolarCoordinates(1, phase);
+            double m = (moment * rotor).Imaginary;
+            Vector3D force = Vector3D.Zero, torque = Vector3D.Zero;
+            for (int j = 0; j < terms; j++)
+            {
+                double d = (drives[j] * rotor).Imaginary;
+
+                // Im(P e^(j phase)) = Re(P) sin(phase) + Im(P) cos(phase), componentwise.
+                force += d * ((Math.Sin(phase) * forceRe[j]) + (Math.Cos(phase) * forceIm[j]));
+                if (torqueField is not null)
+                {
+                    torque += (m * d) * torqueField[j];
+                }
+            }
+
+            mean += (1.0 / Samples) * force;
+            peak = force.Length > peak.Length ? force : peak;
+            peakTorque = Math.Max(peakTorque, torque.Length);
+        }
+
+        return new SteadyMechanics(peak, mean, peakTorque);
+    }
+}

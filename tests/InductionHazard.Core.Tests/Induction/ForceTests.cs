@@ -1,0 +1,146 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Assessment;
+using InductionHazard.Fields;
+using InductionHazard.Induction;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Tests.Fields;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Induction;
+
+/// <summary>
+/// Forces on induced currents, F = sum_i i_i sum_j d_j grad M_ij (the gradient of each path's coupling, by
+/// differences of the flux), against the direct integral of i dl x B around the loop with the Biot-Savart field of
+/// the coil summed over 200,000 straight pieces (no elliptic integrals, no flux).
+/// </summary>
+public class ForceTests
+{
+    private const double CoilRadius = 0.05, Turns = 10, Height = 0.03;
+
+    private static FieldSource Coil(FieldWaveform waveform) =>
+        new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), CoilRadius, Turns), waveform) });
+
+    private static ConductiveItem Ring(double diameter, double wire, string contact = "Free") =>
+        ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "ring", ["Material"] = "Copper", ["Diameter"] = diameter, ["WireDiameter"] = wire, ["Contact"] = contact }, MaterialLibrary.BuiltIn);
+
+    [Validates("gradient of a ring's flux along the coil's axis, dM/dz = -2 pi r B_r per ampere", "Biot-Savart law summed over the coil (independent of the flux integrals), F = i dl x B", "1e-4")]
+    [Fact]
+    public void TheCouplingGradientIsTheRadialFieldAroundTheRing()
+    {
+        // For a coaxial ring of radius r at height z, the force on current i is F_z = i * integral (dl x B)_z = -2 pi r i B_r,
+        // so the gradient of its flux per ampere of coil current must be -2 pi r B_r (field per ampere).
+        ConductiveItem ring = Ring(0.02, 0.001);
+        ItemPaths paths = ItemPaths.For(ring, 1, 20, thinLoop: true);
+        FieldSource coil = Coil(new RampWaveform(0, 1, 1, drive: DriveKind.Current));
+        var centre = new Vector3D(0, 0, Height);
+        Vector3D gradient = paths.CouplingGradient(coil, centre, Vector3D.UnitZ)[0, 0];
+        Vector3D b = Turns * BiotSavart.Circle(CoilRadius, 0, new Vector3D(0.01, 0, Height));
+        Within.Relative(-2 * Math.PI * 0.01 * b.X, gradient.Z, 1e-4, "dM/dz against -2 pi r B_r");
+        Assert.True(Math.Abs(gradient.X) < 1e-9 * Math.Abs(gradient.Z) && Math.Abs(gradient.Y) < 1e-9 * Math.Abs(gradient.Z), "no sideways force on a coaxial ring");
+    }
+
+    [Validates("force on a closed ring above a coil whose current rises: pushed away, F = 2 pi r i B_r", "Lenz's law; F = i dl x B with the Biot-Savart field", "1e-3")]
+    [Fact]
+    public void AClosedRingAboveACoilWhoseCurrentRisesIsPushedAway()
+    {
+        // A slow ramp (1 s against the ring's L/R of about 30 us): the current is steady at the end, where the coil
+        // current and so the force are largest.
+        ConductiveItem ring = Ring(0.02, 0.001, contact: "Fixed");
+        double peakCoil = 2000;
+        FieldSource coil = Coil(new RampWaveform(0, peakCoil, 1, drive: DriveKind.Current));
+        InductionResponse r = InductionEngine.Respond(new Scenario(ring, coil, new Placement(new Vector3D(0, 0, Height), Vector3D.UnitZ)));
+        Assert.True(r.IsValid, string.Join("; ", r.ValidityIssues));
+        Assert.True(r.PeakForceDirection.Z > 0.999, "pushed away from the coil, along +z: " + r.PeakForceDirection);
+        Vector3D b = peakCoil * Turns * BiotSavart.Circle(CoilRadius, 0, new Vector3D(0.01, 0, Height));
+        Within.Relative(2 * Math.PI * 0.01 * r.PeakCurrentAmperes * b.X, r.PeakForceNewtons, 1e-3, "F = 2 pi r i B_r at the end of the ramp");
+        Within.Relative(r.PeakForceNewtons / (r.MassKilograms * 9.80665), r.ForceToWeightRatio, 1e-12, "force over weight");
+    }
+
+    [Fact]
+    public void AUniformFieldExertsNoNetForce()
+    {
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformRamp(0, 3, 0.01));
+        Assert.True(r.PeakCurrentAmperes > 1, "a current flows");
+        Assert.Equal(0, r.PeakForceNewtons);
+    }
+
+    [Validates("filament disc above a coil: force against the sum of F = i dl x B over its filaments", "Biot-Savart law on each filament, with the filament currents the solver found", "1e-3")]
+    [Fact]
+    public void AFilamentDiscFeelsTheSumOfItsFilamentsForces()
+    {
+        // A copper disc 30 mm across and 2 mm thick, 30 mm above the coil, in a sinusoidal coil current at 50 Hz: the
+        // mean force of the steady state against the sum over filaments of the cycle-averaged -2 pi r_i Re(I_i B_r,i*)/2.
+        ConductiveItem disc = FilamentModelTests.Body("Disc", "Copper", 0.03, thickness: 0.002);
+        double f = 50, omega = 2 * Math.PI * f, amplitude = 1000;
+        ItemPaths paths = ItemPaths.For(disc, f, 20, thinLoop: false);
+        FieldSource coil = Coil(new SineWaveform(amplitude, f, drive: DriveKind.Current));
+        var centre = new Vector3D(0, 0, Height);
+        double[,] m = paths.Coupling(coil, centre, Vector3D.UnitZ);
+        ModalCircuit circuit = paths.Modes!.Drive(m, paths.CouplingGradient(coil, centre, Vector3D.UnitZ), paths.PathAreas());
+        // d(t) = A sin(w t) = Im(D e^(j w t)) with D = A.
+        var drive = System.Numerics.Complex.FromPolarCoordinates(amplitude, 0);
+        var z = new System.Numerics.Complex[circuit.Count];
+        for (int k = 0; k < z.Length; k++)
+        {
+            z[k] = circuit.Coupling[k, 0] * (-System.Numerics.Complex.ImaginaryOne * omega * drive) / new System.Numerics.Complex(1, omega * circuit.Lambdas[k]);
+        }
+
+        SteadyMechanics mechanics = SteadyMechanics.Of(circuit, z, new[] { drive }, null);
+
+        IReadOnlyList<Filament> cells = paths.Paths!.Filaments!;
+        double expected = 0;
+        for (int i = 0; i < cells.Count; i++)
+        {
+            var current = System.Numerics.Complex.Zero;
+            for (int k = 0; k < z.Length; k++)
+            {
+                current += paths.Modes.Weights[i, k] * z[k];
+            }
+
+            // A cell of uniform current density feels -2 pi r B_r averaged over its section (its Gauss points).
+            double perAmpere = 0;
+            foreach ((double r, double zz, double weight) in cells[i].GaussSamples())
+            {
+                perAmpere += weight * -2 * Math.PI * r * Turns * BiotSavart.Circle(CoilRadius, 0, new Vector3D(r, 0, Height + zz), 20_000).X;
+            }
+
+            // Mean of Im(I e^(jwt)) Im(A e^(jwt)) is Re(I conj(A)) / 2.
+            expected += perAmpere * (current * System.Numerics.Complex.Conjugate(drive)).Real / 2;
+        }
+
+        Within.Relative(expected, mechanics.MeanForce.Z, 1e-3, "mean force on the disc");
+        Assert.True(mechanics.MeanForce.Z > 0, "an alternating field pushes a conductor away on average");
+    }
+
+    [Validates("torque on a ring tilted 45 degrees in a uniform ramp, |m x B| = i A B sin 45", "torque on a magnetic moment, tau = m x B (textbook)", "1e-3")]
+    [Fact]
+    public void ATiltedRingFeelsTheTorqueOfItsMomentInTheField()
+    {
+        // A slow ramp (steady current at its end, where the field is largest): torque i A B sin(theta) at the end.
+        ConductiveItem ring = Ring(0.02, 0.001, contact: "Held");
+        var normal = new Vector3D(1, 0, 1).Normalized();
+        InductionResponse r = InductionEngine.Respond(new Scenario(ring, Fixtures.UniformRamp(0, 3, 1), new Placement(Vector3D.Zero, normal)));
+        double area = Math.PI * 0.01 * 0.01;
+        Within.Relative(r.PeakCurrentAmperes * area * 3 * Math.Sin(Math.PI / 4), r.PeakTorqueNewtonMeters, 1e-3, "|m x B| at the end of the ramp");
+        Assert.Equal(0, r.PeakForceNewtons);
+    }
+
+    [Validates("Force and Torque margins: weight over peak force, m g L/2 over peak torque; a margin of 1 lands on the limit", "ASTM F2052 and F2213 criteria (as PHYSICS section 8 states them)", "1e-12")]
+    [Fact]
+    public void TheForceAndTorqueMarginsCompareWithTheWeightAndTheGravitationalTorque()
+    {
+        ConductiveItem ring = Ring(0.02, 0.001, contact: "Free");
+        FieldSource coil = Coil(new RampWaveform(0, 2000, 0.01, drive: DriveKind.Current));
+        var centre = new Vector3D(0.01, 0, Height);
+        InductionResponse r = InductionEngine.Respond(new Scenario(ring, coil, new Placement(centre, new Vector3D(0.2, 0, 1).Normalized())));
+        InductionAssessment a = HazardAssessor.Assess(r, InductionHazard.Criteria.HazardPolicy.Default);
+        double weight = r.MassKilograms * 9.80665;
+        Within.Relative(weight / r.PeakForceNewtons, a.ForceMargin!.Value, 1e-12, "force margin");
+        Within.Relative(weight * ring.Loop.LargestDimensionMeters / 2 / r.PeakTorqueNewtonMeters, a.TorqueMargin!.Value, 1e-12, "torque margin");
+        Assert.True(r.LaunchSpeedMetersPerSecond > 0, "a loose item is given a launch speed");
+        Within.Relative(r.ImpulseNewtonSeconds!.Value / r.MassKilograms, r.LaunchSpeedMetersPerSecond!.Value, 1e-12, "launch speed = |J| / m");
+    }
+}
