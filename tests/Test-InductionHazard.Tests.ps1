@@ -166,12 +166,16 @@ Describe 'Test-InductionHazard' {
             ($warned -join ' ') | Should -Match 'Thick ring: Indeterminate'
         }
 
-        It 'gives Indeterminate for a ferromagnetic item, whose attraction is not modelled' {
+        It 'judges a ferromagnetic item by its magnetisation, and says the induction model does not apply to it' {
             $ramp = New-FieldWaveform -Ramp -From '3 T' -To '0 T' -Duration '1 s' | New-FieldSource -Uniform
             $a = New-ConductiveItem -Material 'mild steel' -Diameter '25 mm' -WireDiameter '2 mm' -Contact Held |
                 Test-InductionHazard -Source $ramp -WarningAction SilentlyContinue
-            $a.Verdict | Should -Be 'Indeterminate'
-            ($a.Reasons -join ' ') | Should -Match 'ferromagnetic'
+            # A steel keyring in 3 T: its magnetisation twists it far harder than gravity does.
+            $a.Verdict | Should -Be 'Hazard'
+            $a.GoverningMechanism | Should -Be 'Torque'
+            ($a.Mechanisms | Where-Object Mechanism -eq 'Burn').Verdict | Should -Be 'Indeterminate'
+            (($a.Mechanisms | Where-Object Mechanism -eq 'Burn').Detail) | Should -Match 'ferromagnetic'
+            ($a.Mechanisms | Where-Object Mechanism -eq 'Attraction').Applies | Should -BeFalse -Because 'a uniform field has no gradient to pull it along'
         }
     }
 

@@ -18,6 +18,9 @@ public enum AffectedResults
     /// <summary>The heating and temperatures.</summary>
     Heating = 4,
 
+    /// <summary>The source's field and its gradient at the item (the pull and twist on a ferromagnetic item).</summary>
+    Field = 8,
+
     /// <summary>Everything.</summary>
-    All = Emf | Current | Heating,
+    All = Emf | Current | Heating | Field,
 }

@@ -11,7 +11,7 @@ namespace InductionHazard.Assessment;
 /// <summary>Turns a response into an assessment: each mechanism's check, the combined verdict, the cautions.</summary>
 public static class HazardAssessor
 {
-    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck() };
+    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck(), new AttractionCheck() };
 
     /// <summary>The module's version, as recorded in assessments.</summary>
     public static string ModuleVersion { get; } =
@@ -30,7 +30,8 @@ public static class HazardAssessor
         MechanismResult[] applicable = results.Where(r => r.Applies).ToArray();
         Verdict verdict = VerdictRules.Combine(applicable.Select(r => r.Verdict!.Value));
         MechanismResult? governing = Governing(applicable, verdict);
-        double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : applicable.Min(r => r.Margin);
+        // A Hazard stands even beside mechanisms that could not be judged: its smallest judged margin is the minimum.
+        double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : applicable.Where(r => r.Verdict != Verdict.Indeterminate).Min(r => r.Margin);
 
         var reasons = new List<string>();
         if (applicable.Length == 0)
@@ -63,6 +64,7 @@ public static class HazardAssessor
             OverheatMargin = MarginOf(results, HazardMechanism.Overheat),
             ForceMargin = MarginOf(results, HazardMechanism.Force),
             TorqueMargin = MarginOf(results, HazardMechanism.Torque),
+            AttractionMargin = MarginOf(results, HazardMechanism.Attraction),
             PeakForceNewtons = Trusted(response, AffectedResults.Current, response.PeakForceNewtons),
             PeakEmfVolts = Trusted(response, AffectedResults.Emf, response.PeakEmfVolts),
             GapVoltageVolts = response.GapVoltageVolts is { } gap ? Trusted(response, AffectedResults.Emf, gap) : null,

@@ -52,6 +52,9 @@ public sealed class InductionAssessment
     /// <summary>The Torque margin (the gravitational torque over the peak torque), or null when it does not apply.</summary>
     public double? TorqueMargin { get; init; }
 
+    /// <summary>The Attraction margin (a ferromagnetic item's weight over its pull), or null when it does not apply.</summary>
+    public double? AttractionMargin { get; init; }
+
     /// <summary>The peak force on the item, N (NaN when the current is not trusted).</summary>
     public double PeakForceNewtons { get; init; }
 

@@ -7,6 +7,7 @@ using InductionHazard.Errors;
 using InductionHazard.Fields;
 using InductionHazard.Induction;
 using InductionHazard.Items;
+using InductionHazard.Mechanics;
 using InductionHazard.Quantities;
 using InductionHazard.Thermal;
 using InductionHazard.Waveforms;
@@ -41,14 +42,40 @@ public static class InductionEngine
         }
 
         bool thin = ModelValidity.Check(scenario.Item, c.Frequency, scenario.Source.IsSinusoidal, c.Start, c.Thermal, c.Issues, c.Notes);
-        if (!scenario.Item.IsSplit)
+        // A ferromagnetic item's currents are not solved: the induction model does not apply to it (see ModelValidity).
+        if (!scenario.Item.IsSplit && !scenario.Item.Material.IsFerromagnetic)
         {
             c.BuildPaths(thin);
         }
 
         response = scenario.Source.IsSinusoidal ? Sinusoidal(c, cancellation) : Transient(c, cancellation);
+        if (scenario.Item.Material.IsFerromagnetic)
+        {
+            response = Magnetised(response, c);
+        }
+
         CheckFinite(response, c.Issues);
         return response;
+    }
+
+    /// <summary>
+    /// A ferromagnetic item: its pull toward stronger field and the bound on its twist, from its magnetisation in the
+    /// source's field (the induced-current results do not apply to it; the validity issue says so).
+    /// </summary>
+    private static InductionResponse Magnetised(InductionResponse response, Common c)
+    {
+        try
+        {
+            FerromagneticAttraction pull = FerromagneticAttraction.At(c.Scenario.Source, c.Scenario.Placement.Centre, c.Scenario.Item);
+            c.Notes.Add("magnetisation: mu0 M = " + SiFormat.Format(pull.MagnetisationTesla, "T") + " in " + SiFormat.Format(pull.FieldTesla, "T") + " (demagnetising factor " + SiFormat.Plain(pull.DemagnetisingFactor)
+                + ", the smallest over orientations), grad |B| = " + SiFormat.Format(pull.GradientTeslaPerMeter, "T/m"));
+            return response with { Attraction = pull, PeakTorqueNewtonMeters = pull.TorqueNewtonMeters };
+        }
+        catch (FieldEvaluationException ex)
+        {
+            c.Issues.Add(new ValidityIssue("the field and its gradient at the item cannot be evaluated for its magnetisation: " + ex.Message, AffectedResults.Field));
+            return response with { PeakTorqueNewtonMeters = double.NaN };
+        }
     }
 
     private static InductionResponse Sinusoidal(Common c, CancellationToken cancellation)
@@ -598,9 +625,11 @@ public static class InductionEngine
                 Issues.Add(new ValidityIssue(problem, AffectedResults.Current | AffectedResults.Heating));
             }
 
+            string why = Paths?.Problem
+                ?? (Scenario.Item.Material.IsFerromagnetic ? "the induction model does not apply to a ferromagnetic item" : "the item's current paths could not be coupled to the source");
             return drive with
             {
-                Model = "not solved: " + (Paths?.Problem ?? "the item's current paths could not be coupled to the source"),
+                Model = "not solved: " + why,
                 PeakCurrentAmperes = double.NaN,
                 EnergyDissipatedJoules = double.NaN,
                 PeakTemperatureCelsius = double.NaN,

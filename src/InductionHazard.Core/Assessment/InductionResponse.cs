@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using InductionHazard.Induction;
 using InductionHazard.Items;
+using InductionHazard.Mechanics;
 using InductionHazard.Quantities;
 using InductionHazard.Thermal;
 
@@ -109,6 +110,12 @@ public sealed record InductionResponse
 
     /// <summary>The largest torque on the item's magnetic moment, |m x B|, N m.</summary>
     public double PeakTorqueNewtonMeters { get; init; }
+
+    /// <summary>For a ferromagnetic item: its magnetisation, pull and twist in the source's field; null otherwise.</summary>
+    public FerromagneticAttraction? Attraction { get; init; }
+
+    /// <summary>The pull on a ferromagnetic item toward stronger field, N; null for an item that is not ferromagnetic.</summary>
+    public double? AttractionForceNewtons => Attraction?.ForceNewtons;
 
     /// <summary>The item's mass, kg.</summary>
     public double MassKilograms => Scenario.Item.MassKilograms;

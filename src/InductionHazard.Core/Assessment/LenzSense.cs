@@ -34,7 +34,12 @@ internal static class LenzSense
             : "anticlockwise viewed looking along the field (" + along + "): the flux along " + along + " rises and the current opposes the rise (Lenz)";
     }
 
-    /// <summary>For an alternating drive: the sense in each half cycle and the current's lag behind the emf.</summary>
+    /// <summary>
+    /// For an alternating drive: the sense by regime, from the current's lag behind the emf. Resistive (lag under
+    /// 30°): the current follows the emf, anticlockwise viewed looking along the field while the flux rises. Inductive
+    /// (over 60°): the current is in phase with minus the flux, anticlockwise while the flux along the view is
+    /// positive (it cancels the flux itself, not its rise). Between: both, a fraction of a quarter cycle apart.
+    /// </summary>
     public static string Alternating(double frequencyHertz, double lagRadians, Vector3D normal, Vector3D fieldDirection)
     {
         if (Math.Abs(normal.Dot(fieldDirection)) < 1e-12)
@@ -43,8 +48,20 @@ internal static class LenzSense
         }
 
         string along = Directions.Describe(fieldDirection);
-        return "alternating at " + SiFormat.Format(frequencyHertz, "Hz") + ": anticlockwise viewed looking along " + along
-            + " while the flux along " + along + " rises, clockwise while it falls (Lenz); the current lags the emf by "
-            + (lagRadians * 180 / Math.PI).ToString("0", CultureInfo.InvariantCulture) + "°";
+        double degrees = lagRadians * 180 / Math.PI;
+        string lag = "; the current lags the emf by " + degrees.ToString("0", CultureInfo.InvariantCulture) + "°";
+        string head = "alternating at " + SiFormat.Format(frequencyHertz, "Hz") + ": anticlockwise viewed looking along " + along;
+        if (degrees < 30)
+        {
+            return head + " while the flux along " + along + " rises, clockwise while it falls (Lenz; resistance limits the current, which follows the emf)" + lag;
+        }
+
+        if (degrees > 60)
+        {
+            return head + " while the flux along " + along + " is positive, clockwise while it is negative (inductance limits the current, which cancels the flux itself rather than its rise)" + lag;
+        }
+
+        return head + " from when the flux along " + along + " starts to rise until a " + (degrees / 90).ToString("0.#", CultureInfo.InvariantCulture)
+            + " quarter cycle after it peaks (between the resistive and the inductive regimes)" + lag;
     }
 }

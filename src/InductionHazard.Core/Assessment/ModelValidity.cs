@@ -49,8 +49,8 @@ public static class ModelValidity
         if (material.IsFerromagnetic)
         {
             issues.Add(new ValidityIssue(
-                material.Name + " is ferromagnetic: its permeability depends on the field, and the pull toward the source (Attraction) is not modelled yet",
-                AffectedResults.All));
+                material.Name + " is ferromagnetic: the induction model (emf, current, heating, induced force) does not apply, since its permeability concentrates the flux and depends on the field; its pull and twist are judged by the magnetisation model (Attraction, Torque)",
+                AffectedResults.Emf | AffectedResults.Current | AffectedResults.Heating));
         }
 
         double wavelength = PhysicalConstants.SpeedOfLight / frequencyHertz;

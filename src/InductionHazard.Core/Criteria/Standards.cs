@@ -24,6 +24,12 @@ public static class Standards
     /// <summary>The torque criterion.</summary>
     public const string TorqueAgainstGravity = "ASTM F2213 criterion (magnetically induced torque below the worst-case gravitational torque, taken as m g L/2)";
 
+    /// <summary>The attraction criterion.</summary>
+    public const string AttractionAgainstWeight = "ASTM F2052 criterion (magnetic pull on a ferromagnetic item below its weight)";
+
+    /// <summary>The demagnetising factors of the magnetisation model.</summary>
+    public const string Demagnetisation = "Osborn, Phys. Rev. 67:351 (1945) (demagnetising factors of spheroids)";
+
     /// <summary>The safety factor between Clear and Caution.</summary>
     public const string SafetyFactor = "site policy (default 2)";
 }

@@ -141,10 +141,14 @@ public class InductionEngineTests
     }
 
     [Fact]
-    public void AFerromagneticItemIsOutsideTheLoopModel()
+    public void AFerromagneticItemIsOutsideTheLoopModelAndJudgedByItsMagnetisation()
     {
         InductionResponse r = Fixtures.Respond(Fixtures.Ring("Steel"), Fixtures.UniformRamp(0, 3, 1));
-        Assert.Contains(r.ValidityIssues, i => i.Affects == AffectedResults.All && i.Reason.Contains("ferromagnetic", StringComparison.Ordinal));
+        Assert.Contains(r.ValidityIssues, i => i.Affects == (AffectedResults.Emf | AffectedResults.Current | AffectedResults.Heating) && i.Reason.Contains("ferromagnetic", StringComparison.Ordinal));
+        Assert.NotNull(r.Attraction);
+        Assert.Equal(0, r.Attraction!.ForceNewtons);
+        Assert.True(r.PeakTorqueNewtonMeters > 0, "a steel ring is twisted in 3 T");
+        Assert.True(r.Trusts(AffectedResults.Field));
     }
 
     [Fact]
@@ -305,5 +309,17 @@ public class InductionEngineTests
         Assert.True(r.PeakTemperatureCelsius > r.InitialTemperatureCelsius);
         InductionAssessment a = HazardAssessor.Assess(r, HazardPolicy.Default);
         Assert.True(Finite.Is(a.BurnMargin!.Value), "a burn margin of " + a.BurnMargin + " beside a current of " + a.PeakCurrentAmperes + " A");
+    }
+
+    [Validates("the sense of an alternating current by regime: follows the emf when resistive, opposes the flux itself when inductive", "Lenz's law with the phase of I = E / (R + j omega L) (phasor analysis)", "exact")]
+    [Fact]
+    public void TheSenseOfAnAlternatingCurrentIsSaidRightInEachRegime()
+    {
+        // A 20 mm copper ring of 0.3 mm wire: omega L / R = 0.05 at 50 Hz (resistive), 300 at 300 kHz (inductive).
+        InductionResponse resistive = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.0003), Fixtures.UniformSine(0.01, 50));
+        InductionResponse inductive = Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.0003), Fixtures.UniformSine(1e-5, 300_000));
+        Assert.Contains("while the flux along +z rises", resistive.CurrentSense, StringComparison.Ordinal);
+        Assert.Contains("while the flux along +z is positive", inductive.CurrentSense, StringComparison.Ordinal);
+        Assert.Contains("cancels the flux itself", inductive.CurrentSense, StringComparison.Ordinal);
     }
 }

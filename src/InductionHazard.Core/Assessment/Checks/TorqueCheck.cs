@@ -8,7 +8,8 @@ namespace InductionHazard.Assessment.Checks;
 /// Torque: the peak torque on the item's induced magnetic moment, |m x B|, against the gravitational torque of the
 /// item about its centre, m g L / 2 with L its largest dimension: the comparison ASTM F2213 makes for magnetically
 /// induced torque (the L / 2 lever is the worst case of an item pivoting at its centre; from memory of the
-/// standard's method). A fixed item's torque is taken by its mounting.
+/// standard's method). A ferromagnetic item's twist is that of its magnetisation, bounded by V M |B| (the induced
+/// moment does not apply to it). A fixed item's torque is taken by its mounting.
 /// </summary>
 public sealed class TorqueCheck : IHazardCheck
 {
@@ -30,7 +31,9 @@ public sealed class TorqueCheck : IHazardCheck
             return MechanismResult.NotApplicable(Mechanism, "fixed item: its mounting takes the torque");
         }
 
-        var issues = response.IssuesAffecting(AffectedResults.Current);
+        // A ferromagnetic item's twist is that of its magnetisation (bounded by V M |B|), which needs the field only.
+        bool magnetised = response.Item.Material.IsFerromagnetic;
+        var issues = response.IssuesAffecting(magnetised ? AffectedResults.Field : AffectedResults.Current);
         if (issues.Count > 0)
         {
             return MechanismResult.Indeterminate(Mechanism, Sources, issues);
@@ -38,12 +41,14 @@ public sealed class TorqueCheck : IHazardCheck
 
         if (response.PeakTorqueNewtonMeters == 0)
         {
-            return MechanismResult.NotApplicable(Mechanism, "the item's induced moment lies along the field, so it feels no torque");
+            return MechanismResult.NotApplicable(Mechanism, magnetised
+                ? "a sphere of soft ferromagnetic material has no preferred axis, so the field does not twist it"
+                : "the item's induced moment lies along the field, so it feels no torque");
         }
 
         double gravitational = response.MassKilograms * PhysicalConstants.StandardGravity * response.Item.Loop.LargestDimensionMeters / 2;
         double margin = VerdictRules.Margin(gravitational, response.PeakTorqueNewtonMeters);
-        string detail = "peak torque " + SiFormat.Format(response.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(gravitational, "N·m");
+        string detail = (magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(response.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(gravitational, "N·m");
         return MechanismResult.Judged(Mechanism, "peak torque", response.PeakTorqueNewtonMeters, gravitational, "N·m", margin, policy.SafetyFactor, Sources, detail);
     }
 }
