@@ -333,4 +333,23 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
                 Should -Throw -ExpectedMessage '*WallThickness*'
         }
     }
+
+    Context 'items moved through a static field' {
+        It 'reports the braking force on a closed ring and the motional emf across a split one' {
+            $coil = New-FieldWaveform -Ramp -From 0 -To '2 kA' -Duration '1 s' | New-FieldSource -Coil -Radius '50 mm' -Turns 10
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '1 mm' -Contact Held
+            $split = New-ConductiveItem -Name 'Split ring' -Material Copper -Diameter '20 mm' -WireDiameter '1 mm' -Gap '2 mm' -Contact Held
+            $closed = Get-InductionResponse -Item $ring -Source $coil -Position '0, 0, 30 mm' -Normal z -Velocity '0, 0, 1.5 m/s'
+            $closed.BrakingForceNewtons | Should -BeGreaterThan 0
+            $closed.SpeedForWeightMetersPerSecond | Should -BeGreaterThan 0
+            $open = Get-InductionResponse -Item $split -Source $coil -Position '0, 0, 30 mm' -Normal z -Velocity '0, 0, 1.5 m/s'
+            $open.GapVoltageVolts | Should -Be $open.MotionalEmfVolts -Because 'the ramp is slow: the motion gives the larger emf'
+        }
+
+        It 'refuses a speed no person moves an item at, naming -Velocity' {
+            $coil = New-FieldWaveform -Ramp -From 0 -To '2 kA' -Duration '1 s' | New-FieldSource -Coil -Radius '50 mm' -Turns 10
+            { New-ConductiveItem -Material Copper -Diameter '20 mm' -WireDiameter '1 mm' | Test-InductionHazard -Source $coil -Velocity '0, 0, 300 m/s' } |
+                Should -Throw -ExpectedMessage '*Velocity*'
+        }
+    }
 }

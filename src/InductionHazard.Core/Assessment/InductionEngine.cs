@@ -54,8 +54,82 @@ public static class InductionEngine
             response = Magnetised(response, c);
         }
 
+        if (scenario.Placement.Velocity is not null)
+        {
+            response = Moving(response, c);
+        }
+
         CheckFinite(response, c.Issues);
         return response;
+    }
+
+    /// <summary>
+    /// An item moved at a velocity v through the source's field, held at its peak drive: the motional emf around
+    /// its outline, |sum_j d_j v . grad M_j|, which a split ring carries across its gap; and for a closed item the
+    /// braking force in the resistive limit, F = -sum_k (v . g_k) g_k / s with g_k = sum_j G_kj d_j (each mode carrying
+    /// its steady current (v . g_k) / s), an upper bound on the force at any speed, and the speed at which it
+    /// equals the item's weight.
+    /// </summary>
+    private static InductionResponse Moving(InductionResponse response, Common c)
+    {
+        Vector3D v = c.Scenario.Placement.Velocity!.Value;
+        var terms = c.Scenario.Source.Terms;
+        var peak = new double[terms.Count];
+        for (int j = 0; j < peak.Length; j++)
+        {
+            peak[j] = terms[j].Waveform.PeakValue;
+        }
+
+        try
+        {
+            ItemPaths outline = ItemPaths.For(c.Scenario.Item, c.Frequency, c.Start, thinLoop: true);
+            Vector3D[,] gradient = outline.CouplingGradient(c.Scenario.Source, c.Scenario.Placement.Centre, c.Normal);
+            double rate = 0;
+            for (int j = 0; j < peak.Length; j++)
+            {
+                rate += peak[j] * v.Dot(gradient[0, j]);
+            }
+
+            double motional = Math.Abs(rate);
+            c.Notes.Add("moved at " + SiFormat.Format(v.Length, "m/s") + " along " + v.Normalized() + " through the field at its peak drive: motional emf " + SiFormat.Format(motional, "V"));
+            response = response with
+            {
+                MotionalEmfVolts = motional,
+                GapVoltageVolts = response.GapVoltageVolts is { } gap ? Math.Max(gap, motional) : null,
+            };
+        }
+        catch (FieldEvaluationException ex)
+        {
+            c.Issues.Add(new ValidityIssue("the motional emf cannot be found along the item's outline: " + ex.Message, AffectedResults.Emf | AffectedResults.Current));
+            return response;
+        }
+
+        if (c.Modal?.ForceCoupling is not { } g)
+        {
+            return response;
+        }
+
+        double s = c.Paths!.ScaleAt(c.Start);
+        Vector3D unit = v.Normalized(), perSpeed = Vector3D.Zero;
+        for (int k = 0; k < c.Modal.Count; k++)
+        {
+            Vector3D gk = Vector3D.Zero;
+            for (int j = 0; j < peak.Length; j++)
+            {
+                gk += peak[j] * g[k, j];
+            }
+
+            perSpeed += (-unit.Dot(gk) / s) * gk;
+        }
+
+        double braking = perSpeed.Length * v.Length;
+        double weight = c.Scenario.Item.MassKilograms * PhysicalConstants.StandardGravity;
+        c.Notes.Add("braking in the resistive limit (an upper bound): " + SiFormat.Format(braking, "N") + " at " + SiFormat.Format(v.Length, "m/s") + ", equal to the weight at " + SiFormat.Format(perSpeed.Length > 0 ? weight / perSpeed.Length : double.PositiveInfinity, "m/s"));
+        return response with
+        {
+            BrakingForceNewtons = braking,
+            SpeedForWeightMetersPerSecond = perSpeed.Length > 0 ? weight / perSpeed.Length : null,
+        };
     }
 
     /// <summary>

@@ -111,6 +111,15 @@ public sealed record InductionResponse
     /// <summary>The largest torque on the item's magnetic moment, |m x B|, N m.</summary>
     public double PeakTorqueNewtonMeters { get; init; }
 
+    /// <summary>For an item moved through the field (-Velocity): the emf around its outline from the motion, V; null when it is not moved.</summary>
+    public double? MotionalEmfVolts { get; init; }
+
+    /// <summary>For a closed item moved through the field: the force opposing the motion at the stated speed, N (resistive limit, an upper bound); null otherwise.</summary>
+    public double? BrakingForceNewtons { get; init; }
+
+    /// <summary>For a closed item moved through the field: the speed at which the braking force equals its weight, m/s; null otherwise (or when nothing brakes it).</summary>
+    public double? SpeedForWeightMetersPerSecond { get; init; }
+
     /// <summary>For a ferromagnetic item: its magnetisation, pull and twist in the source's field; null otherwise.</summary>
     public FerromagneticAttraction? Attraction { get; init; }
 

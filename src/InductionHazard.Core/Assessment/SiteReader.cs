@@ -77,10 +77,11 @@ public static class SiteReader
         object? rawSources = fields.Raw("Sources", required: true, "Source");
         Vector3D position = Vector(fields, "Position", QuantityKind.Length, label) ?? Vector3D.Zero;
         Vector3D? normal = Vector(fields, "Normal", null, label);
+        Vector3D? velocity = Vector(fields, "Velocity", QuantityKind.Speed, label);
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
         double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
         string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
-        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description)");
+        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, Description)");
         if (fields.Errors.Count > 0 || name is null || rawSources is null)
         {
             throw new RecordException(label, fields.Errors);
@@ -117,7 +118,7 @@ public static class SiteReader
         Scenario.ValidateExposure(exposure);
         Scenario.ValidateLeave(leave);
         FieldSource source = FieldSource.Combine(sources, sources.Count == 1 ? sources[0].Name : name);
-        return new Station(name, source, new Placement(position, normal), exposure, leave, description);
+        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description);
     }
 
     private static Vector3D? Vector(RecordFields fields, string name, QuantityKind? kind, string label)

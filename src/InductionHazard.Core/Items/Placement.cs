@@ -11,7 +11,8 @@ public sealed class Placement
 {
     /// <summary>Creates a placement.</summary>
     /// <exception cref="InvalidInputException">The normal is zero or not finite, or the centre is not finite.</exception>
-    public Placement(Vector3D centre, Vector3D? normal = null)
+    /// <exception cref="InvalidInputException">The velocity is not finite or beyond what a person moves an item at.</exception>
+    public Placement(Vector3D centre, Vector3D? normal = null, Vector3D? velocity = null)
     {
         if (!centre.IsFinite)
         {
@@ -20,6 +21,12 @@ public sealed class Placement
 
         Centre = centre;
         Normal = normal is { } n ? Require.Direction("Normal", n) : null;
+        if (velocity is { } v && (!v.IsFinite || PhysicalRanges.Speed.Problem(v.Length) is not null))
+        {
+            throw new InvalidInputException("Velocity", PhysicalRanges.Speed.Problem(v.Length) ?? "must be finite; got " + v);
+        }
+
+        Velocity = velocity is { } w && w.Length > 0 ? w : null;
     }
 
     /// <summary>The loop at the origin facing the field.</summary>
@@ -30,4 +37,7 @@ public sealed class Placement
 
     /// <summary>The loop's unit normal, or null to face the field.</summary>
     public Vector3D? Normal { get; }
+
+    /// <summary>The velocity at which the item is moved through the (static) field here, m/s; null when it is not moved.</summary>
+    public Vector3D? Velocity { get; }
 }

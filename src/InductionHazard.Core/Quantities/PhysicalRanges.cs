@@ -45,6 +45,10 @@ public static class PhysicalRanges
     public static PhysicalRange Current { get; } = new(
         "Amplitude", -1e8, 1e8, "A", "beyond the largest fault and pulsed-power currents");
 
+    /// <summary>How fast a person moves an item through a field, m/s (common practice: a walk is about 1.5 m/s, a throw or a fall from a few metres under 10).</summary>
+    public static PhysicalRange Speed { get; } = new(
+        "Velocity", 0.0, 30.0, "m/s", "a person walks at about 1.5 m/s and a dropped or thrown item moves at under 10 m/s");
+
     /// <summary>The temperature of the surrounding air, °C.</summary>
     public static PhysicalRange Ambient { get; } = new(
         "AmbientTemperature", -50.0, 60.0, "°C", "outdoor and plant-room air; the heating and burn models are for room conditions");

@@ -65,4 +65,7 @@ public enum QuantityKind
 
     /// <summary>An inductance; canonical unit henry.</summary>
     Inductance,
+
+    /// <summary>A speed; canonical unit metre per second.</summary>
+    Speed,
 }

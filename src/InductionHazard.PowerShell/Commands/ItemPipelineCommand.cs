@@ -64,6 +64,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Vector]
     public Vector3D? Normal { get; set; }
 
+    /// <summary>The velocity at which the item is moved through the field, as x,y,z speeds ('1.5 m/s, 0, 0'; bare numbers in m/s): the motional emf around it and, for a closed item, the braking force, with the field at its peak.</summary>
+    [Parameter]
+    [Vector(QuantityKind.Speed)]
+    public Vector3D? Velocity { get; set; }
+
     /// <summary>How long carrying the item out of the field takes ('1 s', a brisk walk, by default): the flux it holds falls to zero over it. Fixed items stay.</summary>
     [Parameter]
     [Quantity(QuantityKind.Time)]
@@ -109,6 +114,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             if (Normal is { } n)
             {
                 Require.Direction("Normal", n);
+            }
+
+            if (Velocity is { } moving)
+            {
+                _ = new Placement(Vector3D.Zero, null, moving);
             }
         }
         catch (InductionHazardException ex)
@@ -178,7 +188,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         Station? station = ParameterSetName == SiteSet ? ItemInput.StationOf(input, label, Site, Station) : null;
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
-            rowNormal ?? Normal ?? station?.Placement.Normal);
+            rowNormal ?? Normal ?? station?.Placement.Normal,
+            Velocity ?? station?.Placement.Velocity);
         return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds);
     }
 

@@ -143,4 +143,21 @@ public class ForceTests
         Assert.True(r.LaunchSpeedMetersPerSecond > 0, "a loose item is given a launch speed");
         Within.Relative(r.ImpulseNewtonSeconds!.Value / r.MassKilograms, r.LaunchSpeedMetersPerSecond!.Value, 1e-12, "launch speed = |J| / m");
     }
+
+    [Validates("a ring moved along a coil's axis: motional emf v 2 pi r B_r I and braking force e^2 / (R v)", "Faraday's law for motion (emf = v . grad Phi) and F = i dl x B, with the Biot-Savart field", "1e-3")]
+    [Fact]
+    public void ARingMovedAlongACoilsAxisIsBrakedByItsOwnCurrent()
+    {
+        ConductiveItem ring = Ring(0.02, 0.001, contact: "Held");
+        double current = 2000, speed = 1.5;
+        FieldSource coil = Coil(new RampWaveform(0, current, 1, drive: DriveKind.Current));
+        var placement = new Placement(new Vector3D(0, 0, Height), Vector3D.UnitZ, new Vector3D(0, 0, speed));
+        InductionResponse r = InductionEngine.Respond(new Scenario(ring, coil, placement));
+        double br = current * Turns * BiotSavart.Circle(CoilRadius, 0, new Vector3D(0.01, 0, Height)).X;
+        double emf = speed * 2 * Math.PI * 0.01 * br;
+        double resistance = ring.Material.ResistivityAt(r.InitialTemperatureCelsius) * ring.Loop.PathLengthMeters / ring.Loop.Section.AreaSquareMeters;
+        Within.Relative(Math.Abs(emf), r.MotionalEmfVolts!.Value, 1e-3, "motional emf");
+        Within.Relative(emf * emf / (resistance * speed), r.BrakingForceNewtons!.Value, 1e-3, "braking force e^2 / (R v) (i = e / R times dPhi/dz = e / v)");
+        Within.Relative(r.MassKilograms * 9.80665 / (r.BrakingForceNewtons!.Value / speed), r.SpeedForWeightMetersPerSecond!.Value, 1e-9, "speed at which braking equals the weight");
+    }
 }

@@ -6,8 +6,9 @@ namespace InductionHazard.Assessment.Checks;
 
 /// <summary>
 /// Force: the peak force on the item's induced currents in the source's field gradient against the item's own
-/// weight m g, the criterion of ASTM F2052 (a force below the weight moves an item no more than gravity does). A
-/// fixed item's force is taken by its mounting; a uniform field exerts no net force.
+/// weight m g, the criterion of ASTM F2052 (a force below the weight moves an item no more than gravity does); for an
+/// item moved through the field, the braking force too, whichever is larger. A fixed item's force is taken by its
+/// mounting; a uniform field exerts no net force.
 /// </summary>
 public sealed class ForceCheck : IHazardCheck
 {
@@ -35,16 +36,20 @@ public sealed class ForceCheck : IHazardCheck
             return MechanismResult.Indeterminate(Mechanism, Sources, issues);
         }
 
-        if (response.PeakForceNewtons == 0)
+        double braking = response.BrakingForceNewtons ?? 0;
+        double force = System.Math.Max(response.PeakForceNewtons, braking);
+        if (force == 0)
         {
             return MechanismResult.NotApplicable(Mechanism, "the field has no gradient over the item (uniform), so the induced currents feel no net force");
         }
 
         double weight = response.MassKilograms * PhysicalConstants.StandardGravity;
-        double margin = VerdictRules.Margin(weight, response.PeakForceNewtons);
-        string detail = "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + response.PeakForceDirection
+        double margin = VerdictRules.Margin(weight, force);
+        string detail = (braking > response.PeakForceNewtons
+                ? "braking force " + SiFormat.Format(braking, "N") + " against the motion (equal to the weight at " + SiFormat.Format(response.SpeedForWeightMetersPerSecond ?? double.NaN, "m/s") + ")"
+                : "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + response.PeakForceDirection)
             + " against the item's weight " + SiFormat.Format(weight, "N")
             + (response.LaunchSpeedMetersPerSecond is { } v ? "; a loose item would leave at " + SiFormat.Format(v, "m/s") : string.Empty);
-        return MechanismResult.Judged(Mechanism, "peak force", response.PeakForceNewtons, weight, "N", margin, policy.SafetyFactor, Sources, detail);
+        return MechanismResult.Judged(Mechanism, braking > response.PeakForceNewtons ? "braking force" : "peak force", force, weight, "N", margin, policy.SafetyFactor, Sources, detail);
     }
 }
