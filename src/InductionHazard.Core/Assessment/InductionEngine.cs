@@ -502,7 +502,15 @@ public static class InductionEngine
     /// How long the cooling after the exposure is followed: three cooling time constants, and at least ten L/R
     /// so that the current has died away. The item is still worn or held while it cools.
     /// </summary>
-    private static double CoolingTail(Common c) => Math.Max(10 * c.Ldc / c.Rdc, 3 * c.Thermal.TimeConstantSeconds(c.Start));
+    /// <remarks>
+    /// With nothing to cool the item (no convection, no radiation) its cooling time is infinite and there is no
+    /// cooling to follow: the tail is then only the current's decay, so the run ends.
+    /// </remarks>
+    private static double CoolingTail(Common c)
+    {
+        double cooling = c.Thermal.TimeConstantSeconds(c.Start);
+        return Math.Max(10 * c.Ldc / c.Rdc, double.IsInfinity(cooling) ? 0 : 3 * cooling);
+    }
 
     private static double Sum(double[] perUnitDrive, Func<int, double> drive)
     {

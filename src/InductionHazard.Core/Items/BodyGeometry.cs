@@ -116,22 +116,29 @@ public sealed class CylinderBody : BodyGeometry
     public override string Describe() => _word + " D " + SiFormat.Format(2 * OuterRadiusMeters, "m");
 }
 
-/// <summary>A tube of outer radius R, wall t and length l, open at both ends.</summary>
+/// <summary>
+/// A tube of outer radius R, wall t and length l, open at both ends or closed by end walls of the same thickness
+/// inside its length (a gas cylinder's shell).
+/// </summary>
 public sealed class TubeBody : BodyGeometry
 {
     /// <summary>Creates the body.</summary>
-    public TubeBody(double outerDiameterMeters, double wallMeters, double lengthMeters)
-        : base(outerDiameterMeters / 2, new BodySection(wallMeters, lengthMeters, wallMeters * lengthMeters, SiFormat.Format(wallMeters, "m") + " wall, " + SiFormat.Format(lengthMeters, "m") + " long"))
+    public TubeBody(double outerDiameterMeters, double wallMeters, double lengthMeters, bool closedEnds = false)
+        : base(outerDiameterMeters / 2, new BodySection(wallMeters, lengthMeters, wallMeters * lengthMeters, SiFormat.Format(wallMeters, "m") + " wall, " + SiFormat.Format(lengthMeters, "m") + " long" + (closedEnds ? ", closed ends" : string.Empty)))
     {
         WallMeters = wallMeters;
         LengthMeters = lengthMeters;
+        ClosedEnds = closedEnds;
     }
 
-    /// <summary>The wall thickness, m.</summary>
+    /// <summary>The wall thickness (and an end wall's), m.</summary>
     public double WallMeters { get; }
 
     /// <summary>The length along the axis, m.</summary>
     public double LengthMeters { get; }
+
+    /// <summary>True when end walls close the tube.</summary>
+    public bool ClosedEnds { get; }
 
     /// <summary>The inner radius, m.</summary>
     public double InnerRadiusMeters => OuterRadiusMeters - WallMeters;
@@ -139,24 +146,52 @@ public sealed class TubeBody : BodyGeometry
     /// <inheritdoc />
     public override double LargestDimensionMeters => Math.Sqrt((4 * OuterRadiusMeters * OuterRadiusMeters) + (LengthMeters * LengthMeters));
 
-    /// <inheritdoc />
-    public override double VolumeCubicMeters => Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)) * LengthMeters;
+    /// <summary>The volume of one end wall, pi Ri^2 t, m^3 (zero for an open tube).</summary>
+    private double EndVolume => ClosedEnds ? Math.PI * InnerRadiusMeters * InnerRadiusMeters * WallMeters : 0;
 
     /// <inheritdoc />
-    public override double SurfaceSquareMeters =>
-        (2 * Math.PI * (OuterRadiusMeters + InnerRadiusMeters) * LengthMeters) + (2 * Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)));
+    public override double VolumeCubicMeters =>
+        (Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)) * LengthMeters) + (2 * EndVolume);
 
-    /// <summary>Across: pi (R^4 - Ri^4) l / 4; along: pi (R^2 - Ri^2) l^3 / 12.</summary>
-    public override (double Across, double Along) SecondMoments =>
-        (Math.PI * (Math.Pow(OuterRadiusMeters, 4) - Math.Pow(InnerRadiusMeters, 4)) * LengthMeters / 4,
-         Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)) * Math.Pow(LengthMeters, 3) / 12);
+    /// <summary>Open: inside and outside walls and the two rims. Closed: the outside only (the inside is sealed).</summary>
+    public override double SurfaceSquareMeters => ClosedEnds
+        ? (2 * Math.PI * OuterRadiusMeters * LengthMeters) + (2 * Math.PI * OuterRadiusMeters * OuterRadiusMeters)
+        : (2 * Math.PI * (OuterRadiusMeters + InnerRadiusMeters) * LengthMeters) + (2 * Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)));
 
-    /// <summary>Rectangular cells over the wall [Ri, R] x [-l/2, l/2], graded toward all four surfaces.</summary>
-    public override IReadOnlyList<Filament> Filaments(double surfaceCellMeters, int refinement = 1) =>
-        FilamentMesh.Rectangle(InnerRadiusMeters, OuterRadiusMeters, -LengthMeters / 2, LengthMeters / 2, surfaceCellMeters, innerSurface: true, outerSurface: true, endSurfaces: true, minimumCells: refinement * FilamentMesh.MinimumCells);
+    /// <summary>The wall: across pi (R^4 - Ri^4) l / 4, along pi (R^2 - Ri^2) l^3 / 12; each end wall adds pi Ri^4 t / 4 across and its volume times (zc^2 + t^2 / 12) along, zc = l/2 - t/2.</summary>
+    public override (double Across, double Along) SecondMoments
+    {
+        get
+        {
+            double across = Math.PI * (Math.Pow(OuterRadiusMeters, 4) - Math.Pow(InnerRadiusMeters, 4)) * LengthMeters / 4;
+            double along = Math.PI * ((OuterRadiusMeters * OuterRadiusMeters) - (InnerRadiusMeters * InnerRadiusMeters)) * Math.Pow(LengthMeters, 3) / 12;
+            if (ClosedEnds)
+            {
+                double zc = (LengthMeters / 2) - (WallMeters / 2);
+                across += 2 * Math.PI * Math.Pow(InnerRadiusMeters, 4) * WallMeters / 4;
+                along += 2 * EndVolume * ((zc * zc) + (WallMeters * WallMeters / 12));
+            }
+
+            return (across, along);
+        }
+    }
+
+    /// <summary>Rectangular cells over the wall [Ri, R] x [-l/2, l/2], graded toward all four surfaces; and over each end wall [0, Ri] x [l/2 - t, l/2].</summary>
+    public override IReadOnlyList<Filament> Filaments(double surfaceCellMeters, int refinement = 1)
+    {
+        double half = LengthMeters / 2;
+        var cells = FilamentMesh.Rectangle(InnerRadiusMeters, OuterRadiusMeters, -half, half, surfaceCellMeters, innerSurface: true, outerSurface: true, endSurfaces: true, minimumCells: refinement * FilamentMesh.MinimumCells);
+        if (ClosedEnds)
+        {
+            cells.AddRange(FilamentMesh.Rectangle(0, InnerRadiusMeters, half - WallMeters, half, surfaceCellMeters, innerSurface: false, outerSurface: true, endSurfaces: true, minimumCells: 2 * refinement * FilamentMesh.MinimumCells));
+            cells.AddRange(FilamentMesh.Rectangle(0, InnerRadiusMeters, -half, -half + WallMeters, surfaceCellMeters, innerSurface: false, outerSurface: true, endSurfaces: true, minimumCells: 2 * refinement * FilamentMesh.MinimumCells));
+        }
+
+        return cells;
+    }
 
     /// <inheritdoc />
-    public override string Describe() => "tube D " + SiFormat.Format(2 * OuterRadiusMeters, "m");
+    public override string Describe() => (ClosedEnds ? "closed tube D " : "tube D ") + SiFormat.Format(2 * OuterRadiusMeters, "m");
 }
 
 /// <summary>A solid sphere of radius R.</summary>

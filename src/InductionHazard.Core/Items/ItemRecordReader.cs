@@ -31,6 +31,7 @@ public static class ItemRecordReader
         ["Height"] = new[] { "LoopHeight" },
         ["Length"] = new[] { "Len", "Long" },
         ["WallThickness"] = new[] { "Wall", "WallThick" },
+        ["ClosedEnds"] = new[] { "Closed", "EndsClosed" },
         ["Gap"] = new[] { "GapWidth", "Split" },
         ["Contact"] = new[] { "ContactKind", "Wear", "Worn" },
     };
@@ -169,6 +170,12 @@ public static class ItemRecordReader
         }
 
         double? wall = shape == ItemShape.Tube ? fields.Quantity("WallThickness", QuantityKind.Length, required: true, A("WallThickness")) : null;
+        object? closedRaw = fields.Raw("ClosedEnds", required: false, A("ClosedEnds"));
+        bool closed = closedRaw is not null && (RecordFields.IsTrue(closedRaw) || string.Equals(System.Convert.ToString(closedRaw, CultureInfo.InvariantCulture)?.Trim(), "yes", StringComparison.OrdinalIgnoreCase));
+        if (closed && shape != ItemShape.Tube)
+        {
+            fields.AddError("ClosedEnds", "applies to a Tube (a gas cylinder's shell); a " + word.ToLowerInvariant() + " has no ends to close");
+        }
         if (shape != ItemShape.Tube && fields.Has("WallThickness", A("WallThickness")))
         {
             fields.AddError("WallThickness", "does not apply to a " + word.ToLowerInvariant() + " (give " + BodyFields(shape) + ")");
@@ -203,7 +210,13 @@ public static class ItemRecordReader
                     return null;
                 }
 
-                return fields.Errors.Count == 0 ? new TubeBody(diameter.Value, wall.Value, length!.Value) : null;
+                if (closed && 2 * wall.Value >= length!.Value)
+                {
+                    fields.AddError("WallThickness", "(" + Mm(wall.Value) + ") leaves no inside between the closed ends of a tube " + Mm(length.Value) + " long");
+                    return null;
+                }
+
+                return fields.Errors.Count == 0 ? new TubeBody(diameter.Value, wall.Value, length!.Value, closed) : null;
             default:
                 return ok && fields.Errors.Count == 0 ? new SphereBody(diameter!.Value) : null;
         }
@@ -213,7 +226,7 @@ public static class ItemRecordReader
     {
         ItemShape.Disc => "Diameter and Thickness",
         ItemShape.Cylinder => "Diameter and Length",
-        ItemShape.Tube => "Diameter (outside), WallThickness and Length",
+        ItemShape.Tube => "Diameter (outside), WallThickness and Length, and ClosedEnds for a closed shell",
         _ => "Diameter",
     };
 

@@ -72,6 +72,10 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Quantity(QuantityKind.Length)]
     public double? WallThickness { get; set; }
 
+    /// <summary>A Tube closed by end walls of its wall thickness (a gas cylinder's shell).</summary>
+    [Parameter(ParameterSetName = ParametersSet)]
+    public SwitchParameter ClosedEnds { get; set; }
+
     /// <summary>The width of the gap of a split ring; omit or 0 for a closed ring.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     [Quantity(QuantityKind.Length)]

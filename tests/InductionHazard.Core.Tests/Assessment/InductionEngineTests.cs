@@ -322,4 +322,19 @@ public class InductionEngineTests
         Assert.Contains("while the flux along +z is positive", inductive.CurrentSense, StringComparison.Ordinal);
         Assert.Contains("cancels the flux itself", inductive.CurrentSense, StringComparison.Ordinal);
     }
+
+    // Defect: a sine with no convection and no radiation never returned. With nothing to cool it, the item heats
+    // without bound until it melts (or the run ends) and the call returns.
+    [Fact]
+    public void ACallWithNoCoolingAtAllStillEnds()
+    {
+        var still = new InductionHazard.Thermal.ThermalEnvironment(20, 0, 0);
+        foreach (FieldSource source in new[] { Fixtures.UniformSine(0.05, 50), Fixtures.UniformSine(2, 10_000), Fixtures.UniformRamp(0, 3, 0.01) })
+        {
+            InductionResponse r = InductionEngine.Respond(new Scenario(Fixtures.Ring(), source, environment: still));
+            Assert.True(Finite.Is(r.FinalTemperatureCelsius) || r.MeltingReachedSeconds is not null, "ends with a temperature or at melting: " + r.FinalTemperatureCelsius);
+            Assert.True(r.FinalTemperatureCelsius >= r.InitialTemperatureCelsius, "nothing cools it");
+            Assert.DoesNotContain(r.ValidityIssues, i => i.Reason.Contains("ran out of steps", StringComparison.Ordinal) || i.Reason.StartsWith("numerical failure", StringComparison.Ordinal));
+        }
+    }
 }

@@ -26,9 +26,9 @@ public class FilamentModelTests
         _out = output;
     }
 
-    internal static ConductiveItem Body(string shape, string material, double diameter, double? thickness = null, double? length = null, double? wall = null)
+    internal static ConductiveItem Body(string shape, string material, double diameter, double? thickness = null, double? length = null, double? wall = null, bool closedEnds = false)
     {
-        var record = new Dictionary<string, object?> { ["Name"] = shape, ["Shape"] = shape, ["Material"] = material, ["Diameter"] = diameter, ["Contact"] = "Fixed" };
+        var record = new Dictionary<string, object?> { ["Name"] = shape, ["Shape"] = shape, ["Material"] = material, ["Diameter"] = diameter, ["Contact"] = "Fixed", ["ClosedEnds"] = closedEnds };
         if (thickness is { } t)
         {
             record["Thickness"] = t;
@@ -287,5 +287,22 @@ public class FilamentModelTests
         _out.WriteLine($"tau {tau:E3} s: field left at the centre {fast:P2} after a fast ramp, {slow:P2} after a slow one");
         Assert.True(fast < 0.05, "a fast pulse is shielded: " + fast);
         Assert.True(slow > 0.8, "a slow one is not: " + slow);
+    }
+
+    [Validates("closed tube (gas cylinder shell), low frequency: the open wall's pi sigma l (R^4 - Ri^4) B'^2 / 8 plus two end discs' pi sigma t Ri^4 B'^2 / 8", "classical eddy-current losses (PHYSICS section 5; Duffin for the discs): at low frequency each loop carries its own emf / R", "1.5 %; the ends' share 5 %")]
+    [Fact]
+    public void AClosedTubeAtLowFrequencyLosesItsWallsAndEndsLosses()
+    {
+        // Aluminium shell 140 mm across, 5 mm wall, 500 mm long, at 0.1 Hz (far below its L/R).
+        double r = 0.07, t = 0.005, l = 0.5, b = 1e-3, f = 0.1, omega = 2 * Math.PI * f;
+        ConductiveItem shell = Body("Tube", "Aluminium", 2 * r, length: l, wall: t, closedEnds: true);
+        double sigma = Sigma(shell), ri = r - t, rate2 = omega * b * omega * b / 2;
+        double wall = Math.PI * sigma * l * (Math.Pow(r, 4) - Math.Pow(ri, 4)) * rate2 / 8;
+        double ends = 2 * Math.PI * sigma * t * Math.Pow(ri, 4) * rate2 / 8;
+        double power = SteadyPower(shell, b, f);
+        _out.WriteLine($"closed tube: wall {wall:E4} + ends {ends:E4} = {wall + ends:E4} W, filaments {power:E4} W");
+        Within.Relative(wall + ends, power, 1.5e-2, "closed tube loss");
+        double open = SteadyPower(Body("Tube", "Aluminium", 2 * r, length: l, wall: t), b, f);
+        Within.Relative(ends, power - open, 5e-2, "what the end walls add");
     }
 }
