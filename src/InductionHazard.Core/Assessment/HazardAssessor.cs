@@ -46,7 +46,7 @@ public static class HazardAssessor
         }
 
         reasons.AddRange(applicable.Where(r => r.Verdict is Verdict.Caution or Verdict.Hazard).Select(r => r.Mechanism + ": " + r.Detail));
-        string[] standards = applicable.SelectMany(r => r.Sources).Append(Standards.SafetyFactor).Distinct().ToArray();
+        string[] standards = applicable.SelectMany(r => r.Sources).Append(Standards.SafetyFactorOf(policy)).Distinct().ToArray();
 
         return new InductionAssessment
         {

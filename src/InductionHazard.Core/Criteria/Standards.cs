@@ -30,6 +30,12 @@ public static class Standards
     /// <summary>The demagnetising factors of the magnetisation model.</summary>
     public const string Demagnetisation = "Osborn, Phys. Rev. 67:351 (1945) (demagnetising factors of spheroids)";
 
-    /// <summary>The safety factor between Clear and Caution.</summary>
-    public const string SafetyFactor = "site policy (default 2)";
+    /// <summary>The safety factor between Clear and Caution when no site policy sets one.</summary>
+    public const string SafetyFactor = "common practice: a safety factor of 2 between Clear and Caution (no site policy applied)";
+
+    /// <summary>Where a policy's safety factor comes from: common practice for the default, the policy for any other.</summary>
+    public static string SafetyFactorOf(HazardPolicy policy) =>
+        ReferenceEquals(policy, HazardPolicy.Default) || (policy.SafetyFactor == 2.0 && policy.Name == HazardPolicy.Default.Name)
+            ? SafetyFactor
+            : "site policy '" + policy.Name + "': a safety factor of " + Quantities.SiFormat.Plain(policy.SafetyFactor) + " between Clear and Caution";
 }

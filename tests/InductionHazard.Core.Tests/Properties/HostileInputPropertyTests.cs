@@ -77,27 +77,74 @@ public class HostileInputPropertyTests
             }
 
             System.Threading.Interlocked.Increment(ref assessed);
-            if (a.Verdict == Verdict.Clear)
-            {
-                Assert.True(!double.IsNaN(a.MinimumMargin) && a.MinimumMargin >= a.SafetyFactor, "Clear with a minimum margin of " + a.MinimumMargin);
-                foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies))
-                {
-                    Assert.True(!double.IsNaN(m.Margin) && m.Margin >= a.SafetyFactor, m.Mechanism + " margin " + m.Margin);
-                    if (double.IsInfinity(m.Margin))
-                    {
-                        double added = m.Unit == "°C" ? m.Predicted - a.Response.InitialTemperatureCelsius : m.Predicted;
-                        Assert.True(added == 0, m.Mechanism + ": an infinite margin beside a predicted " + m.Predicted + " " + m.Unit);
-                    }
-                }
-                Assert.True(Finite.Is(a.PeakEmfVolts), "Clear beside an emf of " + a.PeakEmfVolts);
-                Assert.True(Finite.Is(a.PeakTemperatureCelsius), "Clear beside a temperature of " + a.PeakTemperatureCelsius);
-            }
-
-            if (double.IsNaN(a.MinimumMargin))
-            {
-                Assert.Equal(Verdict.Indeterminate, a.Verdict);
-            }
+            NeverAnUnfoundedClear(a);
         }, seed: "0N0XIzNsQ1A1", iter: 2000, threads: 1);
         Assert.True(assessed > 100 && refused > 100, assessed + " assessed, " + refused + " refused: the corpus should exercise both");
+    }
+
+    /// <summary>Clear only when every margin is a number at least the safety factor; a NaN minimum margin only beside Indeterminate.</summary>
+    private static void NeverAnUnfoundedClear(InductionAssessment a)
+    {
+        if (a.Verdict == Verdict.Clear)
+        {
+            Assert.True(!double.IsNaN(a.MinimumMargin) && a.MinimumMargin >= a.SafetyFactor, "Clear with a minimum margin of " + a.MinimumMargin);
+            foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies))
+            {
+                Assert.True(!double.IsNaN(m.Margin) && m.Margin >= a.SafetyFactor, m.Mechanism + " margin " + m.Margin);
+                if (double.IsInfinity(m.Margin))
+                {
+                    double added = m.Unit == "°C" ? m.Predicted - a.Response.InitialTemperatureCelsius : m.Predicted;
+                    Assert.True(added == 0, m.Mechanism + ": an infinite margin beside a predicted " + m.Predicted + " " + m.Unit);
+                }
+            }
+            Assert.True(Finite.Is(a.PeakEmfVolts), "Clear beside an emf of " + a.PeakEmfVolts);
+            Assert.True(Finite.Is(a.PeakTemperatureCelsius), "Clear beside a temperature of " + a.PeakTemperatureCelsius);
+        }
+
+        if (double.IsNaN(a.MinimumMargin))
+        {
+            Assert.Equal(Verdict.Indeterminate, a.Verdict);
+        }
+    }
+
+    private static readonly object?[] Shapes = { "Disc", "Cylinder", "Tube", "Sphere", "Tube" };
+
+    private static readonly Gen<Dictionary<string, object?>> Bodies =
+        Gen.Select(Gen.Int[0, Shapes.Length - 1], Pick(GoodLengths, BadLengths), Pick(GoodLengths, BadLengths), Pick(GoodLengths, BadLengths), Pick(GoodMaterials, BadMaterials), Gen.Int[0, Contacts.Length - 1], Gen.Bool)
+            .Select((shape, d, t, l, m, c, closed) => new Dictionary<string, object?>
+            {
+                ["Name"] = "fuzz body",
+                ["Shape"] = Shapes[shape],
+                ["Material"] = m,
+                ["Diameter"] = d,
+                ["Thickness"] = (string?)Shapes[shape] == "Disc" ? t : null,
+                ["Length"] = (string?)Shapes[shape] is "Cylinder" or "Tube" ? l : null,
+                ["WallThickness"] = (string?)Shapes[shape] == "Tube" ? t : null,
+                ["ClosedEnds"] = (string?)Shapes[shape] == "Tube" && closed,
+                ["Contact"] = Contacts[c],
+            });
+
+    [Fact]
+    public void EveryHostileBodyGivesAnAssessmentOrTheModulesOwnErrorAndNeverAnUnfoundedClear()
+    {
+        int assessed = 0, refused = 0;
+        Gen.Select(Bodies, Gen.Int[0, Sources.Length - 1]).Sample((row, s) =>
+        {
+            InductionAssessment a;
+            try
+            {
+                ConductiveItem item = ItemRecordReader.Read(row, MaterialLibrary.BuiltIn, 1);
+                a = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(item, Sources[s])), HazardPolicy.Default);
+            }
+            catch (InductionHazardException)
+            {
+                System.Threading.Interlocked.Increment(ref refused);
+                return;
+            }
+
+            System.Threading.Interlocked.Increment(ref assessed);
+            NeverAnUnfoundedClear(a);
+        }, seed: "0N0XIzNsQ1A2", iter: 300, threads: 1);
+        Assert.True(assessed > 50 && refused > 20, assessed + " assessed, " + refused + " refused: the corpus should exercise both");
     }
 }
