@@ -308,6 +308,8 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
                 [pscustomobject]@{ Name = 'Bearing ball'; Shape = 'Sphere'; Material = 'SS304'; Diameter = '20 mm'; Contact = 'Free' }
                 [pscustomobject]@{ Name = 'Wide gold band'; Shape = 'Ring'; Material = 'Gold'; InnerDiameter = '18 mm'; Width = '8 mm'; Thickness = '2.5 mm'; Contact = 'Skin' }
                 [pscustomobject]@{ Name = 'Thin copper ring'; Shape = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '0.3 mm'; Contact = 'Skin' }
+                [pscustomobject]@{ Name = 'Fixture plate'; Shape = 'Plate'; Material = 'Aluminium'; Width = '80 mm'; Height = '60 mm'; Thickness = '3 mm'; Contact = 'Fixed' }
+                [pscustomobject]@{ Name = 'Gas cylinder'; Shape = 'Tube'; Material = 'Aluminium'; Diameter = '80 mm'; WallThickness = '3 mm'; Length = '250 mm'; ClosedEnds = 'yes'; Contact = 'Free' }
             )
         }
 
@@ -324,6 +326,18 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $results[0].Response.PathCount | Should -BeGreaterThan 1 -Because 'a disc is solved with filaments'
             $results[0].Response.Model | Should -Match 'coaxial filaments'
             $results[5].Response.PathCount | Should -Be 1 -Because 'a thin ring is the one-path case'
+            $results[6].Response.Model | Should -Match 'mesh currents'
+        }
+
+        It 'solves a bar at mains frequency, and refuses one whose skin depth needs more mesh currents than it solves, saying why' {
+            $mains = New-FieldWaveform -Sine -Amplitude '20 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
+            $bar = New-ConductiveItem -Name 'Tool head' -Shape Bar -Material Brass -Width '20 mm' -Height '20 mm' -Length '60 mm' -Contact Held
+            $solved = Test-InductionHazard -Item $bar -Source $mains -WarningAction SilentlyContinue
+            $solved.Verdict | Should -Not -Be 'Indeterminate'
+            $solved.Response.Model | Should -Match 'mesh currents'
+            $fast = Test-InductionHazard -Item $bar -Source $coil -Position '0, 0, 40 mm' -WarningAction SilentlyContinue
+            $fast.Verdict | Should -Be 'Indeterminate'
+            ($fast.Reasons -join ' ') | Should -Match 'mesh currents, more than'
         }
 
         It 'refuses a field that belongs to another shape, naming it' {

@@ -665,29 +665,28 @@ public static class InductionEngine
         /// </summary>
         private static (double R, double L) Equivalent(ItemPaths paths, BodyGeometry body)
         {
-            IReadOnlyList<Filament> cells = paths.Paths!.Filaments!;
-            double conductance = 0;
-            var uniform = new double[cells.Count, 1];
-            for (int i = 0; i < cells.Count; i++)
+            // In a uniform axial field each path links its own area: the modes' low-frequency loss per B'^2 is sum_k C_k^2.
+            double[] areas = paths.PathAreas();
+            var uniform = new double[areas.Length, 1];
+            for (int i = 0; i < areas.Length; i++)
             {
-                double area = Math.PI * cells[i].RadiusMeters * cells[i].RadiusMeters;
-                uniform[i, 0] = area;
-                conductance += area * area / (paths.ReferenceResistivityOhmMeters * paths.Paths.LengthOverArea[i]);
+                uniform[i, 0] = areas[i];
+            }
+
+            ModalCircuit axial = paths.Modes!.Drive(uniform);
+            double conductance = 0, lead = 0, best = -1;
+            for (int k = 0; k < axial.Count; k++)
+            {
+                double c2 = axial.Coupling[k, 0] * axial.Coupling[k, 0];
+                conductance += c2;
+                if (c2 * axial.Lambdas[k] > best)
+                {
+                    (best, lead) = (c2 * axial.Lambdas[k], axial.Lambdas[k]);
+                }
             }
 
             double outline = body.LoopAreaSquareMeters;
             double r = outline * outline / conductance;
-            ModalCircuit axial = paths.Modes!.Drive(uniform);
-            double lead = 0, best = -1;
-            for (int k = 0; k < axial.Count; k++)
-            {
-                double weight = axial.Coupling[k, 0] * axial.Coupling[k, 0] * axial.Lambdas[k];
-                if (weight > best)
-                {
-                    (best, lead) = (weight, axial.Lambdas[k]);
-                }
-            }
-
             return (r, lead * r);
         }
 

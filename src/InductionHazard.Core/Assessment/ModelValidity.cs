@@ -75,7 +75,9 @@ public static class ModelValidity
         CheckTemperatureCoefficient(material, notes);
         if (item.Loop is BodyGeometry)
         {
-            notes.Add("solid body: eddy currents in coaxial filaments over its section, axis along the placement's normal");
+            notes.Add(item.Loop is PrismBody
+                ? "block: eddy currents as mesh currents over a grid of its face, in layers along its axis (the placement's normal)"
+                : "solid body: eddy currents in coaxial filaments over its section, axis along the placement's normal");
             return false;
         }
 

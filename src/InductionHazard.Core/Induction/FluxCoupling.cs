@@ -33,6 +33,8 @@ public static class FluxCoupling
     {
         RectangularLoopGeometry r when geometry is UniformField u => u.Direction.Dot(normal) * r.LoopAreaSquareMeters,
         RectangularLoopGeometry r => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal), r.WidthMeters, r.HeightMeters),
+        PrismBody p when geometry is UniformField u => u.Direction.Dot(normal) * p.LoopAreaSquareMeters,
+        PrismBody p => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal), p.WidthMeters, p.HeightMeters),
         _ => geometry.FluxThroughDisc(centre, normal, loop.HalfSpanMeters),
     };
 

@@ -23,7 +23,7 @@ public sealed class ItemPaths
     /// The most filaments solved: the inductance matrix grows as the square and its modes as the cube of the count.
     /// A section that needs more (a thick body at a high frequency) is refused, not solved coarsely.
     /// </summary>
-    public const int MaxPaths = 700;
+    public const int MaxPaths = 1100;
 
     private ItemPaths(ConductiveItem item, PathSet? paths, PathModes? modes, string description, string? problem, double referenceResistivity)
     {
@@ -77,6 +77,11 @@ public sealed class ItemPaths
 
         double delta = SkinEffect.SkinDepthMeters(rho, frequencyHertz, item.Material.RelativePermeability);
         double cell = SurfaceCellSkinDepths * delta / refinement;
+        if (item.Loop is PrismBody prism)
+        {
+            return ForBlock(item, prism, cell, delta, frequencyHertz, refinement, rho);
+        }
+
         IReadOnlyList<Filament>? cells = item.Loop.Filaments(cell, refinement);
         if (cells is null)
         {
@@ -104,6 +109,109 @@ public sealed class ItemPaths
             : new ItemPaths(item, set, modes, description, null, rho);
     }
 
+    /// <summary>The flux per unit drive through each cell of a block's mesh: the cell's rectangle at its centre.</summary>
+    private static double[,] MeshCoupling(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal)
+    {
+        (Vector3D ex, Vector3D ey) = FaceAxes(normal);
+        var coupling = new double[mesh.Count, source.Terms.Count];
+        for (int j = 0; j < source.Terms.Count; j++)
+        {
+            IFieldGeometry geometry = source.Terms[j].Geometry;
+            for (int k = 0; k < mesh.Layers; k++)
+            {
+                for (int row = 0; row < mesh.Rows; row++)
+                {
+                    for (int col = 0; col < mesh.Columns; col++)
+                    {
+                        double w = mesh.X[col + 1] - mesh.X[col], h = mesh.Y[row + 1] - mesh.Y[row];
+                        Vector3D p = centre + (0.5 * (mesh.X[col] + mesh.X[col + 1]) * ex) + (0.5 * (mesh.Y[row] + mesh.Y[row + 1]) * ey) + (0.5 * (mesh.Z[k] + mesh.Z[k + 1]) * normal);
+                        coupling[mesh.Cell(col, row, k), j] = geometry is UniformField u
+                            ? u.Direction.Dot(normal) * w * h
+                            : RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, p, normal, ex, w, h);
+                    }
+                }
+            }
+        }
+
+        return coupling;
+    }
+
+    /// <summary>
+    /// The force per ampere of each cell's current and unit drive of each term: the sum over its branches, with the
+    /// signs its current runs in them, of l x b at two Gauss points along each branch.
+    /// </summary>
+    private static Vector3D[,] MeshForce(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal)
+    {
+        (Vector3D ex, Vector3D ey) = FaceAxes(normal);
+        var force = new Vector3D[mesh.Count, source.Terms.Count];
+        double g = 0.5 / Math.Sqrt(3);
+        for (int j = 0; j < source.Terms.Count; j++)
+        {
+            IFieldGeometry geometry = source.Terms[j].Geometry;
+            foreach (MeshBranch b in mesh.Branches)
+            {
+                Vector3D along = b.AlongX ? ex : ey, across = b.AlongX ? ey : ex;
+                Vector3D start = centre + (b.From * along) + (b.Across * across) + (b.Axial * normal);
+                Vector3D f = Vector3D.Zero;
+                foreach (double u in new[] { 0.5 - g, 0.5 + g })
+                {
+                    f += (0.5 * b.Length * along).Cross(geometry.FieldPerUnitDrive(start + (u * b.Length * along)));
+                }
+
+                if (b.Plus >= 0)
+                {
+                    force[b.Plus, j] += f;
+                }
+
+                if (b.Minus >= 0)
+                {
+                    force[b.Minus, j] -= f;
+                }
+            }
+        }
+
+        return force;
+    }
+
+    /// <summary>A block: mesh currents over its grid, the centre cells' currents reported as the total.</summary>
+    private static ItemPaths ForBlock(ConductiveItem item, PrismBody prism, double cell, double delta, double frequencyHertz, int refinement, double rho)
+    {
+        PlateMesh mesh = prism.Mesh(cell, refinement);
+        string count = mesh.Count.ToString(CultureInfo.InvariantCulture) + " mesh currents (" + mesh.Columns.ToString(CultureInfo.InvariantCulture) + " x " + mesh.Rows.ToString(CultureInfo.InvariantCulture) + " cells in "
+            + mesh.Layers.ToString(CultureInfo.InvariantCulture) + (mesh.Layers == 1 ? " layer" : " layers") + ")";
+        if (mesh.Count > MaxPaths)
+        {
+            return new ItemPaths(
+                item,
+                null,
+                null,
+                count,
+                "the skin depth (" + SiFormat.Format(delta, "m") + " at " + SiFormat.Format(frequencyHertz, "Hz") + ") is so small against the block that resolving it needs "
+                + mesh.Count.ToString("N0", CultureInfo.InvariantCulture) + " mesh currents, more than the " + MaxPaths.ToString(CultureInfo.InvariantCulture) + " solved",
+                rho);
+        }
+
+        PathSet set = PathSet.Mesh(mesh, count);
+        var centre = new double[mesh.Count];
+        for (int k = 0; k < mesh.Layers; k++)
+        {
+            centre[mesh.Cell(mesh.Columns / 2, mesh.Rows / 2, k)] = 1;
+        }
+
+        PathModes? modes = set.Modes(rho);
+        string description = count + " over the block (partial-element method), cells at most " + SiFormat.Format(cell, "m") + " (a third of the skin depth " + SiFormat.Format(delta, "m") + ") at each face";
+        return modes is null
+            ? new ItemPaths(item, set, null, description, "the block's inductance or resistance matrix is not positive definite (the mesh cannot represent it)", rho)
+            : new ItemPaths(item, set, modes with { CurrentWeights = centre }, description, null, rho);
+    }
+
+    /// <summary>The unit directions of a block's width, height and axis for a normal.</summary>
+    private static (Vector3D X, Vector3D Y) FaceAxes(Vector3D normal)
+    {
+        Vector3D x = RectangularLoopGeometry.WidthDirection(normal);
+        return (x, normal.Cross(x));
+    }
+
     /// <summary>
     /// The flux per unit drive of each term through each path (paths x terms), Wb per drive unit: through the disc
     /// of each filament (radius r_i, at z_i along the normal), or through the loop's own outline for one path.
@@ -112,6 +220,11 @@ public sealed class ItemPaths
     public double[,] Coupling(FieldSource source, Vector3D centre, Vector3D normal)
     {
         int terms = source.Terms.Count;
+        if (Paths?.Plate is { } mesh)
+        {
+            return MeshCoupling(mesh, source, centre, normal);
+        }
+
         if (Paths?.Filaments is not { } cells)
         {
             double[] outline = FluxCoupling.PerUnitDrive(source, centre, normal, Item.Loop);
@@ -169,6 +282,11 @@ public sealed class ItemPaths
         if (uniform)
         {
             return gradient;
+        }
+
+        if (Paths?.Plate is { } mesh)
+        {
+            return MeshForce(mesh, source, centre, normal);
         }
 
         (Vector3D u, Vector3D v) = DiscQuadrature.Basis(normal);
@@ -244,6 +362,23 @@ public sealed class ItemPaths
     /// <summary>The area each path encloses, m^2: pi r_i^2 for a filament, the loop's own area for one path (its magnetic moment per ampere).</summary>
     public double[] PathAreas()
     {
+        if (Paths?.Plate is { } mesh)
+        {
+            var cellAreas = new double[mesh.Count];
+            for (int k = 0; k < mesh.Layers; k++)
+            {
+                for (int row = 0; row < mesh.Rows; row++)
+                {
+                    for (int col = 0; col < mesh.Columns; col++)
+                    {
+                        cellAreas[mesh.Cell(col, row, k)] = (mesh.X[col + 1] - mesh.X[col]) * (mesh.Y[row + 1] - mesh.Y[row]);
+                    }
+                }
+            }
+
+            return cellAreas;
+        }
+
         if (Paths?.Filaments is not { } cells)
         {
             return new[] { Item.Loop.LoopAreaSquareMeters };

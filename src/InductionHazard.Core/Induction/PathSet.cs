@@ -12,12 +12,100 @@ namespace InductionHazard.Induction;
 /// </summary>
 public sealed class PathSet
 {
-    private PathSet(double[,] inductance, double[] lengthOverArea, IReadOnlyList<Filament>? filaments, string description)
+    private PathSet(double[,] inductance, double[] lengthOverArea, IReadOnlyList<Filament>? filaments, string description, PlateMesh? plate = null, double[,]? resistanceShape = null)
     {
         InductanceHenries = inductance;
         LengthOverArea = lengthOverArea;
         Filaments = filaments;
         Description = description;
+        Plate = plate;
+        ResistanceShape = resistanceShape;
+    }
+
+    /// <summary>The mesh of a block whose paths are mesh currents; null otherwise.</summary>
+    public PlateMesh? Plate { get; }
+
+    /// <summary>
+    /// For mesh currents, the resistance matrix per unit resistivity, 1/m (R0 = rho times it; not diagonal, as
+    /// neighbouring cells share branches); null when each path has its own resistance (<see cref="LengthOverArea"/>).
+    /// </summary>
+    public double[,]? ResistanceShape { get; }
+
+    /// <summary>
+    /// Mesh currents over a block's grid (partial-element method): the branch inductances by Neumann's integral for
+    /// parallel straight bars (<see cref="ParallelSegments"/>; perpendicular bars do not couple), with neighbouring
+    /// bars' distance their sections' closed-form GMD (<see cref="RectangleGmd"/>) and each bar's own its GMD from
+    /// itself; the mesh matrices L = B^T L_b B and R = B^T R_b B, B the signs with which each cell's current runs in
+    /// each branch.
+    /// </summary>
+    public static PathSet Mesh(PlateMesh mesh, string description)
+    {
+        int n = mesh.Count;
+        IReadOnlyList<MeshBranch> branches = mesh.Branches;
+        var l = new double[n, n];
+        var r = new double[n, n];
+        var diagonal = new double[n];
+        for (int a = 0; a < branches.Count; a++)
+        {
+            MeshBranch p = branches[a];
+            double own = p.Length / (p.Width * p.Thickness);
+            AddBoth(r, p, p, own);
+            for (int b = a; b < branches.Count; b++)
+            {
+                MeshBranch q = branches[b];
+                if (q.AlongX != p.AlongX)
+                {
+                    continue;
+                }
+
+                double m = BranchMutual(p, q);
+                AddBoth(l, p, q, m);
+                if (b != a)
+                {
+                    AddBoth(l, q, p, m);
+                }
+            }
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            diagonal[i] = r[i, i];
+        }
+
+        return new PathSet(l, diagonal, null, description, mesh, r);
+    }
+
+    /// <summary>Adds value s_p s_q to the entries of the cells the two branches belong to.</summary>
+    private static void AddBoth(double[,] matrix, in MeshBranch p, in MeshBranch q, double value)
+    {
+        foreach ((int i, double si) in new[] { (p.Plus, 1.0), (p.Minus, -1.0) })
+        {
+            if (i < 0)
+            {
+                continue;
+            }
+
+            foreach ((int j, double sj) in new[] { (q.Plus, 1.0), (q.Minus, -1.0) })
+            {
+                if (j >= 0)
+                {
+                    matrix[i, j] += si * sj * value;
+                }
+            }
+        }
+    }
+
+    private static double BranchMutual(in MeshBranch p, in MeshBranch q)
+    {
+        double da = p.Across - q.Across, dz = p.Axial - q.Axial;
+        double distance = Math.Sqrt((da * da) + (dz * dz));
+        double side = Math.Max(Math.Max(p.Width, p.Thickness), Math.Max(q.Width, q.Thickness));
+        double d = distance > 6 * side
+            ? distance
+            : Math.Exp(RectangleGmd.LogGmd(
+                p.Across - (p.Width / 2), p.Across + (p.Width / 2), p.Axial - (p.Thickness / 2), p.Axial + (p.Thickness / 2),
+                q.Across - (q.Width / 2), q.Across + (q.Width / 2), q.Axial - (q.Thickness / 2), q.Axial + (q.Thickness / 2)));
+        return ParallelSegments.MutualHenries(p.From, p.To, q.From, q.To, d);
     }
 
     /// <summary>The number of paths.</summary>
@@ -73,6 +161,11 @@ public sealed class PathSet
     public PathModes? Modes(double referenceResistivityOhmMeters)
     {
         int n = Count;
+        if (ResistanceShape is { } shape)
+        {
+            return FullModes(shape, referenceResistivityOhmMeters);
+        }
+
         var scale = new double[n];
         for (int i = 0; i < n; i++)
         {
@@ -107,6 +200,44 @@ public sealed class PathSet
 
         return new PathModes(lambdas, w);
     }
+
+    /// <summary>
+    /// Modes with a full resistance matrix: R0 = C C^T (Cholesky), C^-1 L C^-T = Q diag(lambda) Q^T, W = C^-T Q; null when
+    /// R0 or the pencil is not positive definite.
+    /// </summary>
+    private PathModes? FullModes(double[,] shape, double rho)
+    {
+        int n = Count;
+        Matrix<double> r0 = Matrix<double>.Build.Dense(n, n, (i, j) => rho * shape[i, j]);
+        Matrix<double> l = Matrix<double>.Build.DenseOfArray(InductanceHenries);
+        Matrix<double> c;
+        try
+        {
+            c = r0.Cholesky().Factor;
+        }
+        catch (ArgumentException)
+        {
+            return null;
+        }
+
+        Matrix<double> cInverse = c.Inverse();
+        Matrix<double> a = cInverse * l * cInverse.Transpose();
+        a = 0.5 * (a + a.Transpose());
+        var evd = a.Evd(Symmetricity.Symmetric);
+        Vector<double> values = evd.EigenValues.Real();
+        Matrix<double> w = cInverse.Transpose() * evd.EigenVectors;
+        var lambdas = new double[n];
+        for (int k = 0; k < n; k++)
+        {
+            lambdas[k] = values[k];
+            if (!(lambdas[k] > 0))
+            {
+                return null;
+            }
+        }
+
+        return new PathModes(lambdas, w.ToArray());
+    }
 }
 
 /// <summary>
@@ -118,6 +249,9 @@ public sealed class PathSet
 /// <param name="Weights">W, paths x modes: path current per unit modal amplitude.</param>
 public sealed record PathModes(double[] Lambdas, double[,] Weights)
 {
+    /// <summary>Each path's share in the reported total current (all 1 when null; for mesh currents, the centre cells: the current circulating about the centre).</summary>
+    public double[]? CurrentWeights { get; init; }
+
     /// <summary>The number of modes.</summary>
     public int Count => Lambdas.Length;
 
@@ -141,7 +275,7 @@ public sealed record PathModes(double[] Lambdas, double[,] Weights)
         {
             for (int i = 0; i < paths; i++)
             {
-                total[k] += Weights[i, k];
+                total[k] += (CurrentWeights?[i] ?? 1) * Weights[i, k];
                 for (int j = 0; j < terms; j++)
                 {
                     c[k, j] += Weights[i, k] * pathCoupling[i, j];

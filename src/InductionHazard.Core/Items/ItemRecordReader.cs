@@ -61,6 +61,7 @@ public static class ItemRecordReader
         {
             ItemShape.RectangularLoop => ReadRectangle(fields, wire, width),
             ItemShape.Ring => ReadRing(fields, mean, inner, wire, width, thickness),
+            ItemShape.Plate or ItemShape.Bar => ReadBlock(fields, shape, width, thickness),
             _ => ReadBody(fields, shape, mean, thickness),
         };
         if (loop is BodyGeometry && gap > 0)
@@ -222,8 +223,46 @@ public static class ItemRecordReader
         }
     }
 
+    /// <summary>
+    /// A block: a Plate (Width, Height, Thickness; its axis along its normal) or a Bar (Width, Height, Length; its
+    /// axis along its length). A field of another shape is refused.
+    /// </summary>
+    private static PrismBody? ReadBlock(RecordFields fields, ItemShape shape, double? width, double? thickness)
+    {
+        string word = shape.ToString().ToLowerInvariant();
+        bool plate = shape == ItemShape.Plate;
+        string[] others = plate
+            ? new[] { "Diameter", "InnerDiameter", "WireDiameter", "Length", "WallThickness", "ClosedEnds" }
+            : new[] { "Diameter", "InnerDiameter", "WireDiameter", "Thickness", "WallThickness", "ClosedEnds" };
+        foreach (string other in others)
+        {
+            if (fields.Has(other, A(other)))
+            {
+                fields.AddError(other, "does not apply to a " + word + " (give " + BodyFields(shape) + ")");
+            }
+        }
+
+        double? height = fields.Quantity("Height", QuantityKind.Length, required: true, A("Height"));
+        double? depth = plate ? thickness : fields.Quantity("Length", QuantityKind.Length, required: true, A("Length"));
+        string depthField = plate ? "Thickness" : "Length";
+        if (!fields.Has("Width", A("Width")))
+        {
+            fields.AddError("Width", "is missing (a " + word + " needs " + BodyFields(shape) + ")");
+        }
+
+        if (plate && !fields.Has("Thickness", A("Thickness")))
+        {
+            fields.AddError("Thickness", "is missing (a plate needs " + BodyFields(shape) + ")");
+        }
+
+        bool ok = Positive(fields, "Width", width) & Positive(fields, "Height", height) & Positive(fields, depthField, depth);
+        return ok && fields.Errors.Count == 0 ? new PrismBody(width!.Value, height!.Value, depth!.Value, word) : null;
+    }
+
     private static string BodyFields(ItemShape shape) => shape switch
     {
+        ItemShape.Plate => "Width, Height and Thickness",
+        ItemShape.Bar => "Width, Height (its section) and Length",
         ItemShape.Disc => "Diameter and Thickness",
         ItemShape.Cylinder => "Diameter and Length",
         ItemShape.Tube => "Diameter (outside), WallThickness and Length, and ClosedEnds for a closed shell",

@@ -20,4 +20,10 @@ public enum ItemShape
 
     /// <summary>A solid sphere (-Diameter): a ball, a bearing, a knob.</summary>
     Sphere,
+
+    /// <summary>A plate (-Width -Height -Thickness): a fixture plate, a panel, a shim; axis along its normal.</summary>
+    Plate,
+
+    /// <summary>A bar (-Width -Height -Length): a tool head, a rail, a busbar offcut; axis along its length.</summary>
+    Bar,
 }

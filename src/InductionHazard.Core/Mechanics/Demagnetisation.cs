@@ -32,6 +32,13 @@ public static class Demagnetisation
         return (1 - (m / r * Math.Acos(m))) / (1 - (m * m));
     }
 
+    /// <summary>A block as the spheroid of its longest side over the geometric mean of the other two.</summary>
+    private static double Elongation(double a, double b, double c)
+    {
+        double longest = Math.Max(a, Math.Max(b, c));
+        return longest / Math.Sqrt(a * b * c / longest);
+    }
+
     /// <summary>
     /// The smallest demagnetising factor of an item over orientations. A sphere: 1/3. A disc or cylinder: the spheroid
     /// of its length over its diameter (along the axis when longer than wide, across it when flatter). A tube: its
@@ -45,6 +52,7 @@ public static class Demagnetisation
             SphereBody => 1,
             CylinderBody c => c.LengthMeters / (2 * c.OuterRadiusMeters),
             TubeBody t => t.LengthMeters / (2 * t.OuterRadiusMeters),
+            PrismBody p => Elongation(p.WidthMeters, p.HeightMeters, p.DepthMeters),
             _ => geometry.PathLengthMeters / geometry.Section.LargestDimensionMeters,
         };
         double axial = SpheroidAxial(aspect);

@@ -22,7 +22,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Parameter(ParameterSetName = ParametersSet, Position = 0)]
     public string? Name { get; set; }
 
-    /// <summary>The shape: Ring (a round-wire ring or a band) or RectangularLoop (-Width x -Height of round wire), closed or split (-Gap); or a solid body: Disc (-Diameter -Thickness), Cylinder (-Diameter -Length), Tube (-Diameter -WallThickness -Length) or Sphere (-Diameter).</summary>
+    /// <summary>The shape: Ring (a round-wire ring or a band) or RectangularLoop (-Width x -Height of round wire), closed or split (-Gap); or a solid body: Disc (-Diameter -Thickness), Cylinder (-Diameter -Length), Tube (-Diameter -WallThickness -Length [-ClosedEnds]), Sphere (-Diameter), Plate (-Width -Height -Thickness) or Bar (-Width -Height -Length).</summary>
     [Parameter(ParameterSetName = ParametersSet)]
     public ItemShape Shape { get; set; } = ItemShape.Ring;
 

@@ -44,6 +44,12 @@ public class FilamentModelTests
             record["WallThickness"] = w;
         }
 
+        if (shape is "Plate" or "Bar")
+        {
+            record.Remove("Diameter");
+            record["Width"] = diameter;
+        }
+
         return ItemRecordReader.Read(record, MaterialLibrary.BuiltIn);
     }
 
@@ -304,5 +310,36 @@ public class FilamentModelTests
         Within.Relative(wall + ends, power, 1.5e-2, "closed tube loss");
         double open = SteadyPower(Body("Tube", "Aluminium", 2 * r, length: l, wall: t), b, f);
         Within.Relative(ends, power - open, 5e-2, "what the end walls add");
+    }
+
+    internal static ConductiveItem Plate(string material, double width, double height, double thickness) =>
+        ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "plate", ["Shape"] = "Plate", ["Material"] = material, ["Width"] = width, ["Height"] = height, ["Thickness"] = thickness, ["Contact"] = "Fixed" }, MaterialLibrary.BuiltIn);
+
+    [Validates("thin rectangular plate, field normal, low frequency: P = sigma B'^2 t J / 4 with the torsion constant J = k1 a b^3 of the rectangle, at a/b = 1 and 4 (mesh currents, two meshes)", "Prandtl's torsion function (the same Poisson problem): k1 = (1/3)[1 - (192/pi^5)(b/a) sum over odd n of tanh(n pi a / 2b)/n^5] (Timoshenko and Goodier, Theory of Elasticity)", "2 %; error at least halved by a mesh twice as fine (square)")]
+    [Theory]
+    [InlineData(1.0)]
+    [InlineData(4.0)]
+    public void AThinPlateAtLowFrequencyLosesThePrandtlTorsionValue(double aspect)
+    {
+        // Copper plate b = 40 mm, a = aspect b, 1 mm thick, at 1 Hz.
+        double b = 0.04, a = aspect * b, t = 0.001, field = 1e-3, f = 1, omega = 2 * Math.PI * f;
+        ConductiveItem plate = Plate("Copper", a, b, t);
+        double series = 0;
+        for (int n = 1; n < 200; n += 2)
+        {
+            series += Math.Tanh(n * Math.PI * a / (2 * b)) / Math.Pow(n, 5);
+        }
+
+        double k1 = (1 - (192 / Math.Pow(Math.PI, 5) * (b / a) * series)) / 3;
+        double expected = Sigma(plate) * (omega * field * omega * field / 2) * t * k1 * a * b * b * b / 4;
+        double coarse = SteadyPower(plate, field, f);
+        _out.WriteLine($"plate a/b {aspect}: k1 {k1:F4}, torsion {expected:E5} W, mesh {coarse:E5}");
+        Within.Relative(expected, coarse, 2e-2, "plate loss, a/b = " + aspect);
+        if (aspect == 1)
+        {
+            double fine = SteadyPower(plate, field, f, refinement: 2);
+            _out.WriteLine($"refined {fine:E5}");
+            Assert.True(Math.Abs(fine - expected) < 0.5 * Math.Abs(coarse - expected), "a finer mesh at least halves the error");
+        }
     }
 }
