@@ -160,4 +160,33 @@ public class ForceTests
         Within.Relative(emf * emf / (resistance * speed), r.BrakingForceNewtons!.Value, 1e-3, "braking force e^2 / (R v) (i = e / R times dPhi/dz = e / v)");
         Within.Relative(r.MassKilograms * 9.80665 / (r.BrakingForceNewtons!.Value / speed), r.SpeedForWeightMetersPerSecond!.Value, 1e-9, "speed at which braking equals the weight");
     }
+
+    [Validates("a disc moved along a coil's axis through its fringe: braking force, the sum over its filaments of (v 2 pi r B_r I)^2 / (R_i v)", "Faraday's law for motion on each filament and F = i dl x B, with the Biot-Savart field at each cell's Gauss points (resistive limit)", "1e-3")]
+    [Fact]
+    public void ADiscMovedThroughACoilsFringeIsBrakedByItsEddyCurrents()
+    {
+        ConductiveItem disc = FilamentModelTests.Body("Disc", "Aluminium", 0.04, thickness: 0.003);
+        double current = 2000, speed = 1.5;
+        FieldSource coil = Coil(new RampWaveform(0, current, 1, drive: DriveKind.Current));
+        var placement = new Placement(new Vector3D(0, 0, Height), Vector3D.UnitZ, new Vector3D(0, 0, speed));
+        InductionResponse r = InductionEngine.Respond(new Scenario(disc, coil, placement));
+        Assert.True(r.PathCount > 1, "filaments over the disc");
+
+        ItemPaths paths = ItemPaths.For(disc, 1, r.InitialTemperatureCelsius, thinLoop: false);
+        double rho = disc.Material.ResistivityAt(r.InitialTemperatureCelsius), expected = 0;
+        foreach (Filament cell in paths.Paths!.Filaments!)
+        {
+            // The cell's emf: v times the flux gradient, -2 pi r B_r averaged over its section; its resistance rho 2 pi r / S.
+            double gradient = 0;
+            foreach ((double radius, double z, double weight) in cell.GaussSamples())
+            {
+                gradient += weight * -2 * Math.PI * radius * current * Turns * BiotSavart.Circle(CoilRadius, 0, new Vector3D(radius, 0, Height + z), 20_000).X;
+            }
+
+            double emf = speed * gradient;
+            expected += emf * emf / (rho * cell.PathLengthMeters / cell.AreaSquareMeters) / speed;
+        }
+
+        Within.Relative(expected, r.BrakingForceNewtons!.Value, 1e-3, "braking force on the disc");
+    }
 }
