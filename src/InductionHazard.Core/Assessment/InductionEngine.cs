@@ -365,6 +365,7 @@ public static class InductionEngine
             PeakCurrentAmperes = Math.Abs(run.PeakCurrentAmperes),
             NaiveCurrentAmperes = peakEmf / c.Rdc,
             InductiveLimitCurrentAmperes = single ? fluxSwing / c.Ldc : InductiveLimit(c.Modal, driveSwing),
+            PeriodicSteadyStateCelsius = PeriodicSteadyState(c, run.EnergyJoules),
             CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
@@ -430,6 +431,35 @@ public static class InductionEngine
         }
 
         return Math.Abs(total);
+    }
+
+    /// <summary>
+    /// For a train of pulses (every term repeated with one period P and count n): the temperature the item would
+    /// settle at just after each pulse if the train went on, T0 + (E1 / C) / (1 - e^(-P / tau)), with E1 the energy of
+    /// one pulse (the run's energy over n; pulses short against P) and tau = C / (h A) the cooling time (the sum of a
+    /// geometric series of pulses each decaying by e^(-P/tau) before the next). Null for a single pulse, or when
+    /// nothing cools the item (it then has no steady state and heats with every pulse).
+    /// </summary>
+    private static double? PeriodicSteadyState(Common c, double energyJoules)
+    {
+        var terms = c.Scenario.Source.Terms;
+        if (!terms.All(t => t.Waveform is RepeatedWaveform r && r.Count > 1) || terms.Select(t => t.Waveform.PeriodSeconds).Distinct().Count() != 1)
+        {
+            return null;
+        }
+
+        var first = (RepeatedWaveform)terms[0].Waveform;
+        double tau = c.Thermal.TimeConstantSeconds(c.Start);
+        if (double.IsInfinity(tau) || !Finite.Is(energyJoules))
+        {
+            c.Notes.Add("pulse train: nothing cools the item, so it has no periodic steady state and heats with every pulse");
+            return null;
+        }
+
+        double perPulse = energyJoules / first.Count / c.Thermal.HeatCapacityJoulesPerKelvin;
+        double settled = c.Start + (perPulse / -Exponential.Minus1(-first.PeriodSeconds / tau));
+        c.Notes.Add("pulse train: if it went on, the item would settle near " + SiFormat.Celsius(settled) + " just after each pulse (each pulse adds " + SiFormat.Format(perPulse, "K") + ", cooling time " + SiFormat.Format(tau, "s") + ")");
+        return settled;
     }
 
     /// <summary>The words for the cross-axis heating, when the field has a part across a body's axis.</summary>

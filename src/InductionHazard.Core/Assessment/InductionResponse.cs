@@ -111,6 +111,9 @@ public sealed record InductionResponse
     /// <summary>The largest torque on the item's magnetic moment, |m x B|, N m.</summary>
     public double PeakTorqueNewtonMeters { get; init; }
 
+    /// <summary>For a pulse train: the temperature the item would settle at just after each pulse if the train went on, °C; null otherwise (or when nothing cools it).</summary>
+    public double? PeriodicSteadyStateCelsius { get; init; }
+
     /// <summary>For an item moved through the field (-Velocity): the emf around its outline from the motion, V; null when it is not moved.</summary>
     public double? MotionalEmfVolts { get; init; }
 

@@ -337,4 +337,29 @@ public class InductionEngineTests
             Assert.DoesNotContain(r.ValidityIssues, i => i.Reason.Contains("ran out of steps", StringComparison.Ordinal) || i.Reason.StartsWith("numerical failure", StringComparison.Ordinal));
         }
     }
+
+    [Validates("periodic steady state of a pulse train, T0 + (E1/C)/(1 - e^(-P/tau)), against the temperature the stepped solution reaches after a long train", "geometric series of pulses each decaying by e^(-P/tau) (Newton's law of cooling)", "3 %")]
+    [Fact]
+    public void APulseTrainSettlesWhereTheGeometricSeriesSays()
+    {
+        // A copper ring (fixed, in room air) under 1 T trapezoid pulses, 10 ms rise and fall, every 20 s; its cooling time is
+        // a few hundred seconds, so a train of 200 pulses (over ten cooling times) has settled.
+        var pulse = PiecewiseLinearWaveform.Trapezoid(1, 0.01, 0.02, 0.01, drive: DriveKind.FluxDensity);
+        var train = new RepeatedWaveform(pulse, 200, 20);
+        InductionResponse r = InductionEngine.Respond(new Scenario(Fixtures.Ring(contact: "Fixed"), FieldSource.Uniform("train", train, Vector3D.UnitZ), exposureSeconds: 4000));
+        Assert.NotNull(r.PeriodicSteadyStateCelsius);
+        Assert.Contains(r.ModelNotes, n => n.StartsWith("pulse train", StringComparison.Ordinal));
+        // The stepped solution's peak over the last pulses (the train's end) against the closed form.
+        double lastPulses = 0;
+        foreach (var sample in r.HeatingSeries)
+        {
+            if (sample.TimeSeconds > 3900 && sample.TimeSeconds <= 4000)
+            {
+                lastPulses = Math.Max(lastPulses, sample.TemperatureCelsius);
+            }
+        }
+
+        Assert.True(lastPulses - r.InitialTemperatureCelsius > 1, "the train heats the ring by more than a kelvin: " + (lastPulses - r.InitialTemperatureCelsius));
+        Within.Relative(r.PeriodicSteadyStateCelsius!.Value - r.InitialTemperatureCelsius, lastPulses - r.InitialTemperatureCelsius, 3e-2, "settled rise");
+    }
 }
