@@ -42,7 +42,7 @@ $csvPath = Join-Path $OutputDirectory "$Name-audit.csv"
 Write-Atomically $csvPath {
     param($file)
     $assessments | Select-Object @{ n = 'Station'; e = { $inventory[$_.RowNumber - 1].Station } }, SourceName, RowNumber, ItemName, Verdict, GoverningMechanism, MinimumMargin,
-        ShockMargin, BurnMargin, OverheatMargin, ForceMargin, TorqueMargin, AttractionMargin, PeakEmfVolts, GapVoltageVolts, PeakCurrentAmperes, PeakForceNewtons,
+        ShockMargin, ArcMargin, BurnMargin, OverheatMargin, ForceMargin, TorqueMargin, AttractionMargin, PeakEmfVolts, GapVoltageVolts, PeakCurrentAmperes, PeakForceNewtons,
         PeakTemperatureCelsius, EnergyDissipatedJoules, PolicyName, ModuleVersion, AssessedUtc |
         Export-Csv -Path $file -NoTypeInformation -Encoding utf8
 }

@@ -11,7 +11,7 @@ namespace InductionHazard.Assessment;
 /// <summary>Turns a response into an assessment: each mechanism's check, the combined verdict, the cautions.</summary>
 public static class HazardAssessor
 {
-    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck(), new AttractionCheck() };
+    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new ArcCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck(), new AttractionCheck() };
 
     /// <summary>The module's version, as recorded in assessments.</summary>
     public static string ModuleVersion { get; } =
@@ -60,6 +60,7 @@ public static class HazardAssessor
             Summary = Summarize(verdict, governing, policy),
             Mechanisms = results,
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
+            ArcMargin = MarginOf(results, HazardMechanism.Arc),
             BurnMargin = MarginOf(results, HazardMechanism.Burn),
             OverheatMargin = MarginOf(results, HazardMechanism.Overheat),
             ForceMargin = MarginOf(results, HazardMechanism.Force),

@@ -40,6 +40,9 @@ public sealed class InductionAssessment
     /// <summary>The Shock margin; null when it does not apply.</summary>
     public double? ShockMargin { get; init; }
 
+    /// <summary>The Arc margin (the gap's breakdown voltage over the peak gap voltage), or null when it does not apply.</summary>
+    public double? ArcMargin { get; init; }
+
     /// <summary>The Burn margin; null when it does not apply.</summary>
     public double? BurnMargin { get; init; }
 

@@ -24,6 +24,9 @@ public static class Standards
     /// <summary>The torque criterion.</summary>
     public const string TorqueAgainstGravity = "ASTM F2213 criterion (magnetically induced torque below the worst-case gravitational torque, taken as m g L/2)";
 
+    /// <summary>The breakdown of a gap in air.</summary>
+    public const string GapBreakdown = "Paschen's law for air (Raizer, Gas Discharge Physics, 1991; measured minimum 327 V as a floor) and the measured uniform-field fit of Kuffel, Zaengl and Kuffel (2000), the lower of the two";
+
     /// <summary>The attraction criterion.</summary>
     public const string AttractionAgainstWeight = "ASTM F2052 criterion (magnetic pull on a ferromagnetic item below its weight)";
 

@@ -33,6 +33,14 @@ public sealed class ShockCheck : IHazardCheck
         double limit = alternating ? policy.AlternatingVoltageLimitRms : policy.DirectVoltageLimit;
         string quantity = alternating ? "gap voltage, rms" : "gap voltage, peak of a unidirectional pulse";
         double margin = VerdictRules.Margin(limit, predicted);
+
+        // Moving the item gives a steady (unidirectional) gap voltage of its own: judged against the d.c. limit when it is the worse.
+        if (response.MotionalEmfVolts is { } motional && VerdictRules.Margin(policy.DirectVoltageLimit, motional) < margin)
+        {
+            (predicted, limit, quantity) = (motional, policy.DirectVoltageLimit, "gap voltage from moving the item");
+            margin = VerdictRules.Margin(limit, predicted);
+            alternating = false;
+        }
         return MechanismResult.Judged(
             Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, Sources,
             quantity + " " + SiFormat.Format(predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(limit, "V")
