@@ -110,7 +110,7 @@ public sealed class TransientPathSolver
         var work = new StepWork(modes, terms);
         double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
-        var mechanics = new Mechanics(this, _circuit, terms);
+        var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms);
         int steps = 0;
         bool budgetExceeded = false;
         double? melted = null;
@@ -370,92 +370,6 @@ public sealed class TransientPathSolver
 
     private double MaxStep(double celsius, double t) =>
         Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
-
-    /// <summary>
-    /// The force and torque on the paths at each step's end: the peak force and when, the impulse (the trapezoid
-    /// rule over the steps) and the peak torque.
-    /// </summary>
-    private sealed class Mechanics
-    {
-        private readonly TransientPathSolver _solver;
-        private readonly ModalCircuit _circuit;
-        private readonly double[] _drive;
-        private Vector3D _last;
-
-        public Mechanics(TransientPathSolver solver, ModalCircuit circuit, int terms)
-        {
-            _solver = solver;
-            _circuit = circuit;
-            _drive = new double[terms];
-        }
-
-        public Vector3D PeakForce { get; private set; }
-
-        public double PeakForceAt { get; private set; }
-
-        public Vector3D Impulse { get; private set; }
-
-        public double PeakTorque { get; private set; }
-
-        /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
-        public void Record(double[] z, double driveAt, double t, double h)
-        {
-            if (_solver.DriveValues is not { } values)
-            {
-                return;
-            }
-
-            for (int j = 0; j < _drive.Length; j++)
-            {
-                _drive[j] = values[j](driveAt);
-            }
-
-            if (_circuit.ForceCoupling is { } g)
-            {
-                Vector3D force = Vector3D.Zero;
-                for (int j = 0; j < _drive.Length; j++)
-                {
-                    if (_drive[j] == 0)
-                    {
-                        continue;
-                    }
-
-                    Vector3D perDrive = Vector3D.Zero;
-                    for (int k = 0; k < z.Length; k++)
-                    {
-                        perDrive += z[k] * g[k, j];
-                    }
-
-                    force += _drive[j] * perDrive;
-                }
-
-                Impulse += 0.5 * h * (force + _last);
-                _last = force;
-                if (force.Length > PeakForce.Length)
-                {
-                    PeakForce = force;
-                    PeakForceAt = t;
-                }
-            }
-
-            if (_circuit.MomentWeights is { } a && _solver.TorqueField is { } nxb)
-            {
-                double moment = 0;
-                for (int k = 0; k < z.Length; k++)
-                {
-                    moment += a[k] * z[k];
-                }
-
-                Vector3D torque = Vector3D.Zero;
-                for (int j = 0; j < _drive.Length; j++)
-                {
-                    torque += (moment * _drive[j]) * nxb[j];
-                }
-
-                PeakTorque = Math.Max(PeakTorque, torque.Length);
-            }
-        }
-    }
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork

@@ -1,0 +1,213 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Induction;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>What every branch of the engine needs: the coupling of each term, the circuit, the heating model and the start.</summary>
+internal sealed class EngineContext
+{
+    public EngineContext(Scenario scenario)
+    {
+        Scenario = scenario;
+        FieldSource source = scenario.Source;
+        Vector3D centre = scenario.Placement.Centre;
+        LoopGeometry loop = scenario.Item.Loop;
+        Circuit = new RingCircuit(scenario.Item);
+        // A worn or held item sits on skin that blood flow holds near 33 °C: it cannot cool below its starting
+        // temperature, so it exchanges heat with surroundings at that temperature (less cooling than room air:
+        // the safe side). A loose or fixed item starts at, and cools to, the room.
+        ThermalEnvironment surroundings = scenario.Environment;
+        var cooling = new ThermalEnvironment(scenario.InitialCelsius, surroundings.ConvectionWattsPerSquareMeterKelvin, surroundings.Emissivity);
+        Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Loop.SurfaceSquareMeters, cooling);
+        Start = scenario.InitialCelsius;
+        Rdc = Circuit.DcResistanceOhms(Start);
+        Ldc = Circuit.DcInductanceHenries;
+        Frequency = source.SignificantFrequencyHertz;
+        Normal = scenario.Placement.Normal ?? Vector3D.UnitZ;
+        FieldDirection = Normal;
+        Coupling = new double[source.Terms.Count];
+        NormalField = new double[source.Terms.Count];
+        CrossCoupling = new Vector3D[source.Terms.Count];
+        TorqueField = new Vector3D[source.Terms.Count];
+        try
+        {
+            if (scenario.Placement.Normal is null || loop is SphereBody)
+            {
+                // A sphere has no axis of its own: its filaments' axis follows the largest flux change.
+                Normal = FluxCoupling.WorstNormal(source, centre, loop);
+                Orientation = (loop is SphereBody ? "axis " : string.Empty) + "facing the largest flux change, normal " + Normal;
+            }
+            else
+            {
+                Orientation = "as given, normal " + Normal;
+            }
+
+            Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop);
+            Vector3D[] b = source.FieldPerUnitDrive(centre);
+            NormalField = b.Select(v => v.Dot(Normal)).ToArray();
+            Vector3D facing = Normal;
+            TorqueField = b.Select(v => facing.Cross(v)).ToArray();
+            FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
+            if (loop is BodyGeometry)
+            {
+                // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the methods).
+                Vector3D n = Normal;
+                CrossCoupling = b.Select(v => v - (v.Dot(n) * n)).ToArray();
+            }
+        }
+        catch (FieldEvaluationException ex)
+        {
+            FieldFailed = true;
+            Orientation = scenario.Placement.Normal is null ? "not found: the field cannot be evaluated" : "as given, normal " + Normal;
+            Issues.Add(new ValidityIssue(ex.Message, AffectedResults.All));
+        }
+
+        Notes.Add("placement: loop centre at " + centre + " m, " + Orientation);
+    }
+
+    /// <summary>
+    /// Builds the item's current paths for a closed item: one for a thin loop, filaments otherwise. A body's
+    /// resistance and inductance are then the equivalents of its low-frequency loss and its leading mode.
+    /// </summary>
+    public void BuildPaths(bool thin)
+    {
+        Paths = ItemPaths.For(Scenario.Item, Frequency, Start, thin);
+        Notes.Add("current paths: " + Paths.Description);
+        if (Paths.Problem is not null || Paths.Modes is null || FieldFailed)
+        {
+            return;
+        }
+
+        try
+        {
+            double[,] pathCoupling = Paths.Coupling(Scenario.Source, Scenario.Placement.Centre, Normal);
+            Vector3D[,] gradient = Paths.CouplingGradient(Scenario.Source, Scenario.Placement.Centre, Normal);
+            Modal = Paths.Modes.Drive(pathCoupling, gradient, Paths.PathAreas());
+        }
+        catch (FieldEvaluationException ex)
+        {
+            Issues.Add(new ValidityIssue(ex.Message, AffectedResults.Current | AffectedResults.Heating));
+            return;
+        }
+
+        if (Scenario.Item.Loop is BodyGeometry body)
+        {
+            (double across, double along) = body.SecondMoments;
+            CrossPowerFactor = across * along / (across + along) / Paths.ReferenceResistivityOhmMeters;
+            (Rdc, Ldc) = Equivalent(Paths, body);
+        }
+    }
+
+    /// <summary>
+    /// A body's equivalent single turn on its outline: R such that (pi R_out^2 B')^2 / R is the filaments'
+    /// low-frequency loss in a uniform axial field, and L that with R gives the leading mode's time constant.
+    /// </summary>
+    private static (double R, double L) Equivalent(ItemPaths paths, BodyGeometry body)
+    {
+        // In a uniform axial field each path links its own area: the modes' low-frequency loss per B'^2 is sum_k C_k^2.
+        double[] areas = paths.PathAreas();
+        var uniform = new double[areas.Length, 1];
+        for (int i = 0; i < areas.Length; i++)
+        {
+            uniform[i, 0] = areas[i];
+        }
+
+        ModalCircuit axial = paths.Modes!.Drive(uniform);
+        double conductance = 0, lead = 0, best = -1;
+        for (int k = 0; k < axial.Count; k++)
+        {
+            double c2 = axial.Coupling[k, 0] * axial.Coupling[k, 0];
+            conductance += c2;
+            if (c2 * axial.Lambdas[k] > best)
+            {
+                (best, lead) = (c2 * axial.Lambdas[k], axial.Lambdas[k]);
+            }
+        }
+
+        double outline = body.LoopAreaSquareMeters;
+        double r = outline * outline / conductance;
+        return (r, lead * r);
+    }
+
+    /// <summary>
+    /// When the paths cannot be solved: the issue recorded and a response whose current and heating are not
+    /// numbers; null when they can.
+    /// </summary>
+    public InductionResponse? PathProblem(InductionResponse drive)
+    {
+        if (Modal is not null)
+        {
+            return null;
+        }
+
+        if (Paths?.Problem is { } problem)
+        {
+            Issues.Add(new ValidityIssue(problem, AffectedResults.Current | AffectedResults.Heating));
+        }
+
+        string why = Paths?.Problem
+            ?? (Scenario.Item.Material.IsFerromagnetic ? "the induction model does not apply to a ferromagnetic item" : "the item's current paths could not be coupled to the source");
+        return drive with
+        {
+            Model = "not solved: " + why,
+            PeakCurrentAmperes = double.NaN,
+            EnergyDissipatedJoules = double.NaN,
+            PeakTemperatureCelsius = double.NaN,
+            FinalTemperatureCelsius = double.NaN,
+        };
+    }
+
+    public ItemPaths? Paths { get; private set; }
+
+    public ModalCircuit? Modal { get; private set; }
+
+    /// <summary>n x b_j: the normal crossed with each term's field per unit drive at the centre (the torque on the item's moment).</summary>
+    public Vector3D[] TorqueField { get; } = Array.Empty<Vector3D>();
+
+    /// <summary>The field across a body's axis at its centre per unit drive of each term (zero for a loop).</summary>
+    public Vector3D[] CrossCoupling { get; }
+
+    /// <summary>The cross-axis low-frequency loss factor at the reference resistivity, W per (T/s)^2 (zero for a loop).</summary>
+    public double CrossPowerFactor { get; private set; }
+
+    public bool FieldFailed { get; }
+
+    public string Orientation { get; } = string.Empty;
+
+    public Scenario Scenario { get; }
+
+    public Vector3D Normal { get; }
+
+    public Vector3D FieldDirection { get; }
+
+    /// <summary>Flux through the loop per unit drive of each term, Wb per drive unit.</summary>
+    public double[] Coupling { get; }
+
+    /// <summary>The field normal to the loop at its centre per unit drive of each term.</summary>
+    public double[] NormalField { get; }
+
+    public RingCircuit Circuit { get; }
+
+    public LumpedThermalModel Thermal { get; }
+
+    public double Start { get; }
+
+    public double Rdc { get; private set; }
+
+    public double Ldc { get; private set; }
+
+    public double Frequency { get; }
+
+    public double MeltingCelsius => Scenario.Item.Material.MeltingCelsius;
+
+    public List<string> Notes { get; } = new();
+
+    public List<ValidityIssue> Issues { get; } = new();
+}

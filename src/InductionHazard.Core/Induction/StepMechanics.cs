@@ -1,0 +1,92 @@
+using System;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Induction;
+
+/// <summary>
+/// The force and torque on the paths at each step's end: the peak force and when, the impulse (the trapezoid
+/// rule over the steps) and the peak torque.
+/// </summary>
+internal sealed class StepMechanics
+{
+    private readonly ModalCircuit _circuit;
+    private readonly Func<double, double>[]? _values;
+    private readonly Vector3D[]? _torqueField;
+    private readonly double[] _drive;
+    private Vector3D _last;
+
+    public StepMechanics(ModalCircuit circuit, Func<double, double>[]? values, Vector3D[]? torqueField, int terms)
+    {
+        _circuit = circuit;
+        _values = values;
+        _torqueField = torqueField;
+        _drive = new double[terms];
+    }
+
+    public Vector3D PeakForce { get; private set; }
+
+    public double PeakForceAt { get; private set; }
+
+    public Vector3D Impulse { get; private set; }
+
+    public double PeakTorque { get; private set; }
+
+    /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
+    public void Record(double[] z, double driveAt, double t, double h)
+    {
+        if (_values is not { } values)
+        {
+            return;
+        }
+
+        for (int j = 0; j < _drive.Length; j++)
+        {
+            _drive[j] = values[j](driveAt);
+        }
+
+        if (_circuit.ForceCoupling is { } g)
+        {
+            Vector3D force = Vector3D.Zero;
+            for (int j = 0; j < _drive.Length; j++)
+            {
+                if (_drive[j] == 0)
+                {
+                    continue;
+                }
+
+                Vector3D perDrive = Vector3D.Zero;
+                for (int k = 0; k < z.Length; k++)
+                {
+                    perDrive += z[k] * g[k, j];
+                }
+
+                force += _drive[j] * perDrive;
+            }
+
+            Impulse += 0.5 * h * (force + _last);
+            _last = force;
+            if (force.Length > PeakForce.Length)
+            {
+                PeakForce = force;
+                PeakForceAt = t;
+            }
+        }
+
+        if (_circuit.MomentWeights is { } a && _torqueField is { } nxb)
+        {
+            double moment = 0;
+            for (int k = 0; k < z.Length; k++)
+            {
+                moment += a[k] * z[k];
+            }
+
+            Vector3D torque = Vector3D.Zero;
+            for (int j = 0; j < _drive.Length; j++)
+            {
+                torque += (moment * _drive[j]) * nxb[j];
+            }
+
+            PeakTorque = Math.Max(PeakTorque, torque.Length);
+        }
+    }
+}
