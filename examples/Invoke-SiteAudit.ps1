@@ -48,7 +48,7 @@ Write-Atomically $csvPath {
 }
 
 function Format-Si([object] $value, [string] $unit) { [InductionHazard.Quantities.SiFormat]::Format($value, $unit, 3) }
-function Format-Margin([double] $value) { [InductionHazard.Quantities.SiFormat]::Plain($value, 3) }
+function Format-Margin([double] $value) { [InductionHazard.Quantities.SiFormat]::Margin($value) }
 
 $first = $assessments | Select-Object -First 1
 $md = [System.Text.StringBuilder]::new()

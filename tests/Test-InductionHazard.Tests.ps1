@@ -366,4 +366,20 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
                 Should -Throw -ExpectedMessage '*Velocity*'
         }
     }
+
+    Context 'the demo site as a person reads it' {
+        It 'shows every margin in the table as a plain figure between 0.001 and 1000, or as a bound' {
+            $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
+            $assessed = @(Import-Csv $inventoryPath | Test-InductionHazard -Site $site -WarningAction SilentlyContinue)
+            $table = $assessed | Format-Table | Out-String -Width 200
+            $table | Should -Not -Match '\d\.?\d*E[+-]\d' -Because 'no margin or figure is shown in exponent form'
+            $shown = $assessed | ForEach-Object { [InductionHazard.Quantities.SiFormat]::Margin($_.MinimumMargin) }
+            foreach ($text in $shown | Where-Object { $_ -notin '> 1000', '< 0.001', 'NaN' }) {
+                [double] $text | Should -BeGreaterOrEqual 0.001
+                [double] $text | Should -BeLessThan 1000
+            }
+            ($assessed | Where-Object MinimumMargin -GE 1000).Count | Should -BeGreaterThan 0 -Because 'the demo has items with huge margins, shown as "> 1000"'
+            $table | Should -Match '> 1000'
+        }
+    }
 }

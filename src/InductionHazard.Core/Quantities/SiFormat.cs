@@ -54,6 +54,28 @@ public static class SiFormat
         return digits + " " + Prefixes[index] + unit;
     }
 
+    /// <summary>
+    /// A margin as a person reads it: "> 1000" when it is at least a thousand (so large that its figure says nothing
+    /// more), "&lt; 0.001" when below a thousandth, otherwise three significant digits; the property keeps the number.
+    /// </summary>
+    public static string Margin(double? margin)
+    {
+        if (margin is { } m && !double.IsNaN(m))
+        {
+            if (m >= 1000)
+            {
+                return "> 1000";
+            }
+
+            if (m < 1e-3)
+            {
+                return "< 0.001";
+            }
+        }
+
+        return Plain(margin, 3);
+    }
+
     /// <summary>Formats a dimensionless number to three significant figures; "∞" for infinity, "NaN" for NaN.</summary>
     public static string Plain(double? value, int significantDigits = 3)
     {

@@ -26,4 +26,17 @@ public class SiFormatTests
         Assert.Equal("NaN", SiFormat.Plain(double.NaN));
         Assert.Equal(string.Empty, SiFormat.Format(null, "V"));
     }
+
+    [Fact]
+    public void MarginsAreShownAsBoundsWhenVeryLargeOrSmall()
+    {
+        Assert.Equal("> 1000", SiFormat.Margin(1000));
+        Assert.Equal("> 1000", SiFormat.Margin(3.99e228));
+        Assert.Equal("> 1000", SiFormat.Margin(double.PositiveInfinity));
+        Assert.Equal("< 0.001", SiFormat.Margin(8.9e-5));
+        Assert.Equal("999", SiFormat.Margin(999.4));
+        Assert.Equal("2.59", SiFormat.Margin(2.5894));
+        Assert.Equal("NaN", SiFormat.Margin(double.NaN));
+        Assert.Equal(string.Empty, SiFormat.Margin(null));
+    }
 }
