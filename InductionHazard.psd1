@@ -15,6 +15,7 @@
         'New-FieldSource'
         'New-ConductiveItem'
         'Get-ConductorMaterial'
+        'Test-FieldExposure'
         'Get-InductionResponse'
         'Test-InductionHazard'
         'Get-FieldStrength'

@@ -1,0 +1,84 @@
+using System;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Criteria;
+
+public class ExposureLimitsTests
+{
+    [Validates("occupational reference levels for B at each band edge and in between: 0.2/f^2, 2.5e-2/f, 1 mT, 0.3/f, 0.1 mT", "ICNIRP 2010, Health Phys 99:818, table 3", "1e-12")]
+    [Theory]
+    [InlineData(1.0, 0.2)]
+    [InlineData(4.0, 0.2 / 16)]
+    [InlineData(8.0, 2.5e-2 / 8)]
+    [InlineData(16.0, 2.5e-2 / 16)]
+    [InlineData(25.0, 1e-3)]
+    [InlineData(50.0, 1e-3)]
+    [InlineData(300.0, 1e-3)]
+    [InlineData(1000.0, 0.3 / 1000)]
+    [InlineData(3000.0, 1e-4)]
+    [InlineData(1e6, 1e-4)]
+    public void OccupationalReferenceLevels(double f, double tesla) =>
+        Within.Relative(tesla, ExposureLimits.OccupationalTesla(f), 1e-12, "occupational at " + f + " Hz");
+
+    [Validates("public reference levels for B at each band edge and in between: 4e-2/f^2, 5e-3/f, 0.2 mT, 8e-2/f, 27 uT", "ICNIRP 2010, Health Phys 99:818, table 4", "1e-12")]
+    [Theory]
+    [InlineData(2.0, 4e-2 / 4)]
+    [InlineData(8.0, 5e-3 / 8)]
+    [InlineData(50.0, 2e-4)]
+    [InlineData(400.0, 8e-2 / 400)]
+    [InlineData(2000.0, 8e-2 / 2000)]
+    [InlineData(3000.0, 2.7e-5)]
+    [InlineData(1e5, 2.7e-5)]
+    public void PublicReferenceLevels(double f, double tesla) =>
+        Within.Relative(tesla, ExposureLimits.PublicTesla(f), 1e-12, "public at " + f + " Hz");
+
+    [Fact]
+    public void TheBandsMeetWithoutAJumpWhereTheTablesSayTheyDo()
+    {
+        // Continuity at 8 Hz and 300 Hz (occupational) and 8 Hz and 400 Hz (public) follows from the tables' formulas.
+        Within.Relative(0.2 / 64, 2.5e-2 / 8, 1e-12, "occupational at 8 Hz");
+        Within.Relative(ExposureLimits.OccupationalTesla(299.999999), ExposureLimits.OccupationalTesla(300), 1e-8, "occupational at 300 Hz");
+        Within.Relative(ExposureLimits.PublicTesla(399.999999), ExposureLimits.PublicTesla(400), 1e-8, "public at 400 Hz");
+        Assert.True(double.IsNaN(ExposureLimits.OccupationalTesla(0.5)) && double.IsNaN(ExposureLimits.PublicTesla(2e7)), "outside 1 Hz - 10 MHz: no reference level");
+    }
+
+    [Validates("static limits: 2 T occupational (head and trunk), 400 mT public; a margin of 1 on the limit", "ICNIRP 2009, Health Phys 96:504", "1e-12")]
+    [Fact]
+    public void AStaticFieldIsJudgedAgainstTheIcnirp2009Limits()
+    {
+        var slow = FieldSource.Uniform("magnet", new RampWaveform(0, 2, 600, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        FieldExposure worker = FieldExposure.At(slow, Vector3D.Zero, publicExposure: false, HazardPolicy.Default);
+        FieldExposure visitor = FieldExposure.At(slow, Vector3D.Zero, publicExposure: true, HazardPolicy.Default);
+        Within.Relative(1, worker.Margin, 1e-12, "2 T against 2 T");
+        Assert.Equal(Verdict.Caution, worker.Verdict);
+        Within.Relative(0.4 / 2, visitor.Margin, 1e-12, "2 T against 400 mT");
+        Assert.Equal(Verdict.Hazard, visitor.Verdict);
+        Assert.True(worker.ImplantLineExceeded && worker.ProjectileLineExceeded);
+    }
+
+    [Validates("a 50 Hz sinusoid at the occupational reference level: rms 1 mT, margin 1", "ICNIRP 2010 table 3", "1e-12")]
+    [Fact]
+    public void ASinusoidIsJudgedByItsRmsAtItsFrequency()
+    {
+        var mains = FieldSource.Uniform("mains", new SineWaveform(Math.Sqrt(2) * 1e-3, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        FieldExposure e = FieldExposure.At(mains, Vector3D.Zero, publicExposure: false, HazardPolicy.Default);
+        Within.Relative(1e-3, e.ComparedTesla, 1e-12, "rms");
+        Within.Relative(1, e.Margin, 1e-9, "margin at the level");
+        Assert.True(e.ImplantLineExceeded && !e.ProjectileLineExceeded);
+    }
+
+    [Fact]
+    public void APulseIsIndeterminateNotANumberThatLooksSafe()
+    {
+        var pulse = FieldSource.Uniform("pulse", new RampWaveform(0, 1e-6, 1e-3, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        FieldExposure e = FieldExposure.At(pulse, Vector3D.Zero, publicExposure: false, HazardPolicy.Default);
+        Assert.Equal(Verdict.Indeterminate, e.Verdict);
+        Assert.True(double.IsNaN(e.Margin));
+        Assert.Contains("weighted-peak", e.Finding, StringComparison.Ordinal);
+    }
+}

@@ -1,0 +1,36 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+}
+
+Describe 'Test-FieldExposure' {
+    # Validates: a 50 Hz field at the occupational reference level from the cmdlet, margin 1 | ICNIRP 2010 table 3 | 1e-9
+    It 'judges a mains-frequency field by its rms against the reference level, with the implant line' {
+        $mains = New-FieldWaveform -Sine -Amplitude '1.4142135623730951 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
+        $e = Test-FieldExposure -Source $mains
+        [math]::Abs($e.Margin - 1) | Should -BeLessThan 1e-9
+        $e.Verdict | Should -Be 'Caution'
+        $e.ImplantLineExceeded | Should -BeTrue
+        $e.Finding | Should -Match '0.5 mT line'
+        ($e.Cautions -join ' ') | Should -Match 'engineering estimates'
+    }
+
+    It 'gives one result per point, takes the public limits with -Public, and names a point where the field cannot be given' {
+        $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
+        $worker = @(Test-FieldExposure -Source $feeder -Position '300 mm, 0, 0', '1 m, 0, 0')
+        $visitor = @(Test-FieldExposure -Source $feeder -Position '300 mm, 0, 0', '1 m, 0, 0' -Public)
+        $worker.Count | Should -Be 2
+        $visitor[0].LimitTesla | Should -BeLessThan $worker[0].LimitTesla
+        $worker[0].Margin | Should -BeLessThan $worker[1].Margin
+        { Test-FieldExposure -Source $feeder -Position '0, 0, 0' -ErrorAction Stop } | Should -Throw -ExpectedMessage '*Position*'
+    }
+
+    It 'is Indeterminate for a pulse, with a warning, never a number that looks safe' {
+        $pulse = New-FieldWaveform -Ramp -From 0 -To '1 mT' -Duration '1 ms' | New-FieldSource -Uniform
+        $e = Test-FieldExposure -Source $pulse -WarningVariable warned -WarningAction SilentlyContinue
+        $e.Verdict | Should -Be 'Indeterminate'
+        [double]::IsNaN($e.Margin) | Should -BeTrue
+        ($warned -join ' ') | Should -Match 'weighted-peak'
+    }
+}
