@@ -94,7 +94,7 @@ foreach ($station in $site.Stations) {
     if ($flagged.Count) {
         $null = $md.AppendLine('Findings:')
         $null = $md.AppendLine()
-        foreach ($a in $flagged) { $null = $md.AppendLine("- Row $($a.RowNumber), $($a.ItemName): $($a.Summary)") }
+        foreach ($a in $flagged) { $null = $md.AppendLine("- Row $($a.RowNumber), $($a.ItemName): $($a.Summary) Action: $($a.Action)") }
         $null = $md.AppendLine()
     }
 }

@@ -58,6 +58,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             Summary = Summarize(verdict, governing, policy),
+            Action = RecommendedAction.For(verdict, governing, policy),
             Mechanisms = results,
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             ArcMargin = MarginOf(results, HazardMechanism.Arc),

@@ -34,6 +34,9 @@ public sealed class InductionAssessment
     /// <summary>The finding in one sentence.</summary>
     public string Summary { get; init; } = string.Empty;
 
+    /// <summary>What to do, in plain words: the action for a Hazard or Indeterminate, what restores the margin for a Caution.</summary>
+    public string Action { get; init; } = string.Empty;
+
     /// <summary>Every mechanism checked, including those that do not apply (with the reason).</summary>
     public IReadOnlyList<MechanismResult> Mechanisms { get; init; } = Array.Empty<MechanismResult>();
 

@@ -103,4 +103,31 @@ public class HazardAssessorTests
         Assert.Equal(65, burn.Limit, 9);
         Assert.Contains("touch", burn.Detail, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void EveryAssessmentSaysWhatToDoInPlainWords()
+    {
+        InductionAssessment clear = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(1e-6, 50)));
+        Assert.Equal(Verdict.Clear, clear.Verdict);
+        Assert.StartsWith("No action needed", clear.Action, StringComparison.Ordinal);
+
+        InductionAssessment burn = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.5, 10000)));
+        Assert.Equal(Verdict.Hazard, burn.Verdict);
+        Assert.Contains("keep it out", burn.Action, StringComparison.OrdinalIgnoreCase);
+
+        InductionAssessment unknown = Assess(Fixtures.Respond(Fixtures.Frame("Copper", 0.02, 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
+        Assert.Equal(Verdict.Indeterminate, unknown.Verdict);
+        Assert.Contains("unsafe", unknown.Action, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ACautionSaysByHowMuchItsGoverningQuantityMustFall()
+    {
+        // A split ring whose gap voltage is 40 V rms: Shock margin 50/40 = 1.25, below the factor 2: it must fall by 1.6.
+        double area = Math.PI * 0.01 * 0.01, omega = 2 * Math.PI * 50;
+        double peakTesla = 40 * Math.Sqrt(2) / (omega * area);
+        InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(gap: 0.001), Fixtures.UniformSine(peakTesla, 50)));
+        Assert.Equal(Verdict.Caution, a.Verdict);
+        Assert.Contains("by a factor of 1.6", a.Action, StringComparison.Ordinal);
+    }
 }

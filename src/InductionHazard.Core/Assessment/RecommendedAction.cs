@@ -1,0 +1,53 @@
+using InductionHazard.Criteria;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// What to do about an assessment, in plain words: for a Hazard or an Indeterminate verdict the action (keep the
+/// item out, fix it down, assess it another way); for a Caution what would restore the margin; for Clear, nothing.
+/// </summary>
+public static class RecommendedAction
+{
+    /// <summary>The action for a verdict and its governing mechanism.</summary>
+    public static string For(Verdict verdict, MechanismResult? governing, HazardPolicy policy)
+    {
+        if (verdict == Verdict.Indeterminate || governing is null)
+        {
+            return "Treat it as unsafe here: keep it out of this place until it is assessed another way (measured, or by a specialist), since the module cannot judge it.";
+        }
+
+        if (verdict == Verdict.Clear)
+        {
+            return "No action needed at this place.";
+        }
+
+        if (verdict == Verdict.Caution)
+        {
+            double factor = policy.SafetyFactor / governing.Margin;
+            string what = governing.Unit == "°C" ? "rise in " + governing.Quantity : governing.Quantity;
+            return "Usable with care; to restore the safety factor of " + SiFormat.Plain(policy.SafetyFactor) + ", the " + what + " must fall by a factor of "
+                + SiFormat.Plain(factor) + ": " + Remedy(governing.Mechanism) + ".";
+        }
+
+        return governing.Mechanism switch
+        {
+            HazardMechanism.Shock => "Keep it out of this place: a person bridging its gap would take a voltage above the safe limit; do not wear or hold it here.",
+            HazardMechanism.Arc => "Keep it out of this place: its gap would spark, and never near a flammable atmosphere.",
+            HazardMechanism.Burn => "Take it off, or keep it out, before entering: it would burn the skin it touches.",
+            HazardMechanism.Overheat => "Keep it out of this place: it would overheat, softening or melting.",
+            HazardMechanism.Force => "Keep it out of this place, or fix it down with a mounting rated for the force: the field would push or throw it.",
+            HazardMechanism.Torque => "Keep it out of this place, or fix it down: the field would twist it hard enough to pull from the hand or its mounting.",
+            HazardMechanism.Attraction => "Keep it out of this place: it would be pulled toward the source and could become a projectile.",
+            _ => "Keep it out of this place until the exposure is reduced and it is assessed again.",
+        };
+    }
+
+    private static string Remedy(HazardMechanism mechanism) => mechanism switch
+    {
+        HazardMechanism.Burn or HazardMechanism.Overheat => "a shorter time in the field, more distance from the source, or an item that is not a closed metal loop",
+        HazardMechanism.Shock or HazardMechanism.Arc => "more distance from the source, a slower field change, or an item without a gap (or not metal)",
+        HazardMechanism.Force or HazardMechanism.Torque or HazardMechanism.Attraction => "more distance from the source, a weaker field, or fixing the item down",
+        _ => "more distance from the source or a weaker field",
+    };
+}
