@@ -20,12 +20,8 @@ public static class RectangleInductance
     public static double ExternalHenries(double a, double b, double wireRadiusMeters) => Loop(a, b, wireRadiusMeters);
 
     /// <summary>Mutual inductance of two parallel straight filaments of length l, d apart, side by side (Grover 1946), H.</summary>
-    public static double ParallelFilamentsHenries(double l, double d) =>
-        PhysicalConstants.VacuumPermeability / (2 * Math.PI) * ((l * Asinh(l / d)) - Math.Sqrt((l * l) + (d * d)) + d);
+    public static double ParallelFilamentsHenries(double l, double d) => ParallelSegments.MutualHenries(0, l, 0, l, d);
 
     private static double Loop(double a, double b, double g) =>
         (2 * ParallelFilamentsHenries(a, g)) + (2 * ParallelFilamentsHenries(b, g)) - (2 * ParallelFilamentsHenries(a, b)) - (2 * ParallelFilamentsHenries(b, a));
-
-    /// <summary>asinh x = ln(x + sqrt(x^2 + 1)) (netstandard2.0 has no Math.Asinh).</summary>
-    private static double Asinh(double x) => Math.Log(x + Math.Sqrt((x * x) + 1));
 }

@@ -31,9 +31,9 @@ public sealed record FerromagneticAttraction(
     }
 
     /// <summary>
-    /// The pull and twist on a ferromagnetic item at a point: the drive sampled over its course (at the sample times
-    /// of its terms; over one cycle for sines) for the largest |B| at the centre, and the gradient of |B| there by
-    /// central differences over a thousandth of the item's size.
+    /// The pull and twist on a ferromagnetic item at a point: the largest |B| at the centre over the drive (as
+    /// <see cref="FieldStrength"/> finds it), and the gradient of |B| there at that moment by central differences
+    /// over a thousandth of the item's size.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be evaluated at or near the point.</exception>
     public static FerromagneticAttraction At(FieldSource source, Vector3D centre, ConductiveItem item)
@@ -44,16 +44,9 @@ public sealed record FerromagneticAttraction(
             drives[k] = source.Terms[k].Waveform;
         }
 
-        Vector3D[] perDrive = source.FieldPerUnitDrive(centre);
-        double best = -1, at = source.StartSeconds;
-        foreach (double t in SampleTimes(source, drives))
-        {
-            double b = Field(perDrive, drives, t).Length;
-            if (b > best)
-            {
-                (best, at) = (b, t);
-            }
-        }
+        // The largest |B| at the centre over the drive and when, as Get-FieldStrength finds them.
+        FieldStrength strength = FieldStrength.At(source, centre);
+        double best = strength.PeakFluxDensityTesla, at = strength.PeakSeconds;
 
         double step = Math.Max(1e-3 * item.Loop.LargestDimensionMeters, 1e-6);
         double Magnitude(Vector3D p) => Field(source.FieldPerUnitDrive(p), drives, at).Length;
@@ -79,24 +72,5 @@ public sealed record FerromagneticAttraction(
         }
 
         return b;
-    }
-
-    private static IEnumerable<double> SampleTimes(FieldSource source, FieldWaveform[] drives)
-    {
-        if (source.IsSinusoidal)
-        {
-            double period = 1 / source.SignificantFrequencyHertz, start = source.StartSeconds;
-            for (int i = 0; i < 64; i++)
-            {
-                yield return start + (period * i / 64);
-            }
-
-            yield break;
-        }
-
-        foreach (double t in DriveSampling.Times(drives))
-        {
-            yield return t;
-        }
     }
 }
