@@ -58,7 +58,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             Summary = Summarize(verdict, governing, policy),
-            Action = RecommendedAction.For(verdict, governing, policy),
+            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact),
             Mechanisms = results,
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             ArcMargin = MarginOf(results, HazardMechanism.Arc),

@@ -1,4 +1,5 @@
 using InductionHazard.Criteria;
+using InductionHazard.Items;
 using InductionHazard.Quantities;
 
 namespace InductionHazard.Assessment;
@@ -10,11 +11,16 @@ namespace InductionHazard.Assessment;
 public static class RecommendedAction
 {
     /// <summary>The action for a verdict and its governing mechanism.</summary>
-    public static string For(Verdict verdict, MechanismResult? governing, HazardPolicy policy)
+    /// <param name="verdict">The overall verdict.</param>
+    /// <param name="governing">The mechanism that governs it.</param>
+    /// <param name="policy">The policy (its safety factor).</param>
+    /// <param name="contact">How a person touches the item: a worn item is taken off, others kept out.</param>
+    public static string For(Verdict verdict, MechanismResult? governing, HazardPolicy policy, ContactKind contact = ContactKind.Free)
     {
+        string keepOut = contact == ContactKind.Skin ? "Take it off before entering this place" : "Keep it out of this place";
         if (verdict == Verdict.Indeterminate || governing is null)
         {
-            return "Treat it as unsafe here: keep it out of this place until it is assessed another way (measured, or by a specialist), since the module cannot judge it.";
+            return "Treat it as unsafe here: " + (contact == ContactKind.Skin ? "take it off before entering" : "keep it out of this place") + " until it is assessed another way (measured, or by a specialist), since the module cannot judge it.";
         }
 
         if (verdict == Verdict.Clear)
@@ -32,14 +38,14 @@ public static class RecommendedAction
 
         return governing.Mechanism switch
         {
-            HazardMechanism.Shock => "Keep it out of this place: a person bridging its gap would take a voltage above the safe limit; do not wear or hold it here.",
-            HazardMechanism.Arc => "Keep it out of this place: its gap would spark, and never near a flammable atmosphere.",
-            HazardMechanism.Burn => "Take it off, or keep it out, before entering: it would burn the skin it touches.",
-            HazardMechanism.Overheat => "Keep it out of this place: it would overheat, softening or melting.",
-            HazardMechanism.Force => "Keep it out of this place, or fix it down with a mounting rated for the force: the field would push or throw it.",
-            HazardMechanism.Torque => "Keep it out of this place, or fix it down: the field would twist it hard enough to pull from the hand or its mounting.",
-            HazardMechanism.Attraction => "Keep it out of this place: it would be pulled toward the source and could become a projectile.",
-            _ => "Keep it out of this place until the exposure is reduced and it is assessed again.",
+            HazardMechanism.Shock => keepOut + ": a person bridging its gap would take a voltage above the safe limit; do not wear or hold it here.",
+            HazardMechanism.Arc => keepOut + ": its gap would spark, and never near a flammable atmosphere.",
+            HazardMechanism.Burn => keepOut + ": it would burn the skin it touches.",
+            HazardMechanism.Overheat => keepOut + ": it would overheat, softening or melting.",
+            HazardMechanism.Force => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down with a mounting rated for the force") + ": the field would push or throw it.",
+            HazardMechanism.Torque => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down") + ": the field would twist it hard enough to wrench it from the hand, the body or its mounting.",
+            HazardMechanism.Attraction => keepOut + ": it would be pulled toward the source and could become a projectile.",
+            _ => keepOut + " until the exposure is reduced and it is assessed again.",
         };
     }
 

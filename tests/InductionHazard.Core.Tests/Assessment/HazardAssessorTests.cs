@@ -113,7 +113,12 @@ public class HazardAssessorTests
 
         InductionAssessment burn = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.5, 10000)));
         Assert.Equal(Verdict.Hazard, burn.Verdict);
-        Assert.Contains("keep it out", burn.Action, StringComparison.OrdinalIgnoreCase);
+        Assert.StartsWith("Take it off before entering", burn.Action, StringComparison.Ordinal);
+        Assert.Contains("burn", burn.Action, StringComparison.Ordinal);
+
+        InductionAssessment loose = Assess(Fixtures.Respond(Fixtures.Ring(contact: "Free"), Fixtures.UniformSine(0.5, 10000)));
+        Assert.Equal(Verdict.Hazard, loose.Verdict);
+        Assert.StartsWith("Keep it out of this place", loose.Action, StringComparison.Ordinal);
 
         InductionAssessment unknown = Assess(Fixtures.Respond(Fixtures.Frame("Copper", 0.02, 0.02, 0.006), Fixtures.UniformSine(1e-6, 50)));
         Assert.Equal(Verdict.Indeterminate, unknown.Verdict);

@@ -47,7 +47,7 @@ public sealed class ForceCheck : IHazardCheck
         double margin = VerdictRules.Margin(weight, force);
         string detail = (braking > response.PeakForceNewtons
                 ? "braking force " + SiFormat.Format(braking, "N") + " against the motion (equal to the weight at " + SiFormat.Format(response.SpeedForWeightMetersPerSecond ?? double.NaN, "m/s") + ")"
-                : "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + response.PeakForceDirection)
+                : "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + Directions.Describe(response.PeakForceDirection))
             + " against the item's weight " + SiFormat.Format(weight, "N")
             + (response.LaunchSpeedMetersPerSecond is { } v ? "; a loose item would leave at " + SiFormat.Format(v, "m/s") : string.Empty);
         return MechanismResult.Judged(Mechanism, braking > response.PeakForceNewtons ? "braking force" : "peak force", force, weight, "N", margin, policy.SafetyFactor, Sources, detail);
