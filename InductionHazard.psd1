@@ -20,6 +20,7 @@
         'Test-InductionHazard'
         'Get-FieldStrength'
         'Import-HazardSite'
+        'Export-HazardReport'
     )
     FunctionsToExport      = @()
     VariablesToExport      = @()

@@ -8,7 +8,7 @@
     Test   builds, runs the xunit tests, then the Pester tests against the laid-out module in a fresh
            PowerShell, and ends with one line: "N passed, N failed" (both suites counted).
     Demo   builds and runs the example audit of the invented site (examples/Invoke-SiteAudit.ps1), which
-           writes its report under out/demo.
+           writes its report to out/demo/marrowby-heath-audit.html (with .md and .csv beside it).
     Install  builds and copies the module folder into the current user's module path (the first entry of
            PSModulePath), so that Import-Module InductionHazard finds it from any PowerShell 7 shell.
     Validation  regenerates docs/validation.md from the tests' [Validates] tags (the test run checks it).
@@ -137,7 +137,7 @@ function Invoke-Demo {
     Invoke-Build
     Invoke-FreshPwsh @('-File', (Join-Path $root 'examples/Invoke-SiteAudit.ps1'),
         '-ModulePath', (Join-Path $moduleDir 'InductionHazard.psd1'),
-        '-OutputDirectory', (Join-Path $out 'demo'))
+        '-OutputDirectory', (Join-Path $out 'demo'), '-Force')
     if ($LASTEXITCODE -ne 0) { throw "The demo audit failed (exit code $LASTEXITCODE)." }
 }
 

@@ -30,6 +30,15 @@ Describe 'The example site audit' {
         $rows = @(Import-Csv (Join-Path $out 'marrowby-heath-audit.csv'))
         $rows.Count | Should -Be $inventory.Count
         $rows.Station | Should -Be $inventory.Station
-        Test-Path (Join-Path $out 'marrowby-heath-audit.md.tmp') | Should -BeFalse
+        $rows.AssetTag | Should -Be $inventory.AssetTag -Because 'the inventory''s own columns travel with each assessment'
+        Test-Path (Join-Path $out 'marrowby-heath-audit.html') | Should -BeTrue
+        @(Get-ChildItem $out -Force -Filter '*.tmp').Count | Should -Be 0
+    }
+
+    It 'does not replace an earlier report unless told to' {
+        $out = Join-Path $TestDrive 'again'
+        $null = & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out 6>$null
+        { & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out 6>$null } | Should -Throw -ErrorId 'ReportExists*'
+        { & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out -Force 6>$null } | Should -Not -Throw
     }
 }

@@ -14,6 +14,13 @@ Describe 'New-ConductiveItem' {
         $band.Contact | Should -Be 'Skin'
     }
 
+    It 'takes contact as people say it, in the parameter as in rows, and refuses a word it does not know' {
+        (New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact Worn).Contact | Should -Be 'Skin'
+        (New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact loose).Contact | Should -Be 'Free'
+        (New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact Installed).Contact | Should -Be 'Fixed'
+        { New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact Glued } | Should -Throw -ErrorId 'ParameterArgumentTransformationError,*'
+    }
+
     It 'makes a split ring when a gap is given' {
         $ring = New-ConductiveItem -Material Titanium -Diameter '65 mm' -WireDiameter '4 mm' -Gap '25 mm' -Contact Held
         $ring.IsSplit | Should -BeTrue

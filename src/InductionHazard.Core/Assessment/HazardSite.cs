@@ -55,12 +55,15 @@ public sealed class HazardSite
             ? s
             : throw new InvalidInputException("Station", "'" + name + "' is not a station of " + Name + " (its stations: " + string.Join(", ", Stations.Select(x => x.Name)) + ")");
 
-    /// <summary>The station a data record names in its Station column (aliases Place, Location).</summary>
+    /// <summary>The other names a Station column may have. Not "Location": inventories keep an asset's location of their own.</summary>
+    public static IReadOnlyList<string> StationAliases { get; } = new[] { "Place", "StationName" };
+
+    /// <summary>The station a data record names in its Station column (aliases Place, StationName).</summary>
     /// <exception cref="RecordException">The record names no station.</exception>
     /// <exception cref="InvalidInputException">It names one the site does not have.</exception>
     public Station StationOf(IEnumerable<KeyValuePair<string, object?>> record, string label)
     {
-        string? name = new RecordFields(record).Text("Station", required: false, "Place", "Location");
+        string? name = new RecordFields(record).Text("Station", required: false, StationAliases.ToArray());
         return name is null
             ? throw new RecordException(label, new[]
             {

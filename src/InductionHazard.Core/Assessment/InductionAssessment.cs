@@ -1,5 +1,3 @@
-using System;
-using System.Collections.Generic;
 using InductionHazard.Criteria;
 
 namespace InductionHazard.Assessment;
@@ -15,6 +13,12 @@ public sealed class InductionAssessment
 
     /// <summary>The position of the item's record in the input (1-based), when it came from a pipeline or file.</summary>
     public int? RowNumber { get; init; }
+
+    /// <summary>The site station at which the item was assessed; empty when the field came from -Source.</summary>
+    public string StationName { get; init; } = string.Empty;
+
+    /// <summary>The inventory row's own columns (asset tag, holder, location, notes...): every column that is not an item, placement or station field.</summary>
+    public InventoryFields Inventory { get; init; } = InventoryFields.Empty;
 
     /// <summary>The source's name.</summary>
     public string SourceName { get; init; } = string.Empty;
@@ -38,7 +42,7 @@ public sealed class InductionAssessment
     public string Action { get; init; } = string.Empty;
 
     /// <summary>Every mechanism checked, including those that do not apply (with the reason).</summary>
-    public IReadOnlyList<MechanismResult> Mechanisms { get; init; } = Array.Empty<MechanismResult>();
+    public MechanismList Mechanisms { get; init; } = MechanismList.Empty;
 
     /// <summary>The Shock margin; null when it does not apply.</summary>
     public double? ShockMargin { get; init; }
@@ -80,16 +84,22 @@ public sealed class InductionAssessment
     public double EnergyDissipatedJoules { get; init; }
 
     /// <summary>Why the verdict is what it is: the broken assumptions of an Indeterminate, the findings of a Hazard or Caution.</summary>
-    public IReadOnlyList<string> Reasons { get; init; } = Array.Empty<string>();
+    public TextList Reasons { get; init; } = TextList.Empty;
 
     /// <summary>The standards and sources of the limits applied (and of the safety factor).</summary>
-    public IReadOnlyList<string> Standards { get; init; } = Array.Empty<string>();
+    public TextList Standards { get; init; } = TextList.Empty;
 
     /// <summary>The cautions every assessment carries, with the standards the limits came from.</summary>
-    public IReadOnlyList<string> Cautions { get; init; } = Array.Empty<string>();
+    public TextList Cautions { get; init; } = TextList.Empty;
 
     /// <summary>The policy applied.</summary>
     public string PolicyName { get; init; } = string.Empty;
+
+    /// <summary>The SHA-256 fingerprint of the policy applied (<see cref="HazardPolicy.Fingerprint"/>).</summary>
+    public string PolicyHash { get; init; } = string.Empty;
+
+    /// <summary>The SHA-256 fingerprint of the inputs the assessment was computed from (<see cref="Scenario.Fingerprint"/>).</summary>
+    public string InputHash { get; init; } = string.Empty;
 
     /// <summary>The safety factor applied between Clear and Caution.</summary>
     public double SafetyFactor { get; init; }
@@ -97,9 +107,9 @@ public sealed class InductionAssessment
     /// <summary>The module version that produced the assessment.</summary>
     public string ModuleVersion { get; init; } = string.Empty;
 
-    /// <summary>When the assessment was made (UTC).</summary>
-    public DateTime AssessedUtc { get; init; }
+    /// <summary>When the assessment was made: ISO 8601 in UTC ("2026-12-02T09:30:00Z"), which sorts as text and reads the same in every culture.</summary>
+    public string AssessedUtc { get; init; } = string.Empty;
 
-    /// <summary>The physics behind the verdict.</summary>
+    /// <summary>The physics behind the verdict. ConvertTo-Json gives its figures, not its time series or inputs (Export-HazardReport -Format Json -IncludeSeries gives those).</summary>
     public InductionResponse Response { get; init; } = null!;
 }

@@ -16,6 +16,7 @@ namespace InductionHazard.Assessment;
 public sealed record InductionResponse
 {
     /// <summary>The scenario solved.</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public Scenario Scenario { get; init; } = null!;
 
     /// <summary>The item's name.</summary>
@@ -25,6 +26,7 @@ public sealed record InductionResponse
     public string SourceName => Scenario.Source.Name;
 
     /// <summary>The item.</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public ConductiveItem Item => Scenario.Item;
 
     /// <summary>The model used, in one line.</summary>
@@ -34,6 +36,7 @@ public sealed record InductionResponse
     public IReadOnlyList<string> ModelNotes { get; init; } = Array.Empty<string>();
 
     /// <summary>Assumptions that do not hold; empty when the model is valid throughout.</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public IReadOnlyList<ValidityIssue> ValidityIssues { get; init; } = Array.Empty<ValidityIssue>();
 
     /// <summary>True when every model assumption holds.</summary>
@@ -124,6 +127,7 @@ public sealed record InductionResponse
     public double? SpeedForWeightMetersPerSecond { get; init; }
 
     /// <summary>For a ferromagnetic item: its magnetisation, pull and twist in the source's field; null otherwise.</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public FerromagneticAttraction? Attraction { get; init; }
 
     /// <summary>The pull on a ferromagnetic item toward stronger field, N; null for an item that is not ferromagnetic.</summary>
@@ -192,9 +196,11 @@ public sealed record InductionResponse
     public double AssessedSeconds { get; init; }
 
     /// <summary>The electrical time series (one period for an alternating drive).</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public IReadOnlyList<CircuitSample> CircuitSeries { get; init; } = Array.Empty<CircuitSample>();
 
     /// <summary>The temperature history over the exposure.</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public IReadOnlyList<HeatingSample> HeatingSeries { get; init; } = Array.Empty<HeatingSample>();
 
     /// <summary>True when no validity issue affects any of the given results.</summary>

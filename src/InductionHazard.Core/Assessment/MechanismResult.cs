@@ -36,7 +36,8 @@ public sealed class MechanismResult
     /// <summary>Limit over predicted (for temperatures: the allowed rise over the predicted rise); at least 1 passes.</summary>
     public double Margin { get; private set; } = double.NaN;
 
-    /// <summary>Where the limits come from, one source per entry.</summary>
+    /// <summary>Where the limits come from, one source per entry (ConvertTo-Json gives them in one line, as Basis).</summary>
+    [Newtonsoft.Json.JsonIgnore]
     public IReadOnlyList<string> Sources { get; private set; } = System.Array.Empty<string>();
 
     /// <summary>Where the limits come from, in one line.</summary>

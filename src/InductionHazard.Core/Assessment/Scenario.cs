@@ -4,6 +4,7 @@ using InductionHazard.Fields;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
 using InductionHazard.Thermal;
+using InductionHazard.Waveforms;
 
 namespace InductionHazard.Assessment;
 
@@ -35,6 +36,43 @@ public sealed class Scenario
 
     /// <summary>The item.</summary>
     public ConductiveItem Item { get; }
+
+    /// <summary>
+    /// A SHA-256 fingerprint of everything the assessment was computed from: the item (shape, dimensions as the
+    /// engine sees them, material constants, contact), the source's terms and waveforms, the placement, times and
+    /// surroundings, and the inventory row's own columns. Two scenarios with the same fingerprint gave the same inputs.
+    /// </summary>
+    public string Fingerprint()
+    {
+        ConductorMaterial m = Item.Material;
+        var text = new System.Text.StringBuilder();
+        text.Append(Item.Describe()).Append('|').Append(Item.Shape).Append('|').Append(Item.Contact).Append('|')
+            .Append(TextHash.Exact(Item.GapMeters)).Append('|').Append(TextHash.Exact(Item.Loop.PathLengthMeters)).Append('|')
+            .Append(TextHash.Exact(Item.Loop.LoopAreaSquareMeters)).Append('|').Append(TextHash.Exact(Item.Loop.VolumeCubicMeters)).Append('|')
+            .Append(TextHash.Exact(Item.Loop.Section.AreaSquareMeters)).Append('|')
+            .Append(m.Name).Append('|').Append(TextHash.Exact(m.ResistivityOhmMeters)).Append('|').Append(TextHash.Exact(m.TemperatureCoefficientPerKelvin)).Append('|')
+            .Append(TextHash.Exact(m.DensityKilogramsPerCubicMeter)).Append('|').Append(TextHash.Exact(m.SpecificHeatJoulesPerKilogramKelvin)).Append('|')
+            .Append(TextHash.Exact(m.ThermalConductivityWattsPerMeterKelvin)).Append('|').Append(TextHash.Exact(m.RelativePermeability)).Append('|')
+            .Append(TextHash.Exact(m.MeltingCelsius)).Append('|').Append(Source.Describe());
+        foreach (SourceTerm term in Source.Terms)
+        {
+            FieldWaveform w = term.Waveform;
+            text.Append('|').Append(term.Geometry.Describe()).Append('|').Append(w.Form).Append('|').Append(TextHash.Exact(w.PeakValue)).Append('|')
+                .Append(TextHash.Exact(w.PeakRate)).Append('|').Append(TextHash.Exact(w.StartSeconds)).Append('|').Append(TextHash.Exact(w.EndSeconds)).Append('|')
+                .Append(TextHash.Exact(w.SignificantFrequencyHertz));
+        }
+
+        text.Append('|').Append(Placement.Centre).Append('|').Append(Placement.Normal?.ToString() ?? "facing the field").Append('|').Append(Placement.Velocity?.ToString() ?? "still")
+            .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
+            .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
+        return TextHash.Sha256(text.ToString());
+    }
+
+    /// <summary>The site station the scenario stands for, if it came from one.</summary>
+    public string? StationName { get; init; }
+
+    /// <summary>The inventory row's own columns (asset tag, holder, notes...), which travel with the assessment.</summary>
+    public InventoryFields Inventory { get; init; } = InventoryFields.Empty;
 
     /// <summary>Checks an exposure time: from 0.1 s to 8 h (<see cref="PhysicalRanges.ExposureTime"/>).</summary>
     /// <exception cref="InvalidInputException">It is out of range.</exception>

@@ -1,6 +1,7 @@
 namespace InductionHazard.Criteria;
 
 /// <summary>The ways an induced emf or current can hurt someone.</summary>
+[Newtonsoft.Json.JsonConverter(typeof(Newtonsoft.Json.Converters.StringEnumConverter))]
 public enum HazardMechanism
 {
     /// <summary>A voltage a person can bridge, such as across the gap of a split ring.</summary>

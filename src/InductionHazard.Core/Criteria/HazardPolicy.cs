@@ -1,4 +1,5 @@
 using InductionHazard.Errors;
+using InductionHazard.Quantities;
 
 namespace InductionHazard.Criteria;
 
@@ -31,6 +32,21 @@ public sealed class HazardPolicy
 
     /// <summary>How long a person touches an item that is not worn or held (a brief touch), s.</summary>
     public double TouchSeconds { get; init; } = 1.0;
+
+    /// <summary>
+    /// A SHA-256 fingerprint of every value the policy applies (its name, factor, limits and the burn threshold's
+    /// points), so that a report shows which policy produced it and an auditor can tell two policies apart.
+    /// </summary>
+    public string Fingerprint => TextHash.Sha256(string.Join(
+        "|",
+        Name,
+        TextHash.Exact(SafetyFactor),
+        TextHash.Exact(AlternatingVoltageLimitRms),
+        TextHash.Exact(DirectVoltageLimit),
+        TextHash.Exact(ThermalDoseLimitMinutes),
+        TextHash.Exact(TouchSeconds),
+        ContactBurn.Source,
+        string.Join(";", System.Linq.Enumerable.Select(ContactBurn.Points, p => TextHash.Exact(p.Seconds) + "s=" + TextHash.Exact(p.Celsius)))));
 
     /// <summary>Checks the values; throws naming the first out of range.</summary>
     /// <exception cref="InvalidInputException">A value is out of range.</exception>

@@ -1,6 +1,7 @@
 namespace InductionHazard.Criteria;
 
 /// <summary>The outcome of an assessment or of one mechanism. Ordered from the most to the least reassuring.</summary>
+[Newtonsoft.Json.JsonConverter(typeof(Newtonsoft.Json.Converters.StringEnumConverter))]
 public enum Verdict
 {
     /// <summary>Every margin is at or above the policy's safety factor.</summary>

@@ -1,6 +1,7 @@
 namespace InductionHazard.Items;
 
 /// <summary>How a person is in contact with the item; decides which mechanisms apply.</summary>
+[Newtonsoft.Json.JsonConverter(typeof(Newtonsoft.Json.Converters.StringEnumConverter))]
 public enum ContactKind
 {
     /// <summary>Worn against the skin (a ring, a bracelet): burns and shock apply.</summary>

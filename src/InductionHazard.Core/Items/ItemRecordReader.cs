@@ -107,6 +107,21 @@ public static class ItemRecordReader
         ["Loose"] = ContactKind.Free, ["Installed"] = ContactKind.Fixed, ["Mounted"] = ContactKind.Fixed,
     };
 
+    /// <summary>The contact a word names: the enumeration's own names, or the words people use (Worn is Skin, Loose is Free, Carried is Held, Installed is Fixed).</summary>
+    public static bool TryReadContact(string word, out ContactKind contact)
+    {
+        string trimmed = word.Trim();
+        if (ContactWords.TryGetValue(trimmed, out contact))
+        {
+            return true;
+        }
+
+        return Enum.TryParse(trimmed, ignoreCase: true, out contact) && Enum.IsDefined(typeof(ContactKind), contact) && !trimmed.All(char.IsDigit);
+    }
+
+    /// <summary>Every word <see cref="TryReadContact"/> takes, the enumeration's names first.</summary>
+    public static IReadOnlyList<string> ContactNames { get; } = Enum.GetNames(typeof(ContactKind)).Concat(ContactWords.Keys).ToArray();
+
     private static ContactKind ReadContact(RecordFields fields)
     {
         object? raw = fields.Raw("Contact", required: false, A("Contact"));

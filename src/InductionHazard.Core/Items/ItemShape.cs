@@ -1,6 +1,7 @@
 namespace InductionHazard.Items;
 
 /// <summary>The geometric form of a conductive item.</summary>
+[Newtonsoft.Json.JsonConverter(typeof(Newtonsoft.Json.Converters.StringEnumConverter))]
 public enum ItemShape
 {
     /// <summary>A circular loop of round wire or of a rectangular band: rings, bands, bracelets, bangles; closed or split.</summary>

@@ -145,6 +145,9 @@ public sealed class RecordFields
         _ => QuantityKindInfo.Of(kind).CanonicalSymbol,
     };
 
+    /// <summary>The key a column name matches fields by: normalized, without a unit ("Diameter (mm)" gives "diameter").</summary>
+    public static string FieldKey(string column) => Normalize(SplitUnit(column).Name);
+
     /// <summary>"Diameter (mm)", "Diameter [mm]" and "Diameter_mm" are the field Diameter with bare numbers in mm.</summary>
     private static (string Name, string? Unit) SplitUnit(string name)
     {

@@ -17,6 +17,10 @@ internal static class ItemInput
     public static (Quantities.Vector3D? Position, Quantities.Vector3D? Normal) PlacementOf(PSObject input, string label, IReadOnlyDictionary<string, string>? units = null) =>
         input.BaseObject is ConductiveItem ? (null, null) : PlacementRecordReader.Read(Records.From(input), label, units);
 
+    /// <summary>The row's own columns that are not item, placement or station fields (asset tag, holder, notes...); none for an item object.</summary>
+    public static Assessment.InventoryFields InventoryOf(PSObject input) =>
+        input.BaseObject is ConductiveItem ? Assessment.InventoryFields.Empty : Assessment.InventoryFields.Of(Records.From(input));
+
     /// <summary>A -Unit table (@{ Diameter = 'mm' }) as field names and unit strings.</summary>
     public static IReadOnlyDictionary<string, string>? UnitsOf(System.Collections.IDictionary? table)
     {

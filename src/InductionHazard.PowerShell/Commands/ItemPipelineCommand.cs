@@ -190,7 +190,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal,
             Velocity ?? station?.Placement.Velocity);
-        return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds);
+        return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds)
+        {
+            StationName = station?.Name,
+            Inventory = ItemInput.InventoryOf(input),
+        };
     }
 
     /// <summary>Writes the finished results at the head of the queue, in order; with <paramref name="wait"/>, waits for the head first.</summary>

@@ -81,8 +81,9 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Quantity(QuantityKind.Length)]
     public double? Gap { get; set; }
 
-    /// <summary>How a person touches the item: Skin (worn, the default), Held, Free or Fixed.</summary>
+    /// <summary>How a person touches the item: Skin (worn, the default), Held, Free or Fixed; or as people say it: Worn, Carried, Loose, Installed.</summary>
     [Parameter(ParameterSetName = ParametersSet)]
+    [Contact]
     public ContactKind Contact { get; set; } = ContactKind.Skin;
 
     /// <summary>Data rows (Import-Csv output, hashtables) with columns Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and Thickness, Gap, Contact.</summary>

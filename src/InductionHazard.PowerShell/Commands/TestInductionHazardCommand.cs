@@ -21,6 +21,17 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
             WriteWarning(assessment.ItemName + ": Indeterminate: " + string.Join("; ", assessment.Reasons));
         }
 
-        WriteObject(assessment);
+        // The inventory's own columns also as properties of the output, so that Select-Object AssetTag and Export-Csv see them;
+        // a column named like one of the assessment's own properties stays in Inventory only.
+        var output = PSObject.AsPSObject(assessment);
+        foreach (System.Collections.Generic.KeyValuePair<string, string> column in assessment.Inventory)
+        {
+            if (output.Properties[column.Key] is null)
+            {
+                output.Properties.Add(new PSNoteProperty(column.Key, column.Value));
+            }
+        }
+
+        WriteObject(output);
     }
 }
