@@ -110,22 +110,45 @@ public static class ReportCharts
         var line = new LineSeries { Title = "item temperature", Color = Colour(a.Verdict).ToOxy(), StrokeThickness = 1.6 };
         line.Points.AddRange(Thin(samples.Select(s => new DataPoint(s.TimeSeconds, s.TemperatureCelsius))));
         model.Series.Add(line);
-        MechanismResult? limit = a.Mechanisms.FirstOrDefault(m => m.Applies && m.Mechanism == HazardMechanism.Burn && m.Unit == "°C" && Finite.Is(m.Limit))
-            ?? a.Mechanisms.FirstOrDefault(m => m.Applies && m.Mechanism == HazardMechanism.Overheat && m.Unit == "°C" && Finite.Is(m.Limit));
-        if (limit is not null)
+        (double Celsius, string Text)? limit = LimitLine(a);
+        if (limit is { } threshold)
         {
             model.Annotations.Add(new LineAnnotation
             {
                 Type = LineAnnotationType.Horizontal,
-                Y = limit.Limit,
+                Y = threshold.Celsius,
                 Color = Colour(Verdict.Hazard).ToOxy(),
                 LineStyle = LineStyle.Dash,
-                Text = limit.Mechanism + " limit " + SiFormat.Celsius(limit.Limit),
+                Text = threshold.Text,
                 TextColor = Colour(Verdict.Hazard).ToOxy(),
             });
         }
 
         return Svg(model, 760, 240, idPrefix);
+    }
+
+    /// <summary>
+    /// The temperature the item's curve is drawn against: the burn threshold the Burn check compared (a contact
+    /// temperature), or, where the thermal dose governed, the standard's threshold for the longest contact (from the
+    /// default policy only, whose curve is known here); for an item no one touches, its overheat limit.
+    /// </summary>
+    private static (double Celsius, string Text)? LimitLine(InductionAssessment a)
+    {
+        MechanismResult? burn = a.Mechanisms.FirstOrDefault(m => m.Applies && m.Mechanism == HazardMechanism.Burn);
+        if (burn is { Unit: "°C" } && Finite.Is(burn.Limit))
+        {
+            return (burn.Limit, "burn threshold " + SiFormat.Celsius(burn.Limit) + " for the contact time judged");
+        }
+
+        if (burn is not null && a.PolicyHash == HazardPolicy.Default.Fingerprint)
+        {
+            ContactBurnThreshold curve = HazardPolicy.Default.ContactBurn;
+            double celsius = curve.CelsiusFor(curve.LongestSeconds);
+            return (celsius, "burn threshold " + SiFormat.Celsius(celsius) + " for " + SiFormat.Format(curve.LongestSeconds / 3600, "h") + " of contact (the dose governed)");
+        }
+
+        MechanismResult? overheat = a.Mechanisms.FirstOrDefault(m => m.Applies && m.Mechanism == HazardMechanism.Overheat && m.Unit == "°C" && Finite.Is(m.Limit));
+        return overheat is null ? null : (overheat.Limit, "overheat limit " + SiFormat.Celsius(overheat.Limit));
     }
 
     /// <summary>Keeps the first and last point and, per bucket, the lowest and highest, in time order: at most <see cref="MaxPoints"/>.</summary>

@@ -53,6 +53,16 @@ public sealed class ReportWriterTests
     }
 
     [Fact]
+    public void AWornItemsTemperatureIsDrawnAgainstTheBurnThreshold()
+    {
+        string? chart = ReportCharts.Temperature(Hot, "t");
+        Assert.NotNull(chart);
+        Assert.Contains("burn threshold", chart, StringComparison.Ordinal);
+        Assert.Contains("id=\"t-", chart, StringComparison.Ordinal); // the chart's own ids, so that two charts on a page do not clash
+        Assert.DoesNotMatch("id=\"(?!t-)", chart);
+    }
+
+    [Fact]
     public void MarkdownEscapesMarkupAndKeepsTablesWhole()
     {
         string md = Write(Report(Clear, HostileName, Hot), MarkdownReportWriter.Write);
