@@ -21,6 +21,7 @@
         'Get-FieldStrength'
         'Import-HazardSite'
         'Export-HazardReport'
+        'Get-HazardPolicy'
     )
     FunctionsToExport      = @()
     VariablesToExport      = @()

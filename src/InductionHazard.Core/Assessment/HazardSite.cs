@@ -45,6 +45,9 @@ public sealed class HazardSite
     /// <summary>The stations, in the file's order.</summary>
     public IReadOnlyList<Station> Stations { get; }
 
+    /// <summary>The site's own policy, from its file; null when the site keeps the published limits.</summary>
+    public Criteria.HazardPolicy? Policy { get; init; }
+
     /// <summary>The file the site was read from.</summary>
     public string Path { get; }
 

@@ -14,7 +14,8 @@ namespace InductionHazard.Assessment;
 /// <summary>
 /// Builds a site from its data (a PowerShell data file read as data): Site (the name) and Stations, each a table
 /// with Name, Sources (tables of a source's values with a Waveform table), and optionally Position, Normal,
-/// ExposureTime, LeaveTime and Description. Every problem names the station and the value.
+/// ExposureTime, LeaveTime and Description; and optionally the site's Policy (a table of policy values, read by
+/// <see cref="Criteria.PolicyReader"/>). Every problem names the station and the value.
 /// </summary>
 public static class SiteReader
 {
@@ -33,7 +34,13 @@ public static class SiteReader
             var top = new RecordFields(Pairs(data));
             string name = top.Text("Site", required: true, "Name") ?? "site";
             object? rawStations = top.Raw("Stations", required: true);
-            top.RejectUnused("is not a value of a site file (it has Site and Stations)");
+            object? rawPolicy = top.Raw("Policy", required: false);
+            top.RejectUnused("is not a value of a site file (it has Site, Stations and Policy)");
+            if (rawPolicy is not null and not IDictionary)
+            {
+                top.AddError("Policy", "must be a table of policy values (@{ Name = ...; SafetyFactor = ... }) or the path of a policy file");
+            }
+
             if (top.Errors.Count > 0)
             {
                 throw new RecordException("site file", top.Errors);
@@ -47,7 +54,10 @@ public static class SiteReader
                 stations.Add(ReadStation(entry, n, directory));
             }
 
-            return new HazardSite(name, stations, path);
+            return new HazardSite(name, stations, path)
+            {
+                Policy = rawPolicy is IDictionary policy ? Criteria.PolicyReader.Read(policy, path + " (its Policy)") : null,
+            };
         }
         catch (Exception ex) when (ex is RecordException or InvalidInputException or QuantityFormatException or UnknownMaterialException)
         {

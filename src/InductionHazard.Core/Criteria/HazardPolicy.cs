@@ -48,6 +48,37 @@ public sealed class HazardPolicy
         ContactBurn.Source,
         string.Join(";", System.Linq.Enumerable.Select(ContactBurn.Points, p => TextHash.Exact(p.Seconds) + "s=" + TextHash.Exact(p.Celsius)))));
 
+    /// <summary>The keys a site policy may set, each with its kind, unit and published source.</summary>
+    public static System.Collections.Generic.IReadOnlyList<PolicyKey> Keys { get; } = new[]
+    {
+        new PolicyKey("SafetyFactor", null, string.Empty, p => p.SafetyFactor, Standards.SafetyFactor, "the factor between Clear and Caution: a margin at or above it is Clear"),
+        new PolicyKey("AlternatingVoltageLimit", QuantityKind.Voltage, "V", p => p.AlternatingVoltageLimitRms, Standards.ExtraLowVoltage, "the largest alternating voltage (rms) a person may bridge across a gap"),
+        new PolicyKey("DirectVoltageLimit", QuantityKind.Voltage, "V", p => p.DirectVoltageLimit, Standards.ExtraLowVoltage, "the largest unidirectional voltage a person may bridge across a gap"),
+        new PolicyKey("ThermalDoseLimit", null, "CEM43 min", p => p.ThermalDoseLimitMinutes, Standards.ThermalDoseLimit, "the largest thermal dose the field may add to skin in contact, CEM43 minutes"),
+        new PolicyKey("TouchTime", QuantityKind.Time, "s", p => p.TouchSeconds, Standards.BriefTouch, "how long a person touches an item that is not worn or held"),
+    };
+
+    /// <summary>Every value the policy sets, with its source: the published one, or "site policy" where this policy departs from it.</summary>
+    public System.Collections.Generic.IReadOnlyList<PolicyLimit> Limits =>
+        System.Linq.Enumerable.ToArray(System.Linq.Enumerable.Select(Keys, k => new PolicyLimit(k.Name, k.Value(this), k.Unit, SourceOf(k.Name), k.Description)));
+
+    /// <summary>
+    /// Where a value comes from: its published source where the policy keeps the default value, otherwise the site
+    /// policy by name, with the value ("site policy 'Bay rules': AlternatingVoltageLimit = 25 V").
+    /// </summary>
+    /// <exception cref="System.ArgumentException">The key is not one of <see cref="Keys"/>.</exception>
+    public string SourceOf(string key)
+    {
+        PolicyKey k = System.Linq.Enumerable.FirstOrDefault(Keys, x => x.Name == key) ?? throw new System.ArgumentException("not a policy key: " + key, nameof(key));
+        double value = k.Value(this);
+        return value.Equals(k.Value(Default))
+            ? k.Published
+            : "site policy '" + Name + "': " + k.Name + " = " + (k.Unit.Length > 0 ? SiFormat.Format(value, k.Unit) : SiFormat.Plain(value));
+    }
+
+    /// <summary>True when any value departs from the published defaults.</summary>
+    public bool IsSitePolicy => System.Linq.Enumerable.Any(Keys, k => !k.Value(this).Equals(k.Value(Default)));
+
     /// <summary>Checks the values; throws naming the first out of range.</summary>
     /// <exception cref="InvalidInputException">A value is out of range.</exception>
     public HazardPolicy Validated()
@@ -57,10 +88,17 @@ public sealed class HazardPolicy
             throw new InvalidInputException("SafetyFactor", "must be a finite number of at least 1; got " + SafetyFactor);
         }
 
-        Require.Positive("AlternatingVoltageLimitRms", AlternatingVoltageLimitRms);
+        Require.Positive("AlternatingVoltageLimit", AlternatingVoltageLimitRms);
         Require.Positive("DirectVoltageLimit", DirectVoltageLimit);
-        Require.Positive("ThermalDoseLimitMinutes", ThermalDoseLimitMinutes);
-        Require.Positive("TouchSeconds", TouchSeconds);
+        Require.Positive("ThermalDoseLimit", ThermalDoseLimitMinutes);
+        Require.Positive("TouchTime", TouchSeconds);
+        foreach (PolicyKey k in Keys)
+        {
+            if (double.IsInfinity(k.Value(this)))
+            {
+                throw new InvalidInputException(k.Name, "must be finite; got " + k.Value(this));
+            }
+        }
         return this;
     }
 }

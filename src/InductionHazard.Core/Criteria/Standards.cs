@@ -34,11 +34,11 @@ public static class Standards
     public const string Demagnetisation = "Osborn, Phys. Rev. 67:351 (1945) (demagnetising factors of spheroids)";
 
     /// <summary>The safety factor between Clear and Caution when no site policy sets one.</summary>
-    public const string SafetyFactor = "common practice: a safety factor of 2 between Clear and Caution (no site policy applied)";
+    public const string SafetyFactor = "common practice: a safety factor of 2 between Clear and Caution";
 
-    /// <summary>Where a policy's safety factor comes from: common practice for the default, the policy for any other.</summary>
-    public static string SafetyFactorOf(HazardPolicy policy) =>
-        ReferenceEquals(policy, HazardPolicy.Default) || (policy.SafetyFactor == 2.0 && policy.Name == HazardPolicy.Default.Name)
-            ? SafetyFactor
-            : "site policy '" + policy.Name + "': a safety factor of " + Quantities.SiFormat.Plain(policy.SafetyFactor) + " between Clear and Caution";
+    /// <summary>How long a brief touch lasts when an item is not worn or held.</summary>
+    public const string BriefTouch = "common practice: a brief touch of 1 s for an item that is not worn or held";
+
+    /// <summary>Where a policy's safety factor comes from: common practice for the default, the site policy where it sets another.</summary>
+    public static string SafetyFactorOf(HazardPolicy policy) => policy.SourceOf("SafetyFactor");
 }

@@ -1,5 +1,6 @@
 using System.Management.Automation;
 using InductionHazard.Assessment;
+using InductionHazard.Criteria;
 using InductionHazard.Errors;
 using InductionHazard.PowerShell.Binding;
 
@@ -10,7 +11,7 @@ namespace InductionHazard.PowerShell.Commands;
 [OutputType(typeof(HazardSite))]
 public sealed class ImportHazardSiteCommand : PSCmdlet
 {
-    /// <summary>The site file (.psd1): Site, and Stations with Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description.</summary>
+    /// <summary>The site file (.psd1): Site, Stations with Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description, and optionally Policy (a table, or a policy file's path).</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipelineByPropertyName = true)]
     [Alias("FullName")]
     public string Path { get; set; } = string.Empty;
@@ -21,7 +22,23 @@ public sealed class ImportHazardSiteCommand : PSCmdlet
         string file = SessionState.Path.GetUnresolvedProviderPathFromPSPath(Path);
         try
         {
-            WriteObject(SiteReader.Read(DataFile.Read(file, SiteReader.ErrorId), file));
+            System.Collections.IDictionary data = DataFile.Read(file, SiteReader.ErrorId);
+            if (data["Policy"] is string policyPath)
+            {
+                // A policy file named by the site file, relative to the site file's folder.
+                string folder = System.IO.Path.GetDirectoryName(file) ?? ".";
+                string policyFile = System.IO.Path.Combine(folder, policyPath);
+                try
+                {
+                    data["Policy"] = DataFile.Read(policyFile, PolicyReader.ErrorId);
+                }
+                catch (DataFileException ex)
+                {
+                    throw new DataFileException(file, null, "its Policy file: " + ex.Message, SiteReader.ErrorId);
+                }
+            }
+
+            WriteObject(SiteReader.Read(data, file));
         }
         catch (InductionHazardException ex)
         {

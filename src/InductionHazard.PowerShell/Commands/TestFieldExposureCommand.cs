@@ -29,6 +29,11 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     [Parameter]
     public SwitchParameter Public { get; set; }
 
+    /// <summary>The safety factor between Clear and Caution: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published one.</summary>
+    [Parameter]
+    [Policy]
+    public HazardPolicy? Policy { get; set; }
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
@@ -49,7 +54,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         {
             try
             {
-                FieldExposure exposure = FieldExposure.At(_source, point, Public.IsPresent, HazardPolicy.Default);
+                FieldExposure exposure = FieldExposure.At(_source, point, Public.IsPresent, Policy ?? HazardPolicy.Default);
                 if (exposure.Verdict == Verdict.Indeterminate)
                 {
                     WriteWarning("position " + point + ": " + exposure.Finding);

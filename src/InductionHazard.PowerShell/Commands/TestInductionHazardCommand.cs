@@ -1,6 +1,7 @@
 using System.Management.Automation;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
+using InductionHazard.PowerShell.Binding;
 
 namespace InductionHazard.PowerShell.Commands;
 
@@ -9,8 +10,14 @@ namespace InductionHazard.PowerShell.Commands;
 [OutputType(typeof(InductionAssessment))]
 public sealed class TestInductionHazardCommand : ItemPipelineCommand
 {
+    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the site's policy (with -Site), else the published limits.</summary>
+    [Parameter]
+    [Policy]
+    public HazardPolicy? Policy { get; set; }
+
     /// <inheritdoc />
-    protected override object Compute(InductionResponse response, int row) => HazardAssessor.Assess(response, HazardPolicy.Default, row);
+    protected override object Compute(InductionResponse response, int row) =>
+        HazardAssessor.Assess(response, Policy ?? (ParameterSetName == SiteSet ? Site.Policy : null) ?? HazardPolicy.Default, row);
 
     /// <inheritdoc />
     protected override void Emit(object result)

@@ -49,7 +49,7 @@ public sealed class BurnCheck : IHazardCheck
         double threshold = policy.ContactBurn.CelsiusFor(policy.TouchSeconds);
         double margin = RiseMargin(threshold, peak, start);
         return MechanismResult.Judged(
-            Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, new[] { policy.ContactBurn.Source },
+            Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, new[] { policy.ContactBurn.Source, policy.SourceOf("TouchTime") },
             "a " + SiFormat.Format(policy.TouchSeconds, "s") + " touch of the item at its peak " + SiFormat.Celsius(peak)
             + " against the burn threshold " + SiFormat.Celsius(threshold) + " (" + response.Item.Contact + " item: not worn or held)");
     }
@@ -110,7 +110,7 @@ public sealed class BurnCheck : IHazardCheck
     }
 
     private static string[] SourcesOf(HazardPolicy policy) =>
-        new[] { policy.ContactBurn.Source, Standards.ThermalDoseModel, Standards.ThermalDoseLimit };
+        new[] { policy.ContactBurn.Source, Standards.ThermalDoseModel, policy.SourceOf("ThermalDoseLimit") };
 
     /// <summary>Allowed rise over predicted rise; a start already at the threshold has no margin at all.</summary>
     private static double RiseMargin(double threshold, double predicted, double start)

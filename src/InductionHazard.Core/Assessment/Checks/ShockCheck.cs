@@ -9,7 +9,8 @@ namespace InductionHazard.Assessment.Checks;
 /// </summary>
 public sealed class ShockCheck : IHazardCheck
 {
-    private static readonly string[] Sources = { Standards.ExtraLowVoltage };
+    private static string[] SourcesOf(HazardPolicy policy, bool alternating) =>
+        new[] { policy.SourceOf(alternating ? "AlternatingVoltageLimit" : "DirectVoltageLimit") };
 
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Shock;
@@ -25,7 +26,7 @@ public sealed class ShockCheck : IHazardCheck
         var issues = response.IssuesAffecting(AffectedResults.Emf);
         if (issues.Count > 0)
         {
-            return MechanismResult.Indeterminate(Mechanism, Sources, issues);
+            return MechanismResult.Indeterminate(Mechanism, SourcesOf(policy, response.EmfKind == EmfKind.Alternating), issues);
         }
 
         bool alternating = response.EmfKind == EmfKind.Alternating;
@@ -42,7 +43,7 @@ public sealed class ShockCheck : IHazardCheck
             alternating = false;
         }
         return MechanismResult.Judged(
-            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, Sources,
+            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, SourcesOf(policy, alternating),
             quantity + " " + SiFormat.Format(predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(limit, "V")
             + (alternating ? " rms" : " d.c."));
     }

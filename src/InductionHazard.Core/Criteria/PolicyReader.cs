@@ -1,0 +1,66 @@
+using System;
+using System.Collections;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using InductionHazard.Errors;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Criteria;
+
+/// <summary>
+/// Builds a site policy from its data (a policy file or a site file's Policy table, read as data): Name and any of
+/// the keys of <see cref="HazardPolicy.Keys"/>, each a number in SI or a string with its unit. What it leaves out
+/// keeps the published default. An unknown key, a value of the wrong kind or out of range is an error naming the key.
+/// </summary>
+public static class PolicyReader
+{
+    /// <summary>The error id of a policy that cannot be used.</summary>
+    public const string ErrorId = "InvalidPolicyFile";
+
+    /// <summary>Reads the policy.</summary>
+    /// <param name="data">The table of values.</param>
+    /// <param name="origin">Where it came from (a file's path), for messages and as the policy's name when it gives none.</param>
+    /// <exception cref="DataFileException">A key is unknown, or a value is malformed or out of range; the message names the key.</exception>
+    public static HazardPolicy Read(IDictionary data, string origin)
+    {
+        var pairs = data.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, data[k]));
+        var fields = new RecordFields(pairs);
+        string name = fields.Text("Name", required: false, "Policy", "PolicyName") ?? System.IO.Path.GetFileNameWithoutExtension(origin);
+        var values = new Dictionary<string, double>(StringComparer.Ordinal);
+        foreach (PolicyKey key in HazardPolicy.Keys)
+        {
+            double? value = key.Kind is { } kind ? fields.Quantity(key.Name, kind, required: false) : fields.Number(key.Name, required: false);
+            if (value is { } v)
+            {
+                values[key.Name] = v;
+            }
+        }
+
+        fields.RejectUnused("is not a policy key (the keys: Name, " + string.Join(", ", HazardPolicy.Keys.Select(k => k.Name)) + ")");
+        if (fields.Errors.Count > 0)
+        {
+            throw new DataFileException(origin, null, string.Join("; ", fields.Errors.Select(e => e.ToString())), ErrorId);
+        }
+
+        HazardPolicy d = HazardPolicy.Default;
+        double Get(string key, double fallback) => values.TryGetValue(key, out double v) ? v : fallback;
+        var policy = new HazardPolicy
+        {
+            Name = string.IsNullOrWhiteSpace(name) ? "site policy" : name,
+            SafetyFactor = Get("SafetyFactor", d.SafetyFactor),
+            AlternatingVoltageLimitRms = Get("AlternatingVoltageLimit", d.AlternatingVoltageLimitRms),
+            DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),
+            ThermalDoseLimitMinutes = Get("ThermalDoseLimit", d.ThermalDoseLimitMinutes),
+            TouchSeconds = Get("TouchTime", d.TouchSeconds),
+        };
+        try
+        {
+            return policy.Validated();
+        }
+        catch (InvalidInputException ex)
+        {
+            throw new DataFileException(origin, null, ex.Message, ErrorId);
+        }
+    }
+}

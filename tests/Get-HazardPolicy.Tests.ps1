@@ -1,0 +1,95 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $root = Split-Path $PSScriptRoot -Parent
+    $policyFile = Join-Path $root 'examples/marrowby-heath-policy.psd1'
+    $bangle = New-ConductiveItem -Name 'Open bangle' -Material Copper -Diameter '65 mm' -WireDiameter '4 mm' -Gap '10 mm'
+
+    # A sine whose gap voltage is 30 V rms: between the site's 25 V and the published 50 V (the emf is linear in the field).
+    $probe = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '1 kHz' | New-FieldSource -Uniform -Name 'probe'
+    $rms = (($bangle | Test-InductionHazard -Source $probe).Mechanisms | Where-Object Mechanism -EQ 'Shock').Predicted
+    $coil = New-FieldWaveform -Sine -Amplitude (0.010 * 30 / $rms) -Frequency '1 kHz' | New-FieldSource -Uniform -Name 'Coil'
+}
+
+Describe 'Get-HazardPolicy' {
+    It 'gives the published defaults, each limit with its published source' {
+        $policy = Get-HazardPolicy
+        $policy.SafetyFactor | Should -Be 2
+        foreach ($limit in $policy.Limits) {
+            $limit.Source | Should -Not -BeNullOrEmpty
+            $limit.Source | Should -Not -Match 'site policy'
+        }
+        ($policy.Limits | Where-Object Key -EQ 'AlternatingVoltageLimit').Source | Should -Match 'IEC 61140'
+    }
+
+    It 'merges a site policy file over the defaults, naming "site policy" only for what it sets' {
+        $policy = Get-HazardPolicy $policyFile
+        $policy.Name | Should -Be 'Marrowby Heath site rules 2026'
+        $policy.AlternatingVoltageLimitRms | Should -Be 25
+        ($policy.Limits | Where-Object Key -EQ 'AlternatingVoltageLimit').Source | Should -Match "^site policy 'Marrowby Heath site rules 2026'"
+        ($policy.Limits | Where-Object Key -EQ 'ThermalDoseLimit').Source | Should -Match 'van Rhoon'
+        $policy.Fingerprint | Should -Not -Be (Get-HazardPolicy).Fingerprint
+    }
+
+    It 'refuses a policy file that holds code, an unknown key or a value of the wrong kind, naming it' {
+        $code = Join-Path $TestDrive 'code.psd1'
+        Set-Content $code "@{ SafetyFactor = (Get-Date).Second }"
+        { Get-HazardPolicy $code } | Should -Throw -ErrorId 'InvalidPolicyFile,*'
+        { Get-HazardPolicy $code } | Should -Throw '*holds code*'
+        $unknown = Join-Path $TestDrive 'unknown.psd1'
+        Set-Content $unknown "@{ SafetyFactor = 3; VoltageLimit = '10 V' }"
+        { Get-HazardPolicy $unknown } | Should -Throw '*VoltageLimit: is not a policy key*'
+        $unit = Join-Path $TestDrive 'unit.psd1'
+        Set-Content $unit "@{ DirectVoltageLimit = '2 s' }"
+        { Get-HazardPolicy $unit } | Should -Throw '*DirectVoltageLimit: expected a voltage*'
+        $low = Join-Path $TestDrive 'low.psd1'
+        Set-Content $low "@{ SafetyFactor = 0.5 }"
+        { Get-HazardPolicy $low } | Should -Throw '*SafetyFactor*at least 1*'
+    }
+}
+
+Describe 'A site policy in a verdict' {
+    It 'flips a verdict when it lowers a limit, and names "site policy" as that limit''s source' {
+        $published = $bangle | Test-InductionHazard -Source $coil
+        $published.Verdict | Should -Be 'Caution'
+        $published.GoverningMechanism | Should -Be 'Shock'
+        $site = $bangle | Test-InductionHazard -Source $coil -Policy $policyFile
+        $site.Verdict | Should -Be 'Hazard'
+        $site.GoverningMechanism | Should -Be 'Shock'
+        ($site.Mechanisms | Where-Object Mechanism -EQ 'Shock').Basis | Should -Match "^site policy 'Marrowby Heath site rules 2026': AlternatingVoltageLimit = 25 V"
+        $site.PolicyName | Should -Be 'Marrowby Heath site rules 2026'
+        ($site.Cautions -join ' ') | Should -Match 'site policy'
+        ($published.Cautions -join ' ') | Should -Not -Match 'site policy' -Because '"site policy" appears only where one was applied'
+    }
+
+    It 'takes the policy as an object, a path or a table alike' {
+        $byObject = $bangle | Test-InductionHazard -Source $coil -Policy (Get-HazardPolicy $policyFile)
+        $byTable = $bangle | Test-InductionHazard -Source $coil -Policy @{ Name = 'Marrowby Heath site rules 2026'; SafetyFactor = 3; AlternatingVoltageLimit = '25 V'; DirectVoltageLimit = '60 V'; TouchTime = '2 s' }
+        $byObject.PolicyHash | Should -Be $byTable.PolicyHash
+        $byObject.ShockMargin | Should -Be $byTable.ShockMargin
+        { $bangle | Test-InductionHazard -Source $coil -Policy @{ SafetyFactr = 3 } } | Should -Throw '*SafetyFactr: is not a policy key*'
+    }
+
+    It 'applies the policy a site file carries, unless -Policy is given' {
+        $siteFile = Join-Path $TestDrive 'site.psd1'
+        $policyCopy = Join-Path $TestDrive 'rules.psd1'
+        Copy-Item $policyFile $policyCopy
+        Set-Content $siteFile @"
+@{
+    Site = 'Test bay'
+    Policy = 'rules.psd1'
+    Stations = @(
+        @{ Name = 'Coil'; Sources = @( @{ Form = 'Uniform'; Axis = 'z'; Waveform = @{ Form = 'Sine'; Amplitude = $(0.010 * 30 / $rms); Frequency = '1 kHz' } } ) }
+    )
+}
+"@
+        $site = Import-HazardSite $siteFile
+        $site.Policy.Name | Should -Be 'Marrowby Heath site rules 2026'
+        ($bangle | Test-InductionHazard -Site $site -Station Coil).Verdict | Should -Be 'Hazard'
+        ($bangle | Test-InductionHazard -Site $site -Station Coil -Policy (Get-HazardPolicy)).Verdict | Should -Be 'Caution'
+
+        Set-Content $siteFile "@{ Site = 'Test bay'; Policy = @{ Colour = 'red' }; Stations = @( @{ Name = 'Coil'; Sources = @( @{ Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' } } ) } ) }"
+        { Import-HazardSite $siteFile } | Should -Throw '*Colour: is not a policy key*'
+    }
+}
