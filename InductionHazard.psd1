@@ -22,6 +22,7 @@
         'Import-HazardSite'
         'Export-HazardReport'
         'Get-HazardPolicy'
+        'Find-SafeDistance'
     )
     FunctionsToExport      = @()
     VariablesToExport      = @()

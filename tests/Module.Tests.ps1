@@ -17,7 +17,7 @@ Describe 'The laid-out module' {
 
     It 'exports exactly its cmdlets and nothing else' {
         $module.ExportedCmdlets.Keys | Sort-Object | Should -Be @(
-            'Export-HazardReport', 'Get-ConductorMaterial', 'Get-FieldStrength', 'Get-HazardPolicy', 'Get-InductionResponse', 'Import-HazardSite', 'New-ConductiveItem', 'New-FieldSource', 'New-FieldWaveform', 'Test-FieldExposure', 'Test-InductionHazard')
+            'Export-HazardReport', 'Find-SafeDistance', 'Get-ConductorMaterial', 'Get-FieldStrength', 'Get-HazardPolicy', 'Get-InductionResponse', 'Import-HazardSite', 'New-ConductiveItem', 'New-FieldSource', 'New-FieldWaveform', 'Test-FieldExposure', 'Test-InductionHazard')
         $module.ExportedFunctions.Count | Should -Be 0
         $module.ExportedAliases.Count | Should -Be 0
     }

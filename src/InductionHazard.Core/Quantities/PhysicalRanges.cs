@@ -18,6 +18,10 @@ public static class PhysicalRanges
     public static PhysicalRange Gap { get; } = new(
         "Gap", 10e-6, 100.0, "m", "a narrower gap breaks down by field emission and is bridged by surface roughness, so it cannot be taken as an open circuit; 0 means a closed loop");
 
+    /// <summary>How far along a ray a safe distance is looked for, m: from a millimetre to the size of a site.</summary>
+    public static PhysicalRange Distance { get; } = new(
+        "MaxDistance", 1e-3, 1000.0, "m", "from a millimetre to the size of a site");
+
     /// <summary>How long an item stays in the field, s (common practice: nobody carries an item into a field and out again in under 0.1 s).</summary>
     public static PhysicalRange ExposureTime { get; } = new(
         "ExposureTime", 0.1, 8 * 3600.0, "s", "nobody carries an item into a field and out again in under 0.1 s; 8 h is the longest contact time of ISO 13732-1");

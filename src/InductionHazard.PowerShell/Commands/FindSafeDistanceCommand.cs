@@ -1,0 +1,130 @@
+using System;
+using System.Management.Automation;
+using System.Threading;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.PowerShell.Binding;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.PowerShell.Commands;
+
+/// <summary>Find-SafeDistance: the nearest distance along a ray from which an item is Clear, with the mechanism that governs there.</summary>
+[Cmdlet(VerbsCommon.Find, "SafeDistance")]
+[OutputType(typeof(SafeDistanceResult))]
+public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
+{
+    private readonly CancellationTokenSource _cancellation = new();
+    private FieldSource _source = null!;
+    private int _row;
+
+    /// <summary>The items: objects from New-ConductiveItem, or data rows with the item columns.</summary>
+    [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
+    public PSObject[] Item { get; set; } = null!;
+
+    /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
+    [Parameter(Mandatory = true, Position = 1)]
+    public FieldSource[] Source { get; set; } = null!;
+
+    /// <summary>Where the ray starts, as x,y,z lengths ('0, 0, 500 mm'; bare numbers in metres); the origin by default.</summary>
+    [Parameter]
+    [Vector(QuantityKind.Length)]
+    public Vector3D From { get; set; } = Vector3D.Zero;
+
+    /// <summary>Which way the ray goes, as x,y,z or an axis ('x', '1, 1, 0'): usually away from the source.</summary>
+    [Parameter(Mandatory = true)]
+    [Vector]
+    public Vector3D Direction { get; set; }
+
+    /// <summary>How far along the ray to look ('10 m' by default).</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Length)]
+    public double MaxDistance { get; set; } = 10.0;
+
+    /// <summary>The normal of the item's loop as x,y,z or an axis; by default, at each point, the orientation that links the largest flux change.</summary>
+    [Parameter]
+    [Vector]
+    public Vector3D? Normal { get; set; }
+
+    /// <summary>How long the item stays in the field ('10 min'); by default while the drive changes, or 8 h for a field that runs on.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Time)]
+    public double? ExposureTime { get; set; }
+
+    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published limits.</summary>
+    [Parameter]
+    [Policy]
+    public HazardPolicy? Policy { get; set; }
+
+    /// <inheritdoc />
+    protected override void BeginProcessing()
+    {
+        try
+        {
+            _source = FieldSource.Combine(Source);
+            Require.Direction("Direction", Direction);
+            PhysicalRanges.Distance.For("MaxDistance").Check(MaxDistance);
+            Scenario.ValidateExposure(ExposureTime);
+            if (Normal is { } n)
+            {
+                Require.Direction("Normal", n);
+            }
+        }
+        catch (InductionHazardException ex)
+        {
+            ThrowTerminatingError(ErrorRecords.From(ex, null));
+        }
+    }
+
+    /// <inheritdoc />
+    protected override void ProcessRecord()
+    {
+        foreach (PSObject input in Item)
+        {
+            _row++;
+            string label = ItemInput.Label(input, _row);
+            try
+            {
+                ConductiveItem item = ItemInput.ToItem(input, MaterialLibrary.BuiltIn, _row);
+                var progress = new ProgressRecord(2, "Find-SafeDistance", label);
+                SafeDistanceResult result = SafeDistance.Find(
+                    item, _source, From, Direction, MaxDistance, Policy ?? HazardPolicy.Default, Normal, ExposureTime, null,
+                    fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
+                    _cancellation.Token);
+                progress.RecordType = ProgressRecordType.Completed;
+                WriteProgress(progress);
+                if (result.DipsAgain)
+                {
+                    WriteWarning(label + ": Clear nearer in, then not Clear again further out; the distance given is beyond the last point that is not Clear.");
+                }
+
+                if (!result.Found)
+                {
+                    WriteWarning(label + ": not Clear anywhere within " + SiFormat.Format(MaxDistance, "m") + " along the ray; keep it out of this field or look further with -MaxDistance.");
+                }
+
+                WriteObject(result);
+            }
+            catch (InductionHazardException ex)
+            {
+                WriteError(ErrorRecords.From(ex, input, label));
+            }
+            catch (OperationCanceledException)
+            {
+                throw new PipelineStoppedException();
+            }
+        }
+    }
+
+    /// <inheritdoc />
+    protected override void StopProcessing() => _cancellation.Cancel();
+
+    /// <summary>Releases the cancellation source.</summary>
+    public void Dispose()
+    {
+        _cancellation.Dispose();
+        GC.SuppressFinalize(this);
+    }
+}

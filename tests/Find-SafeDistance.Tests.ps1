@@ -1,0 +1,36 @@
+param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/InductionHazard.psd1'))
+
+BeforeAll {
+    Import-Module $ModulePath -Force
+    $fault = New-FieldWaveform -Fault -Current '40 kA' -XOverR 14 -Frequency '50 Hz' -ClearingTime '200 ms' |
+        New-FieldSource -Busbar -Width '120 mm' -Thickness '10 mm' -Name 'Busbar B1'
+    $ring = New-ConductiveItem -Name 'Copper ring' -Material Copper -Diameter '60 mm' -WireDiameter '3 mm' -Contact Worn
+}
+
+Describe 'Find-SafeDistance' {
+    It 'returns a distance at which the item is Clear, and 2 % nearer it is not' {
+        $found = Find-SafeDistance -Item $ring -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m'
+        $found.Found | Should -BeTrue
+        $found.Verdict | Should -Be 'Clear'
+        $found.GoverningMechanism | Should -Not -BeNullOrEmpty
+        $d = $found.DistanceMeters
+        (Test-InductionHazard -Item $ring -Source $fault -Position "$(0.07 + $d), 0, 0").Verdict | Should -Be 'Clear'
+        (Test-InductionHazard -Item $ring -Source $fault -Position "$(0.07 + 0.98 * $d), 0, 0").Verdict | Should -Not -Be 'Clear'
+        $found.Position.X | Should -BeGreaterThan 0.07
+        ($found.Cautions -join ' ') | Should -Match 'engineering estimates'
+    }
+
+    It 'says so, with no distance, when the item is not Clear anywhere within -MaxDistance' {
+        $found = Find-SafeDistance -Item $ring -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '20 mm' -WarningVariable warned 3>$null
+        $found.Found | Should -BeFalse
+        [double]::IsNaN($found.DistanceMeters) | Should -BeTrue
+        $warned | Should -Match 'not Clear anywhere within'
+    }
+
+    It 'takes inventory rows from the pipeline and refuses a zero direction, naming it' {
+        $rows = @([pscustomobject]@{ Name = 'Row ring'; Material = 'Copper'; Diameter = '60 mm'; WireDiameter = '3 mm'; Contact = 'Worn' })
+        ($rows | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m').ItemName | Should -Be 'Row ring'
+        { Find-SafeDistance -Item $ring -Source $fault -Direction '0, 0, 0' } | Should -Throw -ErrorId 'InvalidInput,*'
+        { Find-SafeDistance -Item $ring -Source $fault -Direction x -MaxDistance '0.1 mm' } | Should -Throw '*MaxDistance*'
+    }
+}
