@@ -35,6 +35,26 @@ Describe 'The example site audit' {
         @(Get-ChildItem $out -Force -Filter '*.tmp').Count | Should -Be 0
     }
 
+    It 'shows every margin of the demo as a number between 0.001 and 1000, or as a bound' {
+        $out = Join-Path $TestDrive 'margins'
+        $null = & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out 6>$null
+        $lines = Get-Content (Join-Path $out 'marrowby-heath-audit.md')
+        $cells = foreach ($line in $lines | Where-Object { $_ -match '^\| (Shock|Arc|Burn|Overheat|Force|Torque|Attraction) \|' }) { ($line -split '(?<!\\)\|')[6].Trim() }
+        $cells.Count | Should -BeGreaterThan 30
+        foreach ($cell in $cells | Where-Object { $_ }) {
+            if ($cell -notmatch '^(&lt;|&gt;) ') {
+                [double] $cell | Should -BeGreaterOrEqual 0.001
+                [double] $cell | Should -BeLessThan 1000
+            }
+        }
+
+        $assessments = @($inventory | Test-InductionHazard -Site $site -WarningAction SilentlyContinue)
+        foreach ($m in $assessments.Mechanisms | Where-Object { $_.Applies -and $_.Verdict -ne 'Indeterminate' }) {
+            [double]::IsFinite($m.Margin) | Should -BeTrue
+            $m.Margin | Should -BeGreaterThan 0
+        }
+    }
+
     It 'does not replace an earlier report unless told to' {
         $out = Join-Path $TestDrive 'again'
         $null = & (Join-Path $root 'examples/Invoke-SiteAudit.ps1') -ModulePath $ModulePath -OutputDirectory $out 6>$null

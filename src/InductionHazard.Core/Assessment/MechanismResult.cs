@@ -69,7 +69,7 @@ public sealed class MechanismResult
             Predicted = predicted,
             Limit = limit,
             Unit = unit,
-            Margin = margin,
+            Margin = VerdictRules.Bounded(margin),
             Verdict = VerdictRules.FromMargin(margin, safetyFactor),
             Sources = sources,
             Detail = detail,

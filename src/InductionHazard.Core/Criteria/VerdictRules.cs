@@ -55,7 +55,13 @@ public static class VerdictRules
         return caution ? Verdict.Caution : Verdict.Clear;
     }
 
-    /// <summary>The margin of a limit over a predicted value, limit / predicted; infinity when nothing is predicted.</summary>
+    /// <summary>
+    /// The largest margin stated: a billion. Beyond it a margin says nothing more (views show "> 1000" long before),
+    /// and a margin stays a finite number for every finite input, nothing predicted included.
+    /// </summary>
+    public const double LargestMargin = 1e9;
+
+    /// <summary>The margin of a limit over a predicted value, limit / predicted, at most <see cref="LargestMargin"/> (reached when nothing is predicted).</summary>
     public static double Margin(double limit, double predicted)
     {
         if (double.IsNaN(limit) || double.IsNaN(predicted) || predicted < 0)
@@ -63,6 +69,9 @@ public static class VerdictRules
             return double.NaN;
         }
 
-        return predicted == 0 ? double.PositiveInfinity : limit / predicted;
+        return predicted == 0 ? LargestMargin : Bounded(limit / predicted);
     }
+
+    /// <summary>A margin held to at most <see cref="LargestMargin"/>; NaN stays NaN (not judged).</summary>
+    public static double Bounded(double margin) => margin > LargestMargin ? LargestMargin : margin;
 }

@@ -49,9 +49,11 @@ public class VerdictRulesTests
     }
 
     [Fact]
-    public void TheMarginOfNothingPredictedIsInfinite()
+    public void TheMarginOfNothingPredictedIsTheLargestStatedAndNeverInfinite()
     {
-        Assert.True(double.IsPositiveInfinity(VerdictRules.Margin(50, 0)));
+        Assert.Equal(VerdictRules.LargestMargin, VerdictRules.Margin(50, 0));
+        Assert.Equal(VerdictRules.LargestMargin, VerdictRules.Margin(50, 1e-300));
+        Assert.Equal(VerdictRules.LargestMargin, VerdictRules.Bounded(double.PositiveInfinity));
         Assert.Equal(2.5, VerdictRules.Margin(50, 20));
         Assert.True(double.IsNaN(VerdictRules.Margin(50, double.NaN)));
     }

@@ -101,10 +101,11 @@ public class HostileInputPropertyTests
             foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies))
             {
                 Assert.True(!double.IsNaN(m.Margin) && m.Margin >= a.SafetyFactor, m.Mechanism + " margin " + m.Margin);
-                if (double.IsInfinity(m.Margin))
+                if (m.Margin >= VerdictRules.LargestMargin)
                 {
-                    double added = m.Unit == "°C" ? m.Predicted - a.Response.InitialTemperatureCelsius : m.Predicted;
-                    Assert.True(added == 0, m.Mechanism + ": an infinite margin beside a predicted " + m.Predicted + " " + m.Unit);
+                    double start = a.Response.InitialTemperatureCelsius;
+                    (double added, double allowed) = m.Unit == "°C" ? (m.Predicted - start, m.Limit - start) : (m.Predicted, m.Limit);
+                    Assert.True(added <= allowed / VerdictRules.LargestMargin, m.Mechanism + ": the largest margin beside a predicted " + m.Predicted + " " + m.Unit);
                 }
             }
             Assert.True(Finite.Is(a.PeakEmfVolts), "Clear beside an emf of " + a.PeakEmfVolts);
@@ -114,6 +115,12 @@ public class HostileInputPropertyTests
         if (double.IsNaN(a.MinimumMargin))
         {
             Assert.Equal(Verdict.Indeterminate, a.Verdict);
+        }
+
+        // Every mechanism that was judged has a finite, positive margin: never 0, NaN or infinite for an input that was assessed.
+        foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies && m.Verdict != Verdict.Indeterminate))
+        {
+            Assert.True(Finite.Is(m.Margin) && m.Margin > 0 && m.Margin <= VerdictRules.LargestMargin, m.Mechanism + " judged with a margin of " + m.Margin);
         }
     }
 

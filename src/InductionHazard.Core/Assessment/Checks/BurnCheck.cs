@@ -61,9 +61,13 @@ public sealed class BurnCheck : IHazardCheck
         ContactBurnThreshold curve = policy.ContactBurn;
         double span = history[history.Count - 1].TimeSeconds - history[0].TimeSeconds;
 
-        // The contact-time threshold: the worst contact duration over the curve's range.
+        // The contact-time threshold: the worst contact duration over the curve's range. A contact time whose threshold
+        // the surroundings alone reach (the item starts at or above it) is the place's own hazard, not the field's: it is
+        // said, and what the field adds there is judged by the dose it adds.
         (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
-        double[] durations = Durations(curve, span).ToArray();
+        double[] all = Durations(curve, span).ToArray();
+        double[] durations = all.Where(d => curve.CelsiusFor(d) > start).ToArray();
+        double? placeSeconds = all.Length > durations.Length ? all.Where(d => curve.CelsiusFor(d) <= start).Min() : null;
         double[] sustained = TemperatureHistory.SustainedFor(history, durations);
         for (int k = 0; k < durations.Length; k++)
         {
@@ -81,7 +85,7 @@ public sealed class BurnCheck : IHazardCheck
             }
         }
 
-        if (span < curve.ShortestSeconds)
+        if (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start)
         {
             // Shorter than the standard covers: the peak against the shortest contact's threshold (thresholds rise for shorter contacts).
             double peak = response.PeakTemperatureCelsius;
@@ -99,14 +103,30 @@ public sealed class BurnCheck : IHazardCheck
         string contactText = "held " + SiFormat.Celsius(worst.held) + " for " + SiFormat.Format(worst.seconds, "s") + " against the threshold "
             + SiFormat.Celsius(worst.threshold) + " for that contact time (margin " + SiFormat.Plain(worst.margin) + ")";
         IReadOnlyList<string> basis = SourcesOf(policy);
-        if (doseMargin is { } byDose && (double.IsNaN(byDose) || byDose < worst.margin))
+        string place = placeSeconds is { } p
+            ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
+              + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
+            : string.Empty;
+        bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
+        if (!contactJudged)
+        {
+            contactText = "contact temperature not the criterion: the surroundings alone reach its threshold";
+            if (doseMargin is null)
+            {
+                // Neither criterion can judge what the field adds: fail closed.
+                return MechanismResult.Judged(Mechanism, "what the field adds to skin already at the burn threshold", double.NaN, double.NaN, "°C", double.NaN, policy.SafetyFactor, basis,
+                    "cannot be judged: " + doseText + "; " + contactText + place);
+            }
+        }
+
+        if (doseMargin is { } byDose && (double.IsNaN(byDose) || byDose < worst.margin || !contactJudged))
         {
             return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", byDose, policy.SafetyFactor, basis,
-                "skin in contact: " + doseText + "; " + contactText);
+                "skin in contact: " + doseText + "; " + contactText + place);
         }
 
         return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
-            "skin in contact: " + contactText + "; " + doseText);
+            "skin in contact: " + contactText + "; " + doseText + place);
     }
 
     private static string[] SourcesOf(HazardPolicy policy) =>

@@ -1,0 +1,97 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Thermal;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Criteria;
+
+/// <summary>
+/// Margins on one scale: a margin is the factor by which the predicted quantity could grow before its limit, so
+/// scaling the input by what grows the quantity by that factor lands on the limit (margin 1).
+/// </summary>
+public sealed class MarginScaleTests
+{
+    /// <summary>Copper's constants with no temperature coefficient, so that heating does not bend a force's square law (test input).</summary>
+    private static readonly MaterialLibrary Steady = MaterialLibrary.BuiltIn.With(new[]
+    {
+        MaterialLibrary.Define(new Dictionary<string, object?>
+        {
+            ["Name"] = "steady copper", ["Resistivity"] = 1.72e-8, ["TemperatureCoefficient"] = 0.0, ["Density"] = 8960.0, ["SpecificHeat"] = 385.0, ["MeltingTemperature"] = "1085 degC",
+        }),
+    });
+
+    private static ConductiveItem Ring(double gap, string contact = "Free", string material = "Copper") =>
+        ItemRecordReader.Read(
+            new Dictionary<string, object?> { ["Name"] = "ring", ["Material"] = material, ["Diameter"] = 0.06, ["WireDiameter"] = 0.002, ["Gap"] = gap, ["Contact"] = contact },
+            Steady);
+
+    private static InductionAssessment Assess(ConductiveItem item, FieldSource source, Vector3D centre, Vector3D? normal = null, double? exposure = null, double ambient = 20) =>
+        HazardAssessor.Assess(InductionEngine.Respond(new Scenario(item, source, new Placement(centre, normal), exposure, new ThermalEnvironment(ambient))), HazardPolicy.Default);
+
+    private static FieldSource Sine(double tesla) => FieldSource.Uniform("sine", new SineWaveform(tesla, 5000, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+
+    private static FieldSource Coil(double amperes) =>
+        new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 500), new RampWaveform(0, amperes, 0.05, drive: DriveKind.Current)) });
+
+    [Fact]
+    public void ScalingTheFieldByTheShockMarginLandsTheGapVoltageOnTheLimit()
+    {
+        // The gap voltage is linear in the field: the field times the margin meets the ELV limit.
+        double? margin = Assess(Ring(0.002), Sine(0.02), Vector3D.Zero).ShockMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(Ring(0.002), Sine(0.02 * margin!.Value), Vector3D.Zero).ShockMargin!.Value, 1e-9, "Shock margin after scaling");
+    }
+
+    [Fact]
+    public void ScalingTheFieldByTheArcMarginLandsTheGapVoltageOnTheBreakdownVoltage()
+    {
+        double? margin = Assess(Ring(1e-4), Sine(0.5), Vector3D.Zero).ArcMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(Ring(1e-4), Sine(0.5 * margin!.Value), Vector3D.Zero).ArcMargin!.Value, 1e-9, "Arc margin after scaling");
+    }
+
+    [Fact]
+    public void ScalingTheDriveByTheRootOfTheForceMarginLandsTheForceOnTheWeight()
+    {
+        // Induced current and field both follow the drive, so the force goes as its square: exactly so for a ring whose
+        // resistance does not change as it warms.
+        var above = new Vector3D(0, 0, 0.08);
+        double? margin = Assess(Ring(0, material: "steady copper"), Coil(2000), above, Vector3D.UnitZ).ForceMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(Ring(0, material: "steady copper"), Coil(2000 * Math.Sqrt(margin!.Value)), above, Vector3D.UnitZ).ForceMargin!.Value, 1e-6, "Force margin after scaling");
+    }
+
+    [Fact]
+    public void ScalingTheFieldByTheRootOfTheTorqueMarginLandsTheTorqueOnTheGravitationalTorque()
+    {
+        // A ring tilted in a uniform changing field: its moment follows the field, so the torque goes as its square.
+        var tilted = new Vector3D(0, Math.Sin(0.5), Math.Cos(0.5));
+        FieldSource Ramp(double tesla) => FieldSource.Uniform("ramp", new RampWaveform(0, tesla, 0.01, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        double? margin = Assess(Ring(0, material: "steady copper"), Ramp(1), Vector3D.Zero, tilted).TorqueMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(Ring(0, material: "steady copper"), Ramp(Math.Sqrt(margin!.Value)), Vector3D.Zero, tilted).TorqueMargin!.Value, 1e-6, "Torque margin after scaling");
+    }
+
+    [Fact]
+    public void AWornRingInAHotRoomWithNoFieldIsNotAHazardOfTheFieldAndTheRoomIsNamed()
+    {
+        // 45 °C air holds the skin at the burn threshold for long contact (ISO 13732-1: 43 °C for 8 h): the place's
+        // own hazard. The field adds nothing here, so the field's verdict is Clear, and the finding says both.
+        InductionAssessment none = Assess(Ring(0, "Skin"), Sine(0), Vector3D.Zero, ambient: 45);
+        Assert.Equal(Verdict.Clear, none.Verdict);
+        MechanismResult burn = Assert.Single(none.Mechanisms, m => m.Mechanism == HazardMechanism.Burn);
+        Assert.Contains("surroundings alone", burn.Detail, StringComparison.Ordinal);
+
+        // A field that does heat the ring is judged by the dose it adds over that baseline, and can still be a Hazard.
+        InductionAssessment heated = Assess(Ring(0, "Skin"), Sine(0.01), Vector3D.Zero, ambient: 45);
+        MechanismResult burnHeated = Assert.Single(heated.Mechanisms, m => m.Mechanism == HazardMechanism.Burn);
+        Assert.Equal("thermal dose added", burnHeated.Quantity);
+        Assert.True(burnHeated.Margin > 0 && burnHeated.Margin < none.Mechanisms[2].Margin);
+    }
+}
