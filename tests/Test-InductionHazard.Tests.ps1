@@ -14,6 +14,23 @@ Describe 'Test-InductionHazard' {
             $result = @($rows | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue)
         }
 
+        It 'shows item, verdict, governing mechanism, margin and action at 80 columns, and the figures too at 120, with no line too long' {
+            foreach ($width in 80, 120) {
+                $lines = @(($result | Out-String -Width $width) -split "`r?`n" | Where-Object { $_.Trim() })
+                foreach ($line in $lines) { $line.TrimEnd().Length | Should -BeLessOrEqual $width }
+                $header = $lines[0]
+                foreach ($column in 'Item', 'Verdict', 'Governing', 'Margin', 'Action') { $header | Should -Match "\b$column\b" }
+                $lines[1] | Should -Match '^-{4}' -Because 'a header row is followed by its rule, not by a header squeezed one letter per line'
+                if ($width -eq 120) { foreach ($column in 'Emf', 'Current', 'Peak T') { $header | Should -Match "\b$column\b" } }
+            }
+
+            $result.ActionBrief | Should -BeIn @('None', 'Use with care', 'Take it off', 'Keep it out', 'Keep out or fix down', 'Unsafe until assessed')
+        }
+
+        It 'shows readable text in its list view, never a type name' {
+            ($result[0..3] | Format-List | Out-String -Width 200) | Should -Not -Match 'InductionHazard\.[A-Z]'
+        }
+
         It 'returns one assessment per row, in order' {
             $result.Count | Should -Be $rows.Count
             $result.ItemName | Should -Be $rows.Name

@@ -59,6 +59,7 @@ public static class HazardAssessor
             MinimumMargin = minimum,
             Summary = Summarize(verdict, governing, policy),
             Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact),
+            ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             ArcMargin = MarginOf(results, HazardMechanism.Arc),

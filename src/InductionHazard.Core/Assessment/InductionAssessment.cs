@@ -41,6 +41,9 @@ public sealed class InductionAssessment
     /// <summary>What to do, in plain words: the action for a Hazard or Indeterminate, what restores the margin for a Caution.</summary>
     public string Action { get; init; } = string.Empty;
 
+    /// <summary>The action in a few words ("Take it off", "Keep out or fix down", "Unsafe until assessed", "Use with care", "None"), for narrow tables.</summary>
+    public string ActionBrief { get; init; } = string.Empty;
+
     /// <summary>Every mechanism checked, including those that do not apply (with the reason).</summary>
     public MechanismList Mechanisms { get; init; } = MechanismList.Empty;
 

@@ -49,6 +49,24 @@ public static class RecommendedAction
         };
     }
 
+    /// <summary>The action in a few words, for a table at 80 columns: "Take it off", "Keep out or fix down", "Unsafe until assessed", "Use with care", "None".</summary>
+    public static string Brief(Verdict verdict, MechanismResult? governing, ContactKind contact = ContactKind.Free)
+    {
+        if (verdict == Verdict.Indeterminate || governing is null)
+        {
+            return "Unsafe until assessed";
+        }
+
+        return verdict switch
+        {
+            Verdict.Clear => "None",
+            Verdict.Caution => "Use with care",
+            _ when contact == ContactKind.Skin => "Take it off",
+            _ when governing.Mechanism is HazardMechanism.Force or HazardMechanism.Torque => "Keep out or fix down",
+            _ => "Keep it out",
+        };
+    }
+
     private static string Remedy(HazardMechanism mechanism) => mechanism switch
     {
         HazardMechanism.Burn or HazardMechanism.Overheat => "a shorter time in the field, more distance from the source, or an item that is not a closed metal loop",
