@@ -74,7 +74,7 @@ function Invoke-Build {
 
     $helpDir = Join-Path $moduleDir 'en-US'
     $null = New-Item -ItemType Directory -Path $helpDir
-    Copy-Item (Join-Path $root 'docs/about_InductionHazard.help.txt') $helpDir
+    Copy-Item (Join-Path $root 'docs/about_*.help.txt') $helpDir
     Invoke-FreshPwsh @('-File', (Join-Path $root 'docs/tools/ConvertTo-MamlHelp.ps1'),
         '-ModulePath', (Join-Path $moduleDir 'InductionHazard.psd1'),
         '-MarkdownPath', (Join-Path $root 'docs/cmdlets'),

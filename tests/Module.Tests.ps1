@@ -31,6 +31,13 @@ Describe 'The laid-out module' {
         Get-Help about_InductionHazard | Out-String | Should -Match 'engineering estimates'
     }
 
+    It 'has about topics for the site file and the policy file that name every key' {
+        $site = Get-Help about_InductionHazard_SiteFile | Out-String
+        foreach ($key in 'Site', 'Stations', 'Policy', 'Sources', 'Waveform', 'Position', 'Normal', 'Velocity', 'ExposureTime', 'LeaveTime', 'Description') { $site | Should -Match "\b$key\b" }
+        $policy = Get-Help about_InductionHazard_PolicyFile | Out-String
+        foreach ($key in [InductionHazard.Criteria.HazardPolicy]::Keys.Name) { $policy | Should -Match "\b$key\b" }
+    }
+
     It 'targets netstandard2.0 so that Windows PowerShell 5.1 can load it' {
         foreach ($dll in 'InductionHazard.dll', 'InductionHazard.Core.dll') {
             $assembly = [System.Reflection.Assembly]::LoadFile((Join-Path $moduleDir $dll))
