@@ -79,6 +79,18 @@ public sealed class HazardPolicy
     /// <summary>True when any value departs from the published defaults.</summary>
     public bool IsSitePolicy => System.Linq.Enumerable.Any(Keys, k => !k.Value(this).Equals(k.Value(Default)));
 
+    /// <summary>The span each value may take: wide enough for any site's rules, narrow enough to catch a wrong unit.</summary>
+    private static readonly PhysicalRange[] Ranges =
+    {
+        new("SafetyFactor", 1.0, 100.0, string.Empty, "a factor below 1 would call a breach Clear; above 100 it is no longer a margin but a ban"),
+        new("AlternatingVoltageLimit", 1.0, 1000.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1 kV where low voltage ends"),
+        new("DirectVoltageLimit", 1.0, 1500.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1.5 kV where low voltage d.c. ends"),
+        new("ThermalDoseLimit", 0.01, 1000.0, "CEM43 min", "from a hundredth of a minute at 43 degC to the doses of thermal ablation"),
+        new("TouchTime", 0.01, Scenario8Hours, "s", "from a 10 ms flick to the 8 h longest contact of ISO 13732-1"),
+    };
+
+    private const double Scenario8Hours = 8 * 3600.0;
+
     /// <summary>Checks the values; throws naming the first out of range.</summary>
     /// <exception cref="InvalidInputException">A value is out of range.</exception>
     public HazardPolicy Validated()
@@ -88,17 +100,12 @@ public sealed class HazardPolicy
             throw new InvalidInputException("SafetyFactor", "must be a finite number of at least 1; got " + SafetyFactor);
         }
 
-        Require.Positive("AlternatingVoltageLimit", AlternatingVoltageLimitRms);
-        Require.Positive("DirectVoltageLimit", DirectVoltageLimit);
-        Require.Positive("ThermalDoseLimit", ThermalDoseLimitMinutes);
-        Require.Positive("TouchTime", TouchSeconds);
-        foreach (PolicyKey k in Keys)
+        foreach (PhysicalRange range in Ranges)
         {
-            if (double.IsInfinity(k.Value(this)))
-            {
-                throw new InvalidInputException(k.Name, "must be finite; got " + k.Value(this));
-            }
+            double value = System.Linq.Enumerable.First(Keys, k => k.Name == range.Field).Value(this);
+            range.Check(value);
         }
+
         return this;
     }
 }

@@ -1,0 +1,25 @@
+<#
+.SYNOPSIS
+    Streams N generated inventory rows through Test-InductionHazard into Out-Null and reports the process's peak
+    working set, so that a run of 1,000,000 rows can be compared with one of 10,000 (each in a fresh process).
+.EXAMPLE
+    dotnet pwsh -NoProfile -File tests/bench/Memory.ps1 -Rows 10000
+    dotnet pwsh -NoProfile -File tests/bench/Memory.ps1 -Rows 1000000
+#>
+param(
+    [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
+    [int] $Rows = 10000
+)
+Import-Module $ModulePath
+# Split rings at a 50 Hz sine: every row is read, bound, assessed and written, as an audit does; the rows are made
+# as they are consumed, so nothing but the pipeline holds them.
+$source = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Coil'
+$process = [System.Diagnostics.Process]::GetCurrentProcess()
+$before = $process.WorkingSet64
+$clock = [System.Diagnostics.Stopwatch]::StartNew()
+$count = 0
+& { foreach ($k in 1..$Rows) { [pscustomobject]@{ Name = "Ring $k"; Material = 'Copper'; Diameter = "$(18 + ($k % 10)) mm"; WireDiameter = '2 mm'; Gap = '1 mm'; Contact = 'Held' } } } |
+    Test-InductionHazard -Source $source -WarningAction SilentlyContinue |
+    ForEach-Object { $count++ }
+$process.Refresh()
+'{0} rows assessed in {1:F0} s; working set before {2:F0} MiB, peak {3:F0} MiB' -f $count, $clock.Elapsed.TotalSeconds, ($before / 1MB), ($process.PeakWorkingSet64 / 1MB)
