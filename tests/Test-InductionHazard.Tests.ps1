@@ -142,6 +142,16 @@ Describe 'Test-InductionHazard' {
             $result = @(Import-Csv $badPath | Test-InductionHazard -Source $pulse -ErrorVariable rowErrors -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
         }
 
+        It 'gives a $null in the pipeline its own error naming the row, and goes on with the rest' {
+            $good = [pscustomobject]@{ Name = 'Good ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $results = @($good, $null, $good | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)
+            $results.Count | Should -Be 2
+            $failed.Count | Should -Be 1
+            $failed[0].FullyQualifiedErrorId | Should -BeLike 'InvalidInput,*'
+            $failed[0].Exception.Message | Should -Match '^row 2: InputObject: is \$null'
+            { $null | Test-InductionHazard -Source $pulse -ErrorAction Stop } | Should -Throw -ErrorId 'InvalidInput,*'
+        }
+
         It 'still assesses every other row, in order' {
             $result.ItemName | Should -Be @('Good copper ring', 'Good gold band', 'Good split bangle')
             $result.RowNumber | Should -Be @(1, 4, 7)

@@ -33,7 +33,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [Alias("Item")]
-    public PSObject[] InputObject { get; set; } = null!;
+    [AllowNull]
+    [AllowEmptyCollection]
+    public PSObject?[]? InputObject { get; set; }
 
     /// <summary>The parameter set that takes the field from -Source.</summary>
     protected const string SourceSet = "Source";
@@ -137,15 +139,22 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <inheritdoc />
     protected override void ProcessRecord()
     {
-        foreach (PSObject input in InputObject)
+        foreach (PSObject? given in InputObject ?? new PSObject?[] { null })
         {
             _row++;
             int row = _row;
-            string label = ItemInput.Label(input, row);
+            // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
+            PSObject input = given ?? new PSObject(string.Empty);
+            string label = given is null ? ItemRecordReader.Label(row, null) : ItemInput.Label(input, row);
             ShowProgress(label);
             Task<(object Result, string Verbose)> work;
             try
             {
+                if (given is null || given.BaseObject is null)
+                {
+                    throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+                }
+
                 Scenario scenario = ScenarioOf(input, label, row);
                 CancellationToken token = _cancellation.Token;
                 work = ThrottleLimit > 1
