@@ -84,11 +84,13 @@ Describe 'Hostile input (fixed-seed corpus)' {
     }
 
     It 'answers every one of the parameter sets with an object or an error of its own, never an unhandled exception' {
+        $fuzzRing = New-ConductiveItem -Name 'fuzz ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Gap '1 mm'
+        $fuzzAssessment = $fuzzRing | Test-InductionHazard -Source $sources[1]
         $values = @('1 T', '0 T', '40 kA', '50 Hz', '10 ms', '2 s', '', 'NaN', '1e400', '-5 T', '0', '1e17 s', '3 mm', 'abc', '١ T', '15 kG', '1,5 T', '1/2 s', $null, 1, -1, 0, 1e300)
         $objects = 0
         $errors = [System.Collections.Generic.List[object]]::new()
         foreach ($k in 1..$setCount) {
-            $form = Pick 'Ramp', 'Sine', 'Fault', 'Discharge', 'Decay', 'Trapezoid', 'Item', 'Source'
+            $form = Pick 'Ramp', 'Sine', 'Fault', 'Discharge', 'Decay', 'Trapezoid', 'Item', 'Source', 'Exposure', 'Distance', 'Report'
             $p = switch ($form) {
                 'Ramp' { @{ Ramp = $true; From = Pick $values; To = Pick $values; Duration = Pick $values; Start = Pick $values } }
                 'Sine' { @{ Sine = $true; Amplitude = Pick $values; Frequency = Pick $values; PhaseDegrees = Pick $values } }
@@ -97,17 +99,21 @@ Describe 'Hostile input (fixed-seed corpus)' {
                 'Decay' { @{ Decay = $true; From = Pick $values; TimeConstant = Pick $values } }
                 'Trapezoid' { @{ Trapezoid = $true; Amplitude = Pick $values; RiseTime = Pick $values; FallTime = Pick $values; FlatTime = Pick $values } }
                 'Item' { @{ Name = 'fuzz'; Material = Pick $materials; Diameter = Length; WireDiameter = Length; Gap = Pick '0', '1 mm', '1 nm', 'NaN' } }
+                'Exposure' { @{ Source = $sources[0]; Position = Pick '0,0,0', '1 m,0,0', 'NaN,0,0', '1e308 km,0,0', '3 T,0,0', ''; Policy = Pick @{ SafetyFactor = Pick 3, 0.5, 'NaN', '' }, @{ Colour = 'red' }, @{ AlternatingVoltageLimit = Pick '25 V', '25 A', -1 } } }
+                'Distance' { @{ Item = $fuzzRing; Source = $sources[1]; Direction = Pick 'x', 'z', '0,0,0', 'NaN,0,0', '1e200,0,0', 'q'; MaxDistance = Pick '50 mm', '0', '-1 m', '1e9 m', 'abc', '3 T'; From = Pick '0,0,0', '1e308 km,0,0', ''; Policy = Pick @{}, @{ SafetyFactor = 200 } } }
+                'Report' { @{ InputObject = $fuzzAssessment; Path = Join-Path $TestDrive ('r' + $random.Next(20) + (Pick '.html', '.md', '.csv', '.json', '.txt', '')); Format = Pick 'Html', 'Json', 'Pdf', ''; Title = Pick 'Audit', '<b>x</b>', '=cmd|x', ''; Force = $true; PassThru = $true } }
                 'Source' { @{ Conductor = $true; Waveform = (New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz'); Axis = Pick 'z', '1e200,0,0', '0,0,0', 'NaN,0,0', 'q'; Center = Pick '0,0,0', '1e308 km,0,0', '3 T,0,0' } }
             }
             foreach ($key in @($p.Keys)) { if ($null -eq $p[$key]) { $p[$key] = '' } }
-            $command = switch ($form) { 'Item' { 'New-ConductiveItem' } 'Source' { 'New-FieldSource' } default { 'New-FieldWaveform' } }
+            $command = switch ($form) { 'Item' { 'New-ConductiveItem' } 'Source' { 'New-FieldSource' } 'Exposure' { 'Test-FieldExposure' } 'Distance' { 'Find-SafeDistance' } 'Report' { 'Export-HazardReport' } default { 'New-FieldWaveform' } }
+            if ($form -eq 'Report' -and $p.Format -eq '') { $p.Remove('Format') }
             try {
-                $result = & $command @p -ErrorAction Stop
+                $result = & $command @p -ErrorAction Stop -WarningAction SilentlyContinue
                 if ($null -ne $result) { $objects++ }
             }
             catch [System.Management.Automation.ParameterBindingException] { $errors.Add($_) }
             catch {
-                $_.FullyQualifiedErrorId | Should -Match '^(InvalidInput|InvalidQuantity|InvalidRecord|MissingUnit|UnknownMaterial|FieldNotEvaluable|ParameterArgumentTransformationError|ParameterArgumentValidationError|MissingArgument|MissingMandatoryParameter|AmbiguousParameterSet|NamedParameterNotFound|CannotConvertArgumentNoMessage|PositionalParameterNotFound)' -Because "$command $($p.Keys -join ' ') failed with: $($_.Exception.Message)"
+                $_.FullyQualifiedErrorId | Should -Match '^(InvalidInput|InvalidQuantity|InvalidRecord|MissingUnit|UnknownMaterial|FieldNotEvaluable|ParameterArgumentTransformationError|ParameterArgumentValidationError|MissingArgument|MissingMandatoryParameter|AmbiguousParameterSet|NamedParameterNotFound|CannotConvertArgumentNoMessage|PositionalParameterNotFound|InvalidPolicyFile|ReportFormatUnknown|ReportExists|ReportEmpty)' -Because "$command $($p.Keys -join ' ') failed with: $($_.Exception.Message)"
                 $errors.Add($_)
             }
         }
