@@ -8,7 +8,9 @@
 #>
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
-    [int] $Rows = 10000
+    [int] $Rows = 10000,
+    # Print the working set and the managed heap every so many rows (0: only at the end).
+    [int] $Every = 0
 )
 Import-Module $ModulePath
 # Split rings at a 50 Hz sine: every row is read, bound, assessed and written, as an audit does; the rows are made
@@ -20,6 +22,12 @@ $clock = [System.Diagnostics.Stopwatch]::StartNew()
 $count = 0
 & { foreach ($k in 1..$Rows) { [pscustomobject]@{ Name = "Ring $k"; Material = 'Copper'; Diameter = "$(18 + ($k % 10)) mm"; WireDiameter = '2 mm'; Gap = '1 mm'; Contact = 'Held' } } } |
     Test-InductionHazard -Source $source -WarningAction SilentlyContinue |
-    ForEach-Object { $count++ }
+    ForEach-Object {
+        $count++
+        if ($Every -gt 0 -and $count % $Every -eq 0) {
+            $process.Refresh()
+            '{0,9} rows: working set {1:F0} MiB, managed heap {2:F0} MiB' -f $count, ($process.WorkingSet64 / 1MB), ([GC]::GetTotalMemory($false) / 1MB)
+        }
+    }
 $process.Refresh()
 '{0} rows assessed in {1:F0} s; working set before {2:F0} MiB, peak {3:F0} MiB' -f $count, $clock.Elapsed.TotalSeconds, ($before / 1MB), ($process.PeakWorkingSet64 / 1MB)
