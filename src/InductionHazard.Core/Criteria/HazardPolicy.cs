@@ -9,6 +9,8 @@ namespace InductionHazard.Criteria;
 /// </summary>
 public sealed class HazardPolicy
 {
+    private string? _fingerprint;
+
     /// <summary>The default policy: published limits and a safety factor of 2.</summary>
     public static HazardPolicy Default { get; } = new();
 
@@ -37,7 +39,7 @@ public sealed class HazardPolicy
     /// A SHA-256 fingerprint of every value the policy applies (its name, factor, limits and the burn threshold's
     /// points), so that a report shows which policy produced it and an auditor can tell two policies apart.
     /// </summary>
-    public string Fingerprint => TextHash.Sha256(string.Join(
+    public string Fingerprint => _fingerprint ??= TextHash.Sha256(string.Join(
         "|",
         Name,
         TextHash.Exact(SafetyFactor),

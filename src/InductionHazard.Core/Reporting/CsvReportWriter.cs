@@ -12,7 +12,7 @@ namespace InductionHazard.Reporting;
 
 /// <summary>
 /// Writes a report as CSV: one row per item, the inventory's own columns beside the results, numbers in SI with the
-/// unit in the header, and the report's provenance in the last columns. A text cell that a spreadsheet would take
+/// unit in the header, and the report's provenance and cautions in the last columns. A text cell that a spreadsheet would take
 /// for a formula (it starts with =, +, -, @, a tab or a carriage return) is neutralised with a leading apostrophe;
 /// numbers are written as numbers. A figure the engine does not trust is an empty cell (the Reasons column says why).
 /// </summary>
@@ -41,7 +41,7 @@ public static class CsvReportWriter
 
     private static readonly string[] VerdictHeaders = { "Verdict", "GoverningMechanism" };
 
-    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Model", "PathCount", "Policy", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256" };
+    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Model", "PathCount", "Policy", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256", "Cautions" };
 
     /// <summary>Writes the rows.</summary>
     public static void Write(HazardReport report, TextWriter w)
@@ -91,6 +91,7 @@ public static class CsvReportWriter
             csv.WriteField(Text(a.ModuleVersion));
             csv.WriteField(a.AssessedUtc);
             csv.WriteField(report.InputsHash);
+            csv.WriteField(Text(string.Join(" ", report.Cautions)));
             csv.NextRecord();
         }
 

@@ -79,6 +79,34 @@ public sealed class MarginScaleTests
     }
 
     [Fact]
+    public void ScalingTheFieldByTheRootOfTheBurnMarginLandsTheTouchTemperatureOnTheThreshold()
+    {
+        // A loose ring touched briefly: its rise over the start is the Joule heat over a linear cooling (a resistance
+        // that does not warm, no radiation), so the rise goes as the field's square.
+        var still = new ThermalEnvironment(20, ThermalEnvironment.StillAirConvection, 0.0);
+        InductionAssessment Touch(double tesla) =>
+            HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Ring(0, "Free", "steady copper"), Sine(tesla), new Placement(Vector3D.Zero), 60, still)), HazardPolicy.Default);
+        double? margin = Touch(0.0009).BurnMargin;
+        Assert.NotNull(margin);
+        Assert.InRange(margin!.Value, 1.5, 1e6);
+        Within.Relative(1.0, Touch(0.0009 * Math.Sqrt(margin.Value)).BurnMargin!.Value, 1e-6, "Burn margin after scaling");
+    }
+
+    [Fact]
+    public void ScalingTheCoilCurrentByTheRootOfTheAttractionMarginLandsThePullOnTheWeight()
+    {
+        // An unsaturated steel ball on a coil's axis: its magnetisation follows the field, so the pull (moment times
+        // gradient) goes as the coil current's square.
+        ConductiveItem ball = ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "ball", ["Shape"] = "Sphere", ["Material"] = "Steel", ["Diameter"] = 0.01, ["Contact"] = "Free" }, MaterialLibrary.BuiltIn);
+        FieldSource Magnet(double amperes) =>
+            new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 100), new RampWaveform(0, amperes, 600, drive: DriveKind.Current)) });
+        var onAxis = new Vector3D(0, 0, 0.1);
+        double? margin = Assess(ball, Magnet(20), onAxis).AttractionMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(ball, Magnet(20 * Math.Sqrt(margin!.Value)), onAxis).AttractionMargin!.Value, 1e-6, "Attraction margin after scaling");
+    }
+
+    [Fact]
     public void AWornRingInAHotRoomWithNoFieldIsNotAHazardOfTheFieldAndTheRoomIsNamed()
     {
         // 45 °C air holds the skin at the burn threshold for long contact (ISO 13732-1: 43 °C for 8 h): the place's

@@ -144,6 +144,7 @@ public sealed class ReportWriterTests
 
         string csv = Write(report, CsvReportWriter.Write);
         Assert.Contains(report.InputsHash, csv, StringComparison.Ordinal);
+        Assert.Contains("engineering estimates", csv, StringComparison.Ordinal);
         Assert.Contains(Clear.PolicyHash, csv, StringComparison.Ordinal);
     }
 
