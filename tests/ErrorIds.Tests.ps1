@@ -41,6 +41,8 @@ BeforeAll {
         'New-ConductiveItem/InvalidQuantity' = { Row @{ Material = 'Copper'; Diameter = 'abc mm'; WireDiameter = '2 mm' } | New-ConductiveItem -ErrorAction Stop }
         'New-ConductiveItem/UnknownMaterial' = { Row @{ Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' } | New-ConductiveItem -ErrorAction Stop }
         'New-ConductiveItem/InvalidRecord' = { Row @{ Material = 'Unobtainium'; Diameter = 'abc mm'; WireDiameter = '2 mm' } | New-ConductiveItem -ErrorAction Stop }
+        'New-ConductiveItem/UnusualSize' = { New-ConductiveItem -Material Copper -Diameter '50 m' -WireDiameter '2 mm' }
+        'Find-SafeDistance/UnusualSize' = { Row @{ Material = 'Copper'; Diameter = '50 m'; WireDiameter = '2 mm' } | Find-SafeDistance -Source $uniform -Direction x -ErrorAction Stop }
         'New-FieldWaveform/ParameterArgumentTransformationError' = { New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '5 mm' }
         'New-FieldWaveform/InvalidInput' = { New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '0 Hz' }
         'New-FieldWaveform/InvalidCapture' = { New-FieldWaveform -Path $badCapture -Unit mT }
@@ -63,6 +65,9 @@ BeforeAll {
     $badQuantity = Row @{ Material = 'Copper'; Diameter = 'abc mm'; WireDiameter = '2 mm' }
     $badMaterial = Row @{ Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' }
     $badBoth = Row @{ Material = 'Unobtainium'; Diameter = 'abc mm'; WireDiameter = '2 mm' }
+    $giant = Row @{ Material = 'Copper'; Diameter = '50 m'; WireDiameter = '2 mm' }
+    $cases['Test-InductionHazard/UnusualSize'] = { $giant | Test-InductionHazard -Source $uniform -ErrorAction Stop }
+    $cases['Get-InductionResponse/UnusualSize'] = { $giant | Get-InductionResponse -Source $uniform -ErrorAction Stop }
     $cases['Test-InductionHazard/InvalidInput'] = { $null | Test-InductionHazard -Source $uniform -ErrorAction Stop }
     $cases['Test-InductionHazard/InvalidQuantity'] = { $badQuantity | Test-InductionHazard -Source $uniform -ErrorAction Stop }
     $cases['Test-InductionHazard/UnknownMaterial'] = { $badMaterial | Test-InductionHazard -Source $uniform -ErrorAction Stop }

@@ -113,7 +113,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             }
             catch [System.Management.Automation.ParameterBindingException] { $errors.Add($_) }
             catch {
-                $_.FullyQualifiedErrorId | Should -Match '^(InvalidInput|InvalidQuantity|InvalidRecord|MissingUnit|UnknownMaterial|FieldNotEvaluable|ParameterArgumentTransformationError|ParameterArgumentValidationError|MissingArgument|MissingMandatoryParameter|AmbiguousParameterSet|NamedParameterNotFound|CannotConvertArgumentNoMessage|PositionalParameterNotFound|InvalidPolicyFile|ReportFormatUnknown|ReportExists|ReportEmpty)' -Because "$command $($p.Keys -join ' ') failed with: $($_.Exception.Message)"
+                $_.FullyQualifiedErrorId | Should -Match '^(InvalidInput|InvalidQuantity|InvalidRecord|MissingUnit|UnusualSize|UnknownMaterial|FieldNotEvaluable|ParameterArgumentTransformationError|ParameterArgumentValidationError|MissingArgument|MissingMandatoryParameter|AmbiguousParameterSet|NamedParameterNotFound|CannotConvertArgumentNoMessage|PositionalParameterNotFound|InvalidPolicyFile|ReportFormatUnknown|ReportExists|ReportEmpty)' -Because "$command $($p.Keys -join ' ') failed with: $($_.Exception.Message)"
                 $errors.Add($_)
             }
         }

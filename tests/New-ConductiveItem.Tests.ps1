@@ -14,6 +14,15 @@ Describe 'New-ConductiveItem' {
         $band.Contact | Should -Be 'Skin'
     }
 
+    It 'refuses a size outside those of things people wear, carry or install, naming the field and the fix, unless accepted' {
+        { New-ConductiveItem -Material Copper -Diameter '50 m' -WireDiameter '2 mm' } | Should -Throw -ErrorId 'UnusualSize,*' -ExpectedMessage '*Diameter*did you mean 50 mm*AcceptUnusualSize*'
+        (New-ConductiveItem -Material Copper -Diameter '50 m' -WireDiameter '2 mm' -Contact Fixed -AcceptUnusualSize).Loop.MeanDiameterMeters | Should -Be 50
+        { New-ConductiveItem -Material Copper -Diameter '2 m' -WireDiameter '2 mm' -Contact Worn } | Should -Throw '*Contact*worn items are no larger than a belt*'
+        { New-ConductiveItem -Material Copper -Diameter '20 mm' -WireDiameter '20 um' } | Should -Throw '*WireDiameter*outside*'
+        $rows = @([pscustomobject]@{ Name = 'Site loop'; Material = 'Copper'; Diameter = '40 m'; WireDiameter = '10 mm'; Contact = 'Fixed'; AcceptUnusualSize = 'true' })
+        ($rows | New-ConductiveItem).Loop.MeanDiameterMeters | Should -Be 40
+    }
+
     It 'takes contact as people say it, in the parameter as in rows, and refuses a word it does not know' {
         (New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact Worn).Contact | Should -Be 'Skin'
         (New-ConductiveItem -Material Gold -Diameter '20 mm' -WireDiameter '2 mm' -Contact loose).Contact | Should -Be 'Free'

@@ -34,6 +34,7 @@ public static class ItemRecordReader
         ["ClosedEnds"] = new[] { "Closed", "EndsClosed" },
         ["Gap"] = new[] { "GapWidth", "Split" },
         ["Contact"] = new[] { "ContactKind", "Wear", "Worn" },
+        ["AcceptUnusualSize"] = new[] { "UnusualSize" },
     };
 
     /// <summary>Reads one item.</summary>
@@ -42,7 +43,8 @@ public static class ItemRecordReader
     /// <param name="rowNumber">The record's position in its input (1-based), for messages; null for a single item.</param>
     /// <param name="units">The unit of each field's bare numbers where the column names do not say (a -Unit table).</param>
     /// <exception cref="RecordException">Something in the record is missing, malformed or out of range.</exception>
-    public static ConductiveItem Read(IEnumerable<KeyValuePair<string, object?>> record, MaterialLibrary materials, int? rowNumber = null, IReadOnlyDictionary<string, string>? units = null)
+    /// <param name="acceptUnusualSize">Whether to accept sizes outside those of things people wear, carry or install (<see cref="PlausibleSizes"/>).</param>
+    public static ConductiveItem Read(IEnumerable<KeyValuePair<string, object?>> record, MaterialLibrary materials, int? rowNumber = null, IReadOnlyDictionary<string, string>? units = null, bool acceptUnusualSize = false)
     {
         var fields = new RecordFields(record, units);
         string? name = fields.Text("Name", required: false, A("Name"));
@@ -85,6 +87,11 @@ public static class ItemRecordReader
             }
         }
 
+        if (fields.Errors.Count == 0 && loop is not null && !(acceptUnusualSize || (fields.Raw("AcceptUnusualSize", required: false, A("AcceptUnusualSize")) is { } accept && RecordFields.IsTrue(accept))))
+        {
+            CheckPlausible(fields, shape, loop, contact);
+        }
+
         if (fields.Errors.Count > 0)
         {
             AddDelimiterHint(fields, record);
@@ -98,6 +105,33 @@ public static class ItemRecordReader
             loop!,
             gap,
             contact);
+    }
+
+    /// <summary>Each size field against the sizes of things people wear, carry or install of that shape; a worn item no larger than a belt.</summary>
+    private static void CheckPlausible(RecordFields fields, ItemShape shape, LoopGeometry loop, ContactKind contact)
+    {
+        foreach (string field in PlausibleSizes.OverallFields(shape))
+        {
+            if (fields.Quantity(field, QuantityKind.Length, required: false, A(field)) is { } v && PlausibleSizes.OverallProblem(shape, v) is { } problem)
+            {
+                fields.AddError(field, problem, "UnusualSize");
+            }
+        }
+
+        foreach (string field in PlausibleSizes.SectionFields(shape))
+        {
+            if (fields.Quantity(field, QuantityKind.Length, required: false, A(field)) is { } v && PlausibleSizes.SectionProblem(shape, v) is { } problem)
+            {
+                fields.AddError(field, problem, "UnusualSize");
+            }
+        }
+
+        // Only where the record says the item is worn: Skin is also the default for a record that does not say.
+        if (fields.Errors.Count == 0 && contact == ContactKind.Skin && fields.Has("Contact", A("Contact")) && loop.LargestDimensionMeters > PlausibleSizes.LargestWorn)
+        {
+            fields.AddError("Contact", "Skin (worn) for an item " + SiFormat.Format(loop.LargestDimensionMeters, "m") + " across: worn items are no larger than a belt ("
+                + SiFormat.Format(PlausibleSizes.LargestWorn, "m") + "); check the size or the contact, or accept the size deliberately (-AcceptUnusualSize)", "UnusualSize");
+        }
     }
 
     /// <summary>The words people use for contact, beside the enumeration's own: Worn is Skin, Loose is Free.</summary>

@@ -9,8 +9,8 @@ internal static class ItemInput
 {
     /// <summary>The item for one input.</summary>
     /// <exception cref="Errors.RecordException">The row cannot make an item.</exception>
-    public static ConductiveItem ToItem(PSObject input, MaterialLibrary materials, int row, IReadOnlyDictionary<string, string>? units = null) =>
-        input.BaseObject is ConductiveItem item ? item : ItemRecordReader.Read(Records.From(input), materials, row, units);
+    public static ConductiveItem ToItem(PSObject input, MaterialLibrary materials, int row, IReadOnlyDictionary<string, string>? units = null, bool acceptUnusualSize = false) =>
+        input.BaseObject is ConductiveItem item ? item : ItemRecordReader.Read(Records.From(input), materials, row, units, acceptUnusualSize);
 
     /// <summary>The position and normal a row gives (X, Y, Z, NormalX, NormalY, NormalZ); none for an item object.</summary>
     /// <exception cref="Errors.RecordException">The row gives some components but not all, or a malformed one.</exception>

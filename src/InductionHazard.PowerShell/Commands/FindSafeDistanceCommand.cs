@@ -58,6 +58,10 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     [Policy]
     public HazardPolicy? Policy { get; set; }
 
+    /// <summary>Accept item sizes outside those of things people wear, carry or install, which are otherwise refused as likely unit slips.</summary>
+    [Parameter]
+    public SwitchParameter AcceptUnusualSize { get; set; }
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
@@ -87,7 +91,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             string label = ItemInput.Label(input, _row);
             try
             {
-                ConductiveItem item = ItemInput.ToItem(input, MaterialLibrary.BuiltIn, _row);
+                ConductiveItem item = ItemInput.ToItem(input, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
                 var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                 SafeDistanceResult result = SafeDistance.Find(
                     item, _source, From, Direction, MaxDistance, Policy ?? HazardPolicy.Default, Normal, ExposureTime, null,

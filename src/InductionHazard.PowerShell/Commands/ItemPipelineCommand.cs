@@ -90,6 +90,10 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Parameter]
     public System.Collections.Hashtable? Unit { get; set; }
 
+    /// <summary>Accept item sizes outside those of things people wear, carry or install (a cable loop 50 m across), which are otherwise refused as likely unit slips.</summary>
+    [Parameter]
+    public SwitchParameter AcceptUnusualSize { get; set; }
+
     /// <summary>Materials that data rows may name besides the built-in ones (hashtables or materials).</summary>
     [Parameter]
     [Material]
@@ -192,7 +196,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     private Scenario ScenarioOf(PSObject input, string label, int row)
     {
-        ConductiveItem item = ItemInput.ToItem(input, _materials, row, _units);
+        ConductiveItem item = ItemInput.ToItem(input, _materials, row, _units, AcceptUnusualSize.IsPresent);
         (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, _units);
         Station? station = ParameterSetName == SiteSet ? ItemInput.StationOf(input, label, Site, Station) : null;
         var placement = new Placement(

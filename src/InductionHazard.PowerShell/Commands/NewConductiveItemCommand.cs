@@ -99,6 +99,10 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     [Material]
     public ConductorMaterial[]? AdditionalMaterial { get; set; }
 
+    /// <summary>Accept item sizes outside those of things people wear, carry or install (a cable loop 50 m across), which are otherwise refused as likely unit slips.</summary>
+    [Parameter]
+    public SwitchParameter AcceptUnusualSize { get; set; }
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
@@ -115,7 +119,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
         {
             try
             {
-                WriteObject(ItemRecordReader.Read(BoundValues(), _materials));
+                WriteObject(ItemRecordReader.Read(BoundValues(), _materials, acceptUnusualSize: AcceptUnusualSize.IsPresent));
             }
             catch (InductionHazardException ex)
             {
@@ -130,7 +134,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
             _row++;
             try
             {
-                WriteObject(ItemInput.ToItem(input, _materials, _row, ItemInput.UnitsOf(Unit)));
+                WriteObject(ItemInput.ToItem(input, _materials, _row, ItemInput.UnitsOf(Unit), AcceptUnusualSize.IsPresent));
             }
             catch (InductionHazardException ex)
             {
