@@ -31,6 +31,20 @@ Describe 'The laid-out module' {
         Get-Help about_InductionHazard | Out-String | Should -Match 'engineering estimates'
     }
 
+    It 'shows readable text in the list view of every object it returns, never a type name' {
+        $item = New-ConductiveItem -Name 'Band' -Material Gold -InnerDiameter '18 mm' -Width '4 mm' -Thickness '1.6 mm'
+        $waveform = New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz'
+        $source = $waveform | New-FieldSource -Uniform
+        $response = Get-InductionResponse -Item $item -Source $source
+        $site = Import-HazardSite (Join-Path (Split-Path $PSScriptRoot -Parent) 'examples/marrowby-heath-site.psd1')
+        $objects = @($item, $item.Loop, $waveform, $source, $response, $response.Scenario, $response.Scenario.Placement, $site, $site.Stations[0],
+            (Get-ConductorMaterial Copper), (Get-HazardPolicy), (Test-FieldExposure -Source $source), (Get-FieldStrength -Source $source -Position '0,0,0'),
+            (Test-InductionHazard -Item $item -Source $source))
+        foreach ($o in $objects) {
+            ($o | Format-List | Out-String -Width 250) | Should -Not -Match 'InductionHazard\.[A-Z][A-Za-z]+\.[A-Z]' -Because "the list view of a $($o.GetType().Name) shows text"
+        }
+    }
+
     It 'has about topics for the site file and the policy file that name every key' {
         $site = Get-Help about_InductionHazard_SiteFile | Out-String
         foreach ($key in 'Site', 'Stations', 'Policy', 'Sources', 'Waveform', 'Position', 'Normal', 'Velocity', 'ExposureTime', 'LeaveTime', 'Description') { $site | Should -Match "\b$key\b" }

@@ -14,6 +14,33 @@ Describe 'New-ConductiveItem' {
         $band.Contact | Should -Be 'Skin'
     }
 
+    It 'reads unit strings as written, or refuses them saying why: <Text>' -ForEach @(
+        @{ Text = '20 mm'; Metres = 0.02 }
+        @{ Text = '20mm'; Metres = 0.02 }
+        @{ Text = '3/4 in'; Metres = 0.01905 }
+        @{ Text = '1 3/4 in'; Metres = 0.04445 }
+        @{ Text = '2 cm'; Metres = 0.02 }
+        @{ Text = '20 Mm'; Refusal = '*between 10 µm and 100 m*' }
+        @{ Text = '20 MM'; Refusal = '*''MM'' is not a unit of length*' }
+        @{ Text = '1,5 mm'; Refusal = '*decimal comma*decimal point*' }
+        @{ Text = '١٨ mm'; Refusal = '*digits other than 0-9*' }
+        @{ Text = '5 A'; Refusal = '*between 10 µm and 100 m*' }
+        @{ Text = '3 T'; Refusal = '*expected a length*' }
+        @{ Text = '18'; Metres = 18; Bare = $true }
+    ) {
+        if ($Refusal) {
+            { New-ConductiveItem -Material Copper -Diameter $Text -WireDiameter '2 mm' -Contact Fixed } | Should -Throw -ExpectedMessage $Refusal
+        }
+        elseif ($Bare) {
+            # A number typed as a parameter is SI, as documented: 18 is 18 m (then refused as an unusual ring unless accepted).
+            (New-ConductiveItem -Material Copper -Diameter $Text -WireDiameter '2 mm' -Contact Fixed).Loop.MeanDiameterMeters | Should -Be $Metres
+        }
+        else {
+            (New-ConductiveItem -Material Copper -Diameter $Text -WireDiameter '1 mm' -Contact Fixed).Loop.MeanDiameterMeters | Should -BeGreaterThan ($Metres * (1 - 1e-12))
+            (New-ConductiveItem -Material Copper -Diameter $Text -WireDiameter '1 mm' -Contact Fixed).Loop.MeanDiameterMeters | Should -BeLessThan ($Metres * (1 + 1e-12))
+        }
+    }
+
     It 'refuses a size outside those of things people wear, carry or install, naming the field and the fix, unless accepted' {
         { New-ConductiveItem -Material Copper -Diameter '50 m' -WireDiameter '2 mm' } | Should -Throw -ErrorId 'UnusualSize,*' -ExpectedMessage '*Diameter*did you mean 50 mm*AcceptUnusualSize*'
         (New-ConductiveItem -Material Copper -Diameter '50 m' -WireDiameter '2 mm' -Contact Fixed -AcceptUnusualSize).Loop.MeanDiameterMeters | Should -Be 50

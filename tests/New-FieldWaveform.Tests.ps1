@@ -3,6 +3,19 @@ param([string] $ModulePath = (Join-Path $PSScriptRoot '../out/InductionHazard/In
 BeforeAll { Import-Module $ModulePath -Force }
 
 Describe 'New-FieldWaveform' {
+    It 'reads a field or time as written, or refuses it saying why: <Text>' -ForEach @(
+        @{ Text = '15 kG'; Peak = 1.5 }
+        @{ Text = '150 G'; Peak = 0.015 }
+        @{ Text = '2 mT'; Peak = 0.002 }
+        @{ Text = '40 kA'; Peak = 40000 }
+        @{ Text = '1,5 T'; Refusal = '*decimal comma*' }
+        @{ Text = '10 MS'; Refusal = '*''MS'' is not a unit*' }
+        @{ Text = '10 ms'; Refusal = '*which is a time*' }
+    ) {
+        if ($Refusal) { { New-FieldWaveform -Sine -Amplitude $Text -Frequency '50 Hz' } | Should -Throw -ExpectedMessage $Refusal }
+        else { (New-FieldWaveform -Sine -Amplitude $Text -Frequency '50 Hz').PeakValue | Should -Be $Peak }
+    }
+
     It 'makes a ramp from strings with units, including the ASCII spelling of micro' {
         $w = New-FieldWaveform -Ramp -From '0 T' -To '3 T' -Duration '10 us' -Start '1 ms'
         $w.Form | Should -Be 'Ramp'

@@ -125,4 +125,7 @@ public sealed class Scenario
     public double InitialCelsius => Item.Contact is ContactKind.Skin or ContactKind.Held
         ? Math.Max(Environment.AmbientCelsius, SkinContact.SurfaceCelsius)
         : Environment.AmbientCelsius;
+
+    /// <summary>"Wedding band in F1 coil mouth at (0, 0, 0.06)".</summary>
+    public override string ToString() => Item.Name + " in " + Source.Name + " at " + Placement.Centre + (StationName is { Length: > 0 } s ? " (station " + s + ")" : string.Empty);
 }

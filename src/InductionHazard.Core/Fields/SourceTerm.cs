@@ -17,4 +17,7 @@ public sealed class SourceTerm
 
     /// <summary>The drive in time.</summary>
     public FieldWaveform Waveform { get; }
+
+    /// <summary>"uniform field along +z, sine 1 mT peak at 50 Hz".</summary>
+    public override string ToString() => Geometry.Describe() + ", " + Waveform.Describe();
 }

@@ -23,4 +23,8 @@ public sealed class CircuitSample
 
     /// <summary>The item's temperature, °C.</summary>
     public double TemperatureCelsius { get; }
+
+    /// <summary>"at 1.2 ms: emf 3.4 V, current 56 A, 37.0 °C".</summary>
+    public override string ToString() =>
+        "at " + Quantities.SiFormat.Format(TimeSeconds, "s") + ": emf " + Quantities.SiFormat.Format(EmfVolts, "V") + ", current " + Quantities.SiFormat.Format(CurrentAmperes, "A") + ", " + Quantities.SiFormat.Celsius(TemperatureCelsius);
 }

@@ -30,6 +30,9 @@ public abstract class CrossSection
 
     /// <summary>A short description ("2 mm wire", "6 mm x 1.8 mm band").</summary>
     public abstract string Describe();
+
+    /// <summary>The section in words, as <see cref="Describe"/> gives it.</summary>
+    public override string ToString() => Describe();
 }
 
 /// <summary>A round wire of diameter d.</summary>

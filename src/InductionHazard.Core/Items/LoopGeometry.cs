@@ -48,4 +48,7 @@ public abstract class LoopGeometry
 
     /// <summary>"circle D 20 mm" or "rectangle 300 mm x 400 mm".</summary>
     public abstract string Describe();
+
+    /// <summary>The geometry in words, as <see cref="Describe"/> gives it.</summary>
+    public override string ToString() => Describe();
 }

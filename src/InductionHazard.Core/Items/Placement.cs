@@ -40,4 +40,8 @@ public sealed class Placement
 
     /// <summary>The velocity at which the item is moved through the (static) field here, m/s; null when it is not moved.</summary>
     public Vector3D? Velocity { get; }
+
+    /// <summary>"centred at (0, 0, 0.06), normal (0, 0, 1)" or "facing the field".</summary>
+    public override string ToString() =>
+        "centred at " + Centre + (Normal is { } n ? ", normal " + n : ", facing the largest flux change") + (Velocity is { } v ? ", moving at " + v + " m/s" : string.Empty);
 }

@@ -82,18 +82,23 @@ public static class QuantityParser
             return (Parse(input, kinds[0]), null);
         }
 
+        string? firstError = null;
         foreach (QuantityKind kind in kinds)
         {
-            if (TryParse(input, kind, out double value, out _))
+            if (TryParse(input, kind, out double value, out string? error))
             {
                 return (value, kind);
             }
+
+            firstError ??= error;
         }
 
         string expected = string.Join(" or ", kinds.Select(k => QuantityKindInfo.Of(k).Description + " such as " + QuantityKindInfo.Of(k).Example));
         string found = input is string s ? DimensionOf(s) : null ?? string.Empty;
+        // A text that is no known quantity at all (a decimal comma, other digits, a unit in the wrong case): say why, as for one kind.
+        string why = found.Length == 0 && firstError is not null && firstError.Contains(";") ? firstError.Substring(0, firstError.IndexOf(';')) + "; " : string.Empty;
         throw new QuantityFormatException(
-            "expected " + expected + "; got '" + Display(input) + "'" + (found.Length > 0 ? ", which is " + found : string.Empty),
+            why + "expected " + expected + "; got '" + Display(input) + "'" + (found.Length > 0 ? ", which is " + found : string.Empty),
             Display(input),
             kinds[0]);
     }

@@ -19,4 +19,8 @@ public sealed class HeatingSample
 
     /// <summary>The heating power dissipated in the item (averaged over a cycle for an alternating drive), W.</summary>
     public double PowerWatts { get; }
+
+    /// <summary>"at 10 s: 37.0 °C, 1.2 W".</summary>
+    public override string ToString() =>
+        "at " + Quantities.SiFormat.Format(TimeSeconds, "s") + ": " + Quantities.SiFormat.Celsius(TemperatureCelsius) + ", " + Quantities.SiFormat.Format(PowerWatts, "W");
 }

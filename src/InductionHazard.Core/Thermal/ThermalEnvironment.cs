@@ -43,4 +43,8 @@ public sealed class ThermalEnvironment
 
     /// <summary>The surface emissivity for radiation to surroundings at ambient temperature.</summary>
     public double Emissivity { get; }
+
+    /// <summary>"air at 20.0 °C, convection 5 W/(m² K), emissivity 0.05".</summary>
+    public override string ToString() =>
+        "air at " + Quantities.SiFormat.Celsius(AmbientCelsius) + ", convection " + Quantities.SiFormat.Plain(ConvectionWattsPerSquareMeterKelvin) + " W/(m² K), emissivity " + Quantities.SiFormat.Plain(Emissivity);
 }
