@@ -26,11 +26,24 @@ Describe 'Test-FieldExposure' {
         { Test-FieldExposure -Source $feeder -Position '0, 0, 0' -ErrorAction Stop } | Should -Throw -ExpectedMessage '*Position*'
     }
 
-    It 'is Indeterminate for a pulse, with a warning, never a number that looks safe' {
+    It 'judges a pulse by the weighted-peak method, and a faster one as worse' {
         $pulse = New-FieldWaveform -Ramp -From 0 -To '1 mT' -Duration '1 ms' | New-FieldSource -Uniform
-        $e = Test-FieldExposure -Source $pulse -WarningVariable warned -WarningAction SilentlyContinue
+        $faster = New-FieldWaveform -Ramp -From 0 -To '1 mT' -Duration '100 us' | New-FieldSource -Uniform
+        $e = Test-FieldExposure -Source $pulse
+        $e.Verdict | Should -Not -Be 'Indeterminate'
+        $e.Basis | Should -Match 'weighted peak'
+        ($e.Standards -join ' ') | Should -Match 'weighted-peak method'
+        (Test-FieldExposure -Source $faster).Margin | Should -BeLessThan $e.Margin
+    }
+
+    It 'is Indeterminate, never a number that looks safe, for a field the method cannot resolve' {
+        $mixed = @(
+            (New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz' | New-FieldSource -Uniform)
+            (New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '61.3 Hz' | New-FieldSource -Uniform)
+        )
+        $e = Test-FieldExposure -Source $mixed -WarningVariable warned -WarningAction SilentlyContinue
         $e.Verdict | Should -Be 'Indeterminate'
         [double]::IsNaN($e.Margin) | Should -BeTrue
-        ($warned -join ' ') | Should -Match 'weighted-peak'
+        ($warned -join ' ') | Should -Match 'weighted-peak method cannot be applied'
     }
 }

@@ -91,11 +91,30 @@ public sealed record FieldExposure
         }
         else
         {
-            basis = "pulsed or mixed, peak";
-            compared = peak;
-            limit = double.NaN;
+            // Neither static nor a sinusoid: the weighted-peak index of the changing part, and the peak against the
+            // static limit for the field that stays (a magnet ramped up and held); the smaller margin governs.
+            (double index, string? problem) = WeightedPeak.At(source, point, publicExposure);
             standards.Add(ExposureLimits.TimeVaryingSource);
-            indeterminate = "a field that is neither static nor a sinusoid is judged by the weighted-peak method of ICNIRP 2010, which this version does not apply";
+            standards.Add(ExposureLimits.WeightedPeakSource);
+            standards.Add(ExposureLimits.StaticSource);
+            double staticLimit = publicExposure ? ExposureLimits.StaticPublicTesla : ExposureLimits.StaticOccupationalTesla;
+            compared = peak;
+            if (problem is not null)
+            {
+                basis = "pulsed or mixed, weighted peak";
+                limit = double.NaN;
+                indeterminate = "the weighted-peak method cannot be applied: " + problem;
+            }
+            else if (index > 0 && peak / index < staticLimit)
+            {
+                basis = "pulsed or mixed, weighted peak (index " + SiFormat.Plain(index) + "; the peak at which it reaches 1 is the limit)";
+                limit = peak / index;
+            }
+            else
+            {
+                basis = "pulsed or mixed, peak against the static limit (weighted-peak index " + SiFormat.Plain(index) + ")";
+                limit = staticLimit;
+            }
         }
 
         double margin = indeterminate is null ? VerdictRules.Margin(limit, compared) : double.NaN;

@@ -31,6 +31,9 @@ public static class ExposureLimits
     /// <summary>The source of the time-varying reference levels.</summary>
     public const string TimeVaryingSource = "ICNIRP 2010, Health Phys 99:818 (reference levels for magnetic flux density, tables 3 and 4)";
 
+    /// <summary>The source of the weighted-peak method for pulsed and complex fields.</summary>
+    public const string WeightedPeakSource = "ICNIRP 2010 and ICNIRP 2003, Health Phys 84:383 (the weighted-peak method for pulsed and non-sinusoidal fields)";
+
     /// <summary>The source of the static limits.</summary>
     public const string StaticSource = "ICNIRP 2009, Health Phys 96:504 (static magnetic fields)";
 

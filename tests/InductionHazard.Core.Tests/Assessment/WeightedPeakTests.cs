@@ -1,0 +1,73 @@
+using System;
+using System.Linq;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Assessment;
+
+/// <summary>The weighted-peak method, against what it must reduce to where the answer is known in closed form.</summary>
+public sealed class WeightedPeakTests
+{
+    private static FieldSource Tones(params (double Tesla, double Hertz)[] tones) =>
+        new("tones", tones.Select(t => new SourceTerm(new UniformField(Vector3D.UnitZ), new SineWaveform(t.Tesla, t.Hertz, drive: DriveKind.FluxDensity))).ToArray());
+
+    [Theory]
+    [InlineData(5.0)]
+    [InlineData(15.0)]
+    [InlineData(100.0)]
+    [InlineData(1000.0)]
+    [InlineData(20000.0)]
+    [Validates("weighted-peak index of a sinusoid in each band of the reference levels: its rms over the level", "ICNIRP 2010 table 3 (occupational reference levels; the method reduces to them for one frequency)", "0.1 %")]
+    public void ForOneSinusoidTheIndexIsItsRmsOverTheReferenceLevel(double hertz)
+    {
+        double tesla = 1e-3;
+        (double index, string? problem) = WeightedPeak.At(Tones((tesla, hertz)), Vector3D.Zero, publicExposure: false);
+        Assert.Null(problem);
+        Within.Relative(tesla / Math.Sqrt(2) / ExposureLimits.OccupationalTesla(hertz), index, 1e-3, "index at " + hertz + " Hz");
+    }
+
+    [Fact]
+    [Validates("weighted-peak index of 50 Hz and 150 Hz tones, where the levels are flat: the peak of the summed field over the peak level", "ICNIRP 2010 table 3 and ICNIRP 2003 (the weighted peak is the field itself where the weighting is flat); peak of the sum found by a direct time-domain search", "0.1 %")]
+    public void WhereTheLevelsAreFlatTheIndexIsThePeakOfTheSummedField()
+    {
+        (double index, _) = WeightedPeak.At(Tones((1e-3, 50), (0.6e-3, 150)), Vector3D.Zero, publicExposure: false);
+        double peak = Enumerable.Range(0, 200_000).Select(i => i * 0.02 / 200_000).Max(t => Math.Abs((1e-3 * Math.Sin(2 * Math.PI * 50 * t)) + (0.6e-3 * Math.Sin(2 * Math.PI * 150 * t))));
+        Within.Relative(peak / (Math.Sqrt(2) * 1e-3), index, 1e-3, "index in the flat band");
+    }
+
+    [Fact]
+    [Validates("weighted-peak index of 500 Hz and 1.5 kHz tones, where the levels fall as 1/f: the peak rate of change over 2 pi 0.3 T Hz sqrt 2", "ICNIRP 2010 table 3 (0.3/f T between 300 Hz and 3 kHz: the weighting is a differentiator there); peak rate found by a direct time-domain search", "0.1 %")]
+    public void WhereTheLevelsFallAsOneOverFTheIndexFollowsThePeakRateOfChange()
+    {
+        (double index, _) = WeightedPeak.At(Tones((1e-4, 500), (0.5e-4, 1500)), Vector3D.Zero, publicExposure: false);
+        double peakRate = Enumerable.Range(0, 200_000).Select(i => i * 0.002 / 200_000)
+            .Max(t => Math.Abs((1e-4 * 2 * Math.PI * 500 * Math.Cos(2 * Math.PI * 500 * t)) + (0.5e-4 * 2 * Math.PI * 1500 * Math.Cos(2 * Math.PI * 1500 * t))));
+        Within.Relative(peakRate / (2 * Math.PI * 0.3 * Math.Sqrt(2)), index, 1e-3, "index in the 1/f band");
+    }
+
+    [Fact]
+    public void APulseIsJudgedByItsWeightedPeakAndAFieldThatStaysByTheStaticLimit()
+    {
+        // A 1 ms ramp to 1 mT: its changes are judged, with a finite margin and the method named.
+        var pulse = FieldSource.Uniform("pulse", new RampWaveform(0, 1e-3, 1e-3, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        FieldExposure e = FieldExposure.At(pulse, Vector3D.Zero, publicExposure: false, HazardPolicy.Default);
+        Assert.NotEqual(Verdict.Indeterminate, e.Verdict);
+        Assert.True(Finite.Is(e.Margin) && e.Margin > 0);
+        Assert.Contains("weighted peak", e.Basis, StringComparison.Ordinal);
+        Assert.Contains(ExposureLimits.WeightedPeakSource, e.Standards);
+
+        // Faster is worse: the same step in a tenth of the time has a smaller margin.
+        var faster = FieldSource.Uniform("faster", new RampWaveform(0, 1e-3, 1e-4, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        Assert.True(FieldExposure.At(faster, Vector3D.Zero, false, HazardPolicy.Default).Margin < e.Margin);
+
+        // A magnet ramped to 7 T over ten minutes and held: hardly any changing field, but 7 T stays; the static limit governs.
+        var magnet = FieldSource.Uniform("magnet", new RampWaveform(0, 7, 600, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        FieldExposure held = FieldExposure.At(magnet, Vector3D.Zero, false, HazardPolicy.Default);
+        Assert.Equal(Verdict.Hazard, held.Verdict);
+        Within.Relative(ExposureLimits.StaticOccupationalTesla / 7, held.Margin, 1e-9, "static margin");
+    }
+}
