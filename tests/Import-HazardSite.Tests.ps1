@@ -6,6 +6,17 @@ BeforeAll {
 }
 
 Describe 'Import-HazardSite' {
+    It 'offers the stations of a loaded site when -Station is completed' {
+        $global:completionSite = Import-HazardSite (Join-Path (Split-Path $PSScriptRoot -Parent) 'examples/marrowby-heath-site.psd1')
+        try {
+            $line = 'Test-InductionHazard -Site $completionSite -Station Pu'
+            (TabExpansion2 -inputScript $line -cursorColumn $line.Length).CompletionMatches.CompletionText | Should -Be @("'Pulse cell P2 coil'")
+            $line = 'Get-InductionResponse -Site $completionSite -Station '
+            @((TabExpansion2 -inputScript $line -cursorColumn $line.Length).CompletionMatches).Count | Should -Be $completionSite.Stations.Count
+        }
+        finally { Remove-Variable completionSite -Scope Global }
+    }
+
     It 'reads the example site''s stations with their sources' {
         $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
         $site.Name | Should -Be 'Marrowby Heath Field Laboratory'
