@@ -90,7 +90,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
         $objects = 0
         $errors = [System.Collections.Generic.List[object]]::new()
         foreach ($k in 1..$setCount) {
-            $form = Pick 'Ramp', 'Sine', 'Fault', 'Discharge', 'Decay', 'Trapezoid', 'Item', 'Source', 'Exposure', 'Distance', 'Report'
+            $form = Pick 'Ramp', 'Sine', 'Fault', 'Discharge', 'Decay', 'Trapezoid', 'Item', 'Source', 'Exposure', 'Distance', 'Report', 'Assess', 'Field', 'Material'
             $p = switch ($form) {
                 'Ramp' { @{ Ramp = $true; From = Pick $values; To = Pick $values; Duration = Pick $values; Start = Pick $values } }
                 'Sine' { @{ Sine = $true; Amplitude = Pick $values; Frequency = Pick $values; PhaseDegrees = Pick $values } }
@@ -102,14 +102,21 @@ Describe 'Hostile input (fixed-seed corpus)' {
                 'Exposure' { @{ Source = $sources[0]; Position = Pick '0,0,0', '1 m,0,0', 'NaN,0,0', '1e308 km,0,0', '3 T,0,0', ''; Policy = Pick @{ SafetyFactor = Pick 3, 0.5, 'NaN', '' }, @{ Colour = 'red' }, @{ AlternatingVoltageLimit = Pick '25 V', '25 A', -1 } } }
                 'Distance' { @{ Item = $fuzzRing; Source = $sources[1]; Direction = Pick 'x', 'z', '0,0,0', 'NaN,0,0', '1e200,0,0', 'q'; MaxDistance = Pick '50 mm', '0', '-1 m', '1e9 m', 'abc', '3 T'; From = Pick '0,0,0', '1e308 km,0,0', ''; Policy = Pick @{}, @{ SafetyFactor = 200 } } }
                 'Report' { @{ InputObject = $fuzzAssessment; Path = Join-Path $TestDrive ('r' + $random.Next(20) + (Pick '.html', '.md', '.csv', '.json', '.txt', '')); Format = Pick 'Html', 'Json', 'Pdf', ''; Title = Pick 'Audit', '<b>x</b>', '=cmd|x', ''; Force = $true; PassThru = $true } }
+                'Assess' { @{ Item = $fuzzRing; Source = $sources[0]; Position = Pick '0,0,0', '1e308 km,0,0', 'NaN,0,0', '3 T,0,0', '0, 0, 5 mm'; Normal = Pick 'z', '0,0,0', 'NaN,1,0', '1e200,0,0'; Velocity = Pick '0,0,0', '1 m/s,0,0', '100 m/s,0,0', '-1,0,0', 'NaN,0,0'; ExposureTime = Pick $values; LeaveTime = Pick $values; AmbientTemperature = Pick '20 degC', '-300 degC', '1000 degC', 'NaN', '5 K', '' } }
+                'Field' { @{ Source = $sources[2]; Position = Pick '0,0,0', '0, 100 mm, 0', '1e308 km,0,0', 'NaN,0,0', '3 T,0,0', 'q', '0,0' } }
+                'Material' { @{ Definition = @{ Name = 'fuzz metal'; Resistivity = Pick '2e-8 ohm m', '-1', 'NaN', '1e300', ''; Density = Pick '8 g/cm3', '0', '-5', 'abc'; SpecificHeat = Pick '400 J/(kg K)', '0', '1e400'; MeltingTemperature = Pick '1000 degC', '-500 K', 'NaN'; TemperatureCoefficient = Pick 0.004, -1, 'NaN', 1e300 } } }
                 'Source' { @{ Conductor = $true; Waveform = (New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz'); Axis = Pick 'z', '1e200,0,0', '0,0,0', 'NaN,0,0', 'q'; Center = Pick '0,0,0', '1e308 km,0,0', '3 T,0,0' } }
             }
             foreach ($key in @($p.Keys)) { if ($null -eq $p[$key]) { $p[$key] = '' } }
-            $command = switch ($form) { 'Item' { 'New-ConductiveItem' } 'Source' { 'New-FieldSource' } 'Exposure' { 'Test-FieldExposure' } 'Distance' { 'Find-SafeDistance' } 'Report' { 'Export-HazardReport' } default { 'New-FieldWaveform' } }
+            $command = switch ($form) { 'Item' { 'New-ConductiveItem' } 'Source' { 'New-FieldSource' } 'Exposure' { 'Test-FieldExposure' } 'Distance' { 'Find-SafeDistance' } 'Report' { 'Export-HazardReport' } 'Assess' { 'Test-InductionHazard' } 'Field' { 'Get-FieldStrength' } 'Material' { 'Get-ConductorMaterial' } default { 'New-FieldWaveform' } }
             if ($form -eq 'Report' -and $p.Format -eq '') { $p.Remove('Format') }
             try {
                 $result = & $command @p -ErrorAction Stop -WarningAction SilentlyContinue
                 if ($null -ne $result) { $objects++ }
+                foreach ($a in @($result) | Where-Object { $_ -is [InductionHazard.Assessment.InductionAssessment] -and $_.Verdict -eq 'Clear' }) {
+                    [double]::IsFinite($a.MinimumMargin) -and $a.MinimumMargin -ge $a.SafetyFactor | Should -BeTrue -Because 'a Clear stands on finite margins at or above the factor'
+                    [double]::IsFinite($a.PeakEmfVolts) -and [double]::IsFinite($a.PeakTemperatureCelsius) | Should -BeTrue
+                }
             }
             catch [System.Management.Automation.ParameterBindingException] { $errors.Add($_) }
             catch {
