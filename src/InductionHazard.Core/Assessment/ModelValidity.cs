@@ -138,6 +138,12 @@ public static class ModelValidity
                 return false;
             }
 
+            if (!ring && !alternating && wire.RadiusMeters > DcModelSkinDepths * delta)
+            {
+                notes.Add("the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": concentric shells of the wire resolve its skin effect in time (the loop is large against the wire, so its proximity effect is neglected)");
+                return false;
+            }
+
             if (alternating)
             {
                 notes.Add("skin effect by the Kelvin-function formula: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
 using System.Globalization;
 using System.Numerics;
 using InductionHazard.Fields;
@@ -68,6 +69,11 @@ public sealed class ItemPaths
     public static ItemPaths For(ConductiveItem item, double frequencyHertz, double startCelsius, bool thinLoop, int refinement = 1)
     {
         double rho = item.Material.ResistivityAt(startCelsius);
+        if (!thinLoop && item.Loop is RectangularLoopGeometry frame && item.Loop.Section is RoundWire wire)
+        {
+            return ForShells(item, frame, wire.RadiusMeters, SkinEffect.SkinDepthMeters(rho, frequencyHertz, item.Material.RelativePermeability), refinement, rho);
+        }
+
         if (thinLoop || item.Loop is RectangularLoopGeometry)
         {
             var circuit = new RingCircuit(item);
@@ -106,6 +112,39 @@ public sealed class ItemPaths
             + SiFormat.Format(Math.Min(cell, double.MaxValue), "m") + " (a third of the skin depth " + SiFormat.Format(delta, "m") + ") at each surface, growing " + FilamentMesh.Growth.ToString(CultureInfo.InvariantCulture) + "x inward";
         return modes is null
             ? new ItemPaths(item, set, null, description, "the filament inductance matrix is not positive definite (the mesh cannot represent this section)", rho)
+            : new ItemPaths(item, set, modes, description, null, rho);
+    }
+
+    /// <summary>
+    /// Concentric shells of a round wire bent into a rectangle: the outermost a third of the skin depth thick (over the
+    /// refinement), each next one <see cref="FilamentMesh.Growth"/> times thicker inward, none thicker than a third
+    /// of the radius, and a solid core.
+    /// </summary>
+    private static ItemPaths ForShells(ConductiveItem item, RectangularLoopGeometry frame, double radius, double delta, int refinement, double rho)
+    {
+        var radii = new List<double> { radius };
+        double r = radius, thickness = Math.Min(SurfaceCellSkinDepths * delta / refinement, radius / (3 * refinement));
+        while (r - thickness > 0.5 * thickness && radii.Count <= MaxPaths)
+        {
+            r -= thickness;
+            radii.Add(r);
+            thickness = Math.Min(thickness * FilamentMesh.Growth, radius / (3 * refinement));
+        }
+
+        radii.Add(0);
+        radii.Reverse();
+        int count = radii.Count - 1;
+        string description = count.ToString(CultureInfo.InvariantCulture) + " concentric shells of the wire, the outermost " + SiFormat.Format(radii[count] - radii[count - 1], "m")
+            + " thick (a third of the skin depth " + SiFormat.Format(delta, "m") + "), growing " + FilamentMesh.Growth.ToString(CultureInfo.InvariantCulture) + "x inward";
+        if (count > MaxPaths)
+        {
+            return new ItemPaths(item, null, null, description, "the skin depth (" + SiFormat.Format(delta, "m") + ") is so small against the wire that resolving it needs more than " + MaxPaths.ToString(CultureInfo.InvariantCulture) + " shells", rho);
+        }
+
+        PathSet set = PathSet.Shells(frame.WidthMeters, frame.HeightMeters, radii, description);
+        PathModes? modes = set.Modes(rho);
+        return modes is null
+            ? new ItemPaths(item, set, null, description, "the shells' inductance matrix is not positive definite", rho)
             : new ItemPaths(item, set, modes, description, null, rho);
     }
 
@@ -227,11 +266,16 @@ public sealed class ItemPaths
 
         if (Paths?.Filaments is not { } cells)
         {
+            // One path, or shells that all follow the outline: each links the outline's flux.
             double[] outline = FluxCoupling.PerUnitDrive(source, centre, normal, Item.Loop);
-            var single = new double[1, terms];
-            for (int j = 0; j < terms; j++)
+            int count = Paths?.Count ?? 1;
+            var single = new double[count, terms];
+            for (int i = 0; i < count; i++)
             {
-                single[0, j] = outline[j];
+                for (int j = 0; j < terms; j++)
+                {
+                    single[i, j] = outline[j];
+                }
             }
 
             return single;
@@ -306,13 +350,15 @@ public sealed class ItemPaths
                     gradient[i, j] = sum;
                 }
             }
-            else if (Item.Loop is RectangularLoopGeometry rectangle)
-            {
-                gradient[0, j] = AroundRectangle(geometry, centre, normal, rectangle);
-            }
             else
             {
-                gradient[0, j] = AroundCircle(geometry, centre, u, v, Item.Loop.HalfSpanMeters);
+                Vector3D around = Item.Loop is RectangularLoopGeometry rectangle
+                    ? AroundRectangle(geometry, centre, normal, rectangle)
+                    : AroundCircle(geometry, centre, u, v, Item.Loop.HalfSpanMeters);
+                for (int i = 0; i < paths; i++)
+                {
+                    gradient[i, j] = around;
+                }
             }
         }
 
@@ -381,7 +427,7 @@ public sealed class ItemPaths
 
         if (Paths?.Filaments is not { } cells)
         {
-            return new[] { Item.Loop.LoopAreaSquareMeters };
+            return Enumerable.Repeat(Item.Loop.LoopAreaSquareMeters, Paths?.Count ?? 1).ToArray();
         }
 
         var areas = new double[cells.Count];

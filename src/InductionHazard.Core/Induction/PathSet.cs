@@ -128,6 +128,71 @@ public sealed class PathSet
         new(new[,] { { inductanceHenries } }, new[] { lengthOverArea }, null, description);
 
     /// <summary>
+    /// Concentric shells of a round wire bent into a rectangle, sides a and b: the wire's skin effect in time and in
+    /// steady state where the loop is large against the wire (its proximity effect negligible). Each shell follows the
+    /// loop's outline, so all link the same flux. By Grover's GMD method: the loop's external inductance (current on
+    /// the wire's surface) plus (mu0 / 2 pi) P ln(r / g), with g a shell's own geometric-mean radius (Maxwell's for an
+    /// annulus) for its self term, and for two shells the outer one's geometric-mean distance from any point inside
+    /// it; R_i = rho P / A_i.
+    /// </summary>
+    /// <param name="a">One side of the loop, m.</param>
+    /// <param name="b">The other side, m.</param>
+    /// <param name="radii">The shells' boundaries from the axis out: 0 = r_0 &lt; r_1 &lt; ... &lt; r_n = the wire's radius, m.</param>
+    /// <param name="description">What was built, for the notes.</param>
+    public static PathSet Shells(double a, double b, IReadOnlyList<double> radii, string description)
+    {
+        int n = radii.Count - 1;
+        var l = new double[n, n];
+        var g = new double[n];
+        double perimeter = 2 * (a + b), surface = radii[n];
+        // The loop's inductance for a current on the wire's surface, plus the straight wire's log term for a GMD g
+        // inside it: L(g) = L_ext + (mu0 / 2 pi) P ln(surface / g). (Only the log of the GMD is exact for a distribution
+        // over the section; the filament formula's other terms in g are not, and would bend the internal inductance.)
+        double external = RectangleInductance.ExternalHenries(a, b, surface);
+        double perLog = Quantities.PhysicalConstants.VacuumPermeability / (2 * Math.PI) * perimeter;
+        for (int i = 0; i < n; i++)
+        {
+            double inner = radii[i], outer = radii[i + 1];
+            l[i, i] = external + (perLog * Math.Log(surface / AnnulusGmr(inner, outer)));
+            g[i] = perimeter / (Math.PI * ((outer * outer) - (inner * inner)));
+            for (int j = i + 1; j < n; j++)
+            {
+                // Shell j lies outside shell i: their GMD is shell j's GMD from any point inside it.
+                double m = external + (perLog * Math.Log(surface / AnnulusGmdFromInside(radii[j], radii[j + 1])));
+                l[i, j] = m;
+                l[j, i] = m;
+            }
+        }
+
+        return new PathSet(l, g, null, description) { SharesOutline = true };
+    }
+
+    /// <summary>
+    /// Maxwell's geometric-mean radius of an annulus r1 &lt; r &lt; r2 (Grover 1946):
+    /// ln g = ln r2 - r1^4 ln(r2/r1) / (r2^2 - r1^2)^2 + (3 r1^2 - r2^2) / (4 (r2^2 - r1^2)); r2 e^(-1/4) for a disc.
+    /// </summary>
+    public static double AnnulusGmr(double r1, double r2)
+    {
+        double d = (r2 * r2) - (r1 * r1);
+        double logRatio = r1 > 0 ? Math.Log(r2 / r1) : 0;
+        return Math.Exp(Math.Log(r2) - (Math.Pow(r1, 4) * logRatio / (d * d)) + (((3 * r1 * r1) - (r2 * r2)) / (4 * d)));
+    }
+
+    /// <summary>
+    /// The geometric-mean distance of an annulus r1 &lt; r &lt; r2 from any point inside r1 (the mean of ln r over its
+    /// area, since the mean of ln|x - p| over a circle of radius r is ln r for |p| &lt; r):
+    /// ln g = (r2^2 ln r2 - r1^2 ln r1) / (r2^2 - r1^2) - 1/2.
+    /// </summary>
+    public static double AnnulusGmdFromInside(double r1, double r2)
+    {
+        double inner = r1 > 0 ? r1 * r1 * Math.Log(r1) : 0;
+        return Math.Exp((((r2 * r2 * Math.Log(r2)) - inner) / ((r2 * r2) - (r1 * r1))) - 0.5);
+    }
+
+    /// <summary>True when every path follows the item's own outline (concentric shells of a wire): they link the same flux and feel the same force per ampere.</summary>
+    public bool SharesOutline { get; private init; }
+
+    /// <summary>
     /// Coaxial filaments: self terms from each cell's section (<see cref="CoaxialInductance.SelfHenries"/>), mutual
     /// terms by Maxwell's formula (averaged over sub-filaments for neighbouring cells), R_i = rho 2 pi r_i / S_i.
     /// </summary>

@@ -22,6 +22,9 @@ public static class RectangleInductance
     /// <summary>Mutual inductance of two parallel straight filaments of length l, d apart, side by side (Grover 1946), H.</summary>
     public static double ParallelFilamentsHenries(double l, double d) => ParallelSegments.MutualHenries(0, l, 0, l, d);
 
+    /// <summary>The inductance of the loop for a conductor whose section has geometric-mean distance g to itself or to another (Grover's GMD method), H.</summary>
+    public static double WithGmdHenries(double a, double b, double g) => Loop(a, b, g);
+
     private static double Loop(double a, double b, double g) =>
         (2 * ParallelFilamentsHenries(a, g)) + (2 * ParallelFilamentsHenries(b, g)) - (2 * ParallelFilamentsHenries(a, b)) - (2 * ParallelFilamentsHenries(b, a));
 }
