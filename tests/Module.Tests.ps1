@@ -45,6 +45,27 @@ Describe 'The laid-out module' {
         }
     }
 
+    It 'shows every table view whole at 80, 100 and 120 columns: no line too long, no header squeezed one letter per line' {
+        $item = New-ConductiveItem -Name 'Band' -Material Gold -InnerDiameter '18 mm' -Width '4 mm' -Thickness '1.6 mm'
+        $waveform = New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz'
+        $source = $waveform | New-FieldSource -Uniform
+        $site = Import-HazardSite (Join-Path (Split-Path $PSScriptRoot -Parent) 'examples/marrowby-heath-site.psd1')
+        $assessment = Test-InductionHazard -Item $item -Source $source
+        $views = [ordered]@{
+            assessments = @($assessment); mechanisms = $assessment.Mechanisms; responses = @(Get-InductionResponse -Item $item -Source $source); items = @($item)
+            materials = @(Get-ConductorMaterial); waveforms = @($waveform); sources = @($source); strengths = @(Get-FieldStrength -Source $source -Position '0,0,0')
+            sites = @($site); stations = $site.Stations; limits = (Get-HazardPolicy).Limits; exposures = @(Test-FieldExposure -Source $source)
+            distances = @(Find-SafeDistance -Item $item -Source $source -Direction x -MaxDistance '10 cm')
+        }
+        foreach ($name in $views.Keys) {
+            foreach ($width in 80, 100, 120) {
+                $lines = @(($views[$name] | Out-String -Width $width) -split "`r?`n" | Where-Object { $_.Trim() })
+                foreach ($line in $lines) { $line.TrimEnd().Length | Should -BeLessOrEqual $width -Because "$name at $width columns" }
+                if ($lines[0] -notmatch ' : ') { $lines[1] | Should -Match '^\s*-' -Because "the $name table's header at $width columns is one row, followed by its rule" }
+            }
+        }
+    }
+
     It 'has about topics for the site file and the policy file that name every key' {
         $site = Get-Help about_InductionHazard_SiteFile | Out-String
         foreach ($key in 'Site', 'Stations', 'Policy', 'Sources', 'Waveform', 'Position', 'Normal', 'Velocity', 'ExposureTime', 'LeaveTime', 'Description') { $site | Should -Match "\b$key\b" }
