@@ -67,9 +67,12 @@ a { color: inherit; }
         WriteSummary(report, w);
         w.Write("<figure>" + ReportCharts.MarginChart(report, "margins") + "<figcaption>Each item's smallest margin, by input order, on a log scale. Margins beyond 0.001 and 1000 are drawn at the edge; "
             + report.Count(Verdict.Indeterminate).ToString(CultureInfo.InvariantCulture) + " Indeterminate items have no margin and are not drawn.</figcaption></figure>\n");
+        int chartedClear = 0;
         for (int i = 0; i < report.Assessments.Count; i++)
         {
-            WriteItem(report.Assessments[i], i, w);
+            InductionAssessment a = report.Assessments[i];
+            bool charts = a.Verdict != Verdict.Clear || chartedClear++ < ChartedClearItems;
+            WriteItem(a, i, w, charts);
         }
 
         WriteProvenance(report, w);
@@ -140,7 +143,13 @@ a { color: inherit; }
         w.Write("</section>\n");
     }
 
-    private static void WriteItem(InductionAssessment a, int index, TextWriter w)
+    /// <summary>
+    /// How many Clear items get their own charts (every item that is not Clear gets them): a chart weighs some 20 kB,
+    /// and an inventory of thousands would otherwise make a page no browser opens. Every item keeps its tables.
+    /// </summary>
+    public const int ChartedClearItems = 200;
+
+    private static void WriteItem(InductionAssessment a, int index, TextWriter w, bool charts)
     {
         string id = "item-" + index.ToString(CultureInfo.InvariantCulture);
         w.Write("<section class=\"item\" id=\"" + id + "\" style=\"--c:" + ReportCharts.Colour(a.Verdict) + "\">\n<h2><span>" + E(ReportLines.Heading(a)) + "</span>" + Badge(a.Verdict) + "</h2>\n");
@@ -179,12 +188,17 @@ a { color: inherit; }
         }
 
         w.Write("</tbody></table>\n");
-        if (ReportCharts.DriveAndCurrent(a, id + "-current") is { } current)
+        if (!charts)
+        {
+            w.Write("<p class=\"small\">Charts are drawn for every item that is not Clear and for the first " + ChartedClearItems.ToString(CultureInfo.InvariantCulture)
+                + " Clear ones; this item's figures are in the tables above.</p>\n");
+        }
+        else if (ReportCharts.DriveAndCurrent(a, id + "-current") is { } current)
         {
             w.Write("<figure>" + current + "<figcaption>The drive of the source (dashed, right axis) and the current induced around the item (left axis).</figcaption></figure>\n");
         }
 
-        if (ReportCharts.Temperature(a, id + "-temperature") is { } temperature)
+        if (charts && ReportCharts.Temperature(a, id + "-temperature") is { } temperature)
         {
             w.Write("<figure>" + temperature + "<figcaption>The item's temperature while in the field and after, against the limit it is judged by.</figcaption></figure>\n");
         }

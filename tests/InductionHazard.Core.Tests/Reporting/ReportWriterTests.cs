@@ -63,6 +63,18 @@ public sealed class ReportWriterTests
     }
 
     [Fact]
+    public void ALargeInventoryKeepsEverySectionButChartsOnlyWhatNeedsThem()
+    {
+        // 250 Clear items and a Hazard: every item has its section; charts for the Hazard and the first 200 Clear ones.
+        var many = Enumerable.Repeat(Clear, 250).Append(Hot).ToArray();
+        string html = Write(Report(many), HtmlReportWriter.Write);
+        Assert.Equal(251, CountOf(html, "<section class=\"item\""));
+        Assert.Equal(HtmlReportWriter.ChartedClearItems + 1, CountOf(html, "The item's temperature while in the field"));
+        Assert.Contains("id=\"item-250-temperature-", html, StringComparison.Ordinal);
+        Assert.Equal(50, CountOf(html, "Charts are drawn for every item that is not Clear"));
+    }
+
+    [Fact]
     public void MarkdownEscapesMarkupAndKeepsTablesWhole()
     {
         string md = Write(Report(Clear, HostileName, Hot), MarkdownReportWriter.Write);
