@@ -32,6 +32,12 @@ public sealed class HazardPolicy
     /// <summary>The largest thermal dose for skin, CEM43 minutes (van Rhoon et al. 2013).</summary>
     public double ThermalDoseLimitMinutes { get; init; } = 2.0;
 
+    /// <summary>
+    /// The fastest a loose item may be launched by the field, m/s: a site's own value (no standard gives one); NaN,
+    /// the default, when the site sets none and only the force against the weight is judged.
+    /// </summary>
+    public double LaunchSpeedLimit { get; init; } = double.NaN;
+
     /// <summary>How long a person touches an item that is not worn or held (a brief touch), s.</summary>
     public double TouchSeconds { get; init; } = 1.0;
 
@@ -47,6 +53,7 @@ public sealed class HazardPolicy
         TextHash.Exact(DirectVoltageLimit),
         TextHash.Exact(ThermalDoseLimitMinutes),
         TextHash.Exact(TouchSeconds),
+        TextHash.Exact(LaunchSpeedLimit),
         ContactBurn.Source,
         string.Join(";", System.Linq.Enumerable.Select(ContactBurn.Points, p => TextHash.Exact(p.Seconds) + "s=" + TextHash.Exact(p.Celsius)))));
 
@@ -58,6 +65,7 @@ public sealed class HazardPolicy
         new PolicyKey("DirectVoltageLimit", QuantityKind.Voltage, "V", p => p.DirectVoltageLimit, Standards.ExtraLowVoltage, "the largest unidirectional voltage a person may bridge across a gap"),
         new PolicyKey("ThermalDoseLimit", null, "CEM43 min", p => p.ThermalDoseLimitMinutes, Standards.ThermalDoseLimit, "the largest thermal dose the field may add to skin in contact, CEM43 minutes"),
         new PolicyKey("TouchTime", QuantityKind.Time, "s", p => p.TouchSeconds, Standards.BriefTouch, "how long a person touches an item that is not worn or held"),
+        new PolicyKey("LaunchSpeedLimit", QuantityKind.Speed, "m/s", p => p.LaunchSpeedLimit, "not set: no standard gives one; a site may", "the fastest a loose item may be launched by the field (judged only where a site sets it)"),
     };
 
     /// <summary>Every value the policy sets, with its source: the published one, or "site policy" where this policy departs from it.</summary>
@@ -89,6 +97,7 @@ public sealed class HazardPolicy
         new("DirectVoltageLimit", 1.0, 1500.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1.5 kV where low voltage d.c. ends"),
         new("ThermalDoseLimit", 0.01, 1000.0, "CEM43 min", "from a hundredth of a minute at 43 degC to the doses of thermal ablation"),
         new("TouchTime", 0.01, Scenario8Hours, "s", "from a 10 ms flick to the 8 h longest contact of ISO 13732-1"),
+        new("LaunchSpeedLimit", 0.01, 30.0, "m/s", "from a creep to the speed of a thrown item"),
     };
 
     private const double Scenario8Hours = 8 * 3600.0;
@@ -105,7 +114,10 @@ public sealed class HazardPolicy
         foreach (PhysicalRange range in Ranges)
         {
             double value = System.Linq.Enumerable.First(Keys, k => k.Name == range.Field).Value(this);
-            range.Check(value);
+            if (!(range.Field == "LaunchSpeedLimit" && double.IsNaN(value)))
+            {
+                range.Check(value);
+            }
         }
 
         return this;

@@ -12,7 +12,7 @@ namespace InductionHazard.Criteria;
 public sealed record PolicyLimit(string Key, double Value, string Unit, string Source, string Description)
 {
     /// <summary>The value with its unit, for people: "50 V", "2", "2 CEM43 min".</summary>
-    public string ValueText => Unit.Length == 0 ? SiFormat.Plain(Value) : Unit.Contains(" ") ? SiFormat.Plain(Value) + " " + Unit : SiFormat.Format(Value, Unit);
+    public string ValueText => double.IsNaN(Value) ? "not set" : Unit.Length == 0 ? SiFormat.Plain(Value) : Unit.Contains(" ") ? SiFormat.Plain(Value) + " " + Unit : SiFormat.Format(Value, Unit);
 
     /// <summary>"AlternatingVoltageLimit = 50 V (IEC 61140 ...)".</summary>
     public override string ToString() => Key + " = " + ValueText + " (" + Source + ")";

@@ -53,6 +53,7 @@ public static class PolicyReader
             DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),
             ThermalDoseLimitMinutes = Get("ThermalDoseLimit", d.ThermalDoseLimitMinutes),
             TouchSeconds = Get("TouchTime", d.TouchSeconds),
+            LaunchSpeedLimit = Get("LaunchSpeedLimit", d.LaunchSpeedLimit),
         };
         try
         {

@@ -36,8 +36,8 @@ public sealed class MarginScaleTests
 
     private static FieldSource Sine(double tesla) => FieldSource.Uniform("sine", new SineWaveform(tesla, 5000, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
 
-    private static FieldSource Coil(double amperes) =>
-        new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 500), new RampWaveform(0, amperes, 0.05, drive: DriveKind.Current)) });
+    private static FieldSource Coil(double amperes, double seconds = 0.05) =>
+        new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 500), new RampWaveform(0, amperes, seconds, drive: DriveKind.Current)) });
 
     [Fact]
     public void ScalingTheFieldByTheShockMarginLandsTheGapVoltageOnTheLimit()
@@ -104,6 +104,25 @@ public sealed class MarginScaleTests
         double? margin = Assess(ball, Magnet(20), onAxis).AttractionMargin;
         Assert.NotNull(margin);
         Within.Relative(1.0, Assess(ball, Magnet(20 * Math.Sqrt(margin!.Value)), onAxis).AttractionMargin!.Value, 1e-6, "Attraction margin after scaling");
+    }
+
+    [Fact]
+    public void ASiteLaunchSpeedLimitJudgesALooseItemAndNamesTheSite()
+    {
+        // A loose ring pushed for a whole second by a coil's slow ramp: with no site value only its weight counts; a site
+        // limit a third of the speed at which the launch margin would equal the weight margin makes the launch speed
+        // govern, with a third of the weight margin, and names the site as the source.
+        var above = new Vector3D(0, 0, 0.08);
+        InductionResponse r = InductionEngine.Respond(new Scenario(Ring(0, "Free"), Coil(20000, 1.0), new Placement(above, Vector3D.UnitZ)));
+        Assert.NotNull(r.LaunchSpeedMetersPerSecond);
+        MechanismResult byWeight = Assert.Single(HazardAssessor.Assess(r, HazardPolicy.Default).Mechanisms, m => m.Mechanism == HazardMechanism.Force);
+        Assert.Equal("N", byWeight.Unit);
+
+        var site = new HazardPolicy { Name = "bay rules", LaunchSpeedLimit = r.LaunchSpeedMetersPerSecond!.Value * byWeight.Margin / 3 };
+        MechanismResult byLaunch = Assert.Single(HazardAssessor.Assess(r, site).Mechanisms, m => m.Mechanism == HazardMechanism.Force);
+        Assert.Equal("m/s", byLaunch.Unit);
+        Within.Relative(byWeight.Margin / 3, byLaunch.Margin, 1e-9, "launch-speed margin");
+        Assert.Contains(byLaunch.Sources, src => src.StartsWith("site policy 'bay rules': LaunchSpeedLimit", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -45,6 +45,18 @@ public sealed class ForceCheck : IHazardCheck
 
         double weight = response.MassKilograms * PhysicalConstants.StandardGravity;
         double margin = VerdictRules.Margin(weight, force);
+
+        // A site's launch-speed limit, for a loose item, where the launch speed is known: the smaller margin governs.
+        if (response.Item.Contact == ContactKind.Free && !double.IsNaN(policy.LaunchSpeedLimit) && response.LaunchSpeedMetersPerSecond is { } launch
+            && VerdictRules.Margin(policy.LaunchSpeedLimit, launch) < margin)
+        {
+            return MechanismResult.Judged(
+                Mechanism, "launch speed of the loose item", launch, policy.LaunchSpeedLimit, "m/s", VerdictRules.Margin(policy.LaunchSpeedLimit, launch), policy.SafetyFactor,
+                new[] { Standards.ForceAgainstWeight, policy.SourceOf("LaunchSpeedLimit") },
+                "a loose item would leave at " + SiFormat.Format(launch, "m/s") + " against the site's limit " + SiFormat.Format(policy.LaunchSpeedLimit, "m/s")
+                + " (peak force " + SiFormat.Format(force, "N") + " against its weight " + SiFormat.Format(weight, "N") + ")");
+        }
+
         string detail = (braking > response.PeakForceNewtons
                 ? "braking force " + SiFormat.Format(braking, "N") + " against the motion (equal to the weight at " + SiFormat.Format(response.SpeedForWeightMetersPerSecond ?? double.NaN, "m/s") + ")"
                 : "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + Directions.Describe(response.PeakForceDirection))
