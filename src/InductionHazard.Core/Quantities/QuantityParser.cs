@@ -49,6 +49,12 @@ public static class QuantityParser
         throw new QuantityFormatException(error!, Display(input), kind);
     }
 
+    /// <summary>Strings already read, by text and kind (successes only: a refusal is worked out again, with its reason).</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<(string Text, QuantityKind Kind), double> Parsed = new();
+
+    /// <summary>How many read strings are kept before the store is emptied.</summary>
+    private const int ParsedCapacity = 20000;
+
     /// <summary>Parses a value of the given kind; on failure gives the reason instead of throwing.</summary>
     public static bool TryParse(object? input, QuantityKind kind, out double value, out string? error)
     {
@@ -64,7 +70,24 @@ public static class QuantityParser
                 value = Convert.ToDouble(input, Invariant);
                 return CheckFinite(value, Display(input), out error);
             case string text:
-                return TryParseText(text, info, out value, out error);
+                if (Parsed.TryGetValue((text, kind), out value))
+                {
+                    return true;
+                }
+
+                if (!TryParseText(text, info, out value, out error))
+                {
+                    return false;
+                }
+
+                // Inventories repeat their unit strings; the unit library's parse is slow (tens of microseconds).
+                if (Parsed.Count >= ParsedCapacity)
+                {
+                    Parsed.Clear();
+                }
+
+                Parsed[(text, kind)] = value;
+                return true;
             default:
                 error = "got a " + input.GetType().Name + " ('" + Display(input) + "'); expected " + Expectation(info);
                 return false;

@@ -62,23 +62,39 @@ public static class TemperatureHistory
     /// <summary>The highest temperature held for each of several durations, °C (one copy of the history, one sweep each).</summary>
     public static double[] SustainedFor(IReadOnlyList<HeatingSample> history, IReadOnlyList<double> durations)
     {
-        int n = history.Count;
-        var times = new double[n];
-        var temps = new double[n];
-        for (int k = 0; k < n; k++)
-        {
-            times[k] = history[k].TimeSeconds;
-            temps[k] = history[k].TemperatureCelsius;
-        }
-
+        var levels = new SustainedLevels(history);
         var result = new double[durations.Count];
-        var queue = new int[n];
         for (int k = 0; k < result.Length; k++)
         {
-            result[k] = Sustained(times, temps, durations[k], queue);
+            result[k] = levels.For(durations[k]);
         }
 
         return result;
+    }
+
+    /// <summary>A history made ready to be asked <see cref="SustainedFor(IReadOnlyList{HeatingSample}, double)"/> for one duration at a time, as a search needs.</summary>
+    public sealed class SustainedLevels
+    {
+        private readonly double[] _times;
+        private readonly double[] _temps;
+        private readonly int[] _queue;
+
+        /// <summary>Copies the history once.</summary>
+        public SustainedLevels(IReadOnlyList<HeatingSample> history)
+        {
+            int n = history.Count;
+            _times = new double[n];
+            _temps = new double[n];
+            _queue = new int[n];
+            for (int k = 0; k < n; k++)
+            {
+                _times[k] = history[k].TimeSeconds;
+                _temps[k] = history[k].TemperatureCelsius;
+            }
+        }
+
+        /// <summary>The highest temperature held for a duration, °C; NaN when the history is shorter.</summary>
+        public double For(double seconds) => Sustained(_times, _temps, seconds, _queue);
     }
 
     private static double Sustained(double[] times, double[] temps, double seconds, int[] queue)

@@ -41,6 +41,10 @@ public static class ThermalDose
     /// </summary>
     public const double FittedUpToCelsius = 57.0;
 
+    private static readonly double LogRateAbove = Math.Log(RateAbove);
+
+    private static readonly double LogRateBelow = Math.Log(RateBelow);
+
     /// <summary>
     /// The dose the heating adds over its baseline: CEM43 of the history less CEM43 of the item held at its
     /// starting temperature for the same time, minutes.
@@ -170,8 +174,9 @@ public static class ThermalDose
     private static double Piece(double t0, double c0, double t1, double c1, double r)
     {
         double minutes = (t1 - t0) / 60.0;
-        double k = -Math.Log(r) * (c1 - c0);  // exponent change over the piece
-        double start = Math.Pow(r, BreakpointCelsius - c0);
+        double logRate = r == RateAbove ? LogRateAbove : r == RateBelow ? LogRateBelow : Math.Log(r);
+        double k = -logRate * (c1 - c0);  // exponent change over the piece
+        double start = Math.Exp(logRate * (BreakpointCelsius - c0));
         double factor = Math.Abs(k) < 1e-12 ? 1.0 : Quantities.Exponential.Minus1(k) / k;
         return start * minutes * factor;
     }

@@ -149,7 +149,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             int row = _row;
             // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
             PSObject input = given ?? new PSObject(string.Empty);
-            string label = given is null ? ItemRecordReader.Label(row, null) : ItemInput.Label(input, row);
+            IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
+            string label = given is null ? ItemRecordReader.Label(row, null)
+                : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, ItemRecordReader.NameOf(record));
             ShowProgress(label);
             Task<(object Result, string Verbose)> work;
             try
@@ -159,7 +161,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                     throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
                 }
 
-                Scenario scenario = ScenarioOf(input, label, row);
+                Scenario scenario = ScenarioOf(input, record, label, row);
                 CancellationToken token = _cancellation.Token;
                 work = ThrottleLimit > 1
                     ? Task.Run(() => Solve(scenario, row, label, token), token)
@@ -194,11 +196,13 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         return (Compute(response, row), label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
     }
 
-    private Scenario ScenarioOf(PSObject input, string label, int row)
+    private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
     {
-        ConductiveItem item = ItemInput.ToItem(input, _materials, row, _units, AcceptUnusualSize.IsPresent);
-        (Vector3D? rowPosition, Vector3D? rowNormal) = ItemInput.PlacementOf(input, label, _units);
-        Station? station = ParameterSetName == SiteSet ? ItemInput.StationOf(input, label, Site, Station) : null;
+        ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, AcceptUnusualSize.IsPresent);
+        (Vector3D? rowPosition, Vector3D? rowNormal) = record is null ? (null, null) : PlacementRecordReader.Read(record, label, _units);
+        Station? station = ParameterSetName != SiteSet ? null
+            : Station is not null ? Site.Find(Station)
+            : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal,
@@ -206,7 +210,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds)
         {
             StationName = station?.Name,
-            Inventory = ItemInput.InventoryOf(input),
+            Inventory = record is null ? InventoryFields.Empty : InventoryFields.Of(record),
         };
     }
 

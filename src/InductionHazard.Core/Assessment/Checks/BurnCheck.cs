@@ -68,20 +68,25 @@ public sealed class BurnCheck : IHazardCheck
         double[] all = Durations(curve, span).ToArray();
         double[] durations = all.Where(d => curve.CelsiusFor(d) > start).ToArray();
         double? placeSeconds = all.Length > durations.Length ? all.Where(d => curve.CelsiusFor(d) <= start).Min() : null;
-        double[] sustained = TemperatureHistory.SustainedFor(history, durations);
-        for (int k = 0; k < durations.Length; k++)
+        // Longest contact first: the thresholds rise for shorter contacts while what is held can at most reach the peak,
+        // so a contact whose margin even at the peak exceeds the worst found cannot be worse, and is not swept (exact:
+        // the same margin as sweeping all, and on a tie or a NaN the shortest such contact is kept, as before).
+        var levels = new TemperatureHistory.SustainedLevels(history);
+        double peakHeld = TemperatureHistory.Peak(history);
+        for (int k = durations.Length - 1; k >= 0; k--)
         {
             double d = durations[k];
-            double held = sustained[k];
             double threshold = curve.CelsiusFor(d);
+            if (!double.IsNaN(worst.margin) && RiseMargin(threshold, peakHeld, start) > worst.margin)
+            {
+                continue;
+            }
+
+            double held = levels.For(d);
             double m = RiseMargin(threshold, held, start);
-            if (double.IsNaN(m) || m < worst.margin)
+            if (double.IsNaN(m) || (!double.IsNaN(worst.margin) && m <= worst.margin))
             {
                 worst = (m, d, held, threshold);
-                if (double.IsNaN(m))
-                {
-                    break;
-                }
             }
         }
 
