@@ -90,6 +90,40 @@ public class PhysicsPropertyTests
         }, seed: "0N0XIzNsQ0O4", iter: Iterations);
     }
 
+    [Validates("energy dissipated against the work the emf does on the loop, integral e i dt over the recorded series, for random rings and ramps (property)", "energy conservation in an RL circuit: the work is the heat plus the magnetic energy, which is zero once the current has died away", "2 %")]
+    [Fact]
+    public void TheEnergyDissipatedNeverExceedsTheSourcesWork()
+    {
+        // W = integral e i dt = integral R i^2 dt + L i^2 / 2 at the end; the item is carried out of the field and its
+        // current dies away, so the heat may not exceed the work. The work is taken from the recorded series by the
+        // trapezoid rule: a check independent of the solver's own energy sum.
+        int compared = 0;
+        Rings.Sample(c =>
+        {
+            InductionResponse r = Respond(Ring(c.Diameter, c.Wire, c.Material), Ramp(c.Tesla, c.Seconds));
+            IReadOnlyList<InductionHazard.Induction.CircuitSample> series = r.CircuitSeries;
+            if (!r.IsValid || series.Count < 3)
+            {
+                return;
+            }
+
+            double work = 0;
+            for (int k = 1; k < series.Count; k++)
+            {
+                double dt = series[k].TimeSeconds - series[k - 1].TimeSeconds;
+                work += 0.5 * dt * ((series[k].EmfVolts * series[k].CurrentAmperes) + (series[k - 1].EmfVolts * series[k - 1].CurrentAmperes));
+            }
+
+            Assert.True(work >= 0, "negative work " + work);
+            Assert.True(r.EnergyDissipatedJoules <= (work * 1.02) + 1e-15, "energy " + r.EnergyDissipatedJoules + " J above the work " + work + " J");
+
+            // And no energy goes missing: once the current has died away the heat is the work, to the trapezoid's error.
+            Assert.True(r.EnergyDissipatedJoules >= work * 0.98, "energy " + r.EnergyDissipatedJoules + " J below the work " + work + " J");
+            compared++;
+        }, seed: "0N0XIzNsQ0O9", iter: Iterations, threads: 1);
+        Assert.True(compared > 10, compared + " rings compared");
+    }
+
     [Validates("a line's and a bar's field fall with distance (property)", "Ampere's law", "strict")]
     [Fact]
     public void AConductorsFieldFallsWithDistance()
