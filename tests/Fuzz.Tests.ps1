@@ -128,6 +128,42 @@ Describe 'Hostile input (fixed-seed corpus)' {
         ($objects + $errors.Count) | Should -Be $setCount
     }
 
+    It 'reads every one of 200 hostile policy files as a valid policy, or refuses it naming the key or the code' {
+        $random = [System.Random]::new($seed + 3)
+        $entries = @(
+            "SafetyFactor = 3", "SafetyFactor = 0.5", "SafetyFactor = 'NaN'", "SafetyFactor = 1e300",
+            "AlternatingVoltageLimit = '25 V'", "AlternatingVoltageLimit = '25 A'", "AlternatingVoltageLimit = -1", "AlternatingVoltageLimit = '1,5 V'",
+            "DirectVoltageLimit = '60 V'", "DirectVoltageLimit = '1e308 V'", "ThermalDoseLimit = 1", "ThermalDoseLimit = 'abc'",
+            "TouchTime = '2 s'", "TouchTime = '2 T'", "LaunchSpeedLimit = '2 m/s'", "LaunchSpeedLimit = '200 m/s'",
+            "Name = 'Bay rules'", "Colour = 'red'", "SafetyFactor = (Get-Random)", "TouchTime = `$env:HOME"
+        )
+        $read = 0
+        $refused = [System.Collections.Generic.List[object]]::new()
+        foreach ($k in 1..200) {
+            $chosen = foreach ($n in 1..($random.Next(4) + 1)) { Pick $entries }
+            $names = @($chosen | ForEach-Object { ($_ -split '=')[0].Trim() })
+            if (($names | Select-Object -Unique).Count -ne $names.Count) { $chosen = $chosen | Select-Object -First 1 }
+            $body = if ($random.Next(15) -eq 0) { "Remove-Item ./x" } else { "@{ $($chosen -join '; ') }" }
+            $file = Join-Path $TestDrive "policy-$k.psd1"
+            Set-Content $file -Value $body
+            try {
+                $policy = Get-HazardPolicy $file
+                $policy.SafetyFactor | Should -BeGreaterOrEqual 1
+                foreach ($limit in $policy.Limits | Where-Object { -not [double]::IsNaN($_.Value) }) { [double]::IsFinite($limit.Value) -and $limit.Value -gt 0 | Should -BeTrue }
+                $read++
+            }
+            catch {
+                $_.FullyQualifiedErrorId | Should -BeLike 'InvalidPolicyFile,*' -Because $_.Exception.Message
+                $_.Exception.Message | Should -Match '(SafetyFactor|AlternatingVoltageLimit|DirectVoltageLimit|ThermalDoseLimit|TouchTime|LaunchSpeedLimit|Colour|holds code|one hashtable|does not parse)' -Because $_.Exception.Message
+                $refused.Add($_)
+            }
+        }
+
+        Show-Counts 'policy files' 200 $read $refused.ToArray()
+        $read | Should -BeGreaterThan 10
+        $refused.Count | Should -BeGreaterThan 10
+    }
+
     It 'reads every one of 200 hostile site files or refuses it as an invalid site file' {
         # Its own stream, so that the other corpora's draws do not change this one.
         $random = [System.Random]::new($seed + 2)
