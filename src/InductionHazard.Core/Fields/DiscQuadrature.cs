@@ -1,4 +1,6 @@
 using System;
+using System.Collections.Generic;
+using System.Linq;
 using InductionHazard.Errors;
 using InductionHazard.Quantities;
 
@@ -46,20 +48,69 @@ public static class DiscQuadrature
             "the flux through the loop (radius " + SiFormat.Format(radius, "m") + ") does not converge: the loop is too close to a conductor of the source for the field over it to be integrated");
     }
 
-    /// <summary>The flux at one quadrature order: order Gauss-Legendre radii times 2 x order angles.</summary>
-    public static double Flux(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double radius, int order) =>
-        Integrate(field, centre, normal, radius, order).Flux;
+    /// <summary>
+    /// The fluxes through coaxial discs of one plane (one centre and normal, several radii), each converged as
+    /// <see cref="Flux(Func{Vector3D, Vector3D}, Vector3D, Vector3D, double)"/> converges one: the innermost disc, then
+    /// each annulus between successive radii, summed outward. The field is integrated over the plane once instead of
+    /// once per disc, which is what a body's filaments (dozens of radii per plane) need.
+    /// </summary>
+    /// <param name="field">The field.</param>
+    /// <param name="centre">The discs' common centre.</param>
+    /// <param name="normal">Their common normal.</param>
+    /// <param name="radii">The radii, m, in any order (0 gives 0).</param>
+    /// <returns>The flux through each disc, in the order of <paramref name="radii"/>.</returns>
+    /// <exception cref="FieldEvaluationException">An annulus does not converge (a conductor of the source is too near), or the field cannot be evaluated on it.</exception>
+    public static double[] NestedFluxes(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, IReadOnlyList<double> radii)
+    {
+        double[] sorted = radii.Where(r => r > 0).Distinct().OrderBy(r => r).ToArray();
+        var cumulative = new Dictionary<double, double> { [0.0] = 0.0 };
+        double inner = 0, total = 0;
+        foreach (double outer in sorted)
+        {
+            total += Annulus(field, centre, normal, inner, outer);
+            cumulative[outer] = total;
+            inner = outer;
+        }
 
-    /// <summary>The flux and the integral of |b| over the disc at one order.</summary>
-    private static (double Flux, double Magnitude) Integrate(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double radius, int order)
+        var fluxes = new double[radii.Count];
+        for (int k = 0; k < radii.Count; k++)
+        {
+            fluxes[k] = radii[k] > 0 ? cumulative[radii[k]] : 0.0;
+        }
+
+        return fluxes;
+    }
+
+    /// <summary>The flux through an annulus, converged in the order as a disc's is.</summary>
+    private static double Annulus(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double inner, double outer)
+    {
+        (double previous, _) = IntegrateAnnulus(field, centre, normal, inner, outer, FirstOrder);
+        for (int order = 2 * FirstOrder; order <= LastOrder; order *= 2)
+        {
+            (double next, double magnitude) = IntegrateAnnulus(field, centre, normal, inner, outer, order);
+            if (Math.Abs(next - previous) <= Tolerance * magnitude || magnitude == 0)
+            {
+                return next;
+            }
+
+            previous = next;
+        }
+
+        throw new FieldEvaluationException(
+            "the flux through the loop (radius " + SiFormat.Format(outer, "m") + ") does not converge: the loop is too close to a conductor of the source for the field over it to be integrated");
+    }
+
+    /// <summary>The flux and the integral of |b| over the annulus inner &lt; r &lt; outer at one order (a disc when inner is 0).</summary>
+    private static (double Flux, double Magnitude) IntegrateAnnulus(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double inner, double outer, int order)
     {
         (Vector3D u, Vector3D v) = Basis(normal);
         GaussLegendre.Rule rule = GaussLegendre.Of(order);
         int angles = 2 * order;
+        double half = 0.5 * (outer - inner), mid = 0.5 * (outer + inner);
         double sum = 0, magnitude = 0;
         for (int i = 0; i < rule.Nodes.Length; i++)
         {
-            double r = 0.5 * radius * (rule.Nodes[i] + 1);
+            double r = mid + (half * rule.Nodes[i]);
             double ring = 0, ringMagnitude = 0;
             for (int j = 0; j < angles; j++)
             {
@@ -74,8 +125,15 @@ public static class DiscQuadrature
             magnitude += rule.Weights[i] * r * ringMagnitude;
         }
 
-        // dA = r dr dtheta: dr = radius/2 dx on [-1, 1], dtheta = 2 pi / angles.
-        double area = 0.5 * radius * 2 * Math.PI / angles;
+        double area = half * 2 * Math.PI / angles;
         return (sum * area, magnitude * area);
     }
+
+    /// <summary>The flux at one quadrature order: order Gauss-Legendre radii times 2 x order angles.</summary>
+    public static double Flux(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double radius, int order) =>
+        Integrate(field, centre, normal, radius, order).Flux;
+
+    /// <summary>The flux and the integral of |b| over the disc at one order.</summary>
+    private static (double Flux, double Magnitude) Integrate(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double radius, int order) =>
+        IntegrateAnnulus(field, centre, normal, 0, radius, order);
 }

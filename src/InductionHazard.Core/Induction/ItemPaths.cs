@@ -287,12 +287,54 @@ public sealed class ItemPaths
         for (int j = 0; j < terms; j++)
         {
             IFieldGeometry geometry = source.Terms[j].Geometry;
+            if (geometry is UniformField)
+            {
+                for (int i = 0; i < cells.Count; i++)
+                {
+                    double sum = 0;
+                    foreach ((double r, double z, double weight) in cells[i].GaussSamples())
+                    {
+                        sum += weight * geometry.FluxThroughDisc(centre + (z * normal), normal, Math.Max(r, 0));
+                    }
+
+                    coupling[i, j] = sum;
+                }
+
+                continue;
+            }
+
+            // A field integrated by quadrature: the discs of one plane share it, so each plane is integrated once,
+            // annulus by annulus, for all the radii its samples need (DiscQuadrature.NestedFluxes).
+            var planes = new Dictionary<double, List<double>>();
+            foreach (Filament cell in cells)
+            {
+                foreach ((double r, double z, _) in cell.GaussSamples())
+                {
+                    if (!planes.TryGetValue(z, out List<double>? radii))
+                    {
+                        planes[z] = radii = new List<double>();
+                    }
+
+                    radii.Add(Math.Max(r, 0));
+                }
+            }
+
+            var flux = new Dictionary<(double Z, double R), double>();
+            foreach (KeyValuePair<double, List<double>> plane in planes)
+            {
+                double[] values = DiscQuadrature.NestedFluxes(geometry.FieldPerUnitDrive, centre + (plane.Key * normal), normal, plane.Value);
+                for (int k = 0; k < values.Length; k++)
+                {
+                    flux[(plane.Key, plane.Value[k])] = values[k];
+                }
+            }
+
             for (int i = 0; i < cells.Count; i++)
             {
                 double sum = 0;
                 foreach ((double r, double z, double weight) in cells[i].GaussSamples())
                 {
-                    sum += weight * geometry.FluxThroughDisc(centre + (z * normal), normal, Math.Max(r, 0));
+                    sum += weight * flux[(z, Math.Max(r, 0))];
                 }
 
                 coupling[i, j] = sum;
