@@ -158,6 +158,5 @@ public static class SiteReader
         _ => new[] { value },
     };
 
-    private static IEnumerable<KeyValuePair<string, object?>> Pairs(IDictionary table) =>
-        table.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, table[k]));
+    private static IEnumerable<KeyValuePair<string, object?>> Pairs(IDictionary table) => RecordFields.FromTable(table);
 }

@@ -65,7 +65,7 @@ public sealed class HazardPolicy
         new PolicyKey("DirectVoltageLimit", QuantityKind.Voltage, "V", p => p.DirectVoltageLimit, Standards.ExtraLowVoltage, "the largest unidirectional voltage a person may bridge across a gap"),
         new PolicyKey("ThermalDoseLimit", null, "CEM43 min", p => p.ThermalDoseLimitMinutes, Standards.ThermalDoseLimit, "the largest thermal dose the field may add to skin in contact, CEM43 minutes"),
         new PolicyKey("TouchTime", QuantityKind.Time, "s", p => p.TouchSeconds, Standards.BriefTouch, "how long a person touches an item that is not worn or held"),
-        new PolicyKey("LaunchSpeedLimit", QuantityKind.Speed, "m/s", p => p.LaunchSpeedLimit, "not set: no standard gives one; a site may", "the fastest a loose item may be launched by the field (judged only where a site sets it)"),
+        new PolicyKey("LaunchSpeedLimit", QuantityKind.Speed, "m/s", p => p.LaunchSpeedLimit, "not set: no standard gives one; a site may", "the fastest a loose item may be launched by the field (judged only where a site sets it)", Optional: true),
     };
 
     /// <summary>Every value the policy sets, with its source: the published one, or "site policy" where this policy departs from it.</summary>
@@ -113,8 +113,9 @@ public sealed class HazardPolicy
 
         foreach (PhysicalRange range in Ranges)
         {
-            double value = System.Linq.Enumerable.First(Keys, k => k.Name == range.Field).Value(this);
-            if (!(range.Field == "LaunchSpeedLimit" && double.IsNaN(value)))
+            PolicyKey key = System.Linq.Enumerable.First(Keys, k => k.Name == range.Field);
+            double value = key.Value(this);
+            if (!(key.Optional && double.IsNaN(value)))
             {
                 range.Check(value);
             }

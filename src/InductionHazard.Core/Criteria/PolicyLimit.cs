@@ -25,4 +25,5 @@ public sealed record PolicyLimit(string Key, double Value, string Unit, string S
 /// <param name="Value">Reads the value from a policy.</param>
 /// <param name="Published">Where the default comes from.</param>
 /// <param name="Description">What it limits.</param>
-public sealed record PolicyKey(string Name, QuantityKind? Kind, string Unit, Func<HazardPolicy, double> Value, string Published, string Description);
+/// <param name="Optional">True for a value no standard gives, NaN (not applied) unless a site sets it.</param>
+public sealed record PolicyKey(string Name, QuantityKind? Kind, string Unit, Func<HazardPolicy, double> Value, string Published, string Description, bool Optional = false);

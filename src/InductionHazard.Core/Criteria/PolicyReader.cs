@@ -1,7 +1,6 @@
 using System;
 using System.Collections;
 using System.Collections.Generic;
-using System.Globalization;
 using System.Linq;
 using InductionHazard.Errors;
 using InductionHazard.Quantities;
@@ -24,8 +23,7 @@ public static class PolicyReader
     /// <exception cref="DataFileException">A key is unknown, or a value is malformed or out of range; the message names the key.</exception>
     public static HazardPolicy Read(IDictionary data, string origin)
     {
-        var pairs = data.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, data[k]));
-        var fields = new RecordFields(pairs);
+        var fields = new RecordFields(RecordFields.FromTable(data));
         string name = fields.Text("Name", required: false, "Policy", "PolicyName") ?? System.IO.Path.GetFileNameWithoutExtension(origin);
         var values = new Dictionary<string, double>(StringComparer.Ordinal);
         foreach (PolicyKey key in HazardPolicy.Keys)

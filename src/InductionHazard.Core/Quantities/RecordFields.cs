@@ -145,6 +145,10 @@ public sealed class RecordFields
         _ => QuantityKindInfo.Of(kind).CanonicalSymbol,
     };
 
+    /// <summary>The named values of a table (a data file's hashtable), its keys as text.</summary>
+    public static IEnumerable<KeyValuePair<string, object?>> FromTable(System.Collections.IDictionary table) =>
+        table.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, table[k]));
+
     /// <summary>The key a column name matches fields by: normalized, without a unit ("Diameter (mm)" gives "diameter").</summary>
     public static string FieldKey(string column) => Normalize(SplitUnit(column).Name);
 

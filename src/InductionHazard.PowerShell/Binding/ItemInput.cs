@@ -19,7 +19,7 @@ internal static class ItemInput
     /// <summary>The item for one input.</summary>
     /// <exception cref="Errors.RecordException">The row cannot make an item.</exception>
     public static ConductiveItem ToItem(PSObject input, MaterialLibrary materials, int row, IReadOnlyDictionary<string, string>? units = null, bool acceptUnusualSize = false) =>
-        input.BaseObject is ConductiveItem item ? item : ItemRecordReader.Read(Records.From(input), materials, row, units, acceptUnusualSize);
+        ToItem(input, RecordOf(input), materials, row, units, acceptUnusualSize);
 
     /// <summary>A -Unit table (@{ Diameter = 'mm' }) as field names and unit strings.</summary>
     public static IReadOnlyDictionary<string, string>? UnitsOf(System.Collections.IDictionary? table)
