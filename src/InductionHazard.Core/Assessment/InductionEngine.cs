@@ -140,7 +140,7 @@ public static class InductionEngine
         {
             Model = single
                 ? "thin ring (Grover 1946) in periodic steady state: phasor current with skin effect (Kelvin functions); lumped heating with rho(T) and cooling, cycle-averaged"
-                : c.Paths.Description + " (Maxwell mutual inductances), in periodic steady state by phasors over the modes of the (L, R) pencil" + CrossWords(c) + "; lumped heating with rho(T) and cooling, cycle-averaged",
+                : c.Paths.Description + " (" + c.Paths.Paths!.InductanceMethod + "), in periodic steady state by phasors over the modes of the (L, R) pencil" + CrossWords(c) + "; lumped heating with rho(T) and cooling, cycle-averaged",
             AcResistanceOhms = single ? z.Real : null,
             InductanceHenries = single ? z.Imaginary / omega : c.Ldc,
             TimeConstantSeconds = single ? z.Imaginary / omega / z.Real : c.Ldc / c.Rdc,
@@ -268,7 +268,7 @@ public static class InductionEngine
         {
             Model = single
                 ? "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling"
-                : c.Paths.Description + " (Maxwell mutual inductances), exact exponential steps over the modes of the (L, R) pencil with R(T)" + CrossWords(c) + "; lumped heating with rho(T) and cooling",
+                : c.Paths.Description + " (" + c.Paths.Paths!.InductanceMethod + "), exact exponential steps over the modes of the (L, R) pencil with R(T)" + CrossWords(c) + "; lumped heating with rho(T) and cooling",
             Regime = Regime(tau / rampTime, "L/R / ramp time"),
             PeakCurrentAmperes = Math.Abs(run.PeakCurrentAmperes),
             NaiveCurrentAmperes = peakEmf / c.Rdc,

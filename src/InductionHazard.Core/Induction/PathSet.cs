@@ -72,7 +72,7 @@ public sealed class PathSet
             diagonal[i] = r[i, i];
         }
 
-        return new PathSet(l, diagonal, null, description, mesh, r);
+        return new PathSet(l, diagonal, null, description, mesh, r) { InductanceMethod = "partial inductances of the mesh's branches (Grover's parallel filaments)" };
     }
 
     /// <summary>Adds value s_p s_q to the entries of the cells the two branches belong to.</summary>
@@ -123,6 +123,9 @@ public sealed class PathSet
     /// <summary>How the set was built, for the model notes.</summary>
     public string Description { get; }
 
+    /// <summary>How its inductances were found, for the model notes.</summary>
+    public string InductanceMethod { get; private init; } = "Grover's thin-loop formula";
+
     /// <summary>One path: a thin loop with inductance L and resistance rho l / S.</summary>
     public static PathSet OnePath(double inductanceHenries, double lengthOverArea, string description) =>
         new(new[,] { { inductanceHenries } }, new[] { lengthOverArea }, null, description);
@@ -164,7 +167,7 @@ public sealed class PathSet
             }
         }
 
-        return new PathSet(l, g, null, description) { SharesOutline = true };
+        return new PathSet(l, g, null, description) { SharesOutline = true, InductanceMethod = "Grover's GMD method" };
     }
 
     /// <summary>
@@ -215,7 +218,7 @@ public sealed class PathSet
             }
         }
 
-        return new PathSet(l, g, cells, description);
+        return new PathSet(l, g, cells, description) { InductanceMethod = "Maxwell mutual inductances" };
     }
 
     /// <summary>
