@@ -206,7 +206,13 @@ public static class InductionEngine
         {
             double[] shown = times.Concat(new[] { outside, end }).Distinct().OrderBy(t => t).ToArray();
             int stride = Math.Max(1, shown.Length / 4000);
-            return Open(drive, c, shown.Where((_, i) => i % stride == 0).Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end);
+            double Flux(double t) => t < leave ? Linked(c.Coupling, t) : t < outside ? fluxAtLeave * (1 - ((t - leave) / leaving)) : leaving > 0 ? 0 : fluxAtLeave;
+            double step = terms.Min(t => t.Waveform.MaxStepSeconds);
+            bool thinned = !double.IsInfinity(step) && (times[times.Length - 1] - times[0]) / step > DriveSampling.MaxTimes;
+            return Open(drive, c, shown.Where((_, i) => i % stride == 0).Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end) with
+            {
+                GapImpulse = thinned ? null : EmfImpulse.Measure(shown, Emf, Flux, peakEmf),
+            };
         }
 
         if (c.PathProblem(drive) is { } unsolved)

@@ -75,6 +75,12 @@ public sealed record InductionResponse
     /// <summary>The largest voltage across the gap of a split ring (the open-circuit emf), V; null for a closed loop.</summary>
     public double? GapVoltageVolts { get; init; }
 
+    /// <summary>
+    /// The gap emf of a split ring in a transient drive taken as one impulse (its integrals and width); null for an
+    /// alternating drive, a closed loop, or a drive too long to sample finely.
+    /// </summary>
+    public EmfImpulse? GapImpulse { get; init; }
+
     /// <summary>The loop's d.c. resistance at the starting temperature, ohm.</summary>
     public double ResistanceOhms { get; init; }
 

@@ -26,6 +26,15 @@ public sealed class HazardPolicy
     /// <summary>The largest unidirectional voltage a person may bridge, V (IEC 61140 ELV, ripple-free d.c.).</summary>
     public double DirectVoltageLimit { get; init; } = 120.0;
 
+    /// <summary>
+    /// The largest charge a short unidirectional pulse across a gap may drive through a person, C (IEC 60335-1
+    /// clause 8.1.4: 45 µC). A pulse within it passes even above the d.c. voltage limit.
+    /// </summary>
+    public double ImpulseChargeLimit { get; init; } = 45e-6;
+
+    /// <summary>The body resistance through which a pulse's charge and energy are reckoned, ohm (IEC TS 60479-1: 500 ohm).</summary>
+    public double BodyResistanceOhms { get; init; } = 500.0;
+
     /// <summary>The contact burn threshold against contact time (ISO 13732-1).</summary>
     public ContactBurnThreshold ContactBurn { get; init; } = ContactBurnThreshold.UncoatedMetal;
 
@@ -51,6 +60,8 @@ public sealed class HazardPolicy
         TextHash.Exact(SafetyFactor),
         TextHash.Exact(AlternatingVoltageLimitRms),
         TextHash.Exact(DirectVoltageLimit),
+        TextHash.Exact(ImpulseChargeLimit),
+        TextHash.Exact(BodyResistanceOhms),
         TextHash.Exact(ThermalDoseLimitMinutes),
         TextHash.Exact(TouchSeconds),
         TextHash.Exact(LaunchSpeedLimit),
@@ -63,6 +74,8 @@ public sealed class HazardPolicy
         new PolicyKey("SafetyFactor", null, string.Empty, p => p.SafetyFactor, Standards.SafetyFactor, "the factor between Clear and Caution: a margin at or above it is Clear"),
         new PolicyKey("AlternatingVoltageLimit", QuantityKind.Voltage, "V", p => p.AlternatingVoltageLimitRms, Standards.ExtraLowVoltage, "the largest alternating voltage (rms) a person may bridge across a gap"),
         new PolicyKey("DirectVoltageLimit", QuantityKind.Voltage, "V", p => p.DirectVoltageLimit, Standards.ExtraLowVoltage, "the largest unidirectional voltage a person may bridge across a gap"),
+        new PolicyKey("ImpulseChargeLimit", QuantityKind.ElectricCharge, "C", p => p.ImpulseChargeLimit, Standards.ImpulseCharge, "the largest charge a pulse of at most 10 ms across a gap may drive through a person"),
+        new PolicyKey("BodyResistance", QuantityKind.Resistance, "Ω", p => p.BodyResistanceOhms, Standards.BodyResistance, "the body resistance through which a pulse's charge and energy are reckoned"),
         new PolicyKey("ThermalDoseLimit", null, "CEM43 min", p => p.ThermalDoseLimitMinutes, Standards.ThermalDoseLimit, "the largest thermal dose the field may add to skin in contact, CEM43 minutes"),
         new PolicyKey("TouchTime", QuantityKind.Time, "s", p => p.TouchSeconds, Standards.BriefTouch, "how long a person touches an item that is not worn or held"),
         new PolicyKey("LaunchSpeedLimit", QuantityKind.Speed, "m/s", p => p.LaunchSpeedLimit, "not set: no standard gives one; a site may", "the fastest a loose item may be launched by the field (judged only where a site sets it)", Optional: true),
@@ -95,6 +108,8 @@ public sealed class HazardPolicy
         new("SafetyFactor", 1.0, 100.0, string.Empty, "a factor below 1 would call a breach Clear; above 100 it is no longer a margin but a ban"),
         new("AlternatingVoltageLimit", 1.0, 1000.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1 kV where low voltage ends"),
         new("DirectVoltageLimit", 1.0, 1500.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1.5 kV where low voltage d.c. ends"),
+        new("ImpulseChargeLimit", 1e-7, 1e-3, "C", "from 0.1 µC, below perception, to 1 mC, the charge that can fibrillate the heart in a 1 µs pulse"),
+        new("BodyResistance", 100.0, 10_000.0, "Ω", "from the 100 ohm of a body's interior alone to the 10 kohm of dry skin at a low voltage"),
         new("ThermalDoseLimit", 0.01, 1000.0, "CEM43 min", "from a hundredth of a minute at 43 degC to the doses of thermal ablation"),
         new("TouchTime", 0.01, Scenario8Hours, "s", "from a 10 ms flick to the 8 h longest contact of ISO 13732-1"),
         new("LaunchSpeedLimit", 0.01, 30.0, "m/s", "from a creep to the speed of a thrown item"),

@@ -49,6 +49,8 @@ public static class PolicyReader
             SafetyFactor = Get("SafetyFactor", d.SafetyFactor),
             AlternatingVoltageLimitRms = Get("AlternatingVoltageLimit", d.AlternatingVoltageLimitRms),
             DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),
+            ImpulseChargeLimit = Get("ImpulseChargeLimit", d.ImpulseChargeLimit),
+            BodyResistanceOhms = Get("BodyResistance", d.BodyResistanceOhms),
             ThermalDoseLimitMinutes = Get("ThermalDoseLimit", d.ThermalDoseLimitMinutes),
             TouchSeconds = Get("TouchTime", d.TouchSeconds),
             LaunchSpeedLimit = Get("LaunchSpeedLimit", d.LaunchSpeedLimit),

@@ -6,6 +6,12 @@ public static class Standards
     /// <summary>Extra-low voltage limits.</summary>
     public const string ExtraLowVoltage = "IEC 61140 / IEC 60364-4-41 section 414 (extra-low voltage: 50 V a.c. rms, 120 V ripple-free d.c.)";
 
+    /// <summary>The charge a person may take from a short pulse across a gap.</summary>
+    public const string ImpulseCharge = "IEC 60335-1 clause 8.1.4 (a discharge a person may take from an accessible part: up to 15 kV peak, at most 45 µC and no more than 0.1 µF charged to the peak; above 15 kV, at most 350 mJ)";
+
+    /// <summary>The body resistance through which a pulse's charge is reckoned.</summary>
+    public const string BodyResistance = "IEC TS 60479-1 (the body's initial resistance, hand to hand, about 500 Ω, below the 5 % total impedance at any touch voltage; from memory)";
+
     /// <summary>Contact burn thresholds of hot surfaces.</summary>
     public const string ContactBurn = "ISO 13732-1:2006 (burn thresholds for skin contact with hot surfaces, uncoated metal)";
 

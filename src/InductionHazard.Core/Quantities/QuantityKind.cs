@@ -68,4 +68,7 @@ public enum QuantityKind
 
     /// <summary>A speed; canonical unit metre per second.</summary>
     Speed,
+
+    /// <summary>An electric charge; canonical unit coulomb.</summary>
+    ElectricCharge,
 }

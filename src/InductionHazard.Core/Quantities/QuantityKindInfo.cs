@@ -31,6 +31,7 @@ public sealed class QuantityKindInfo
         [QuantityKind.Capacitance] = new(QuantityKind.Capacitance, "a capacitance", "F", "'2 mF'", CapacitanceUnit.Farad),
         [QuantityKind.Inductance] = new(QuantityKind.Inductance, "an inductance", "H", "'40 uH'", ElectricInductanceUnit.Henry),
         [QuantityKind.Speed] = new(QuantityKind.Speed, "a speed", "m/s", "'1.5 m/s'", SpeedUnit.MeterPerSecond),
+        [QuantityKind.ElectricCharge] = new(QuantityKind.ElectricCharge, "an electric charge", "C", "'45 uC'", ElectricChargeUnit.Coulomb),
     };
 
     private QuantityKindInfo(QuantityKind kind, string description, string canonicalSymbol, string example, Enum canonicalUnit)

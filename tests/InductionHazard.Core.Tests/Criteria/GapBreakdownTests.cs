@@ -1,4 +1,5 @@
 using System;
+using System.Linq;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
 using Xunit;
@@ -39,6 +40,6 @@ public class GapBreakdownTests
     {
         InductionAssessment a = HazardAssessor.Assess(Fixtures.Respond(Fixtures.Ring(gap: 0.001), Fixtures.UniformRamp(0, 3, 1e-6)), HazardPolicy.Default);
         Within.Relative(GapBreakdown.Volts(0.001) / a.Response.PeakEmfVolts, a.ArcMargin!.Value, 1e-12, "arc margin");
-        Assert.Equal(Verdict.Hazard, a.Verdict);
+        Assert.Equal(Verdict.Clear, a.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Arc).Verdict); // 4.5 kV over about 0.94 kV
     }
 }

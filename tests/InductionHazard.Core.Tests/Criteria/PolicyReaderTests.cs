@@ -23,6 +23,8 @@ public sealed class PolicyReaderTests
         ["SafetyFactor"] = new object?[] { 1.0, 2.5, 3, "4" },
         ["AlternatingVoltageLimit"] = new object?[] { "25 V", 30.0, "0.05 kV", "12 V" },
         ["DirectVoltageLimit"] = new object?[] { "60 V", 120, "1 kV" },
+        ["ImpulseChargeLimit"] = new object?[] { "20 uC", 4.5e-5, "0.01 mC" },
+        ["BodyResistance"] = new object?[] { "1 kohm", 750, "2000 ohm" },
         ["ThermalDoseLimit"] = new object?[] { 1.0, 0.5, "2" },
         ["TouchTime"] = new object?[] { "2 s", 0.5, "500 ms" },
         ["LaunchSpeedLimit"] = new object?[] { "2 m/s", 1.5, "0.5 m/s" },

@@ -1,3 +1,4 @@
+using System;
 using InductionHazard.Criteria;
 using InductionHazard.Quantities;
 
@@ -5,10 +6,25 @@ namespace InductionHazard.Assessment.Checks;
 
 /// <summary>
 /// Shock: the voltage across the gap of a split ring, which a finger or hand can bridge, against the
-/// extra-low-voltage limits of IEC 61140 (50 V a.c. rms; 120 V ripple-free d.c. for a unidirectional pulse).
+/// extra-low-voltage limits of IEC 61140 (50 V a.c. rms; 120 V ripple-free d.c. for a unidirectional pulse). A
+/// pulse of at most 10 ms is also judged by what it can drive through a person's body resistance: within the
+/// charge (or, above 15 kV, the energy) that IEC 60335-1 lets a person take from a discharge, it passes even above
+/// the d.c. limit, which is a limit for steady voltages.
 /// </summary>
 public sealed class ShockCheck : IHazardCheck
 {
+    /// <summary>The longest pulse judged as an impulse, s: the upper end of the impulse durations of IEC 60479-2.</summary>
+    public const double LongestImpulseSeconds = 10e-3;
+
+    /// <summary>The peak voltage above which a discharge is judged by its energy, V (IEC 60335-1 clause 8.1.4).</summary>
+    public const double EnergyRuleVolts = 15e3;
+
+    /// <summary>The energy a discharge above 15 kV may deliver, J (IEC 60335-1 clause 8.1.4).</summary>
+    public const double ImpulseEnergyLimitJoules = 0.35;
+
+    /// <summary>The largest capacitance whose discharge a person may take at peaks up to 450 V, F (IEC 60335-1 clause 8.1.4: 0.1 µF).</summary>
+    public const double ImpulseCapacitanceLimitFarads = 0.1e-6;
+
     private static string[] SourcesOf(HazardPolicy policy, bool alternating) =>
         new[] { policy.SourceOf(alternating ? "AlternatingVoltageLimit" : "DirectVoltageLimit") };
 
@@ -42,9 +58,66 @@ public sealed class ShockCheck : IHazardCheck
             margin = VerdictRules.Margin(limit, predicted);
             alternating = false;
         }
+        else if (!alternating && response.GapImpulse is { } impulse && Impulse(impulse, response.PeakEmfVolts, policy) is { } judged && judged.Margin > margin)
+        {
+            return judged;
+        }
+
         return MechanismResult.Judged(
             Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, SourcesOf(policy, alternating),
             quantity + " " + SiFormat.Format(predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(limit, "V")
             + (alternating ? " rms" : " d.c."));
+    }
+
+    /// <summary>
+    /// A pulse of at most 10 ms judged by the charge it drives through the body resistance (at most the policy's
+    /// charge, and no more than 0.1 µF charged to the peak) up to 15 kV, and by the energy it delivers above; null
+    /// where the rule does not apply (a longer pulse, a charge too large for the peak, a value not finite).
+    /// </summary>
+    /// <remarks>
+    /// The margin is the factor on the drive: the charge and the peak grow with it, the energy with its square. The
+    /// charge rule holds up to the factor at which the charge reaches its limit or the peak reaches 15 kV; beyond
+    /// 15 kV the energy rule takes over, up to the factor at which the energy reaches its limit. The whole
+    /// exposure's charge is counted, not the impulse's alone, unless the emf outside the impulse stays within the
+    /// d.c. limit (a slow tail, or the small emf of carrying the item out), which that limit judges on its own.
+    /// </remarks>
+    internal static MechanismResult? Impulse(EmfImpulse impulse, double peakVolts, HazardPolicy policy)
+    {
+        // Outside the impulse the emf is a steady voltage: where it stays within the d.c. limit it is judged as one
+        // (and passes), and only the impulse's own charge counts; otherwise the whole exposure's charge counts.
+        bool steadyTail = impulse.OutsidePeakVolts <= policy.DirectVoltageLimit;
+        double r = policy.BodyResistanceOhms;
+        double charge = (steadyTail ? impulse.VoltSeconds : impulse.TotalVoltSeconds) / r;
+        double energy = (steadyTail ? impulse.VoltSquaredSeconds : impulse.TotalVoltSquaredSeconds) / r;
+        if (!Finite.All(charge, energy, impulse.WidthSeconds, impulse.OutsidePeakVolts, peakVolts) || !(peakVolts > 0) || !(charge > 0)
+            || impulse.WidthSeconds > LongestImpulseSeconds || charge > ImpulseCapacitanceLimitFarads * peakVolts)
+        {
+            return null;
+        }
+
+        string[] sources = { policy.SourceOf("ImpulseChargeLimit"), policy.SourceOf("BodyResistance") };
+        string pulse = "a " + SiFormat.Format(impulse.WidthSeconds, "s") + " pulse of peak " + SiFormat.Format(peakVolts, "V") + " across the gap drives ";
+        string steady = "; the " + SiFormat.Format(policy.DirectVoltageLimit, "V") + " d.c. limit is for steady voltages";
+        double chargeMargin = policy.ImpulseChargeLimit / charge, switchMargin = EnergyRuleVolts / peakVolts;
+        if (chargeMargin <= switchMargin)
+        {
+            return MechanismResult.Judged(
+                HazardMechanism.Shock, "charge of a pulse of at most 10 ms through the body", charge, policy.ImpulseChargeLimit, "C", chargeMargin, policy.SafetyFactor, sources,
+                pulse + SiFormat.Format(charge, "C") + " through a body of " + SiFormat.Format(r, "Ω") + ", against the " + SiFormat.Format(policy.ImpulseChargeLimit, "C")
+                + " a person may take from a discharge" + steady);
+        }
+
+        double energyMargin = Math.Sqrt(ImpulseEnergyLimitJoules / energy);
+        if (energyMargin > switchMargin)
+        {
+            return MechanismResult.Judged(
+                HazardMechanism.Shock, "energy of a pulse of at most 10 ms in the body", energy, ImpulseEnergyLimitJoules, "J", energyMargin, policy.SafetyFactor, sources,
+                pulse + SiFormat.Format(energy, "J") + " into a body of " + SiFormat.Format(r, "Ω") + ", against the " + SiFormat.Format(ImpulseEnergyLimitJoules, "J")
+                + " a person may take from a discharge above 15 kV (the margin is on the drive: the energy grows with its square)" + steady);
+        }
+
+        return MechanismResult.Judged(
+            HazardMechanism.Shock, "peak of a pulse of at most 10 ms, within its charge limit", peakVolts, EnergyRuleVolts, "V", switchMargin, policy.SafetyFactor, sources,
+            pulse + SiFormat.Format(charge, "C") + ", within its charge limit up to a peak of 15 kV, above which its energy would exceed " + SiFormat.Format(ImpulseEnergyLimitJoules, "J") + steady);
     }
 }
