@@ -4,7 +4,9 @@ BeforeAll {
     Import-Module $ModulePath -Force
     $root = Split-Path $PSScriptRoot -Parent
     $policyFile = Join-Path $root 'examples/marrowby-heath-policy.psd1'
-    $bangle = New-ConductiveItem -Name 'Open bangle' -Material Copper -Diameter '65 mm' -WireDiameter '4 mm' -Gap '10 mm'
+    # Loose, so that the Shock limit the policy sets is what governs (a worn bangle's wearer would be in a field above
+    # the exposure limit).
+    $bangle = New-ConductiveItem -Name 'Open bangle' -Material Copper -Diameter '65 mm' -WireDiameter '4 mm' -Gap '10 mm' -Contact Loose
 
     # A sine whose gap voltage is 30 V rms: between the site's 25 V and the published 50 V (the emf is linear in the field).
     $probe = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '1 kHz' | New-FieldSource -Uniform -Name 'probe'

@@ -24,7 +24,7 @@ Describe 'Test-InductionHazard' {
                 if ($width -eq 120) { foreach ($column in 'Emf', 'Current', 'Peak T') { $header | Should -Match "\b$column\b" } }
             }
 
-            $result.ActionBrief | Should -BeIn @('None', 'Use with care', 'Take it off', 'Keep it out', 'Keep out or fix down', 'Unsafe until assessed')
+            $result.ActionBrief | Should -BeIn @('None', 'Use with care', 'Take it off', 'Keep it out', 'Keep out or fix down', 'Keep people out', 'Unsafe until assessed')
         }
 
         It 'shows readable text in its list view, never a type name' {
@@ -291,7 +291,7 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $area = [math]::PI * 0.065 * 0.065 / 4
             $tesla = 50 * [math]::Sqrt(2) / (2 * [math]::PI * 50 * $area)
             $field = New-FieldWaveform -Sine -Amplitude $tesla -Frequency 50 | New-FieldSource -Uniform
-            $a = New-ConductiveItem -Material Titanium -Diameter '65 mm' -WireDiameter '4 mm' -Gap '20 mm' | Test-InductionHazard -Source $field
+            $a = New-ConductiveItem -Material Titanium -Diameter '65 mm' -WireDiameter '4 mm' -Gap '20 mm' -Contact Loose | Test-InductionHazard -Source $field
             $a.ShockMargin | Should -BeGreaterThan 0.999999
             $a.ShockMargin | Should -BeLessThan 1.000001
             $a.Verdict | Should -Be 'Caution'
@@ -358,7 +358,7 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
 
         It 'solves a bar at mains frequency, and refuses one whose skin depth needs more mesh currents than it solves, saying why' {
             $mains = New-FieldWaveform -Sine -Amplitude '20 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
-            $bar = New-ConductiveItem -Name 'Tool head' -Shape Bar -Material Brass -Width '20 mm' -Height '20 mm' -Length '60 mm' -Contact Held
+            $bar = New-ConductiveItem -Name 'Tool head' -Shape Bar -Material Brass -Width '20 mm' -Height '20 mm' -Length '60 mm' -Contact Loose
             $solved = Test-InductionHazard -Item $bar -Source $mains -WarningAction SilentlyContinue
             $solved.Verdict | Should -Not -Be 'Indeterminate'
             $solved.Response.Model | Should -Match 'mesh currents'

@@ -11,7 +11,7 @@ namespace InductionHazard.Assessment;
 /// <summary>Turns a response into an assessment: each mechanism's check, the combined verdict, the cautions.</summary>
 public static class HazardAssessor
 {
-    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new ArcCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck(), new AttractionCheck() };
+    private static readonly IHazardCheck[] Checks = { new ShockCheck(), new ArcCheck(), new BurnCheck(), new OverheatCheck(), new ForceCheck(), new TorqueCheck(), new AttractionCheck(), new ExposureCheck() };
 
     /// <summary>The module's version, as recorded in assessments.</summary>
     public static string ModuleVersion { get; } =
@@ -43,6 +43,12 @@ public static class HazardAssessor
         if (applicable.Any(r => r.Verdict == Verdict.Indeterminate))
         {
             reasons.AddRange(response.ValidityIssues.Select(i => i.Reason).Distinct());
+
+            // A mechanism stopped by a reason of its own (not one of the response's), such as an exposure the
+            // weighted-peak method cannot judge.
+            reasons.AddRange(applicable
+                .Where(r => r.Verdict == Verdict.Indeterminate && !response.ValidityIssues.Any(i => r.Detail.Contains(i.Reason)))
+                .Select(r => r.Mechanism + ": " + r.Detail));
         }
 
         reasons.AddRange(applicable.Where(r => r.Verdict is Verdict.Caution or Verdict.Hazard).Select(r => r.Mechanism + ": " + r.Detail));
@@ -58,7 +64,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             Summary = Summarize(verdict, governing, policy),
-            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact),
+            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + ItemsOwn(applicable, governing, policy, response.Item.Contact),
             ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
@@ -68,6 +74,7 @@ public static class HazardAssessor
             ForceMargin = MarginOf(results, HazardMechanism.Force),
             TorqueMargin = MarginOf(results, HazardMechanism.Torque),
             AttractionMargin = MarginOf(results, HazardMechanism.Attraction),
+            ExposureMargin = MarginOf(results, HazardMechanism.Exposure),
             PeakForceNewtons = Trusted(response, AffectedResults.Current, response.PeakForceNewtons),
             PeakEmfVolts = Trusted(response, AffectedResults.Emf, response.PeakEmfVolts),
             GapVoltageVolts = response.GapVoltageVolts is { } gap ? Trusted(response, AffectedResults.Emf, gap) : null,
@@ -106,6 +113,28 @@ public static class HazardAssessor
         }
 
         return applicable.Where(r => r.Verdict != Verdict.Indeterminate).OrderBy(r => r.Margin).First();
+    }
+
+    /// <summary>
+    /// Where the person's own exposure governs, the item's own worst hazard as well, so that the action for the item
+    /// is not lost behind the place's ("... The item itself: take it off before entering this place: it would burn
+    /// the skin it touches.").
+    /// </summary>
+    private static string ItemsOwn(MechanismResult[] applicable, MechanismResult? governing, HazardPolicy policy, Items.ContactKind contact)
+    {
+        if (governing?.Mechanism != HazardMechanism.Exposure)
+        {
+            return string.Empty;
+        }
+
+        MechanismResult? own = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard).OrderBy(r => r.Margin).FirstOrDefault();
+        if (own is null)
+        {
+            return string.Empty;
+        }
+
+        string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);
+        return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1);
     }
 
     private static double? MarginOf(IEnumerable<MechanismResult> results, HazardMechanism mechanism)

@@ -68,6 +68,9 @@ public sealed class InductionAssessment
     /// <summary>The Attraction margin (a ferromagnetic item's weight over its pull), or null when it does not apply.</summary>
     public double? AttractionMargin { get; init; }
 
+    /// <summary>The Exposure margin (a worn or held item's wearer in the field), or null when it does not apply.</summary>
+    public double? ExposureMargin { get; init; }
+
     /// <summary>The peak force on the item, N (NaN when the current is not trusted).</summary>
     public double PeakForceNewtons { get; init; }
 

@@ -45,6 +45,7 @@ public static class RecommendedAction
             HazardMechanism.Force => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down with a mounting rated for the force") + ": the field would push or throw it.",
             HazardMechanism.Torque => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down") + ": the field would twist it hard enough to wrench it from the hand, the body or its mounting.",
             HazardMechanism.Attraction => keepOut + ": it would be pulled toward the source and could become a projectile.",
+            HazardMechanism.Exposure => "Keep people out of this place while the source runs, with or without the item: the field here is above the limit for a person's own exposure (see Test-FieldExposure).",
             _ => keepOut + " until the exposure is reduced and it is assessed again.",
         };
     }
@@ -61,6 +62,7 @@ public static class RecommendedAction
         {
             Verdict.Clear => "None",
             Verdict.Caution => "Use with care",
+            _ when governing.Mechanism == HazardMechanism.Exposure => "Keep people out",
             _ when contact == ContactKind.Skin => "Take it off",
             _ when governing.Mechanism is HazardMechanism.Force or HazardMechanism.Torque => "Keep out or fix down",
             _ => "Keep it out",
@@ -72,6 +74,7 @@ public static class RecommendedAction
         HazardMechanism.Burn or HazardMechanism.Overheat => "a shorter time in the field, more distance from the source, or an item that is not a closed metal loop",
         HazardMechanism.Shock or HazardMechanism.Arc => "more distance from the source, a slower field change, or an item without a gap (or not metal)",
         HazardMechanism.Force or HazardMechanism.Torque or HazardMechanism.Attraction => "more distance from the source, a weaker field, or fixing the item down",
+        HazardMechanism.Exposure => "more distance from the source or a weaker field, for the person as much as the item",
         _ => "more distance from the source or a weaker field",
     };
 }

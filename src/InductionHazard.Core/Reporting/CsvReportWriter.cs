@@ -28,6 +28,7 @@ public static class CsvReportWriter
         ("ForceMargin", a => a.ForceMargin),
         ("TorqueMargin", a => a.TorqueMargin),
         ("AttractionMargin", a => a.AttractionMargin),
+        ("ExposureMargin", a => a.ExposureMargin),
         ("PeakFluxDensity (T)", a => a.Response.PeakFluxDensityTesla),
         ("PeakEmf (V)", a => a.PeakEmfVolts),
         ("GapVoltage (V)", a => a.GapVoltageVolts),

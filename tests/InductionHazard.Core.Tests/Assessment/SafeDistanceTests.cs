@@ -20,7 +20,7 @@ public sealed class SafeDistanceTests
 
     private static ConductiveItem SplitRing(double meanDiameter) =>
         ItemRecordReader.Read(
-            new Dictionary<string, object?> { ["Name"] = "split ring", ["Material"] = "Copper", ["Diameter"] = meanDiameter, ["WireDiameter"] = 0.001, ["Gap"] = 0.002, ["Contact"] = "Held" },
+            new Dictionary<string, object?> { ["Name"] = "split ring", ["Material"] = "Copper", ["Diameter"] = meanDiameter, ["WireDiameter"] = 0.001, ["Gap"] = 0.002, ["Contact"] = "Free" },
             MaterialLibrary.BuiltIn);
 
     [Fact]

@@ -36,8 +36,8 @@ public sealed class ReportWriterTests
         return w.ToString();
     }
 
-    private static readonly InductionAssessment Clear = Assess(Named("plain ring"), 1e-3, 50, 1, new() { ["AssetTag"] = "T-1", ["Location"] = "store", ["Diameter (mm)"] = "20" });
-    private static readonly InductionAssessment HostileName = Assess(Named(Hostile), 1e-3, 50, 2, new() { ["Notes"] = "=HYPERLINK(\"x\")" });
+    private static readonly InductionAssessment Clear = Assess(Named("plain ring"), 0.4e-3, 50, 1, new() { ["AssetTag"] = "T-1", ["Location"] = "store", ["Diameter (mm)"] = "20" });
+    private static readonly InductionAssessment HostileName = Assess(Named(Hostile), 0.4e-3, 50, 2, new() { ["Notes"] = "=HYPERLINK(\"x\")" });
     private static readonly InductionAssessment Hot = Assess(Named("hot ring"), 0.05, 10000, 3);
 
     [Fact]

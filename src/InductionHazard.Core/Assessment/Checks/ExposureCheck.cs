@@ -1,0 +1,96 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Runtime.CompilerServices;
+using InductionHazard.Criteria;
+using InductionHazard.Errors;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment.Checks;
+
+/// <summary>
+/// Exposure: a worn or held item puts a person where it is, so the person's own field there is judged as
+/// Test-FieldExposure judges it (ICNIRP 2009 static limits, ICNIRP 2010 reference levels, the weighted-peak method),
+/// occupational limits, the head and trunk's for a static field. A loose or fixed item puts no one there by itself.
+/// </summary>
+/// <remarks>
+/// The exposure depends only on the source and the place, so it is found once per source and place and shared by
+/// every item assessed there (at most <see cref="PlacesPerSource"/> places are kept per source).
+/// </remarks>
+public sealed class ExposureCheck : IHazardCheck
+{
+    /// <summary>The most places whose exposure is kept for one source.</summary>
+    public const int PlacesPerSource = 256;
+
+    private static readonly ConditionalWeakTable<FieldSource, Dictionary<Vector3D, FieldExposure>> Found = new();
+
+    /// <inheritdoc />
+    public HazardMechanism Mechanism => HazardMechanism.Exposure;
+
+    /// <inheritdoc />
+    public MechanismResult Evaluate(InductionResponse response, HazardPolicy policy)
+    {
+        if (response.Item.Contact is ContactKind.Free or ContactKind.Fixed)
+        {
+            return MechanismResult.NotApplicable(Mechanism, "a " + (response.Item.Contact == ContactKind.Free ? "loose" : "fixed") + " item puts no one at its place; judge a person's place with Test-FieldExposure");
+        }
+
+        var issues = response.IssuesAffecting(AffectedResults.Field);
+        string[] fallback = { ExposureLimits.StaticSource, ExposureLimits.TimeVaryingSource };
+        if (issues.Count > 0)
+        {
+            return MechanismResult.Indeterminate(Mechanism, fallback, issues);
+        }
+
+        FieldExposure exposure;
+        try
+        {
+            exposure = At(response.Scenario.Source, response.Scenario.Placement.Centre);
+        }
+        catch (InductionHazardException ex)
+        {
+            return MechanismResult.Indeterminate(Mechanism, fallback, new[] { new ValidityIssue("the field at the wearer's place cannot be evaluated: " + ex.Message, AffectedResults.Field) });
+        }
+
+        string[] sources = exposure.Standards.Where(s => s != ExposureLimits.ActionLevelSource).ToArray();
+        if (exposure.Verdict == Verdict.Indeterminate || !Finite.Is(exposure.Margin))
+        {
+            string reason = exposure.Finding.StartsWith("Indeterminate: ", StringComparison.Ordinal) ? exposure.Finding.Substring("Indeterminate: ".Length) : exposure.Finding;
+            return MechanismResult.Indeterminate(Mechanism, sources, new[] { new ValidityIssue("the wearer's own exposure cannot be judged: " + reason, AffectedResults.Field) });
+        }
+
+        string who = response.Item.Contact == ContactKind.Skin ? "the wearer" : "the person holding it";
+        string detail = "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + " against the occupational limit "
+            + SiFormat.Format(exposure.LimitTesla, "T") + (exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T)" : string.Empty)
+            + "; it applies with or without the item";
+        return MechanismResult.Judged(Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, detail);
+    }
+
+    /// <summary>The occupational exposure at a place, found once per source and place.</summary>
+    private static FieldExposure At(FieldSource source, Vector3D place)
+    {
+        Dictionary<Vector3D, FieldExposure> places = Found.GetValue(source, _ => new Dictionary<Vector3D, FieldExposure>());
+        lock (places)
+        {
+            if (places.TryGetValue(place, out FieldExposure? known))
+            {
+                return known;
+            }
+        }
+
+        FieldExposure found = FieldExposure.At(source, place, publicExposure: false, HazardPolicy.Default);
+        lock (places)
+        {
+            if (places.Count >= PlacesPerSource)
+            {
+                places.Clear();
+            }
+
+            places[place] = found;
+        }
+
+        return found;
+    }
+}

@@ -1,0 +1,85 @@
+using System;
+using System.Linq;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Assessment;
+
+/// <summary>Exposure inside an item's assessment: a worn or held item puts a person where it is.</summary>
+public class ExposureCheckTests
+{
+    private static InductionAssessment Assess(ConductiveItem item, FieldSource source, double? exposure = null) =>
+        HazardAssessor.Assess(Fixtures.Respond(item, source, exposure), HazardPolicy.Default);
+
+    private static MechanismResult Exposure(InductionAssessment a) => a.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Exposure);
+
+    [Validates("Exposure of a ring's wearer at 9.6 kHz: 0.1 mT rms occupational", "ICNIRP 2010, Health Phys 99:818, table 3", "1e-9")]
+    [Fact]
+    public void AWornRingsWearerIsJudgedAgainstTheReferenceLevelAtTheDrivesFrequency()
+    {
+        // 1.5 mT peak at 9.6 kHz: 1.06 mT rms against the occupational 0.1 mT of 3 kHz to 10 MHz.
+        InductionAssessment a = Assess(Fixtures.Ring("Titanium", 0.02, 0.001, gap: 0.002), Fixtures.UniformSine(1.5e-3, 9600), exposure: 1);
+        Within.Relative(1e-4 / (1.5e-3 / Math.Sqrt(2)), a.ExposureMargin!.Value, 1e-9, "Exposure margin");
+        MechanismResult m = Exposure(a);
+        Assert.Equal(Verdict.Hazard, m.Verdict);
+        Assert.Contains(m.Sources, s => s.StartsWith("ICNIRP 2010", StringComparison.Ordinal));
+        Assert.Contains("the field the wearer is in", m.Detail, StringComparison.Ordinal);
+    }
+
+    [Validates("Exposure of a held tool's user in a held 3 T field: 2 T static", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
+    [Fact]
+    public void AHeldItemsUserInAStaticFieldIsJudgedAgainstTheHeadAndTrunkLimit()
+    {
+        InductionAssessment a = Assess(Fixtures.Ring("Titanium", 0.05, 0.004, gap: 0.01, contact: "Held"), Fixtures.UniformRamp(0, 3, 600));
+        Within.Relative(2.0 / 3, a.ExposureMargin!.Value, 1e-9, "Exposure margin");
+        Assert.Contains("limbs alone may take 8 T", Exposure(a).Detail, StringComparison.Ordinal);
+        if (a.GoverningMechanism == HazardMechanism.Exposure)
+        {
+            Assert.Equal("Keep people out", a.ActionBrief);
+        }
+    }
+
+    [Fact]
+    public void TheMarginIsTheOneTestFieldExposureGivesAtTheSamePlace()
+    {
+        FieldSource coil = new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 50), new SineWaveform(200, 50, drive: DriveKind.Current)) });
+        var place = new Vector3D(0.02, 0, 0.05);
+        InductionAssessment a = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Fixtures.Ring(), coil, new Placement(place), null)), HazardPolicy.Default);
+        Within.Relative(FieldExposure.At(coil, place, false, HazardPolicy.Default).Margin, a.ExposureMargin!.Value, 1e-12, "Exposure margin against Test-FieldExposure's");
+    }
+
+    [Fact]
+    public void ScalingTheFieldByTheExposureMarginLandsItOnTheLimit()
+    {
+        double? margin = Assess(Fixtures.Ring(), Fixtures.UniformSine(0.5e-3, 50), exposure: 1).ExposureMargin;
+        Assert.NotNull(margin);
+        Within.Relative(1.0, Assess(Fixtures.Ring(), Fixtures.UniformSine(0.5e-3 * margin!.Value, 50), exposure: 1).ExposureMargin!.Value, 1e-9, "Exposure margin after scaling");
+    }
+
+    [Theory]
+    [InlineData("Free")]
+    [InlineData("Fixed")]
+    public void ALooseOrFixedItemPutsNoOneAtItsPlace(string contact)
+    {
+        InductionAssessment a = Assess(Fixtures.Ring("Copper", 0.05, 0.002, contact: contact), Fixtures.UniformSine(1.5e-3, 9600), exposure: 1);
+        Assert.Null(a.ExposureMargin);
+        Assert.False(Exposure(a).Applies);
+        Assert.Contains("Test-FieldExposure", Exposure(a).Detail, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void AnExposureTheWeightedPeakCannotJudgeIsIndeterminateWithItsReason()
+    {
+        // A sine above 10 MHz is beyond the reference levels used: the wearer's exposure cannot be judged, and the
+        // assessment says so among its reasons.
+        InductionAssessment a = Assess(Fixtures.Ring("Titanium", 0.02, 0.001, gap: 0.002), Fixtures.UniformSine(1e-9, 20e6), exposure: 1);
+        Assert.Equal(Verdict.Indeterminate, Exposure(a).Verdict);
+        Assert.Equal(Verdict.Indeterminate, a.Verdict);
+        Assert.Contains(a.Reasons, r => r.StartsWith("Exposure: cannot be judged", StringComparison.Ordinal) && r.Contains("10 MHz", StringComparison.Ordinal));
+    }
+}
