@@ -93,6 +93,21 @@ public sealed class MarginScaleTests
     }
 
     [Fact]
+    public void ScalingTheFieldByTheRootOfTheOverheatMarginLandsThePeakTemperatureOnTheMeltingPoint()
+    {
+        // The same linear ring, left in the field for a minute: its rise goes as the field's square, and its peak at
+        // the field times the root of the margin is the melting point.
+        var still = new ThermalEnvironment(20, ThermalEnvironment.StillAirConvection, 0.0);
+        InductionAssessment Heat(double tesla) =>
+            HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Ring(0, "Fixed", "steady copper"), Sine(tesla), new Placement(Vector3D.Zero), 60, still)), HazardPolicy.Default);
+        double? margin = Heat(0.0009).OverheatMargin;
+        Assert.NotNull(margin);
+        Assert.InRange(margin!.Value, 2, 1e6);
+        // Scaled to 0.999 of the root (just short of melting, where the run stops): the margin is then 1 / 0.999^2.
+        Within.Relative(1 / (0.999 * 0.999), Heat(0.0009 * Math.Sqrt(margin.Value) * 0.999).OverheatMargin!.Value, 1e-6, "Overheat margin after scaling to 0.999 of its root");
+    }
+
+    [Fact]
     public void ScalingTheCoilCurrentByTheRootOfTheAttractionMarginLandsThePullOnTheWeight()
     {
         // An unsaturated steel ball on a coil's axis: its magnetisation follows the field, so the pull (moment times
