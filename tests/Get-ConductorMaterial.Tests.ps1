@@ -37,6 +37,21 @@ Describe 'Get-ConductorMaterial' {
         $m.DensityKilogramsPerCubicMeter | Should -Be 15500
         $m.Sources['ResistivityOhmMeters'] | Should -Be 'assay 17'
         $m.TemperatureCoefficientKnown | Should -BeFalse
+        [double]::IsNaN($m.LatentHeatJoulesPerKilogram) | Should -BeTrue
+        (Get-ConductorMaterial -Definition @{ Name = 'Alloy'; Resistivity = '2.5e-7 ohm m'; Density = '15.5 g/cm3'; SpecificHeat = 150; MeltingTemperature = '900 degC'; LatentHeat = '95 kJ/kg' }).LatentHeatJoulesPerKilogram |
+            Should -Be 95000
+    }
+
+    It 'gives each built-in material its latent heat of fusion with a source, and tells how long a melting ring takes to melt through' {
+        foreach ($m in Get-ConductorMaterial) {
+            $m.LatentHeatJoulesPerKilogram | Should -BeGreaterThan 5e4
+            $m.Sources['LatentHeatJoulesPerKilogram'] | Should -Not -BeNullOrEmpty
+        }
+        $mains = New-FieldWaveform -Sine -Amplitude '1 T' -Frequency '50 Hz' | New-FieldSource -Uniform
+        $ring = New-ConductiveItem -Material Copper -Diameter '60 mm' -WireDiameter '2 mm' -Contact Fixed
+        $a = Test-InductionHazard -Item $ring -Source $mains -ExposureTime '1 h'
+        $a.Response.MeltThroughSeconds | Should -BeGreaterThan 0
+        ($a.Mechanisms | Where-Object Mechanism -EQ 'Overheat').Detail | Should -Match 'latent heat'
     }
 
     It 'names every field a definition gets wrong' {

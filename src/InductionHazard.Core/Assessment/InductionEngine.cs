@@ -328,14 +328,34 @@ public static class InductionEngine
     };
 
     /// <summary>A closed loop's heating history and what follows from it.</summary>
-    private static InductionResponse Heated(InductionResponse r, EngineContext c, IReadOnlyList<HeatingSample> heating, double finalCelsius, double energy) => r with
+    private static InductionResponse Heated(InductionResponse r, EngineContext c, IReadOnlyList<HeatingSample> heating, double finalCelsius, double energy)
     {
-        EnergyDissipatedJoules = energy,
-        PeakTemperatureCelsius = TemperatureHistory.Peak(heating),
-        FinalTemperatureCelsius = finalCelsius,
-        MeltingReachedSeconds = TemperatureHistory.FirstReaching(heating, c.Scenario.Item.Material.MeltingCelsius),
-        HeatingSeries = heating,
-    };
+        double? melted = TemperatureHistory.FirstReaching(heating, c.Scenario.Item.Material.MeltingCelsius);
+        return r with
+        {
+            EnergyDissipatedJoules = energy,
+            PeakTemperatureCelsius = TemperatureHistory.Peak(heating),
+            FinalTemperatureCelsius = finalCelsius,
+            MeltingReachedSeconds = melted,
+            MeltThroughSeconds = melted is { } t ? MeltThrough(c, heating, t) : null,
+            HeatingSeries = heating,
+        };
+    }
+
+    /// <summary>
+    /// How long after reaching its melting point the item would take to melt through, if the power it takes in there
+    /// held: its latent heat m L over that power less what it loses at the melting point. Null when the latent heat
+    /// is not known or the losses there match the power (the item would stay partly molten).
+    /// </summary>
+    private static double? MeltThrough(EngineContext c, IReadOnlyList<HeatingSample> heating, double meltedAt)
+    {
+        double melting = c.Scenario.Item.Material.MeltingCelsius;
+        double latent = c.Scenario.Item.MassKilograms * c.Scenario.Item.Material.LatentHeatJoulesPerKilogram;
+        HeatingSample at = heating.FirstOrDefault(s => s.TimeSeconds >= meltedAt) ?? heating[heating.Count - 1];
+        double lost = c.Thermal.TransferCoefficient(melting) * c.Thermal.SurfaceSquareMeters * (melting - c.Thermal.Environment.AmbientCelsius);
+        double net = at.PowerWatts - lost;
+        return net > 0 && Finite.Is(latent / net) ? latent / net : null;
+    }
 
     /// <summary>A split ring: the emf appears across the gap, no current flows (gap capacitance neglected), nothing heats.</summary>
     private static InductionResponse Open(InductionResponse r, EngineContext c, IReadOnlyList<CircuitSample> series, double begin, double end)

@@ -195,6 +195,13 @@ public sealed record InductionResponse
     /// <summary>When the item reaches its melting point, s; null if it does not (beyond it the model is notional).</summary>
     public double? MeltingReachedSeconds { get; init; }
 
+    /// <summary>
+    /// How long after reaching its melting point the item would take to melt through (its latent heat over the power
+    /// it takes in there, less its losses), if that power held, s; null when it does not melt or cannot be estimated.
+    /// The model itself stops at the melting point: a molten loop opens.
+    /// </summary>
+    public double? MeltThroughSeconds { get; init; }
+
     /// <summary>How long the item is in the field, from the start of the drive, s.</summary>
     public double ExposureSeconds { get; init; }
 

@@ -48,6 +48,9 @@ public sealed class ConductorMaterial
     /// <summary>Melting point, or solidus of an alloy, °C: the Overheat limit.</summary>
     public double MeltingCelsius { get; init; }
 
+    /// <summary>Latent heat of fusion, J/kg: what melting through takes beyond reaching the melting point; NaN when not known.</summary>
+    public double LatentHeatJoulesPerKilogram { get; init; } = double.NaN;
+
     /// <summary>Where each value came from, keyed by property name.</summary>
     public IReadOnlyDictionary<string, string> Sources { get; init; } = new Dictionary<string, string>();
 

@@ -53,7 +53,7 @@ public sealed class MaterialLibrary
     /// <summary>
     /// Defines a material from named values (a hashtable): Name, Resistivity, Density, SpecificHeat and
     /// MeltingTemperature are required; TemperatureCoefficient (alias Alpha), ThermalConductivity,
-    /// RelativePermeability and Source are optional. Values may carry units ('2.4e-8 ohm m', '19.3 g/cm3').
+    /// RelativePermeability, LatentHeat and Source are optional. Values may carry units ('2.4e-8 ohm m', '19.3 g/cm3').
     /// </summary>
     /// <exception cref="RecordException">A value is missing, malformed or out of range, or a name is not recognised.</exception>
     public static ConductorMaterial Define(IEnumerable<KeyValuePair<string, object?>> definition)
@@ -67,6 +67,7 @@ public sealed class MaterialLibrary
         double? k = fields.Quantity("ThermalConductivity", QuantityKind.ThermalConductivity, required: false);
         double? mu = fields.Number("RelativePermeability", required: false, "MuR", "Permeability");
         double? melt = fields.Quantity("MeltingTemperature", QuantityKind.Temperature, required: true, "Melting", "MeltingPoint", "Solidus", "MeltingCelsius");
+        double? latent = fields.Quantity("LatentHeat", QuantityKind.SpecificEnergy, required: false, "HeatOfFusion", "LatentHeatOfFusion");
         string source = fields.Text("Source", required: false, "Reference") ?? "user supplied";
 
         CheckRange(fields, PhysicalRanges.Resistivity, rho);
@@ -76,6 +77,7 @@ public sealed class MaterialLibrary
         CheckRange(fields, PhysicalRanges.ThermalConductivity, k);
         CheckRange(fields, PhysicalRanges.RelativePermeability, mu);
         CheckRange(fields, PhysicalRanges.Melting, melt);
+        CheckRange(fields, PhysicalRanges.LatentHeat, latent);
         if (alpha is { } a && melt is { } m && PhysicalRanges.TemperatureCoefficient.Contains(a) && PhysicalRanges.Melting.Contains(m))
         {
             // rho(T) = rho20 (1 + alpha (T - 20)) must stay positive over every temperature assessed: the coldest room to melting.
@@ -86,7 +88,7 @@ public sealed class MaterialLibrary
             }
         }
 
-        fields.RejectUnused("is not a material property (use Name, Resistivity, TemperatureCoefficient, Density, SpecificHeat, ThermalConductivity, RelativePermeability, MeltingTemperature, Source)");
+        fields.RejectUnused("is not a material property (use Name, Resistivity, TemperatureCoefficient, Density, SpecificHeat, ThermalConductivity, RelativePermeability, MeltingTemperature, LatentHeat, Source)");
 
         if (fields.Errors.Count > 0)
         {
@@ -103,6 +105,7 @@ public sealed class MaterialLibrary
             [nameof(ConductorMaterial.ThermalConductivityWattsPerMeterKelvin)] = k is null ? "not given: the lumped-heating check assumes " + LowestMetalConductivity + " W/(m K), below any structural metal (common practice)" : source,
             [nameof(ConductorMaterial.RelativePermeability)] = mu is null ? "not given: 1 assumed" : source,
             [nameof(ConductorMaterial.MeltingCelsius)] = source,
+            [nameof(ConductorMaterial.LatentHeatJoulesPerKilogram)] = latent is null ? "not given: the time to melt through is not estimated" : source,
         };
         return new ConductorMaterial
         {
@@ -116,6 +119,7 @@ public sealed class MaterialLibrary
             RelativePermeability = mu ?? 1.0,
             IsFerromagnetic = ferromagnetic,
             MeltingCelsius = melt!.Value,
+            LatentHeatJoulesPerKilogram = latent ?? double.NaN,
             Sources = sources,
             IsBuiltIn = false,
         };

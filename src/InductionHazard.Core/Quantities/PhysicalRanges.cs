@@ -81,6 +81,10 @@ public static class PhysicalRanges
     public static PhysicalRange Melting { get; } = new(
         "MeltingTemperature", 60.0, 4000.0, "°C", "a solid item in a room melts above 60 °C; tungsten, the highest-melting metal, melts at 3,422 °C");
 
+    /// <summary>A material's latent heat of fusion.</summary>
+    public static PhysicalRange LatentHeat { get; } = new(
+        "LatentHeat", 5e3, 2.5e6, "J/kg", "from mercury's 11 kJ/kg to silicon's 1.8 MJ/kg, with room on both sides");
+
     /// <summary>A material's relative permeability.</summary>
     public static PhysicalRange RelativePermeability { get; } = new(
         "RelativePermeability", 1.0, 1e6, string.Empty, "1 for a non-magnetic conductor, up to about 1e6 for the softest magnetic alloys");

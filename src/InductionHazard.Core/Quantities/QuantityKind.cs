@@ -71,4 +71,7 @@ public enum QuantityKind
 
     /// <summary>An electric charge; canonical unit coulomb.</summary>
     ElectricCharge,
+
+    /// <summary>An energy per mass (a latent heat); canonical unit joule per kilogram.</summary>
+    SpecificEnergy,
 }

@@ -32,6 +32,7 @@ public sealed class QuantityKindInfo
         [QuantityKind.Inductance] = new(QuantityKind.Inductance, "an inductance", "H", "'40 uH'", ElectricInductanceUnit.Henry),
         [QuantityKind.Speed] = new(QuantityKind.Speed, "a speed", "m/s", "'1.5 m/s'", SpeedUnit.MeterPerSecond),
         [QuantityKind.ElectricCharge] = new(QuantityKind.ElectricCharge, "an electric charge", "C", "'45 uC'", ElectricChargeUnit.Coulomb),
+        [QuantityKind.SpecificEnergy] = new(QuantityKind.SpecificEnergy, "an energy per mass", "J/kg", "'209 kJ/kg'", SpecificEnergyUnit.JoulePerKilogram),
     };
 
     private QuantityKindInfo(QuantityKind kind, string description, string canonicalSymbol, string example, Enum canonicalUnit)

@@ -23,7 +23,7 @@ public sealed class GetConductorMaterialCommand : PSCmdlet
 
     /// <summary>
     /// A hashtable defining a material: Name, Resistivity, Density, SpecificHeat, MeltingTemperature (required);
-    /// TemperatureCoefficient, ThermalConductivity, RelativePermeability, Source (optional). Values may carry units.
+    /// TemperatureCoefficient, ThermalConductivity, RelativePermeability, LatentHeat, Source (optional). Values may carry units.
     /// </summary>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = DefinitionSet)]
     public Hashtable[] Definition { get; set; } = null!;
