@@ -53,7 +53,9 @@ internal sealed class EngineContext
             Vector3D[] b = source.FieldPerUnitDrive(centre);
             NormalField = b.Select(v => v.Dot(Normal)).ToArray();
             Vector3D facing = Normal;
-            TorqueField = b.Select(v => facing.Cross(v)).ToArray();
+            // A normal along the field to within rounding (1e-9 rad) feels no torque: its cross product is the
+            // rounding's, not a tilt, and would print torques of zepto-newton metres.
+            TorqueField = b.Select(v => facing.Cross(v)).Select((t, j) => t.Length <= 1e-9 * b[j].Length ? Vector3D.Zero : t).ToArray();
             FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
             if (loop is BodyGeometry)
             {

@@ -42,19 +42,45 @@ public sealed class Scenario
     /// engine sees them, material constants, contact), the source's terms and waveforms, the placement, times and
     /// surroundings, and the inventory row's own columns. Two scenarios with the same fingerprint gave the same inputs.
     /// </summary>
+    /// <remarks>
+    /// The item's and the source's parts are hashed once per object (both are immutable) and the fingerprint hashes
+    /// those with the rest, so a whole inventory in one field does not hash the source's description again per item.
+    /// </remarks>
     public string Fingerprint()
     {
-        ConductorMaterial m = Item.Material;
+        var text = new System.Text.StringBuilder(256);
+        text.Append(ItemHashes.GetValue(Item, ItemHash)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
+            .Append('|').Append(Placement.Centre).Append('|').Append(Placement.Normal?.ToString() ?? "facing the field").Append('|').Append(Placement.Velocity?.ToString() ?? "still")
+            .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
+            .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
+        return TextHash.Sha256(text.ToString());
+    }
+
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<ConductiveItem, string> ItemHashes = new();
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<FieldSource, string> SourceHashes = new();
+
+    /// <summary>The item as the engine sees it: shape, dimensions, contact and every material constant.</summary>
+    private static string ItemHash(ConductiveItem item)
+    {
+        ConductorMaterial m = item.Material;
         var text = new System.Text.StringBuilder();
-        text.Append(Item.Describe()).Append('|').Append(Item.Shape).Append('|').Append(Item.Contact).Append('|')
-            .Append(TextHash.Exact(Item.GapMeters)).Append('|').Append(TextHash.Exact(Item.Loop.PathLengthMeters)).Append('|')
-            .Append(TextHash.Exact(Item.Loop.LoopAreaSquareMeters)).Append('|').Append(TextHash.Exact(Item.Loop.VolumeCubicMeters)).Append('|')
-            .Append(TextHash.Exact(Item.Loop.Section.AreaSquareMeters)).Append('|')
+        text.Append(item.Describe()).Append('|').Append(item.Shape).Append('|').Append(item.Contact).Append('|')
+            .Append(TextHash.Exact(item.GapMeters)).Append('|').Append(TextHash.Exact(item.Loop.PathLengthMeters)).Append('|')
+            .Append(TextHash.Exact(item.Loop.LoopAreaSquareMeters)).Append('|').Append(TextHash.Exact(item.Loop.VolumeCubicMeters)).Append('|')
+            .Append(TextHash.Exact(item.Loop.Section.AreaSquareMeters)).Append('|')
             .Append(m.Name).Append('|').Append(TextHash.Exact(m.ResistivityOhmMeters)).Append('|').Append(TextHash.Exact(m.TemperatureCoefficientPerKelvin)).Append('|')
             .Append(TextHash.Exact(m.DensityKilogramsPerCubicMeter)).Append('|').Append(TextHash.Exact(m.SpecificHeatJoulesPerKilogramKelvin)).Append('|')
             .Append(TextHash.Exact(m.ThermalConductivityWattsPerMeterKelvin)).Append('|').Append(TextHash.Exact(m.RelativePermeability)).Append('|')
-            .Append(TextHash.Exact(m.MeltingCelsius)).Append('|').Append(Source.Describe());
-        foreach (SourceTerm term in Source.Terms)
+            .Append(TextHash.Exact(m.MeltingCelsius)).Append('|').Append(TextHash.Exact(m.LatentHeatJoulesPerKilogram));
+        return TextHash.Sha256(text.ToString());
+    }
+
+    /// <summary>The source: its description, and each term's geometry and waveform.</summary>
+    private static string SourceHash(FieldSource source)
+    {
+        var text = new System.Text.StringBuilder();
+        text.Append(source.Describe());
+        foreach (SourceTerm term in source.Terms)
         {
             FieldWaveform w = term.Waveform;
             text.Append('|').Append(term.Geometry.Describe()).Append('|').Append(w.Form).Append('|').Append(TextHash.Exact(w.PeakValue)).Append('|')
@@ -62,9 +88,6 @@ public sealed class Scenario
                 .Append(TextHash.Exact(w.SignificantFrequencyHertz));
         }
 
-        text.Append('|').Append(Placement.Centre).Append('|').Append(Placement.Normal?.ToString() ?? "facing the field").Append('|').Append(Placement.Velocity?.ToString() ?? "still")
-            .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
-            .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         return TextHash.Sha256(text.ToString());
     }
 

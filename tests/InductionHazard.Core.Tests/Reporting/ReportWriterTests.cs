@@ -166,7 +166,7 @@ public sealed class ReportWriterTests
         HazardReport report = Report(Clear, Hot);
         Assert.Same(Hot, report.Worst[0]);
         Assert.Equal(report.InputsHash, Report(Clear, Hot).InputsHash);
-        InductionAssessment nudged = Assess(ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "plain ring", ["Material"] = "Copper", ["Diameter"] = 0.02 * (1 + 1e-12), ["WireDiameter"] = 0.002, ["Contact"] = "Skin" }, MaterialLibrary.BuiltIn), 1e-3, 50, 1, new() { ["AssetTag"] = "T-1", ["Location"] = "store" });
+        InductionAssessment nudged = Assess(ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "plain ring", ["Material"] = "Copper", ["Diameter"] = 0.02 * (1 + 1e-12), ["WireDiameter"] = 0.002, ["Contact"] = "Skin" }, MaterialLibrary.BuiltIn), 0.4e-3, 50, 1, new() { ["AssetTag"] = "T-1", ["Location"] = "store", ["Diameter (mm)"] = "20" });
         Assert.NotEqual(Clear.InputHash, nudged.InputHash);
     }
 

@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Concurrent;
 using System.Collections.Generic;
 using System.Linq;
 using System.Runtime.CompilerServices;
@@ -24,7 +25,7 @@ public sealed class ExposureCheck : IHazardCheck
     /// <summary>The most places whose exposure is kept for one source.</summary>
     public const int PlacesPerSource = 256;
 
-    private static readonly ConditionalWeakTable<FieldSource, Dictionary<Vector3D, FieldExposure>> Found = new();
+    private static readonly ConditionalWeakTable<FieldSource, ConcurrentDictionary<Vector3D, FieldExposure>> Found = new();
 
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Exposure;
@@ -71,26 +72,19 @@ public sealed class ExposureCheck : IHazardCheck
     /// <summary>The occupational exposure at a place, found once per source and place.</summary>
     private static FieldExposure At(FieldSource source, Vector3D place)
     {
-        Dictionary<Vector3D, FieldExposure> places = Found.GetValue(source, _ => new Dictionary<Vector3D, FieldExposure>());
-        lock (places)
+        ConcurrentDictionary<Vector3D, FieldExposure> places = Found.GetValue(source, _ => new ConcurrentDictionary<Vector3D, FieldExposure>());
+        if (places.TryGetValue(place, out FieldExposure? known))
         {
-            if (places.TryGetValue(place, out FieldExposure? known))
-            {
-                return known;
-            }
+            return known;
         }
 
         FieldExposure found = FieldExposure.At(source, place, publicExposure: false, HazardPolicy.Default);
-        lock (places)
+        if (places.Count >= PlacesPerSource)
         {
-            if (places.Count >= PlacesPerSource)
-            {
-                places.Clear();
-            }
-
-            places[place] = found;
+            places.Clear();
         }
 
+        places[place] = found;
         return found;
     }
 }

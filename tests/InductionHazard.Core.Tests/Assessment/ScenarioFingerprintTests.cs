@@ -1,0 +1,39 @@
+using System.Collections.Generic;
+using InductionHazard.Assessment;
+using InductionHazard.Fields;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Assessment;
+
+/// <summary>The inputs' fingerprint: the same inputs give the same one, whatever objects carry them; any change gives another.</summary>
+public class ScenarioFingerprintTests
+{
+    private static ConductiveItem Ring(double diameter = 0.02) =>
+        ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "ring", ["Material"] = "Copper", ["Diameter"] = diameter, ["WireDiameter"] = 0.002 }, MaterialLibrary.BuiltIn);
+
+    private static FieldSource Sine(double tesla = 0.01) => FieldSource.Uniform("sine", new SineWaveform(tesla, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+
+    [Fact]
+    public void TheSameInputsInNewObjectsGiveTheSameFingerprintAndAnyChangeAnother()
+    {
+        string first = new Scenario(Ring(), Sine()).Fingerprint();
+        Assert.Equal(first, new Scenario(Ring(), Sine()).Fingerprint());
+        Assert.Matches("^[0-9a-f]{64}$", first);
+        Assert.NotEqual(first, new Scenario(Ring(0.02 * (1 + 1e-12)), Sine()).Fingerprint());
+        Assert.NotEqual(first, new Scenario(Ring(), Sine(0.01 * (1 + 1e-12))).Fingerprint());
+        Assert.NotEqual(first, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0, 0, 1e-9))).Fingerprint());
+        Assert.NotEqual(first, new Scenario(Ring(), Sine(), exposureSeconds: 60).Fingerprint());
+        Assert.NotEqual(first, new Scenario(Ring(), Sine()) { StationName = "Bay 2" }.Fingerprint());
+    }
+
+    [Fact]
+    public void TheHashIsSha256()
+    {
+        // FIPS 180-2, appendix B.1: SHA-256("abc"); and of the empty text.
+        Assert.Equal("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", TextHash.Sha256("abc"));
+        Assert.Equal("e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855", TextHash.Sha256(string.Empty));
+    }
+}
