@@ -134,7 +134,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             "SafetyFactor = 3", "SafetyFactor = 0.5", "SafetyFactor = 'NaN'", "SafetyFactor = 1e300",
             "AlternatingVoltageLimit = '25 V'", "AlternatingVoltageLimit = '25 A'", "AlternatingVoltageLimit = -1", "AlternatingVoltageLimit = '1,5 V'",
             "DirectVoltageLimit = '60 V'", "DirectVoltageLimit = '1e308 V'", "ThermalDoseLimit = 1", "ThermalDoseLimit = 'abc'",
-            "TouchTime = '2 s'", "TouchTime = '2 T'", "ImpulseChargeLimit = '20 uC'", "ImpulseChargeLimit = '20 V'", "BodyResistance = '1 kohm'", "BodyResistance = '1 ohm'", "LaunchSpeedLimit = '2 m/s'", "LaunchSpeedLimit = '200 m/s'",
+            "TouchTime = '2 s'", "TouchTime = '2 T'", "ImpulseChargeLimit = '20 uC'", "ImpulseChargeLimit = '20 V'", "BodyResistance = '1 kohm'", "BodyResistance = '1 ohm'", "StaticExposureLimit = '8 T'", "StaticExposureLimit = '9 T'", "LaunchSpeedLimit = '2 m/s'", "LaunchSpeedLimit = '200 m/s'",
             "Name = 'Bay rules'", "Colour = 'red'", "SafetyFactor = (Get-Random)", "TouchTime = `$env:HOME"
         )
         $read = 0
@@ -154,7 +154,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             }
             catch {
                 $_.FullyQualifiedErrorId | Should -BeLike 'InvalidPolicyFile,*' -Because $_.Exception.Message
-                $_.Exception.Message | Should -Match '(SafetyFactor|AlternatingVoltageLimit|DirectVoltageLimit|ThermalDoseLimit|TouchTime|ImpulseChargeLimit|BodyResistance|LaunchSpeedLimit|Colour|holds code|one hashtable|does not parse)' -Because $_.Exception.Message
+                $_.Exception.Message | Should -Match '(SafetyFactor|AlternatingVoltageLimit|DirectVoltageLimit|ThermalDoseLimit|TouchTime|ImpulseChargeLimit|BodyResistance|StaticExposureLimit|LaunchSpeedLimit|Colour|holds code|one hashtable|does not parse)' -Because $_.Exception.Message
                 $refused.Add($_)
             }
         }

@@ -94,4 +94,19 @@ Describe 'A site policy in a verdict' {
         Set-Content $siteFile "@{ Site = 'Test bay'; Policy = @{ Colour = 'red' }; Stations = @( @{ Name = 'Coil'; Sources = @( @{ Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' } } ) } ) }"
         { Import-HazardSite $siteFile } | Should -Throw '*Colour: is not a policy key*'
     }
+
+    It 'lets a site with a controlled magnet hall raise the static exposure limit, and names it where it judges' {
+        # ICNIRP 2009: 2 T for the head and trunk, up to 8 T for specific work in a controlled environment.
+        $held = New-ConductiveItem -Name 'Spanner loop' -Material Titanium -Diameter '50 mm' -WireDiameter '4 mm' -Gap '10 mm' -Contact Held
+        $magnet = New-FieldWaveform -Ramp -From '0 T' -To '7 T' -Duration '10 min' | New-FieldSource -Uniform -Name 'Magnet'
+        $published = Test-InductionHazard -Item $held -Source $magnet
+        $published.Verdict | Should -Be 'Hazard'
+        $published.GoverningMechanism | Should -Be 'Exposure'
+        $hall = Test-InductionHazard -Item $held -Source $magnet -Policy @{ Name = 'Magnet hall'; StaticExposureLimit = '8 T' }
+        $hall.ExposureMargin | Should -BeGreaterThan 1.14
+        $hall.ExposureMargin | Should -BeLessThan 1.15
+        ($hall.Mechanisms | Where-Object Mechanism -EQ 'Exposure').Basis | Should -Match "site policy 'Magnet hall': StaticExposureLimit = 8 T"
+        (Test-FieldExposure -Source $magnet -Position '0, 0, 0' -Policy @{ StaticExposureLimit = '8 T' }).Margin | Should -BeGreaterThan 1.14
+        { Get-HazardPolicy -Path (New-Item (Join-Path $TestDrive 'nine.psd1') -Value "@{ StaticExposureLimit = '9 T' }") } | Should -Throw '*StaticExposureLimit*'
+    }
 }

@@ -66,6 +66,7 @@ public sealed record FieldExposure
         double peak = strength.PeakFluxDensityTesla, f = source.SignificantFrequencyHertz;
         string who = publicExposure ? "general public" : "occupational";
         var standards = new List<string> { ExposureLimits.ActionLevelSource };
+        string staticSource = publicExposure ? ExposureLimits.StaticSource : policy.SourceOf("StaticExposureLimit");
         string basis;
         double compared, limit;
         string? indeterminate = null;
@@ -73,17 +74,17 @@ public sealed record FieldExposure
         {
             basis = "static, peak";
             compared = peak;
-            limit = publicExposure ? ExposureLimits.StaticPublicTesla : ExposureLimits.StaticOccupationalTesla;
-            standards.Add(ExposureLimits.StaticSource);
+            limit = publicExposure ? ExposureLimits.StaticPublicTesla : policy.StaticExposureLimitTesla;
+            standards.Add(staticSource);
         }
         else if (source.IsSinusoidal)
         {
             basis = "sinusoid, rms";
             compared = peak / Math.Sqrt(2);
             limit = f < ExposureLimits.LowestHertz
-                ? (publicExposure ? ExposureLimits.StaticPublicTesla : ExposureLimits.StaticOccupationalTesla)
+                ? (publicExposure ? ExposureLimits.StaticPublicTesla : policy.StaticExposureLimitTesla)
                 : publicExposure ? ExposureLimits.PublicTesla(f) : ExposureLimits.OccupationalTesla(f);
-            standards.Add(f < ExposureLimits.LowestHertz ? ExposureLimits.StaticSource : ExposureLimits.TimeVaryingSource);
+            standards.Add(f < ExposureLimits.LowestHertz ? staticSource : ExposureLimits.TimeVaryingSource);
             if (double.IsNaN(limit))
             {
                 indeterminate = "the frequency (" + SiFormat.Format(f, "Hz") + ") is beyond the reference levels used here (1 Hz to 10 MHz)";
@@ -96,8 +97,8 @@ public sealed record FieldExposure
             (double index, string? problem) = WeightedPeak.At(source, point, publicExposure);
             standards.Add(ExposureLimits.TimeVaryingSource);
             standards.Add(ExposureLimits.WeightedPeakSource);
-            standards.Add(ExposureLimits.StaticSource);
-            double staticLimit = publicExposure ? ExposureLimits.StaticPublicTesla : ExposureLimits.StaticOccupationalTesla;
+            standards.Add(staticSource);
+            double staticLimit = publicExposure ? ExposureLimits.StaticPublicTesla : policy.StaticExposureLimitTesla;
             compared = peak;
             if (problem is not null)
             {

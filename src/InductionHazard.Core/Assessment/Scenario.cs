@@ -43,20 +43,19 @@ public sealed class Scenario
     /// surroundings, and the inventory row's own columns. Two scenarios with the same fingerprint gave the same inputs.
     /// </summary>
     /// <remarks>
-    /// The item's and the source's parts are hashed once per object (both are immutable) and the fingerprint hashes
-    /// those with the rest, so a whole inventory in one field does not hash the source's description again per item.
+    /// The source's part is hashed once per source (sources are immutable) and the fingerprint hashes it with the
+    /// item's part and the rest, so a whole inventory in one field does not describe the source again per item.
     /// </remarks>
     public string Fingerprint()
     {
         var text = new System.Text.StringBuilder(256);
-        text.Append(ItemHashes.GetValue(Item, ItemHash)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
+        text.Append(ItemHash(Item)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
             .Append('|').Append(Placement.Centre).Append('|').Append(Placement.Normal?.ToString() ?? "facing the field").Append('|').Append(Placement.Velocity?.ToString() ?? "still")
             .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         return TextHash.Sha256(text.ToString());
     }
 
-    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<ConductiveItem, string> ItemHashes = new();
     private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<FieldSource, string> SourceHashes = new();
 
     /// <summary>The item as the engine sees it: shape, dimensions, contact and every material constant.</summary>

@@ -66,15 +66,26 @@ public static class WeightedPeak
         var x = new Complex[n];
         var y = new Complex[n];
         var z = new Complex[n];
-        for (int i = 0; i < n; i++)
+        // Each sample is the rate averaged over its interval, the field's change over it divided by dt: a drive whose
+        // rate jumps (a ramp's corners) then gives the same record however its jumps fall on the grid, where the rate
+        // at the grid's instants would count a corner in or out whole.
+        Vector3D FieldAt(double t)
         {
-            double t = start + (i * dt);
-            Vector3D rate = Vector3D.Zero;
+            Vector3D b = Vector3D.Zero;
             for (int k = 0; k < perDrive.Length; k++)
             {
-                rate += source.Terms[k].Waveform.Rate(t) * perDrive[k];
+                b += source.Terms[k].Waveform.Value(t) * perDrive[k];
             }
 
+            return b;
+        }
+
+        Vector3D before = FieldAt(start);
+        for (int i = 0; i < n; i++)
+        {
+            Vector3D after = FieldAt(start + ((i + 1) * dt));
+            Vector3D rate = (1 / dt) * (after - before);
+            before = after;
             x[i] = rate.X;
             y[i] = rate.Y;
             z[i] = rate.Z;
@@ -88,7 +99,12 @@ public static class WeightedPeak
                 int harmonic = m <= n / 2 ? m : m - n;
                 double f = harmonic / window;
                 Complex h = Filter(Math.Abs(f), publicExposure);
-                c[m] *= f < 0 ? Complex.Conjugate(h) : h;
+
+                // Averaging over an interval filters by sinc(pi f dt) and delays by dt/2: both undone, so a sinusoid
+                // keeps its full amplitude and the samples their instants.
+                double u = Math.PI * f * dt;
+                double averaging = u == 0 ? 1 : Math.Sin(u) / u;
+                c[m] *= (f < 0 ? Complex.Conjugate(h) : h) * Complex.FromPolarCoordinates(1 / averaging, u);
             }
 
             Fourier.Inverse(c, FourierOptions.Matlab);

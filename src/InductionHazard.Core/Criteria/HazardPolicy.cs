@@ -35,6 +35,12 @@ public sealed class HazardPolicy
     /// <summary>The body resistance through which a pulse's charge and energy are reckoned, ohm (IEC TS 60479-1: 500 ohm).</summary>
     public double BodyResistanceOhms { get; init; } = 500.0;
 
+    /// <summary>
+    /// The largest static field a worker's head and trunk may be in, T (ICNIRP 2009: 2 T; up to 8 T where the
+    /// environment is controlled and work practices fit it, which is a site's decision).
+    /// </summary>
+    public double StaticExposureLimitTesla { get; init; } = ExposureLimits.StaticOccupationalTesla;
+
     /// <summary>The contact burn threshold against contact time (ISO 13732-1).</summary>
     public ContactBurnThreshold ContactBurn { get; init; } = ContactBurnThreshold.UncoatedMetal;
 
@@ -62,6 +68,7 @@ public sealed class HazardPolicy
         TextHash.Exact(DirectVoltageLimit),
         TextHash.Exact(ImpulseChargeLimit),
         TextHash.Exact(BodyResistanceOhms),
+        TextHash.Exact(StaticExposureLimitTesla),
         TextHash.Exact(ThermalDoseLimitMinutes),
         TextHash.Exact(TouchSeconds),
         TextHash.Exact(LaunchSpeedLimit),
@@ -76,6 +83,7 @@ public sealed class HazardPolicy
         new PolicyKey("DirectVoltageLimit", QuantityKind.Voltage, "V", p => p.DirectVoltageLimit, Standards.ExtraLowVoltage, "the largest unidirectional voltage a person may bridge across a gap"),
         new PolicyKey("ImpulseChargeLimit", QuantityKind.ElectricCharge, "C", p => p.ImpulseChargeLimit, Standards.ImpulseCharge, "the largest charge a pulse of at most 10 ms across a gap may drive through a person"),
         new PolicyKey("BodyResistance", QuantityKind.Resistance, "Ω", p => p.BodyResistanceOhms, Standards.BodyResistance, "the body resistance through which a pulse's charge and energy are reckoned"),
+        new PolicyKey("StaticExposureLimit", QuantityKind.MagneticFluxDensity, "T", p => p.StaticExposureLimitTesla, ExposureLimits.StaticSource, "the largest static field a worker's head and trunk may be in (occupational)"),
         new PolicyKey("ThermalDoseLimit", null, "CEM43 min", p => p.ThermalDoseLimitMinutes, Standards.ThermalDoseLimit, "the largest thermal dose the field may add to skin in contact, CEM43 minutes"),
         new PolicyKey("TouchTime", QuantityKind.Time, "s", p => p.TouchSeconds, Standards.BriefTouch, "how long a person touches an item that is not worn or held"),
         new PolicyKey("LaunchSpeedLimit", QuantityKind.Speed, "m/s", p => p.LaunchSpeedLimit, "not set: no standard gives one; a site may", "the fastest a loose item may be launched by the field (judged only where a site sets it)", Optional: true),
@@ -110,6 +118,7 @@ public sealed class HazardPolicy
         new("DirectVoltageLimit", 1.0, 1500.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1.5 kV where low voltage d.c. ends"),
         new("ImpulseChargeLimit", 1e-7, 1e-3, "C", "from 0.1 µC, below perception, to 1 mC, the charge that can fibrillate the heart in a 1 µs pulse"),
         new("BodyResistance", 100.0, 10_000.0, "Ω", "from the 100 ohm of a body's interior alone to the 10 kohm of dry skin at a low voltage"),
+        new("StaticExposureLimit", 0.1, 8.0, "T", "from a cautious 0.1 T to the 8 T ICNIRP 2009 allows for specific work in a controlled environment"),
         new("ThermalDoseLimit", 0.01, 1000.0, "CEM43 min", "from a hundredth of a minute at 43 degC to the doses of thermal ablation"),
         new("TouchTime", 0.01, Scenario8Hours, "s", "from a 10 ms flick to the 8 h longest contact of ISO 13732-1"),
         new("LaunchSpeedLimit", 0.01, 30.0, "m/s", "from a creep to the speed of a thrown item"),

@@ -51,6 +51,7 @@ public static class PolicyReader
             DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),
             ImpulseChargeLimit = Get("ImpulseChargeLimit", d.ImpulseChargeLimit),
             BodyResistanceOhms = Get("BodyResistance", d.BodyResistanceOhms),
+            StaticExposureLimitTesla = Get("StaticExposureLimit", d.StaticExposureLimitTesla),
             ThermalDoseLimitMinutes = Get("ThermalDoseLimit", d.ThermalDoseLimitMinutes),
             TouchSeconds = Get("TouchTime", d.TouchSeconds),
             LaunchSpeedLimit = Get("LaunchSpeedLimit", d.LaunchSpeedLimit),

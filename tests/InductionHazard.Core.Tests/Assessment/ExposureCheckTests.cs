@@ -45,6 +45,21 @@ public class ExposureCheckTests
     }
 
     [Fact]
+    public void ASitePolicyMayRaiseTheStaticLimitForAControlledEnvironmentAndIsNamedAsItsSource()
+    {
+        // ICNIRP 2009: up to 8 T for specific work in a controlled environment, a site's decision.
+        var controlled = new HazardPolicy { Name = "magnet hall", StaticExposureLimitTesla = 8 }.Validated();
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Titanium", 0.05, 0.004, gap: 0.01, contact: "Held"), Fixtures.UniformRamp(0, 7, 600));
+        InductionAssessment published = HazardAssessor.Assess(r, HazardPolicy.Default), site = HazardAssessor.Assess(r, controlled);
+        Within.Relative(2.0 / 7, published.ExposureMargin!.Value, 1e-9, "Exposure margin against 2 T");
+        Within.Relative(8.0 / 7, site.ExposureMargin!.Value, 1e-9, "Exposure margin against the site's 8 T");
+        Assert.Equal(Verdict.Caution, Exposure(site).Verdict);
+        Assert.Contains(Exposure(site).Sources, s => s.StartsWith("site policy 'magnet hall': StaticExposureLimit = 8 T", StringComparison.Ordinal));
+        Assert.DoesNotContain(Exposure(published).Sources, s => s.Contains("site policy", StringComparison.Ordinal));
+        Assert.Throws<Errors.InvalidInputException>(() => new HazardPolicy { StaticExposureLimitTesla = 9 }.Validated());
+    }
+
+    [Fact]
     public void TheMarginIsTheOneTestFieldExposureGivesAtTheSamePlace()
     {
         FieldSource coil = new("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 50), new SineWaveform(200, 50, drive: DriveKind.Current)) });

@@ -25,6 +25,7 @@ public sealed class PolicyReaderTests
         ["DirectVoltageLimit"] = new object?[] { "60 V", 120, "1 kV" },
         ["ImpulseChargeLimit"] = new object?[] { "20 uC", 4.5e-5, "0.01 mC" },
         ["BodyResistance"] = new object?[] { "1 kohm", 750, "2000 ohm" },
+        ["StaticExposureLimit"] = new object?[] { "4 T", 8, "500 mT" },
         ["ThermalDoseLimit"] = new object?[] { 1.0, 0.5, "2" },
         ["TouchTime"] = new object?[] { "2 s", 0.5, "500 ms" },
         ["LaunchSpeedLimit"] = new object?[] { "2 m/s", 1.5, "0.5 m/s" },

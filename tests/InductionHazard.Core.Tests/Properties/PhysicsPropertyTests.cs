@@ -214,6 +214,9 @@ public class PhysicsPropertyTests
     [Fact]
     public void TheResultDoesNotDependOnWhenTheDriveStarts()
     {
+        // The seed is a case that once failed: a worn titanium ring in a 4.7 T ramp of 1/3 s whose wearer's
+        // weighted-peak exposure moved by 1.7 % when the ramp started 1.6e-64 s later (a corner of the ramp counted in
+        // or out of a sample whole); samples are now the rate averaged over their interval.
         Gen.Select(Rings, Gen.Double[-1e5, 1e5]).Sample((c, start) =>
         {
             ConductiveItem ring = Ring(c.Diameter, c.Wire, c.Material, "Skin");
@@ -224,6 +227,6 @@ public class PhysicsPropertyTests
             {
                 Within.Relative(a.MinimumMargin, b.MinimumMargin, 1e-5, "margin at a start of " + start + " s");
             }
-        }, seed: "0N0XIzNsQ0O9", iter: Iterations);
+        }, seed: "6Uv8906QLZz5", iter: Iterations);
     }
 }

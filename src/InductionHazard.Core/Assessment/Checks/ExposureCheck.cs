@@ -25,7 +25,7 @@ public sealed class ExposureCheck : IHazardCheck
     /// <summary>The most places whose exposure is kept for one source.</summary>
     public const int PlacesPerSource = 256;
 
-    private static readonly ConditionalWeakTable<FieldSource, ConcurrentDictionary<Vector3D, FieldExposure>> Found = new();
+    private static readonly ConditionalWeakTable<FieldSource, ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure>> Found = new();
 
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Exposure;
@@ -48,7 +48,7 @@ public sealed class ExposureCheck : IHazardCheck
         FieldExposure exposure;
         try
         {
-            exposure = At(response.Scenario.Source, response.Scenario.Placement.Centre);
+            exposure = At(response.Scenario.Source, response.Scenario.Placement.Centre, policy);
         }
         catch (InductionHazardException ex)
         {
@@ -64,27 +64,28 @@ public sealed class ExposureCheck : IHazardCheck
 
         string who = response.Item.Contact == ContactKind.Skin ? "the wearer" : "the person holding it";
         string detail = "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + " against the occupational limit "
-            + SiFormat.Format(exposure.LimitTesla, "T") + (exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T)" : string.Empty)
+            + SiFormat.Format(exposure.LimitTesla, "T") + (exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T; a site policy may set StaticExposureLimit up to 8 T where the environment is controlled)" : string.Empty)
             + "; it applies with or without the item";
         return MechanismResult.Judged(Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, detail);
     }
 
-    /// <summary>The occupational exposure at a place, found once per source and place.</summary>
-    private static FieldExposure At(FieldSource source, Vector3D place)
+    /// <summary>The occupational exposure at a place, found once per source, place and policy.</summary>
+    private static FieldExposure At(FieldSource source, Vector3D place, HazardPolicy policy)
     {
-        ConcurrentDictionary<Vector3D, FieldExposure> places = Found.GetValue(source, _ => new ConcurrentDictionary<Vector3D, FieldExposure>());
-        if (places.TryGetValue(place, out FieldExposure? known))
+        var key = (place, policy.Fingerprint);
+        ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure> places = Found.GetValue(source, _ => new ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure>());
+        if (places.TryGetValue(key, out FieldExposure? known))
         {
             return known;
         }
 
-        FieldExposure found = FieldExposure.At(source, place, publicExposure: false, HazardPolicy.Default);
+        FieldExposure found = FieldExposure.At(source, place, publicExposure: false, policy);
         if (places.Count >= PlacesPerSource)
         {
             places.Clear();
         }
 
-        places[place] = found;
+        places[key] = found;
         return found;
     }
 }
