@@ -130,7 +130,10 @@ public static class HazardAssessor
         MechanismResult? own = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard).OrderBy(r => r.Margin).FirstOrDefault();
         if (own is null)
         {
-            return string.Empty;
+            string[] unjudged = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Indeterminate).Select(r => r.Mechanism.ToString()).ToArray();
+            return unjudged.Length == 0
+                ? string.Empty
+                : " The item itself could not be judged (" + string.Join(", ", unjudged) + "): treat it as unsafe here until it is assessed another way.";
         }
 
         string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);

@@ -88,6 +88,17 @@ public class ExposureCheckTests
     }
 
     [Fact]
+    public void WhenExposureGovernsTheActionStillSaysTheItemItselfCouldNotBeJudged()
+    {
+        // A thick copper frame in a strong 50 Hz field, held: the holder's exposure is over its limit, and the frame's
+        // own heating is outside the thin-wire model (Indeterminate); the action names both.
+        InductionAssessment a = Assess(Fixtures.Frame("Copper", 0.02, 0.02, 0.006, contact: "Held"), Fixtures.UniformSine(0.02, 50), exposure: 1);
+        Assert.Equal(Verdict.Hazard, a.Verdict);
+        Assert.Equal(HazardMechanism.Exposure, a.GoverningMechanism);
+        Assert.Contains("The item itself could not be judged", a.Action, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void AnExposureTheWeightedPeakCannotJudgeIsIndeterminateWithItsReason()
     {
         // A sine above 10 MHz is beyond the reference levels used: the wearer's exposure cannot be judged, and the
