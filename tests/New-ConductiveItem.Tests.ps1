@@ -24,7 +24,8 @@ Describe 'New-ConductiveItem' {
         @{ Text = '20 MM'; Refusal = '*''MM'' is not a unit of length*' }
         @{ Text = '1,5 mm'; Refusal = '*decimal comma*decimal point*' }
         @{ Text = '١٨ mm'; Refusal = '*digits other than 0-9*' }
-        @{ Text = '5 A'; Refusal = '*between 10 µm and 100 m*' }
+        @{ Text = '5 A'; Refusal = '*expected a length*current in amperes*' }
+        @{ Text = '5 Å'; Refusal = '*between 10 µm and 100 m*' }
         @{ Text = '3 T'; Refusal = '*expected a length*' }
         @{ Text = '18'; Metres = 18; Bare = $true }
     ) {

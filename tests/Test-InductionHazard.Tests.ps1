@@ -235,13 +235,20 @@ Describe 'Test-InductionHazard' {
             @{ Field = 'Gap'; Value = '1 nm' }
             @{ Field = 'Gap'; Value = 1e-15 }
             @{ Field = 'WireDiameter'; Value = 5e-324 }
-            @{ Field = 'WireDiameter'; Value = '5 A' }
+            @{ Field = 'WireDiameter'; Value = '5 Å' }
         ) {
             $row = @{ Name = 'Absurd'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
             $row[$Field] = $Value
             $out = [pscustomobject]$row | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue
             $out | Should -BeNullOrEmpty
             $bad[0].Exception.Message | Should -BeLike "*$($Field): must be between*"
+        }
+
+        It 'refuses a length typed in amperes, naming the field and saying so' {
+            $out = [pscustomobject]@{ Name = 'Ampere slip'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '5 A' } |
+                Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue
+            $out | Should -BeNullOrEmpty
+            $bad[0].Exception.Message | Should -BeLike '*WireDiameter*current in amperes*'
         }
 
         It 'refuses two columns that give one field different values' {

@@ -204,6 +204,13 @@ public static class QuantityParser
             return CheckFinite(value, trimmed, out error);
         }
 
+        // The units library reads a bare "A" as a length in angstrom; in an inventory it is an ampere in the wrong column.
+        if (info.Kind == QuantityKind.Length && unitText.Trim() == "A")
+        {
+            error = "expected " + Expectation(info) + "; got '" + trimmed + "', which is a current in amperes (for angstrom write 'Å')";
+            return false;
+        }
+
         if (TryUnit(unitText, info, out Enum? unit))
         {
             try

@@ -95,7 +95,7 @@ public class ItemRecordReaderTests
     [InlineData("Gap", "1 nm")]
     [InlineData("Gap", 1e-15)]
     [InlineData("WireDiameter", 5e-324)]
-    [InlineData("WireDiameter", "5 A")]
+    [InlineData("WireDiameter", "5 Å")]
     [InlineData("Diameter", "180 km")]
     public void SizesNoItemCanHaveAreRefusedNamingTheField(string field, object value)
     {

@@ -64,6 +64,16 @@ public class QuantityParserTests
         Assert.Equal("InvalidQuantity", error.ErrorId);
     }
 
+    [Fact]
+    public void ALengthInAmperesIsRefusedAsACurrentWhileAngstromIsReadAsALength()
+    {
+        // The units library would read "5 A" as 5 angstrom; in an inventory it is an ampere in the wrong column.
+        var error = Assert.Throws<QuantityFormatException>(() => QuantityParser.Parse("5 A", QuantityKind.Length));
+        Assert.Contains("current in amperes", error.Message, System.StringComparison.Ordinal);
+        Within.Relative(5e-10, QuantityParser.Parse("5 Å", QuantityKind.Length), 1e-12, "5 angstrom in metres");
+        Assert.Equal(5.0, QuantityParser.Parse("5 A", QuantityKind.ElectricCurrent));
+    }
+
     [Theory]
     [InlineData("")]
     [InlineData("   ")]
