@@ -308,7 +308,11 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform
             $a = New-ConductiveItem -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' | Test-InductionHazard -Source $heater
             $a.Verdict | Should -Be 'Hazard'
-            $a.GoverningMechanism | Should -Be 'Burn'
+            $a.BurnMargin | Should -BeLessThan 1
+            ($a.Reasons -join ' ') | Should -Match '^Burn: |; Burn: | Burn: '
+            # The wearer's own exposure, 2.8 mT rms against 0.1 mT, is a hazard too; the action names the burn as well.
+            $a.ExposureMargin | Should -BeLessThan 0.04
+            $a.Action | Should -Match 'burn'
         }
     }
 

@@ -24,9 +24,14 @@ internal sealed class EngineContext
         // temperature, so it exchanges heat with surroundings at that temperature (less cooling than room air:
         // the safe side). A loose or fixed item starts at, and cools to, the room.
         ThermalEnvironment surroundings = scenario.Environment;
-        var cooling = new ThermalEnvironment(scenario.InitialCelsius, surroundings.ConvectionWattsPerSquareMeterKelvin, surroundings.Emissivity);
+        var cooling = new ThermalEnvironment(scenario.InitialCelsius, surroundings.ConvectionWattsPerSquareMeterKelvin + SkinCoefficient(scenario), surroundings.Emissivity);
         Thermal = new LumpedThermalModel(scenario.Item.MassKilograms * scenario.Item.Material.SpecificHeatJoulesPerKilogramKelvin, scenario.Item.Loop.SurfaceSquareMeters, cooling);
         Start = scenario.InitialCelsius;
+        if (SkinCoefficient(scenario) > 0)
+        {
+            Notes.Add(SkinNote);
+        }
+
         Rdc = Circuit.DcResistanceOhms(Start);
         Ldc = Circuit.DcInductanceHenries;
         Frequency = source.SignificantFrequencyHertz;
@@ -212,4 +217,18 @@ internal sealed class EngineContext
     public List<string> Notes { get; } = new();
 
     public List<ValidityIssue> Issues { get; } = new();
+
+    private static readonly string SkinNote = "worn: heat flows into the skin under an eighth of its surface at the steady conductance of perfused skin, "
+        + Quantities.SiFormat.Plain(SkinContact.ConductancePerArea) + " W/(m² K) (Pennes 1948, with low-end tissue values), and it cannot cool below the skin's "
+        + Quantities.SiFormat.Celsius(SkinContact.SurfaceCelsius);
+
+    /// <summary>
+    /// The heat a worn ring or band loses into the skin under it, as a coefficient over its whole surface (Pennes'
+    /// steady contact conductance times the share of the surface on skin; see <see cref="SkinContact"/>). Zero for
+    /// an item that is not worn, a worn body of another shape, or a room warmer than skin, where the skin is no sink.
+    /// </summary>
+    private static double SkinCoefficient(Scenario scenario) =>
+        scenario.Item.Contact == ContactKind.Skin && scenario.Item.Loop is RingGeometry && scenario.InitialCelsius <= SkinContact.SurfaceCelsius
+            ? SkinContact.SurfaceAveragedCoefficient
+            : 0;
 }

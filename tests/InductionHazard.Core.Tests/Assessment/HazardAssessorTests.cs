@@ -56,9 +56,10 @@ public class HazardAssessorTests
     public void ARingThatHeatsPastTheBurnThresholdIsAHazard()
     {
         // 12 kHz, 4 mT on a copper ring: tens of amperes circulate and the ring heats far past 43 °C.
+        // (Its wearer's own exposure, 2.8 mT rms against 0.1 mT, is a Hazard too, and may govern.)
         InductionAssessment a = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.004, 12000)));
         Assert.Equal(Verdict.Hazard, a.Verdict);
-        Assert.Equal(HazardMechanism.Burn, a.GoverningMechanism);
+        Assert.True(a.BurnMargin < 1, "Burn margin " + a.BurnMargin);
         Assert.True(a.PeakTemperatureCelsius > 100);
         Assert.Contains(a.Reasons, r => r.StartsWith("Burn", StringComparison.Ordinal));
     }
