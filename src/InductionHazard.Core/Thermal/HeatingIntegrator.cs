@@ -6,8 +6,11 @@ namespace InductionHazard.Thermal;
 
 /// <summary>
 /// Integrates the lumped heating equation for a heating power that depends on time and temperature (for
-/// example I^2 R(T)), by exact steps of <see cref="LumpedThermalModel.Advance"/> with a predictor-corrector on
-/// the power (second order) and steps halved until the temperature changes by no more than a set amount.
+/// example I^2 R(T)), by exact steps of <see cref="LumpedThermalModel.Advance"/> with the power from an embedded
+/// Runge-Kutta pair in exponential form: Euler's power at the step's start (first order) and Heun's mean of the
+/// powers at its ends (second order). Their difference is the step's error estimate: a step whose estimate
+/// exceeds <see cref="ErrorToleranceKelvin"/>, or whose temperature changes by more than a set amount, is taken
+/// again shorter, and the next step grows or shrinks with the estimate.
 /// </summary>
 public static class HeatingIntegrator
 {
@@ -19,6 +22,9 @@ public static class HeatingIntegrator
     /// few hundred. A run that needs more is stopped and says so, rather than running on.
     /// </summary>
     public const int DefaultMaxSteps = 200_000;
+
+    /// <summary>The largest error estimate accepted in one step, K (the first- and second-order temperatures' difference).</summary>
+    public const double ErrorToleranceKelvin = 0.01;
 
     /// <summary>The longest step by default, s: 10 minutes.</summary>
     public const double DefaultLongestStepSeconds = 600;
@@ -90,9 +96,11 @@ public static class HeatingIntegrator
             double p1 = power(t + h, predicted);
             double mean = 0.5 * (p0 + p1);
             double next = model.Advance(temperature, mean, h);
-            if (Math.Abs(next - temperature) > maxStepKelvin && h > 1e-9 * Math.Max(1, t1 - t0))
+            double error = Math.Abs(next - predicted);
+            bool shortest = !(h > 1e-9 * Math.Max(1, t1 - t0));
+            if (!shortest && (Math.Abs(next - temperature) > maxStepKelvin || error > ErrorToleranceKelvin))
             {
-                dt = h / 2;
+                dt = h * Math.Max(0.2, Math.Min(0.5, error > ErrorToleranceKelvin ? 0.9 * Math.Sqrt(ErrorToleranceKelvin / error) : 0.5));
                 continue;
             }
 
@@ -110,7 +118,9 @@ public static class HeatingIntegrator
                 return new HeatingIntegration(temperature, energy, t, false, steps);
             }
 
-            dt = Math.Min(cap, h * 1.5);
+            // Grow by at most half, less when the error estimate is near its tolerance (the pair's estimate goes as h^2).
+            double growth = error > 0 ? Math.Min(1.5, 0.9 * Math.Sqrt(ErrorToleranceKelvin / error)) : 1.5;
+            dt = Math.Min(cap, h * Math.Max(1.0, growth));
         }
 
         return new HeatingIntegration(temperature, energy, null, false, steps);
