@@ -116,7 +116,7 @@ public sealed class HazardPolicy
         new("SafetyFactor", 1.0, 100.0, string.Empty, "a factor below 1 would call a breach Clear; above 100 it is no longer a margin but a ban"),
         new("AlternatingVoltageLimit", 1.0, 1000.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1 kV where low voltage ends"),
         new("DirectVoltageLimit", 1.0, 1500.0, "V", "a voltage a person may bridge, from a cautious 1 V to the 1.5 kV where low voltage d.c. ends"),
-        new("ImpulseChargeLimit", 1e-7, 1e-3, "C", "from 0.1 µC, below perception, to 1 mC, the charge that can fibrillate the heart in a 1 µs pulse"),
+        new("ImpulseChargeLimit", 1e-7, 2e-4, "C", "from 0.1 µC, below perception, to 0.2 mC, still five times below the 1 mC that can fibrillate the heart in a 1 µs pulse"),
         new("BodyResistance", 100.0, 10_000.0, "Ω", "from the 100 ohm of a body's interior alone to the 10 kohm of dry skin at a low voltage"),
         new("StaticExposureLimit", 0.1, 8.0, "T", "from a cautious 0.1 T to the 8 T ICNIRP 2009 allows for specific work in a controlled environment"),
         new("ThermalDoseLimit", 0.01, 1000.0, "CEM43 min", "from a hundredth of a minute at 43 degC to the doses of thermal ablation"),

@@ -134,6 +134,17 @@ public class ShockImpulseTests
     }
 
     [Fact]
+    public void AShortPulsesChargeDoesNotHideTheSteadyVoltageOfMovingTheItem()
+    {
+        // The 1 us pulse passes by its charge (47.8), but the same ring carried through a field with a steady 100 V
+        // across its gap is judged by that against 120 V d.c.: 1.2, the worse.
+        InductionResponse moving = Fixtures.Respond(SplitRing(), Pulse(314, 1e-6)) with { MotionalEmfVolts = 100 };
+        MechanismResult shock = new ShockCheck().Evaluate(moving, HazardPolicy.Default);
+        Within.Relative(1.2, shock.Margin, 1e-9, "Shock margin of the moving ring");
+        Assert.Equal("gap voltage from moving the item", shock.Quantity);
+    }
+
+    [Fact]
     public void AnImpulseThatIsNotFiniteLeavesTheSteadyLimit()
     {
         Assert.NotNull(ShockCheck.Impulse(new EmfImpulse(1e-6, 1e-4, 1e-6, 1e-6, 1e-4, 0), 300, HazardPolicy.Default));

@@ -51,16 +51,22 @@ public sealed class ShockCheck : IHazardCheck
         string quantity = alternating ? "gap voltage, rms" : "gap voltage, peak of a unidirectional pulse";
         double margin = VerdictRules.Margin(limit, predicted);
 
-        // Moving the item gives a steady (unidirectional) gap voltage of its own: judged against the d.c. limit when it is the worse.
-        if (response.MotionalEmfVolts is { } motional && VerdictRules.Margin(policy.DirectVoltageLimit, motional) < margin)
+        // A short pulse may pass by the charge it drives even above the d.c. limit: the better of the two judges it.
+        MechanismResult? byCharge = !alternating && response.GapImpulse is { } impulse && Impulse(impulse, response.PeakEmfVolts, policy) is { } judged && judged.Margin > margin
+            ? judged
+            : null;
+
+        // Moving the item gives a steady (unidirectional) gap voltage of its own: judged against the d.c. limit when it
+        // is the worse, whatever the pulse.
+        if (response.MotionalEmfVolts is { } motional && VerdictRules.Margin(policy.DirectVoltageLimit, motional) < (byCharge?.Margin ?? margin))
         {
             (predicted, limit, quantity) = (motional, policy.DirectVoltageLimit, "gap voltage from moving the item");
             margin = VerdictRules.Margin(limit, predicted);
             alternating = false;
         }
-        else if (!alternating && response.GapImpulse is { } impulse && Impulse(impulse, response.PeakEmfVolts, policy) is { } judged && judged.Margin > margin)
+        else if (byCharge is not null)
         {
-            return judged;
+            return byCharge;
         }
 
         return MechanismResult.Judged(
