@@ -86,7 +86,6 @@ public static class HazardAssessor
             Cautions = new TextList(Criteria.Cautions.For(standards)),
             PolicyName = policy.Name,
             PolicyHash = policy.Fingerprint,
-            InputHash = response.Scenario.Fingerprint(),
             SafetyFactor = policy.SafetyFactor,
             ModuleVersion = ModuleVersion,
             AssessedUtc = (now ?? DateTime.UtcNow).ToUniversalTime().ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", System.Globalization.CultureInfo.InvariantCulture),

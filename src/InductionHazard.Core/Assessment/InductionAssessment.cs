@@ -104,8 +104,17 @@ public sealed class InductionAssessment
     /// <summary>The SHA-256 fingerprint of the policy applied (<see cref="HazardPolicy.Fingerprint"/>).</summary>
     public string PolicyHash { get; init; } = string.Empty;
 
-    /// <summary>The SHA-256 fingerprint of the inputs the assessment was computed from (<see cref="Scenario.Fingerprint"/>).</summary>
-    public string InputHash { get; init; } = string.Empty;
+    private string? _inputHash;
+
+    /// <summary>
+    /// The SHA-256 fingerprint of the inputs the assessment was computed from (<see cref="Scenario.Fingerprint"/>),
+    /// found when first read: reports and exports read it, a verdict on screen does not need it.
+    /// </summary>
+    public string InputHash
+    {
+        get => _inputHash ??= Response?.Scenario?.Fingerprint() ?? string.Empty;
+        init => _inputHash = value;
+    }
 
     /// <summary>The safety factor applied between Clear and Caution.</summary>
     public double SafetyFactor { get; init; }

@@ -65,18 +65,32 @@ public sealed class BurnCheck : IHazardCheck
         // the surroundings alone reach (the item starts at or above it) is the place's own hazard, not the field's: it is
         // said, and what the field adds there is judged by the dose it adds.
         (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
-        double[] all = Durations(curve, span).ToArray();
-        double[] durations = all.Where(d => curve.CelsiusFor(d) > start).ToArray();
-        double? placeSeconds = all.Length > durations.Length ? all.Where(d => curve.CelsiusFor(d) <= start).Min() : null;
+        (double[] all, double[] thresholds) = Durations(curve, span);
+        var durations = new List<double>(all.Length);
+        var durationThresholds = new List<double>(all.Length);
+        double? placeSeconds = null;
+        for (int k = 0; k < all.Length; k++)
+        {
+            if (thresholds[k] > start)
+            {
+                durations.Add(all[k]);
+                durationThresholds.Add(thresholds[k]);
+            }
+            else
+            {
+                placeSeconds ??= all[k];
+            }
+        }
+
         // Longest contact first: the thresholds rise for shorter contacts while what is held can at most reach the peak,
         // so a contact whose margin even at the peak exceeds the worst found cannot be worse, and is not swept (exact:
         // the same margin as sweeping all, and on a tie or a NaN the shortest such contact is kept, as before).
         var levels = new TemperatureHistory.SustainedLevels(history);
         double peakHeld = TemperatureHistory.Peak(history);
-        for (int k = durations.Length - 1; k >= 0; k--)
+        for (int k = durations.Count - 1; k >= 0; k--)
         {
             double d = durations[k];
-            double threshold = curve.CelsiusFor(d);
+            double threshold = durationThresholds[k];
             if (!double.IsNaN(worst.margin) && RiseMargin(threshold, peakHeld, start) > worst.margin)
             {
                 continue;
@@ -112,7 +126,7 @@ public sealed class BurnCheck : IHazardCheck
             ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
               + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
             : string.Empty;
-        bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
+        bool contactJudged = durations.Count > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
         if (!contactJudged)
         {
             contactText = "contact temperature not the criterion: the surroundings alone reach its threshold";
@@ -154,16 +168,50 @@ public sealed class BurnCheck : IHazardCheck
     }
 
     /// <summary>Contact durations to test: the curve's points and a logarithmic grid, all within the history's span.</summary>
-    private static IEnumerable<double> Durations(ContactBurnThreshold curve, double span)
+    /// <summary>
+    /// The contact times judged, ascending and distinct: 12 a decade from the curve's shortest to the longer of its
+    /// longest and the history's span, with the curve's own points among them; and the threshold of each.
+    /// </summary>
+    private static (double[] Seconds, double[] Celsius) Durations(ContactBurnThreshold curve, double span)
     {
         double first = curve.ShortestSeconds, last = Math.Min(curve.LongestSeconds, span);
         if (last < first)
         {
-            return Array.Empty<double>();
+            return (Array.Empty<double>(), Array.Empty<double>());
         }
 
         int count = (int)Math.Ceiling(Math.Log10(last / first) * DurationsPerDecade);
-        IEnumerable<double> grid = Enumerable.Range(0, count + 1).Select(k => first * Math.Pow(last / first, count == 0 ? 0 : (double)k / count));
-        return grid.Concat(curve.Points.Select(p => p.Seconds).Where(s => s <= last)).Distinct().OrderBy(s => s);
+        var seconds = new List<double>(count + 1 + curve.Points.Count);
+        for (int k = 0; k <= count; k++)
+        {
+            seconds.Add(first * Math.Pow(last / first, count == 0 ? 0 : (double)k / count));
+        }
+
+        foreach ((double t, double _) in curve.Points)
+        {
+            if (t <= last)
+            {
+                seconds.Add(t);
+            }
+        }
+
+        seconds.Sort();
+        var distinct = new List<double>(seconds.Count);
+        foreach (double t in seconds)
+        {
+            if (distinct.Count == 0 || distinct[distinct.Count - 1] != t)
+            {
+                distinct.Add(t);
+            }
+        }
+
+        double[] result = distinct.ToArray();
+        var celsius = new double[result.Length];
+        for (int k = 0; k < result.Length; k++)
+        {
+            celsius[k] = curve.CelsiusFor(result[k]);
+        }
+
+        return (result, celsius);
     }
 }
