@@ -31,7 +31,7 @@ public class ExposureCheckTests
         Assert.Contains("the field the wearer is in", m.Detail, StringComparison.Ordinal);
     }
 
-    [Validates("Exposure of a held tool's user in a held 3 T field: 2 T static", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
+    [Validates("Exposure of a held item's user in a field ramped to 3 T: 2 T static", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
     [Fact]
     public void AHeldItemsUserInAStaticFieldIsJudgedAgainstTheHeadAndTrunkLimit()
     {

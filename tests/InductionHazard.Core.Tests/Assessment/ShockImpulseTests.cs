@@ -65,7 +65,7 @@ public class ShockImpulseTests
 
     [Validates("Shock: above 15 kV a pulse's energy into 500 ohm against 350 mJ", "IEC 60335-1 cl. 8.1.4 (350 mJ above 15 kV)", "1e-9")]
     [Fact]
-    public void AbovefifteenKilovoltsThePulseIsJudgedByItsEnergyAndTheMarginIsOnTheDrive()
+    public void AboveFifteenKilovoltsThePulseIsJudgedByItsEnergyAndTheMarginIsOnTheDrive()
     {
         // 20 kV for 0.1 us: energy (2e4)^2 x 1e-7 / 500 = 80 mJ; the margin on the drive is sqrt(0.35 / 0.08).
         MechanismResult shock = Shock(Assess(Pulse(20e3, 1e-7)));
