@@ -100,7 +100,7 @@ public static class InductionEngine
         };
         if (c.Scenario.Item.IsSplit)
         {
-            return Open(drive, c, OnePeriod(t => (emf * Complex.FromPolarCoordinates(1, omega * t)).Imaginary, f, on, c.Start), on, end);
+            return Open(drive, c, new PeriodSamples(emf, Complex.Zero, f, on, c.Start, 128), on, end);
         }
 
         if (c.PathProblem(drive) is { } unsolved)
@@ -395,15 +395,6 @@ public static class InductionEngine
         }
 
         return sum;
-    }
-
-    private static CircuitSample[] OnePeriod(Func<double, double> emf, double frequencyHertz, double t0, double celsius)
-    {
-        const int N = 128;
-        return Enumerable.Range(0, N + 1)
-            .Select(k => k / (N * frequencyHertz))
-            .Select(t => new CircuitSample(t0 + t, emf(t), 0, celsius))
-            .ToArray();
     }
 
     /// <summary>

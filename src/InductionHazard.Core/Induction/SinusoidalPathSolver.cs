@@ -75,26 +75,12 @@ public sealed class SinusoidalPathSolver
             CurrentPhasor = current,
             Impedance = emfPhasor / current,
             PeakCurrentAmperes = Math.Max(peakCurrent, current.Magnitude),
-            Circuit = OnePeriod(emfPhasor, current, frequencyHertz, fieldOn, celsius0),
+            Circuit = new PeriodSamples(emfPhasor, current, frequencyHertz, fieldOn, celsius0, SamplesPerPeriod),
             Heating = heating,
             EnergyJoules = on.EnergyJoules,
             FinalCelsius = last.FinalCelsius,
             MeltedAtSeconds = on.StoppedAboveLimitSeconds,
             BudgetExceeded = on.BudgetExceeded || last.BudgetExceeded,
         };
-    }
-
-    private static CircuitSample[] OnePeriod(Complex emf, Complex current, double frequencyHertz, double t0, double celsius)
-    {
-        var samples = new CircuitSample[SamplesPerPeriod + 1];
-        double omega = 2 * Math.PI * frequencyHertz;
-        for (int k = 0; k <= SamplesPerPeriod; k++)
-        {
-            double t = k / (SamplesPerPeriod * frequencyHertz);
-            Complex rotor = Complex.FromPolarCoordinates(1, omega * t);
-            samples[k] = new CircuitSample(t0 + t, (emf * rotor).Imaginary, (current * rotor).Imaginary, celsius);
-        }
-
-        return samples;
     }
 }
