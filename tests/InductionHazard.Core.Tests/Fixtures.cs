@@ -10,6 +10,22 @@ namespace InductionHazard.Tests;
 /// <summary>Items, sources and scenarios the tests share. The numbers are test inputs, not published values.</summary>
 internal static class Fixtures
 {
+    /// <summary>
+    /// The built-in materials and "steady copper": copper's constants with no temperature coefficient, so that heating
+    /// bends no square law and the power of a ring in a sine stays constant (test input).
+    /// </summary>
+    public static MaterialLibrary WithSteadyCopper { get; } = MaterialLibrary.BuiltIn.With(new[]
+    {
+        MaterialLibrary.Define(new Dictionary<string, object?>
+        {
+            ["Name"] = "steady copper", ["Resistivity"] = SteadyCopperResistivity, ["TemperatureCoefficient"] = 0.0, ["Density"] = 8960.0, ["SpecificHeat"] = 385.0,
+            ["MeltingTemperature"] = "1085 degC", ["LatentHeat"] = "208.7 kJ/kg",
+        }),
+    });
+
+    /// <summary>The resistivity of "steady copper", ohm m.</summary>
+    public const double SteadyCopperResistivity = 1.72e-8;
+
     public static ConductiveItem Ring(string material = "Copper", double diameter = 0.02, double wire = 0.002, double gap = 0, string contact = "Skin") =>
         ItemRecordReader.Read(
             new Dictionary<string, object?>

@@ -64,7 +64,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             Summary = Summarize(verdict, governing, policy),
-            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + ItemsOwn(applicable, governing, policy, response.Item.Contact),
+            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact),
             ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
@@ -112,31 +112,6 @@ public static class HazardAssessor
         }
 
         return applicable.Where(r => r.Verdict != Verdict.Indeterminate).OrderBy(r => r.Margin).First();
-    }
-
-    /// <summary>
-    /// Where the person's own exposure governs, the item's own worst hazard as well, so that the action for the item
-    /// is not lost behind the place's ("... The item itself: take it off before entering this place: it would burn
-    /// the skin it touches.").
-    /// </summary>
-    private static string ItemsOwn(MechanismResult[] applicable, MechanismResult? governing, HazardPolicy policy, Items.ContactKind contact)
-    {
-        if (governing?.Mechanism != HazardMechanism.Exposure)
-        {
-            return string.Empty;
-        }
-
-        MechanismResult? own = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard).OrderBy(r => r.Margin).FirstOrDefault();
-        if (own is null)
-        {
-            string[] unjudged = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Indeterminate).Select(r => r.Mechanism.ToString()).ToArray();
-            return unjudged.Length == 0
-                ? string.Empty
-                : " The item itself could not be judged (" + string.Join(", ", unjudged) + "): treat it as unsafe here until it is assessed another way.";
-        }
-
-        string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);
-        return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1);
     }
 
     private static double? MarginOf(IEnumerable<MechanismResult> results, HazardMechanism mechanism)

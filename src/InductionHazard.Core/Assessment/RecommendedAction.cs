@@ -1,3 +1,4 @@
+using System.Linq;
 using InductionHazard.Criteria;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
@@ -48,6 +49,35 @@ public static class RecommendedAction
             HazardMechanism.Exposure => "Keep people out of this place while the source runs, with or without the item: the field here is above the limit for a person's own exposure (see Test-FieldExposure).",
             _ => keepOut + " until the exposure is reduced and it is assessed again.",
         };
+    }
+
+    /// <summary>
+    /// Where the person's own exposure governs, the item's own worst hazard as well, so that the action for the item
+    /// is not lost behind the place's ("... The item itself: take it off before entering this place: it would burn
+    /// the skin it touches.").
+    /// </summary>
+    /// <param name="applicable">The mechanisms that apply.</param>
+    /// <param name="governing">The mechanism that governs.</param>
+    /// <param name="policy">The policy.</param>
+    /// <param name="contact">How a person touches the item.</param>
+    public static string ItemItself(System.Collections.Generic.IReadOnlyList<MechanismResult> applicable, MechanismResult? governing, HazardPolicy policy, ContactKind contact)
+    {
+        if (governing?.Mechanism != HazardMechanism.Exposure)
+        {
+            return string.Empty;
+        }
+
+        MechanismResult? own = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard).OrderBy(r => r.Margin).FirstOrDefault();
+        if (own is null)
+        {
+            string[] unjudged = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Indeterminate).Select(r => r.Mechanism.ToString()).ToArray();
+            return unjudged.Length == 0
+                ? string.Empty
+                : " The item itself could not be judged (" + string.Join(", ", unjudged) + "): treat it as unsafe here until it is assessed another way.";
+        }
+
+        string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);
+        return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1);
     }
 
     /// <summary>The action in a few words, for a table at 80 columns: "Take it off", "Keep out or fix down", "Unsafe until assessed", "Use with care", "None".</summary>

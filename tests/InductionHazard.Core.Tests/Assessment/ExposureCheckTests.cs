@@ -44,6 +44,7 @@ public class ExposureCheckTests
         }
     }
 
+    [Validates("A site's static exposure limit for a controlled environment: at most 8 T", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
     [Fact]
     public void ASitePolicyMayRaiseTheStaticLimitForAControlledEnvironmentAndIsNamedAsItsSource()
     {

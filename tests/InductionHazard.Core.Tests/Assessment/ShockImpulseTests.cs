@@ -173,6 +173,7 @@ public class ShockImpulseTests
         Within.Relative(0.05 * v0, impulse.OutsidePeakVolts, 2e-3, "the largest emf outside the impulse");
     }
 
+    [Validates("The default pulse charge limit against the charge that fibrillates at 1 us (1 mC)", "Pratt, Panescu, Andrews and Kroll, IEEE EMBC 2015", "a factor of 20")]
     [Fact]
     public void TheChargeLimitLiesBelowTheChargeThatFibrillatesInAMicrosecondPulse()
     {

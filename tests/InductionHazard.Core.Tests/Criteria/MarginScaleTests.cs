@@ -17,14 +17,7 @@ namespace InductionHazard.Tests.Criteria;
 /// </summary>
 public sealed class MarginScaleTests
 {
-    /// <summary>Copper's constants with no temperature coefficient, so that heating does not bend a force's square law (test input).</summary>
-    private static readonly MaterialLibrary Steady = MaterialLibrary.BuiltIn.With(new[]
-    {
-        MaterialLibrary.Define(new Dictionary<string, object?>
-        {
-            ["Name"] = "steady copper", ["Resistivity"] = 1.72e-8, ["TemperatureCoefficient"] = 0.0, ["Density"] = 8960.0, ["SpecificHeat"] = 385.0, ["MeltingTemperature"] = "1085 degC",
-        }),
-    });
+    private static readonly MaterialLibrary Steady = Fixtures.WithSteadyCopper;
 
     private static ConductiveItem Ring(double gap, string contact = "Free", string material = "Copper") =>
         ItemRecordReader.Read(

@@ -15,17 +15,9 @@ namespace InductionHazard.Tests.Thermal;
 /// <summary>Melting with its latent heat: the time to melt through after the melting point is reached.</summary>
 public class MeltThroughTests
 {
-    private const double MeanDiameter = 0.06, Wire = 0.002, Rho = 1.72e-8, Density = 8960, SpecificHeat = 385, Melting = 1085, Latent = 208.7e3;
+    private const double MeanDiameter = 0.06, Wire = 0.002, Rho = Fixtures.SteadyCopperResistivity, Density = 8960, SpecificHeat = 385, Melting = 1085, Latent = 208.7e3;
 
-    /// <summary>Copper's constants with no temperature coefficient, so that the power stays constant (test input).</summary>
-    private static readonly MaterialLibrary Steady = MaterialLibrary.BuiltIn.With(new[]
-    {
-        MaterialLibrary.Define(new Dictionary<string, object?>
-        {
-            ["Name"] = "steady copper", ["Resistivity"] = Rho, ["TemperatureCoefficient"] = 0.0, ["Density"] = Density, ["SpecificHeat"] = SpecificHeat,
-            ["MeltingTemperature"] = Melting + " degC", ["LatentHeat"] = "208.7 kJ/kg",
-        }),
-    });
+    private static readonly MaterialLibrary Steady = Fixtures.WithSteadyCopper;
 
     private static InductionResponse Respond(double tesla, string material = "steady copper", ThermalEnvironment? room = null) =>
         InductionEngine.Respond(new Scenario(
@@ -68,6 +60,7 @@ public class MeltThroughTests
         Assert.Null(held.MeltThroughSeconds);
     }
 
+    [Validates("Copper's latent heat of fusion, 13.26 kJ/mol", "CRC Handbook of Chemistry and Physics (from memory)", "1e-3")]
     [Fact]
     public void EveryBuiltInMaterialHasALatentHeatWithItsSource()
     {

@@ -58,10 +58,7 @@ public class SkinContactTests
     {
         // A copper ring of constant resistivity, no radiation, worn in a 20 degC room (so it starts at and cools to the
         // skin's 33 degC): its steady rise is P / ((h + hs f) A), with P = e^2 R / (R^2 + (w L)^2) (thin ring, Maxwell's L).
-        var materials = MaterialLibrary.BuiltIn.With(new[]
-        {
-            MaterialLibrary.Define(new Dictionary<string, object?> { ["Name"] = "steady copper", ["Resistivity"] = 1.72e-8, ["TemperatureCoefficient"] = 0.0, ["Density"] = 8960.0, ["SpecificHeat"] = 385.0, ["MeltingTemperature"] = "1085 degC" }),
-        });
+        MaterialLibrary materials = Fixtures.WithSteadyCopper;
         ConductiveItem Ring(string contact) => ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "ring", ["Material"] = "steady copper", ["Diameter"] = 0.02, ["WireDiameter"] = 0.002, ["Contact"] = contact }, materials);
         double a = 0.01, r = 0.001, omega = 2 * Math.PI * 50, tesla = 0.02;
         double resistance = 1.72e-8 * 2 * Math.PI * a / (Math.PI * r * r), inductance = PhysicalConstants.VacuumPermeability * a * (Math.Log(8 * a / r) - 1.75);
