@@ -77,6 +77,7 @@ public static class TemperatureHistory
     {
         private readonly double[] _times;
         private readonly double[] _temps;
+        private readonly double[] _slopes;
         private readonly int[] _queue;
 
         /// <summary>Copies the history once.</summary>
@@ -85,19 +86,26 @@ public static class TemperatureHistory
             int n = history.Count;
             _times = new double[n];
             _temps = new double[n];
+            _slopes = new double[n];
             _queue = new int[n];
             for (int k = 0; k < n; k++)
             {
                 _times[k] = history[k].TimeSeconds;
                 _temps[k] = history[k].TemperatureCelsius;
             }
+
+            for (int k = 0; k + 1 < n; k++)
+            {
+                double span = _times[k + 1] - _times[k];
+                _slopes[k] = span > 0 ? (_temps[k + 1] - _temps[k]) / span : 0;
+            }
         }
 
         /// <summary>The highest temperature held for a duration, °C; NaN when the history is shorter.</summary>
-        public double For(double seconds) => Sustained(_times, _temps, seconds, _queue);
+        public double For(double seconds) => Sustained(_times, _temps, _slopes, seconds, _queue);
     }
 
-    private static double Sustained(double[] times, double[] temps, double seconds, int[] queue)
+    private static double Sustained(double[] times, double[] temps, double[] slopes, double seconds, int[] queue)
     {
         int n = times.Length;
         if (n < 2 || times[n - 1] - times[0] < seconds)
@@ -174,8 +182,8 @@ public static class TemperatureHistory
             }
 
             double interior = tail > head ? temps[queue[head]] : double.PositiveInfinity;
-            double startA = Linear(times, temps, j, a), startB = Linear(times, temps, j, b);
-            double endA = Linear(times, temps, m, a + seconds), endB = Linear(times, temps, m, b + seconds);
+            double startA = Linear(times, temps, slopes, j, a), startB = Linear(times, temps, slopes, j, b);
+            double endA = Linear(times, temps, slopes, m, a + seconds), endB = Linear(times, temps, slopes, m, b + seconds);
             best = Math.Max(best, Math.Min(interior, Math.Max(Math.Min(startA, endA), Math.Min(startB, endB))));
             double da = startA - endA, db = startB - endB;
             if (da * db < 0)
@@ -201,16 +209,16 @@ public static class TemperatureHistory
         return best;
     }
 
-    /// <summary>The history's value at t on the piece from sample k to k + 1 (held at the ends outside it).</summary>
-    private static double Linear(double[] times, double[] temps, int k, double t)
+    /// <summary>The history's value at t on the piece from sample k to k + 1 (held at the ends outside it), by the piece's slope.</summary>
+    private static double Linear(double[] times, double[] temps, double[] slopes, int k, double t)
     {
-        double ta = times[k], tb = times[k + 1];
-        if (t <= ta || tb <= ta)
+        double ta = times[k];
+        if (t <= ta)
         {
-            return t <= ta ? temps[k] : temps[k + 1];
+            return temps[k];
         }
 
-        return t >= tb ? temps[k + 1] : temps[k] + ((temps[k + 1] - temps[k]) * (t - ta) / (tb - ta));
+        return t >= times[k + 1] ? temps[k + 1] : temps[k] + (slopes[k] * (t - ta));
     }
 
     /// <summary>The longest continuous time the history spends at or above a level, s.</summary>

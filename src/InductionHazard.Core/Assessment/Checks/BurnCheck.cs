@@ -82,26 +82,11 @@ public sealed class BurnCheck : IHazardCheck
             }
         }
 
-        // Longest contact first: the thresholds rise for shorter contacts while what is held can at most reach the peak,
-        // so a contact whose margin even at the peak exceeds the worst found cannot be worse, and is not swept (exact:
-        // the same margin as sweeping all, and on a tie or a NaN the shortest such contact is kept, as before).
         var levels = new TemperatureHistory.SustainedLevels(history);
-        double peakHeld = TemperatureHistory.Peak(history);
-        for (int k = durations.Count - 1; k >= 0; k--)
+        if (durations.Count > 0)
         {
-            double d = durations[k];
-            double threshold = durationThresholds[k];
-            if (!double.IsNaN(worst.margin) && RiseMargin(threshold, peakHeld, start) > worst.margin)
-            {
-                continue;
-            }
-
-            double held = levels.For(d);
-            double m = RiseMargin(threshold, held, start);
-            if (double.IsNaN(m) || (!double.IsNaN(worst.margin) && m <= worst.margin))
-            {
-                worst = (m, d, held, threshold);
-            }
+            int at = WorstContact(levels.For, TemperatureHistory.Peak(history), durations, durationThresholds, start, out double heldThere, out double marginThere);
+            worst = (marginThere, durations[at], heldThere, durationThresholds[at]);
         }
 
         if (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start)
@@ -146,6 +131,89 @@ public sealed class BurnCheck : IHazardCheck
 
         return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
             "skin in contact: " + contactText + "; " + doseText + place);
+    }
+
+    /// <summary>
+    /// The contact time whose margin is smallest (on a tie the shortest; if any margin is NaN, the shortest whose
+    /// margin is NaN), with what is held for it and its margin. Exact: the same answer as sweeping every contact time.
+    /// </summary>
+    /// <remarks>
+    /// What is held for a contact never rises with its length (a longer window contains a shorter one), so the
+    /// level held for a shorter contact (or the peak) bounds it from above, and the margin from below. The longest
+    /// contact time is swept first, then every fourth, then the rest, each only when that bound does not already put
+    /// its margin above the smallest found.
+    /// </remarks>
+    /// <param name="held">What the history holds for a contact time (an exact sweep).</param>
+    /// <param name="peak">The history's peak, which bounds what is held for any contact time.</param>
+    /// <param name="durations">The contact times, ascending.</param>
+    /// <param name="thresholds">The threshold for each.</param>
+    /// <param name="start">The starting temperature, °C.</param>
+    /// <param name="heldThere">What is held for the contact time returned.</param>
+    /// <param name="margin">Its margin.</param>
+    /// <returns>The index of the contact time.</returns>
+    internal static int WorstContact(Func<double, double> held, double peak, IReadOnlyList<double> durations, IReadOnlyList<double> thresholds, double start, out double heldThere, out double margin)
+    {
+        const int Stride = 4;
+        int n = durations.Count;
+        var levels = new double[n];
+        var swept = new bool[n];
+        int worst = -1;
+        bool anyNaN = false;
+        void Sweep(int k)
+        {
+            levels[k] = held(durations[k]);
+            swept[k] = true;
+            double m = RiseMargin(thresholds[k], levels[k], start);
+            if (double.IsNaN(m))
+            {
+                anyNaN = true;
+            }
+            else if (worst < 0 || m < Margin(worst) || (m == Margin(worst) && k < worst))
+            {
+                worst = k;
+            }
+        }
+
+        double Margin(int k) => RiseMargin(thresholds[k], levels[k], start);
+
+        // The longest contact first (its threshold is the lowest), then every fourth, then the rest: each skipped
+        // when the level held for the nearest shorter contact swept (or the peak) bounds its margin above the smallest.
+        Sweep(n - 1);
+        for (int pass = 0; pass < 2 && !anyNaN; pass++)
+        {
+            double bound = peak;
+            for (int k = 0; k < n - 1 && !anyNaN; k++)
+            {
+                if (!swept[k] && (pass == 1 || k % Stride == 0) && !(RiseMargin(thresholds[k], bound, start) > Margin(worst)))
+                {
+                    Sweep(k);
+                }
+
+                bound = swept[k] ? Math.Min(bound, levels[k]) : bound;
+            }
+        }
+
+        if (anyNaN)
+        {
+            // Not judged somewhere: the shortest such contact time is the answer, so every one is swept.
+            for (int k = 0; k < n; k++)
+            {
+                if (!swept[k])
+                {
+                    Sweep(k);
+                }
+
+                if (double.IsNaN(Margin(k)))
+                {
+                    worst = k;
+                    break;
+                }
+            }
+        }
+
+        heldThere = levels[worst];
+        margin = Margin(worst);
+        return worst;
     }
 
     private static string[] SourcesOf(HazardPolicy policy) =>
