@@ -129,9 +129,24 @@ public static class QuantityParser
     /// <summary>True when the text is a number with no unit ("18", " 0.5 ").</summary>
     public static bool IsBareNumber(string text)
     {
+        if (Bare.TryGetValue(text, out bool bare))
+        {
+            return bare;
+        }
+
         Match m = NumberAndUnit.Match(text);
-        return m.Success && m.Groups["unit"].Value.Length == 0;
+        bare = m.Success && m.Groups["unit"].Value.Length == 0;
+        if (Bare.Count >= ParsedCapacity)
+        {
+            Bare.Clear();
+        }
+
+        Bare[text] = bare;
+        return bare;
     }
+
+    /// <summary>Texts already asked whether they are bare numbers (inventories repeat them).</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, bool> Bare = new(StringComparer.Ordinal);
 
     private static bool TryParseText(string text, QuantityKindInfo info, out double value, out string? error)
     {

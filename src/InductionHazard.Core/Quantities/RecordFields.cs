@@ -155,6 +155,26 @@ public sealed class RecordFields
     /// <summary>"Diameter (mm)", "Diameter [mm]" and "Diameter_mm" are the field Diameter with bare numbers in mm.</summary>
     private static (string Name, string? Unit) SplitUnit(string name)
     {
+        // Every row of a file has the same column names: each is split once.
+        if (SplitNames.TryGetValue(name, out (string Name, string? Unit) known))
+        {
+            return known;
+        }
+
+        (string Name, string? Unit) split = SplitUnitOnce(name);
+        if (SplitNames.Count >= 4096)
+        {
+            SplitNames.Clear();
+        }
+
+        SplitNames[name] = split;
+        return split;
+    }
+
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, (string Name, string? Unit)> SplitNames = new(StringComparer.Ordinal);
+
+    private static (string Name, string? Unit) SplitUnitOnce(string name)
+    {
         System.Text.RegularExpressions.Match m = UnitInName.Match(name);
         if (m.Success)
         {
@@ -295,16 +315,59 @@ public sealed class RecordFields
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
     {
-        var chars = name.Where(c => !char.IsWhiteSpace(c) && c != '-' && c != '_' && c != '.').ToArray();
-        return new string(chars).ToLowerInvariant();
+        bool plain = true;
+        foreach (char c in name)
+        {
+            if (char.IsWhiteSpace(c) || c == '-' || c == '_' || c == '.' || char.ToLowerInvariant(c) != c)
+            {
+                plain = false;
+                break;
+            }
+        }
+
+        if (plain)
+        {
+            return name;
+        }
+
+        if (Normalized.TryGetValue(name, out string? known))
+        {
+            return known;
+        }
+
+        string normalized = NormalizeOnce(name);
+        if (Normalized.Count >= 4096)
+        {
+            Normalized.Clear();
+        }
+
+        Normalized[name] = normalized;
+        return normalized;
+    }
+
+    /// <summary>Names already normalized: field names, their aliases and a file's columns come back on every row.</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, string> Normalized = new(StringComparer.Ordinal);
+
+    private static string NormalizeOnce(string name)
+    {
+        var chars = new System.Text.StringBuilder(name.Length);
+        foreach (char c in name)
+        {
+            if (!char.IsWhiteSpace(c) && c != '-' && c != '_' && c != '.')
+            {
+                chars.Append(c);
+            }
+        }
+
+        return chars.ToString().ToLowerInvariant();
     }
 
     private string? Find(string field, string[] aliases)
     {
         string? found = null;
-        foreach (string name in new[] { field }.Concat(aliases))
+        for (int k = -1; k < aliases.Length; k++)
         {
-            string key = Normalize(name);
+            string key = Normalize(k < 0 ? field : aliases[k]);
             if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
             {
                 found ??= key;
@@ -326,6 +389,24 @@ public sealed class RecordFields
     private void CheckOneValue(string field, string[] aliases)
     {
         if (_conflictsReported.Contains(field))
+        {
+            return;
+        }
+
+        // Most records give a field once: then there is nothing to compare.
+        string? first = null;
+        bool more = false;
+        for (int k = -1; k < aliases.Length && !more; k++)
+        {
+            string key = Normalize(k < 0 ? field : aliases[k]);
+            if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
+            {
+                more = first is not null && first != key;
+                first ??= key;
+            }
+        }
+
+        if (!more && _shadowed.Count == 0)
         {
             return;
         }
