@@ -103,6 +103,156 @@ public static class TemperatureHistory
 
         /// <summary>The highest temperature held for a duration, °C; NaN when the history is shorter.</summary>
         public double For(double seconds) => Sustained(_times, _temps, _slopes, seconds, _queue);
+
+        /// <summary>
+        /// The highest temperature held for each of several durations (ascending), in one sweep down through the
+        /// history's levels; null when the history has a NaN or more than <see cref="MostPeaks"/> separate stretches
+        /// above some level, where asking <see cref="For"/> for each is the cheaper way.
+        /// </summary>
+        public double[]? ForAll(IReadOnlyList<double> ascending) => ByLevels(_times, _temps, ascending);
+    }
+
+    /// <summary>The most separate stretches above a level that the sweep through the levels keeps before it gives up.</summary>
+    public const int MostPeaks = 32;
+
+    /// <summary>
+    /// What is held for each duration, by sweeping the level L down from the peak: the history at or above L is a set
+    /// of stretches (runs of samples at or above L, each reaching out along the pieces on either side to where they
+    /// cross L), and what is held for d is the highest L at which some stretch is at least d long. Between two sample
+    /// levels the stretches keep their samples, and each one's length is linear in L, so the level for d is found by
+    /// interpolation; where stretches join at a sample level, the length jumps and the level is that sample's.
+    /// </summary>
+    private static double[]? ByLevels(double[] times, double[] temps, IReadOnlyList<double> ascending)
+    {
+        int n = times.Length;
+        var held = new double[ascending.Count];
+        if (n < 2)
+        {
+            return null;
+        }
+
+        var order = new int[n];
+        for (int k = 0; k < n; k++)
+        {
+            if (double.IsNaN(temps[k]))
+            {
+                return null;
+            }
+
+            order[k] = k;
+        }
+
+        Array.Sort((double[])temps.Clone(), order);
+        var runEnd = new int[n];     // for the first sample of a stretch, its last; -1 while a sample is below the level
+        var runStart = new int[n];   // for the last sample of a stretch, its first
+        for (int k = 0; k < n; k++)
+        {
+            runEnd[k] = -1;
+            runStart[k] = -1;
+        }
+
+        var starts = new List<int>(MostPeaks);
+        int pending = 0;
+        double Length(int i, int j, double level)
+        {
+            double length = times[j] - times[i];
+            if (i > 0 && level < temps[i])
+            {
+                length += (times[i] - times[i - 1]) * (temps[i] - level) / (temps[i] - temps[i - 1]);
+            }
+
+            if (j < n - 1 && level < temps[j])
+            {
+                length += (times[j + 1] - times[j]) * (temps[j] - level) / (temps[j] - temps[j + 1]);
+            }
+
+            return length;
+        }
+
+        int next = n - 1;
+        while (next >= 0 && pending < held.Length)
+        {
+            // Every sample at this level joins the stretches beside it.
+            double level = temps[order[next]];
+            while (next >= 0 && temps[order[next]] == level)
+            {
+                int k = order[next--];
+                int first = k, last = k;
+                if (k > 0 && runStart[k - 1] >= 0)
+                {
+                    first = runStart[k - 1];
+                    starts.Remove(first);
+                    runStart[k - 1] = -1;
+                }
+
+                if (k < n - 1 && runEnd[k + 1] >= 0)
+                {
+                    last = runEnd[k + 1];
+                    starts.Remove(k + 1);
+                    runEnd[k + 1] = -1;
+                }
+
+                if (first != k)
+                {
+                    runEnd[k] = -1;
+                }
+
+                runEnd[first] = last;
+                runStart[last] = first;
+                starts.Add(first);
+            }
+
+            if (starts.Count > MostPeaks)
+            {
+                return null;
+            }
+
+            double longest = 0;
+            foreach (int i in starts)
+            {
+                longest = Math.Max(longest, Length(i, runEnd[i], level));
+            }
+
+            while (pending < held.Length && ascending[pending] <= longest)
+            {
+                held[pending++] = level;
+            }
+
+            if (next < 0)
+            {
+                break;
+            }
+
+            // Down to the next sample level: each stretch grows linearly; the highest level at which one reaches d.
+            double below = temps[order[next]];
+            double reach = 0;
+            foreach (int i in starts)
+            {
+                reach = Math.Max(reach, Length(i, runEnd[i], below));
+            }
+
+            while (pending < held.Length && ascending[pending] < reach)
+            {
+                double d = ascending[pending], best = double.NegativeInfinity;
+                foreach (int i in starts)
+                {
+                    double top = Length(i, runEnd[i], level), bottom = Length(i, runEnd[i], below);
+                    if (bottom > d)
+                    {
+                        best = Math.Max(best, level + ((below - level) * (d - top) / (bottom - top)));
+                    }
+                }
+
+                held[pending++] = best;
+            }
+        }
+
+        for (; pending < held.Length; pending++)
+        {
+            held[pending] = double.NaN;
+        }
+
+        return held;
     }
 
     private static double Sustained(double[] times, double[] temps, double[] slopes, double seconds, int[] queue)

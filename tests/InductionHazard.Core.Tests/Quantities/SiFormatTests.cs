@@ -39,4 +39,46 @@ public class SiFormatTests
         Assert.Equal("NaN", SiFormat.Margin(double.NaN));
         Assert.Equal(string.Empty, SiFormat.Margin(null));
     }
+
+    /// <summary>The rounding as first written: .NET's own custom format ("0.##") of the value rounded away from zero.</summary>
+    private static string ByTheFormatter(double value, int significantDigits)
+    {
+        if (value == 0)
+        {
+            return "0";
+        }
+
+        int magnitude = (int)System.Math.Floor(System.Math.Log10(System.Math.Abs(value))) + 1;
+        int decimals = System.Math.Max(0, System.Math.Min(15, significantDigits - magnitude));
+        double rounded = System.Math.Round(value, decimals, System.MidpointRounding.AwayFromZero);
+        return rounded.ToString("0." + new string('#', System.Math.Max(1, decimals)), System.Globalization.CultureInfo.InvariantCulture);
+    }
+
+    [Fact]
+    public void PlainNumbersReadAsTheRuntimesOwnFormatterWritesThem()
+    {
+        var random = new System.Random(20261202);
+        for (int trial = 0; trial < 200_000; trial++)
+        {
+            int digits = 1 + random.Next(15);
+            double value = (random.Next(2) == 0 ? -1 : 1) * System.Math.Pow(10, -3 + (9 * random.NextDouble()));
+            if (trial % 3 == 0)
+            {
+                // Values on a rounding edge: a few significant digits and a trailing 5.
+                value = System.Math.Round(value, 3) + (0.5 * System.Math.Pow(10, -3));
+            }
+
+            if (System.Math.Abs(value) >= 1e6 || System.Math.Abs(value) < 1e-3)
+            {
+                continue;
+            }
+
+            Assert.Equal(ByTheFormatter(value, digits), SiFormat.Plain(value, digits));
+        }
+
+        foreach (double edge in new[] { 999.5, 999.4999, 0.0015, 0.00149999, 1.005, 2.675, 99.95, 0.1, 0.3, 123456.5 })
+        {
+            Assert.Equal(ByTheFormatter(edge, 3), SiFormat.Plain(edge, 3));
+        }
+    }
 }

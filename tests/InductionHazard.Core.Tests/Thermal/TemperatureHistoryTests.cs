@@ -88,4 +88,47 @@ public class TemperatureHistoryTests
             }
         }
     }
+
+    [Validates("the highest temperature held for every contact time at once, by a sweep down through the levels, 300 random histories with plateaus", "bisection on the longest run at or above a level (independent algorithm)", "1e-9")]
+    [Fact]
+    public void TheSweepThroughTheLevelsEqualsBisectionOnTheLongestRunForRandomHistories()
+    {
+        var random = new System.Random(20261202);
+        int swept = 0;
+        for (int trial = 0; trial < 300; trial++)
+        {
+            int n = random.Next(2, 40);
+            var history = new HeatingSample[n];
+            double t = 0;
+            bool plateaus = trial % 3 == 0;
+            for (int k = 0; k < n; k++)
+            {
+                t += k == 0 ? 0 : 0.1 + (random.NextDouble() * 10);
+                // Some histories take few distinct values, so that samples share levels and stretches join at them.
+                double temperature = plateaus ? 30 + random.Next(4) : 30 + (random.NextDouble() * 40);
+                history[k] = new HeatingSample(t, temperature, 0);
+            }
+
+            var durations = new[] { 0.0, 0.01 * t, 0.1 * t, 0.37 * t, 0.8 * t, t, 1.01 * t };
+            double[]? all = new TemperatureHistory.SustainedLevels(history).ForAll(durations);
+            if (all is null)
+            {
+                continue;
+            }
+
+            swept++;
+            for (int k = 0; k < durations.Length; k++)
+            {
+                if (durations[k] > t)
+                {
+                    Assert.True(double.IsNaN(all[k]), "trial " + trial + ": a contact longer than the history has no answer");
+                    continue;
+                }
+
+                Within.Absolute(ByBisection(history, durations[k]), all[k], 1e-9, "trial " + trial + ", " + durations[k] + " s");
+            }
+        }
+
+        Assert.True(swept > 250, "the sweep through the levels answered only " + swept + " of 300 histories");
+    }
 }

@@ -118,4 +118,33 @@ public class ThermalDoseTests
 
         Assert.True(compared > 50, compared + " histories had a dose margin to compare");
     }
+
+    [Fact]
+    public void TheAddedDoseIsTheHistorysDoseLessTheHeldStartsOnRandomHistoriesAcross43Degrees()
+    {
+        // The added dose (each sample's weight shared by the pieces beside it, the logarithmic mean on each piece)
+        // against the piecewise integral of each piece on its own (split at 43 degC) less the constant start's dose.
+        var random = new Random(20261203);
+        for (int trial = 0; trial < 300; trial++)
+        {
+            double start = 30 + (random.NextDouble() * 8), t = 0;
+            var history = new List<HeatingSample> { new(0, start, 0) };
+            for (int k = 0; k < 2 + random.Next(60); k++)
+            {
+                t += random.Next(8) == 0 ? 0 : random.NextDouble() * 300;
+                // Some pieces flat or nearly so, some crossing 43 degC, some ending on it.
+                double celsius = random.Next(4) switch
+                {
+                    0 => history[history.Count - 1].TemperatureCelsius,
+                    1 => history[history.Count - 1].TemperatureCelsius + (1e-6 * random.NextDouble()),
+                    2 => 43,
+                    _ => start + (random.NextDouble() * 15),
+                };
+                history.Add(new HeatingSample(t, celsius, 0));
+            }
+
+            double whole = ThermalDose.Cem43Minutes(history), expected = whole - ThermalDose.Cem43Minutes(start, t);
+            Within.Absolute(expected, ThermalDose.AddedCem43Minutes(history, start), 1e-9 * whole, "trial " + trial + " (to 1e-9 of the history's whole dose)");
+        }
+    }
 }

@@ -85,7 +85,11 @@ public sealed class BurnCheck : IHazardCheck
         var levels = new TemperatureHistory.SustainedLevels(history);
         if (durations.Count > 0)
         {
-            int at = WorstContact(levels.For, TemperatureHistory.Peak(history), durations, durationThresholds, start, out double heldThere, out double marginThere);
+            // Every contact time at once by a sweep through the levels; for a history with many peaks, one window
+            // sweep per contact time, skipping those that cannot be the worst.
+            double[]? everyLevel = levels.ForAll(durations);
+            Func<double, double> held = everyLevel is null ? levels.For : d => everyLevel[durations.BinarySearch(d)];
+            int at = WorstContact(held, TemperatureHistory.Peak(history), durations, durationThresholds, start, out double heldThere, out double marginThere);
             worst = (marginThere, durations[at], heldThere, durationThresholds[at]);
         }
 
