@@ -30,12 +30,16 @@ public sealed class SinusoidalPathSolver
     /// <summary>
     /// The steady response of one loop of impedance Z(T) to an emf phasor E: I = E / Z, P = |E|^2 Re Z / (2 |Z|^2).
     /// </summary>
-    public static Func<double, SteadyState> Loop(Func<double, Complex> impedanceAtCelsius, Complex emfPhasor) => celsius =>
+    public static Func<double, SteadyState> Loop(Func<double, Complex> impedanceAtCelsius, Complex emfPhasor)
     {
-        Complex z = impedanceAtCelsius(celsius);
-        double e2 = emfPhasor.Magnitude * emfPhasor.Magnitude;
-        return new SteadyState(0.5 * e2 * z.Real / (z.Magnitude * z.Magnitude), emfPhasor / z);
-    };
+        // Squared magnitudes as sums of squares: the library's magnitude guards against overflow that volts and ohms never reach.
+        double e2 = (emfPhasor.Real * emfPhasor.Real) + (emfPhasor.Imaginary * emfPhasor.Imaginary);
+        return celsius =>
+        {
+            Complex z = impedanceAtCelsius(celsius);
+            return new SteadyState(0.5 * e2 * z.Real / ((z.Real * z.Real) + (z.Imaginary * z.Imaginary)), emfPhasor / z);
+        };
+    }
 
     /// <summary>Runs the heating while the field is on and the cooling after it, to the end of the exposure.</summary>
     /// <param name="emfPhasor">The emf phasor E (peak) around the outline, e(t) = Im(E e^(j omega (t - t0))), V.</param>
@@ -57,7 +61,8 @@ public sealed class SinusoidalPathSolver
             }
 
             SteadyState state = _responseAt(celsius);
-            peakCurrent = Math.Max(peakCurrent, state.CurrentPhasor.Magnitude);
+            Complex i = state.CurrentPhasor;
+            peakCurrent = Math.Max(peakCurrent, Math.Sqrt((i.Real * i.Real) + (i.Imaginary * i.Imaginary)));
             return state.PowerWatts;
         }
 

@@ -16,6 +16,20 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
 {
     private const int Samples = 64;
 
+    /// <summary>The sine and cosine of each sample's phase, 2 pi n / 64, found once.</summary>
+    private static readonly double[] Sines = Table(Math.Sin), Cosines = Table(Math.Cos);
+
+    private static double[] Table(Func<double, double> f)
+    {
+        var values = new double[Samples];
+        for (int n = 0; n < Samples; n++)
+        {
+            values[n] = f(2 * Math.PI * n / Samples);
+        }
+
+        return values;
+    }
+
     /// <summary>The force and torque over one cycle.</summary>
     /// <param name="circuit">The modes with their force coupling and moment weights.</param>
     /// <param name="modal">The modal amplitude phasors Z_k.</param>
@@ -45,8 +59,8 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
         double peakTorque = 0;
         for (int n = 0; n < Samples; n++)
         {
-            double phase = 2 * Math.PI * n / Samples;
-            Complex rotor = Complex.FromPolarCoordinates(1, phase);
+            double sin = Sines[n], cos = Cosines[n];
+            var rotor = new Complex(cos, sin);
             double m = (moment * rotor).Imaginary;
             Vector3D force = Vector3D.Zero, torque = Vector3D.Zero;
             for (int j = 0; j < terms; j++)
@@ -54,7 +68,7 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
                 double d = (drives[j] * rotor).Imaginary;
 
                 // Im(P e^(j phase)) = Re(P) sin(phase) + Im(P) cos(phase), componentwise.
-                force += d * ((Math.Sin(phase) * forceRe[j]) + (Math.Cos(phase) * forceIm[j]));
+                force += d * ((sin * forceRe[j]) + (cos * forceIm[j]));
                 if (torqueField is not null)
                 {
                     torque += (m * d) * torqueField[j];

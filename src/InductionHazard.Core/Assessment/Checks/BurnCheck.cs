@@ -252,6 +252,25 @@ public sealed class BurnCheck : IHazardCheck
             return (Array.Empty<double>(), Array.Empty<double>());
         }
 
+        // Every run as long as the curve's longest contact has the same grid: it is made once per curve.
+        if (LastGrid is { } known && ReferenceEquals(known.Curve, curve) && known.Last == last)
+        {
+            return (known.Seconds, known.Celsius);
+        }
+
+        (double[] Seconds, double[] Celsius) grid = Grid(curve, first, last);
+        LastGrid = new DurationGrid(curve, last, grid.Seconds, grid.Celsius);
+        return grid;
+    }
+
+    /// <summary>The last grid made, with its curve and its longest contact time (read and replaced whole, so any thread may).</summary>
+    private static DurationGrid? LastGrid;
+
+    private sealed record DurationGrid(ContactBurnThreshold Curve, double Last, double[] Seconds, double[] Celsius);
+
+    private static (double[] Seconds, double[] Celsius) Grid(ContactBurnThreshold curve, double first, double last)
+    {
+
         int count = (int)Math.Ceiling(Math.Log10(last / first) * DurationsPerDecade);
         var seconds = new List<double>(count + 1 + curve.Points.Count);
         for (int k = 0; k <= count; k++)
