@@ -26,8 +26,15 @@ public static class HeatingIntegrator
     /// <summary>The largest error estimate accepted in one step, K (the first- and second-order temperatures' difference).</summary>
     public const double ErrorToleranceKelvin = 0.01;
 
-    /// <summary>The longest step by default, s: 10 minutes.</summary>
-    public const double DefaultLongestStepSeconds = 600;
+    /// <summary>
+    /// The longest step by default, s: an hour. A longer step is taken only where the temperature is steady (the
+    /// error control and the largest temperature change bound it elsewhere), and the contact checks read the history
+    /// exactly as it is sampled, so this bounds only how coarse a chart of a long plateau may look.
+    /// </summary>
+    public const double DefaultLongestStepSeconds = 3600;
+
+    /// <summary>The shortest first step, s (or the cap, if shorter): a run's first step is a thousandth of it, at least this.</summary>
+    private const double FirstStepFloorSeconds = 6;
 
     /// <summary>
     /// Integrates from t0 to t1 and appends samples. Stops early, and says so, when the temperature passes
@@ -63,14 +70,14 @@ public static class HeatingIntegrator
         double energy = 0;
         // Each step is the exact solution of the linearised equation with the power at its mean: accurate however
         // long while the temperature moves little, so the step is bounded by the temperature change (maxStepKelvin),
-        // not by the cooling time constant; 10 min at most keeps the history readable for the contact checks.
+        // not by the cooling time constant; an hour at most keeps a chart of a long plateau readable.
         double cap = maxStepSeconds ?? DefaultLongestStepSeconds;
         if (!(cap > 0) || double.IsInfinity(cap))
         {
             cap = Math.Max((t1 - t0) / 1000, 1e-9);
         }
 
-        double dt = Math.Min(cap, Math.Max((t1 - t0) / 1000, cap / 100));
+        double dt = Math.Min(cap, Math.Max((t1 - t0) / 1000, Math.Min(cap, FirstStepFloorSeconds)));
         int steps = 0;
         while (t < t1)
         {
