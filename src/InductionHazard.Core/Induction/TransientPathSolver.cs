@@ -19,12 +19,20 @@ namespace InductionHazard.Induction;
 public sealed class TransientPathSolver
 {
     private const double Growth = 1.25;
+
+    /// <summary>
+    /// The growth of a step once it is eight times the slowest mode's time constant: every mode has then decayed to
+    /// e^-8 of what a change of drive started within one step, and the step is exact for a drive linear over it,
+    /// so only the temperature (0.5 K a step) and the longest step bound it.
+    /// </summary>
+    private const double SettledGrowth = 4;
     private const int MaxRecordedSamples = 4000;
 
     private readonly ModalCircuit _circuit;
     private readonly Func<double, double> _scaleAt;
     private readonly LumpedThermalModel _thermal;
     private readonly double _leadTimeConstant;
+    private readonly double _slowestTimeConstant;
 
     /// <summary>Creates the solver.</summary>
     /// <param name="circuit">The modes and their coupling to the drives.</param>
@@ -39,6 +47,7 @@ public sealed class TransientPathSolver
         double best = -1;
         for (int k = 0; k < circuit.Count; k++)
         {
+            _slowestTimeConstant = Math.Max(_slowestTimeConstant, circuit.Lambdas[k]);
             double weight = 0;
             for (int j = 0; j < circuit.Terms; j++)
             {
@@ -216,7 +225,7 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                h = Math.Min(h * Growth, MaxStep(temperature, t));
+                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : Growth), MaxStep(temperature, t));
             }
 
             if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))
