@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using InductionHazard.Quantities;
 using MathNet.Numerics;
 
 namespace InductionHazard.Thermal;
@@ -73,50 +74,41 @@ public static class ThermalDose
         }
 
         double baseline = Scaled(history, startCelsius, 0);
-        double Added(double k)
-        {
-            // A scaled history far beyond the range overflows the exponential: that dose is beyond any limit.
-            double added = Scaled(history, startCelsius, k) - baseline;
-            return double.IsNaN(added) ? double.PositiveInfinity : added;
-        }
-
         double inRange = (FittedUpToCelsius - startCelsius) / rise;
         if (!(inRange > 0))
         {
             return null;
         }
 
-        double addedInRange = Added(inRange);
-        if (addedInRange < limitMinutes)
+        // G(k) = ln(added dose / limit) and its slope, in one pass. A scaled history far beyond the range overflows
+        // the exponential: that dose is beyond any limit.
+        double G(double k, out double slope)
+        {
+            double added = Scaled(history, startCelsius, k, out double derivative, slope: true) - baseline;
+            if (double.IsNaN(added) || double.IsPositiveInfinity(added))
+            {
+                slope = double.NaN;
+                return double.PositiveInfinity;
+            }
+
+            slope = derivative / added;
+            return added > 0 ? Math.Log(added / limitMinutes) : double.NegativeInfinity;
+        }
+
+        double x = inRange;
+        double gx = G(x, out double gSlope);
+        if (gx < 0)
         {
             return null;
         }
 
         // The added dose grows with k from 0 at k = 0, close to exponentially (the CEM43 rate is 2 per kelvin above
-        // 43 degC): regula falsi with the Illinois step on the log of added dose over the limit, nearly linear in k, in
-        // the bracket [0, inRange]; a bisection step wherever an end is not finite (a scaled history that overflows, or
-        // no dose at k = 0). Ten or so passes over the history instead of bisection's forty.
-        double G(double k)
-        {
-            double added = Added(k);
-            return added > 0 ? Math.Log(added / limitMinutes) : double.NegativeInfinity;
-        }
-
-        double low = 0, high = inRange, gLow = double.NegativeInfinity, gHigh = addedInRange > 0 ? Math.Log(addedInRange / limitMinutes) : double.NegativeInfinity;
-        int side = 0;
+        // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the range's end, kept inside the
+        // bracket [0, inRange] that holds the root (a bisection step wherever Newton's would leave it, or G or its
+        // slope is not finite). Five or so passes over the history instead of bisection's forty.
+        double low = 0, high = inRange;
         for (int i = 0; i < 200 && high - low > 1e-12 * high; i++)
         {
-            double x = 0.5 * (low + high);
-            if (!double.IsInfinity(gLow) && !double.IsInfinity(gHigh) && gHigh > gLow)
-            {
-                double secant = low - (gLow * (high - low) / (gHigh - gLow));
-                if (secant > low && secant < high)
-                {
-                    x = secant;
-                }
-            }
-
-            double gx = G(x);
             if (Math.Abs(gx) < 1e-13)
             {
                 // The dose at x is the limit to 1e-13 relative: x is the root to about that, over the log's slope.
@@ -125,16 +117,16 @@ public static class ThermalDose
 
             if (gx < 0)
             {
-                (low, gLow) = (x, gx);
-                gHigh = side == -1 && !double.IsInfinity(gHigh) ? 0.5 * gHigh : gHigh;
-                side = -1;
+                low = x;
             }
             else
             {
-                (high, gHigh) = (x, gx);
-                gLow = side == 1 && !double.IsInfinity(gLow) ? 0.5 * gLow : gLow;
-                side = 1;
+                high = x;
             }
+
+            double newton = x - (gx / gSlope);
+            x = Finite.Is(gx) && gSlope > 0 && newton > low && newton < high ? newton : 0.5 * (low + high);
+            gx = G(x, out gSlope);
         }
 
         return 0.5 * (low + high);
@@ -147,9 +139,13 @@ public static class ThermalDose
     /// exponential shared by the two pieces beside it; a piece whose weights differ by less than 0.1 % takes the
     /// series of e^x - 1 instead (no cancellation). The root search for the margin calls this a dozen times.
     /// </remarks>
-    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k)
+    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k) => Scaled(history, startCelsius, k, out _, slope: false);
+
+    /// <summary>The same, and with <paramref name="slope"/> its derivative in k, minutes per unit k (for Newton's steps).</summary>
+    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k, out double derivative, bool slope)
     {
-        if (k == 0)
+        derivative = 0;
+        if (k == 0 && !slope)
         {
             // Held at the start throughout: one weight over the whole span.
             double seconds = 0;
@@ -163,29 +159,34 @@ public static class ThermalDose
 
         double minutes = 0;
         HeatingSample a = history[0];
-        double ca = startCelsius + (k * (a.TemperatureCelsius - startCelsius));
+        double ra = a.TemperatureCelsius - startCelsius;
+        double ca = startCelsius + (k * ra);
         double wa = Weight(ca);
         for (int i = 1; i < history.Count; i++)
         {
             HeatingSample b = history[i];
-            double cb = startCelsius + (k * (b.TemperatureCelsius - startCelsius));
+            double rb = b.TemperatureCelsius - startCelsius;
+            double cb = startCelsius + (k * rb);
             double wb = Weight(cb);
             double seconds = b.TimeSeconds - a.TimeSeconds;
             if (seconds > 0)
             {
                 if ((ca - BreakpointCelsius) * (cb - BreakpointCelsius) < 0)
                 {
-                    // Split where it crosses 43 degC, where the weight is 1 at either rate.
+                    // Split where it crosses 43 degC, where the weight is 1 at either rate (so the split's own motion
+                    // with k adds nothing to the derivative).
                     double before = seconds * (BreakpointCelsius - ca) / (cb - ca);
-                    minutes += LogMean(wa, 1, ca, BreakpointCelsius, Rate(ca), before) + LogMean(1, wb, BreakpointCelsius, cb, Rate(cb), seconds - before);
+                    double rc = ra + ((rb - ra) * (before / seconds));
+                    minutes += LogMean(wa, 1, ca, BreakpointCelsius, ra, rc, Rate(ca), before, slope, ref derivative)
+                        + LogMean(1, wb, BreakpointCelsius, cb, rc, rb, Rate(cb), seconds - before, slope, ref derivative);
                 }
                 else
                 {
-                    minutes += LogMean(wa, wb, ca, cb, Rate(0.5 * (ca + cb)), seconds);
+                    minutes += LogMean(wa, wb, ca, cb, ra, rb, Rate(0.5 * (ca + cb)), seconds, slope, ref derivative);
                 }
             }
 
-            (a, ca, wa) = (b, cb, wb);
+            (a, ra, ca, wa) = (b, rb, cb, wb);
         }
 
         return minutes;
@@ -195,17 +196,37 @@ public static class ThermalDose
     private static double Weight(double celsius) =>
         Math.Exp((celsius >= BreakpointCelsius ? LogRateAbove : LogRateBelow) * (BreakpointCelsius - celsius));
 
-    /// <summary>The integral of r^(43 - T) over a piece where T runs linearly from c0 to c1 and the weights are w0 and w1, minutes.</summary>
-    private static double LogMean(double w0, double w1, double c0, double c1, double r, double seconds)
+    /// <summary>
+    /// The integral of r^(43 - T) over a piece where T runs linearly from c0 to c1 and the weights are w0 and w1,
+    /// minutes; with <paramref name="slope"/>, adds to <paramref name="derivative"/> its derivative in k when T = start
+    /// + k rise, the rise running from rise0 to rise1: -ln r times the integral of rise times the weight.
+    /// </summary>
+    private static double LogMean(double w0, double w1, double c0, double c1, double rise0, double rise1, double r, double seconds, bool slope, ref double derivative)
     {
-        double x = -(r == RateAbove ? LogRateAbove : LogRateBelow) * (c1 - c0);  // ln(w1 / w0)
+        double logRate = r == RateAbove ? LogRateAbove : LogRateBelow;
+        double x = -logRate * (c1 - c0);  // ln(w1 / w0)
+        double mean, firstMoment;
         if (Math.Abs(x) < 1e-3)
         {
             // (e^x - 1) / x to five terms: the next is below x^5 / 720, under 2e-18.
-            return w0 * seconds / 60.0 * (1 + (x / 2 * (1 + (x / 3 * (1 + (x / 4 * (1 + (x / 5))))))));
+            mean = w0 * (1 + (x / 2 * (1 + (x / 3 * (1 + (x / 4 * (1 + (x / 5))))))));
+        }
+        else
+        {
+            mean = (w1 - w0) / x;
         }
 
-        return seconds / 60.0 * (w1 - w0) / x;
+        if (slope)
+        {
+            // w0 times the integral of u e^(x u) over [0, 1]: (e^x (x - 1) + 1) / x^2, or its series for small x (for a
+            // Newton step, whose accuracy only sets how fast the root is reached).
+            firstMoment = Math.Abs(x) < 1e-2
+                ? w0 * (0.5 + (x * ((1.0 / 3) + (x * (0.125 + (x * ((1.0 / 30) + (x / 144))))))))
+                : ((w1 * (x - 1)) + w0) / (x * x);
+            derivative += -logRate * seconds / 60.0 * ((rise0 * mean) + ((rise1 - rise0) * firstMoment));
+        }
+
+        return seconds / 60.0 * mean;
     }
 
     /// <summary>The dose of a constant temperature held for a time, minutes.</summary>
