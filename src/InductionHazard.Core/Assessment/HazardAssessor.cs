@@ -114,10 +114,17 @@ public static class HazardAssessor
         return applicable.Where(r => r.Verdict != Verdict.Indeterminate).OrderBy(r => r.Margin).First();
     }
 
-    private static double? MarginOf(IEnumerable<MechanismResult> results, HazardMechanism mechanism)
+    private static double? MarginOf(MechanismResult[] results, HazardMechanism mechanism)
     {
-        MechanismResult? r = results.FirstOrDefault(m => m.Mechanism == mechanism);
-        return r is { Applies: true } ? r.Margin : null;
+        foreach (MechanismResult r in results)
+        {
+            if (r.Mechanism == mechanism)
+            {
+                return r.Applies ? r.Margin : null;
+            }
+        }
+
+        return null;
     }
 
     private static string Summarize(Verdict verdict, MechanismResult? governing, HazardPolicy policy)

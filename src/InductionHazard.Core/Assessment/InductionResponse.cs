@@ -223,6 +223,18 @@ public sealed record InductionResponse
     public override string ToString() => ItemName + " in " + SourceName;
 
     /// <summary>The validity issues that affect any of the given results.</summary>
-    public IReadOnlyList<ValidityIssue> IssuesAffecting(AffectedResults results) =>
-        ValidityIssues.Where(i => (i.Affects & results) != 0).ToArray();
+    public IReadOnlyList<ValidityIssue> IssuesAffecting(AffectedResults results)
+    {
+        List<ValidityIssue>? affecting = null;
+        for (int k = 0; k < ValidityIssues.Count; k++)
+        {
+            ValidityIssue issue = ValidityIssues[k];
+            if ((issue.Affects & results) != 0)
+            {
+                (affecting ??= new List<ValidityIssue>()).Add(issue);
+            }
+        }
+
+        return affecting is null ? Array.Empty<ValidityIssue>() : affecting.ToArray();
+    }
 }

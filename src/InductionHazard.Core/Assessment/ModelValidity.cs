@@ -183,5 +183,6 @@ public static class ModelValidity
         return true;
     }
 
-    private static string Num(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
+    /// <summary>Three significant figures, so that a small ratio (a Biot number of 2E-05) does not read as 0.</summary>
+    private static string Num(double value) => SiFormat.Plain(value);
 }

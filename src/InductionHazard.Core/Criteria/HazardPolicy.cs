@@ -130,6 +130,12 @@ public sealed class HazardPolicy
     /// <exception cref="InvalidInputException">A value is out of range.</exception>
     public HazardPolicy Validated()
     {
+        // A policy's values are fixed once it is made: one check is enough, however many items it judges.
+        if (_validated)
+        {
+            return this;
+        }
+
         if (!(SafetyFactor >= 1) || double.IsInfinity(SafetyFactor))
         {
             throw new InvalidInputException("SafetyFactor", "must be a finite number of at least 1; got " + SafetyFactor);
@@ -145,6 +151,9 @@ public sealed class HazardPolicy
             }
         }
 
+        _validated = true;
         return this;
     }
+
+    private bool _validated;
 }

@@ -362,4 +362,13 @@ public class InductionEngineTests
         Assert.True(lastPulses - r.InitialTemperatureCelsius > 1, "the train heats the ring by more than a kelvin: " + (lastPulses - r.InitialTemperatureCelsius));
         Within.Relative(r.PeriodicSteadyStateCelsius!.Value - r.InitialTemperatureCelsius, lastPulses - r.InitialTemperatureCelsius, 3e-2, "settled rise");
     }
+
+    [Fact]
+    public void TheModelNotesGiveASmallBiotNumberInSignificantFigures()
+    {
+        // A 2 mm copper wire in still air: h r / k is of order 1e-5, which three decimals would show as 0.
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.01, 50));
+        string note = r.ModelNotes.Single(n => n.StartsWith("lumped heating: Biot number", System.StringComparison.Ordinal));
+        Assert.Matches(@"^lumped heating: Biot number [0-9.]+E-0[0-9] < 0\.1$", note);
+    }
 }
