@@ -315,6 +315,12 @@ public sealed class RecordFields
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
     {
+        // The same name objects come back on every row (the code's field names, a file's header): known by identity first.
+        if (Normalized.TryGetValue(name, out string? known))
+        {
+            return known;
+        }
+
         bool plain = true;
         foreach (char c in name)
         {
@@ -325,17 +331,7 @@ public sealed class RecordFields
             }
         }
 
-        if (plain)
-        {
-            return name;
-        }
-
-        if (Normalized.TryGetValue(name, out string? known))
-        {
-            return known;
-        }
-
-        string normalized = NormalizeOnce(name);
+        string normalized = plain ? name : NormalizeOnce(name);
         if (Normalized.Count >= 4096)
         {
             Normalized.Clear();
@@ -346,7 +342,17 @@ public sealed class RecordFields
     }
 
     /// <summary>Names already normalized: field names, their aliases and a file's columns come back on every row.</summary>
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, string> Normalized = new(StringComparer.Ordinal);
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, string> Normalized = new(SameObject.Instance);
+
+    /// <summary>Strings compared as objects: a lookup costs no hashing of the text (an equal text in another object is only a miss).</summary>
+    private sealed class SameObject : IEqualityComparer<string>
+    {
+        public static readonly SameObject Instance = new();
+
+        public bool Equals(string? x, string? y) => ReferenceEquals(x, y);
+
+        public int GetHashCode(string obj) => System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(obj);
+    }
 
     private static string NormalizeOnce(string name)
     {
