@@ -258,6 +258,7 @@ public static class InductionEngine
                 StopAboveCelsius = c.MeltingCelsius,
                 MaxStepSeconds = maxStep,
                 CurvedUntilSeconds = curvedUntil,
+                CoolingFromSeconds = outside,
                 MaxSteps = budget,
                 CrossCoupling = c.CrossCoupling,
                 CrossPowerFactor = c.CrossPowerFactor,

@@ -71,6 +71,13 @@ public sealed class TransientPathSolver
     /// <summary>Until when <see cref="MaxStepSeconds"/> applies, s: after it the emf is piecewise linear (leaving, cooling).</summary>
     public double CurvedUntilSeconds { get; init; } = double.PositiveInfinity;
 
+    /// <summary>
+    /// From when every drive is zero, s: the item only cools (its currents die away within a few steps of their time
+    /// constant), and a step may be as long as the cooling time constant instead of a tenth of it. The temperature
+    /// then falls along a convex curve, which the history's straight pieces lie above: on the safe side.
+    /// </summary>
+    public double CoolingFromSeconds { get; init; } = double.PositiveInfinity;
+
     /// <summary>The most steps before the run gives up and says so.</summary>
     public int MaxSteps { get; init; } = HeatingIntegrator.DefaultMaxSteps;
 
@@ -378,7 +385,7 @@ public sealed class TransientPathSolver
         Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / 8, segment), MaxStep(celsius, t));
 
     private double MaxStep(double celsius, double t) =>
-        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / 10, 1e-6));
+        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / (t >= CoolingFromSeconds ? 1 : 10), 1e-6));
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork

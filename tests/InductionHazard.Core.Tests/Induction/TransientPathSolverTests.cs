@@ -91,4 +91,30 @@ public class TransientPathSolverTests
         double expectedEnd = e / (R * (1 + (0.00393 * (run.FinalCelsius - 20))));
         Within.Relative(expectedEnd, run.Circuit[run.Circuit.Count - 1].CurrentAmperes, 1e-3, "current at the end follows e / R(T)");
     }
+
+    [Fact]
+    public void CoolingInLongStepsAfterTheDriveKeepsTheHistoryAtOrAboveTheFineOne()
+    {
+        // A ring heated by a 1 s pulse, then left to cool for 10 min: once every drive is zero the steps may reach the
+        // cooling time constant. The coarse history must end where the fine one does (to 0.01 K), and its straight
+        // pieces must lie at or above the fine history (the cooling curve is convex): never a cooler-looking item.
+        var thermal = new LumpedThermalModel(0.21, 2e-4, new ThermalEnvironment(20, 10, 0.1));
+        Func<double, double> emf = t => t < 1 ? 0.03 : 0;
+        TransientRun Run(double coolingFrom) =>
+            new TransientPathSolver(ModalCircuit.OneLoop(L, R), _ => 1, thermal) { CoolingFromSeconds = coolingFrom }
+                .Run(emf, new[] { 1.0 }, 0, 600, 20, CancellationToken.None);
+        TransientRun fine = Run(double.PositiveInfinity), coarse = Run(1.0);
+        Assert.True(fine.Heating.Max(h => h.TemperatureCelsius) > 30, "the pulse heats the ring by more than 10 K");
+        Assert.True(coarse.Steps < fine.Steps, "the cooling takes fewer steps (" + coarse.Steps + " against " + fine.Steps + ")");
+        Within.Absolute(fine.FinalCelsius, coarse.FinalCelsius, 0.01, "the temperature after 10 min");
+        Within.Relative(fine.EnergyJoules, coarse.EnergyJoules, 1e-9, "the energy of the pulse");
+        foreach (HeatingSample f in fine.Heating.Where(h => h.TimeSeconds > 1))
+        {
+            int k = coarse.Heating.ToList().FindIndex(h => h.TimeSeconds >= f.TimeSeconds);
+            HeatingSample b = coarse.Heating[k], a = coarse.Heating[Math.Max(0, k - 1)];
+            double onChord = b.TimeSeconds == a.TimeSeconds ? b.TemperatureCelsius
+                : a.TemperatureCelsius + ((b.TemperatureCelsius - a.TemperatureCelsius) * (f.TimeSeconds - a.TimeSeconds) / (b.TimeSeconds - a.TimeSeconds));
+            Assert.True(onChord >= f.TemperatureCelsius - 1e-3, "at t = " + f.TimeSeconds + " s the coarse history reads " + onChord + " against " + f.TemperatureCelsius);
+        }
+    }
 }
