@@ -88,12 +88,30 @@ public static class HazardAssessor
             PolicyHash = policy.Fingerprint,
             SafetyFactor = policy.SafetyFactor,
             ModuleVersion = ModuleVersion,
-            AssessedUtc = (now ?? DateTime.UtcNow).ToUniversalTime().ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", System.Globalization.CultureInfo.InvariantCulture),
+            AssessedUtc = Stamp((now ?? DateTime.UtcNow).ToUniversalTime()),
             StationName = response.Scenario.StationName ?? string.Empty,
             Inventory = response.Scenario.Inventory,
             Response = response,
         };
     }
+
+    /// <summary>The time as recorded, to the second; the last one written is kept, as a run writes the same second many times.</summary>
+    private static string Stamp(DateTime utc)
+    {
+        long second = utc.Ticks / TimeSpan.TicksPerSecond;
+        if (LastStamp is { } last && last.Second == second)
+        {
+            return last.Text;
+        }
+
+        string text = utc.ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", System.Globalization.CultureInfo.InvariantCulture);
+        LastStamp = new StampText(second, text);
+        return text;
+    }
+
+    private static StampText? LastStamp;
+
+    private sealed record StampText(long Second, string Text);
 
     /// <summary>A value the assessment shows only when no broken assumption affects it: never a safe-looking number.</summary>
     private static double Trusted(InductionResponse response, AffectedResults needs, double value) =>

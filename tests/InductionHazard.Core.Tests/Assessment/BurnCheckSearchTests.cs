@@ -68,7 +68,7 @@ public sealed class BurnCheckSearchTests
             }
 
             int expected = EverySwept(history, durations, thresholds, start, out double expectedMargin);
-            int found = BurnCheck.WorstContact(d => TemperatureHistory.SustainedFor(history, d), TemperatureHistory.Peak(history), durations, thresholds, start, out _, out double margin);
+            int found = BurnCheck.WorstContact(k => TemperatureHistory.SustainedFor(history, durations[k]), TemperatureHistory.Peak(history), durations, thresholds, start, out _, out double margin);
             Assert.True(expected == found, "trial " + trial + ": contact time " + found + " chosen, every one swept gives " + expected);
             Assert.True(expectedMargin.Equals(margin) || Math.Abs(expectedMargin - margin) <= 1e-12 * expectedMargin, "trial " + trial + ": margin " + margin + " against " + expectedMargin);
         }

@@ -88,7 +88,7 @@ public sealed class BurnCheck : IHazardCheck
             // Every contact time at once by a sweep through the levels; for a history with many peaks, one window
             // sweep per contact time, skipping those that cannot be the worst.
             double[]? everyLevel = levels.ForAll(durations);
-            Func<double, double> held = everyLevel is null ? levels.For : d => everyLevel[durations.BinarySearch(d)];
+            Func<int, double> held = everyLevel is null ? k => levels.For(durations[k]) : k => everyLevel[k];
             int at = WorstContact(held, TemperatureHistory.Peak(history), durations, durationThresholds, start, out double heldThere, out double marginThere);
             worst = (marginThere, durations[at], heldThere, durationThresholds[at]);
         }
@@ -147,7 +147,7 @@ public sealed class BurnCheck : IHazardCheck
     /// contact time is swept first, then every fourth, then the rest, each only when that bound does not already put
     /// its margin above the smallest found.
     /// </remarks>
-    /// <param name="held">What the history holds for a contact time (an exact sweep).</param>
+    /// <param name="held">What the history holds for the contact time of an index (an exact sweep).</param>
     /// <param name="peak">The history's peak, which bounds what is held for any contact time.</param>
     /// <param name="durations">The contact times, ascending.</param>
     /// <param name="thresholds">The threshold for each.</param>
@@ -155,7 +155,7 @@ public sealed class BurnCheck : IHazardCheck
     /// <param name="heldThere">What is held for the contact time returned.</param>
     /// <param name="margin">Its margin.</param>
     /// <returns>The index of the contact time.</returns>
-    internal static int WorstContact(Func<double, double> held, double peak, IReadOnlyList<double> durations, IReadOnlyList<double> thresholds, double start, out double heldThere, out double margin)
+    internal static int WorstContact(Func<int, double> held, double peak, IReadOnlyList<double> durations, IReadOnlyList<double> thresholds, double start, out double heldThere, out double margin)
     {
         const int Stride = 4;
         int n = durations.Count;
@@ -165,7 +165,7 @@ public sealed class BurnCheck : IHazardCheck
         bool anyNaN = false;
         void Sweep(int k)
         {
-            levels[k] = held(durations[k]);
+            levels[k] = held(k);
             swept[k] = true;
             double m = RiseMargin(thresholds[k], levels[k], start);
             if (double.IsNaN(m))
