@@ -332,8 +332,10 @@ public sealed class RecordFields
         }
 
         string normalized = plain ? name : NormalizeOnce(name);
-        if (Normalized.Count >= 4096)
+        if (System.Threading.Interlocked.Increment(ref _normalizedAdded) % 4096 == 0)
         {
+            // Names made afresh for every row would otherwise fill it: it starts again (counted, as the store's own
+            // count takes all its locks).
             Normalized.Clear();
         }
 
@@ -343,6 +345,8 @@ public sealed class RecordFields
 
     /// <summary>Names already normalized: field names, their aliases and a file's columns come back on every row.</summary>
     private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, string> Normalized = new(SameObject.Instance);
+
+    private static int _normalizedAdded;
 
     /// <summary>Strings compared as objects: a lookup costs no hashing of the text (an equal text in another object is only a miss).</summary>
     private sealed class SameObject : IEqualityComparer<string>

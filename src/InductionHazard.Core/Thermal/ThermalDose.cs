@@ -1,7 +1,6 @@
 using System;
 using System.Collections.Generic;
 using InductionHazard.Quantities;
-using MathNet.Numerics;
 
 namespace InductionHazard.Thermal;
 
@@ -55,8 +54,8 @@ public static class ThermalDose
 
     /// <summary>
     /// The margin on the rise for a dose limit: the factor k on the temperature rise the field adds (T' = start +
-    /// k (T - start)) at which the added dose reaches the limit, by bisection on the exactly integrated dose
-    /// (which grows with k). Infinity when nothing is added. Null when that factor would take the history above
+    /// k (T - start)) at which the added dose reaches the limit, by Newton's steps kept inside a bracket on the
+    /// exactly integrated dose (which grows with k). Infinity when nothing is added. Null when that factor would take the history above
     /// <see cref="FittedUpToCelsius"/>, where the relation does not hold: the dose cannot then be the criterion.
     /// </summary>
     public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes)
@@ -137,7 +136,7 @@ public static class ThermalDose
     /// Each piece integrates exactly as <see cref="Segment"/> does, written as the logarithmic mean of the weights
     /// R^(43 - T) at its ends, (w1 - w0) / ln(w1 / w0) times its length, so that each sample's weight is one
     /// exponential shared by the two pieces beside it; a piece whose weights differ by less than 0.1 % takes the
-    /// series of e^x - 1 instead (no cancellation). The root search for the margin calls this a dozen times.
+    /// series of e^x - 1 instead (no cancellation). The root search for the margin calls this five or so times.
     /// </remarks>
     private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k) => Scaled(history, startCelsius, k, out _, slope: false);
 

@@ -270,7 +270,6 @@ public sealed class BurnCheck : IHazardCheck
 
     private static (double[] Seconds, double[] Celsius) Grid(ContactBurnThreshold curve, double first, double last)
     {
-
         int count = (int)Math.Ceiling(Math.Log10(last / first) * DurationsPerDecade);
         var seconds = new List<double>(count + 1 + curve.Points.Count);
         for (int k = 0; k <= count; k++)
