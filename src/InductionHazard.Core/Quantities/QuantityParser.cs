@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Globalization;
 using System.Linq;
 using System.Text.RegularExpressions;
@@ -36,6 +37,37 @@ public static class QuantityParser
     private static readonly Regex OhmMetre = new(@"Ω\s*[\*\.\-·× ]?\s*(?<len>c?m)$", RegexOptions.CultureInvariant);
 
     private static readonly Regex PowerSuffix = new(@"(?<=[a-zA-Zµ])\^?(?<pow>[23])(?![0-9])", RegexOptions.CultureInvariant);
+
+    /// <summary>
+    /// The commonest unit symbols of the kinds an inventory and a source are written in, with the factor the units
+    /// library multiplies a value by to take it to the kind's canonical unit (a test checks every entry against the
+    /// library, to the last bit). They are read without the library, whose unit tables take a third of a second or
+    /// more to build: a shell's first command need not wait for them. Every other spelling goes to the library.
+    /// </summary>
+    internal static readonly IReadOnlyDictionary<(QuantityKind Kind, string Symbol), double> Common = new Dictionary<(QuantityKind Kind, string Symbol), double>
+    {
+        [(QuantityKind.Length, "m")] = 1,
+        [(QuantityKind.Length, "cm")] = 1e-2,
+        [(QuantityKind.Length, "mm")] = 1e-3,
+        [(QuantityKind.Length, "µm")] = 1e-6,
+        [(QuantityKind.Time, "s")] = 1,
+        [(QuantityKind.Time, "ms")] = 1e-3,
+        [(QuantityKind.Time, "µs")] = 1e-6,
+        [(QuantityKind.Time, "min")] = 60,
+        [(QuantityKind.Time, "h")] = 3600,
+        [(QuantityKind.Frequency, "Hz")] = 1,
+        [(QuantityKind.Frequency, "kHz")] = 1e3,
+        [(QuantityKind.Frequency, "MHz")] = 1e6,
+        [(QuantityKind.MagneticFluxDensity, "T")] = 1,
+        [(QuantityKind.MagneticFluxDensity, "mT")] = 1e-3,
+        [(QuantityKind.MagneticFluxDensity, "µT")] = 1e-6,
+        [(QuantityKind.ElectricCurrent, "A")] = 1,
+        [(QuantityKind.ElectricCurrent, "kA")] = 1e3,
+        [(QuantityKind.ElectricCurrent, "mA")] = 1e-3,
+        [(QuantityKind.Voltage, "V")] = 1,
+        [(QuantityKind.Voltage, "kV")] = 1e3,
+        [(QuantityKind.Voltage, "mV")] = 1e-3,
+    };
 
     /// <summary>Parses a value of the given kind into the kind's canonical unit, or throws.</summary>
     /// <exception cref="QuantityFormatException">The value is empty, not a number, not finite, or not of the kind.</exception>
@@ -210,6 +242,12 @@ public static class QuantityParser
         if (unitText.Length == 0)
         {
             value = number;
+            return CheckFinite(value, trimmed, out error);
+        }
+
+        if (Common.TryGetValue((info.Kind, unitText), out double factor))
+        {
+            value = number * factor;
             return CheckFinite(value, trimmed, out error);
         }
 
