@@ -375,16 +375,19 @@ public sealed class RecordFields
     private string? Find(string field, string[] aliases)
     {
         string? found = null;
+        bool more = false;
         for (int k = -1; k < aliases.Length; k++)
         {
             string key = Normalize(k < 0 ? field : aliases[k]);
             if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
             {
+                more |= found is not null && found != key;
                 found ??= key;
             }
         }
 
-        if (found is not null)
+        // A field given by one column (and no second spelling of it) has nothing to compare.
+        if (found is not null && (more || _shadowed.Count > 0))
         {
             CheckOneValue(field, aliases);
         }
