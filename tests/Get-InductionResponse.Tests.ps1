@@ -63,6 +63,16 @@ Describe 'Get-InductionResponse' {
         ($verbose.Message -join ' ') | Should -Match 'Grover'
     }
 
+    It 'says which model it used when the caller''s VerbosePreference asks, and keeps quiet otherwise' {
+        $field = New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
+        $asked = & { $VerbosePreference = 'Continue'; Test-InductionHazard -Item $ring -Source $field 4>&1 } | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] }
+        ($asked.Message -join ' ') | Should -Match 'Grover'
+        $declined = & { $VerbosePreference = 'Continue'; Test-InductionHazard -Item $ring -Source $field -Verbose:$false 4>&1 } | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] }
+        $declined | Should -BeNullOrEmpty
+        $quiet = & { $VerbosePreference = 'SilentlyContinue'; Test-InductionHazard -Item $ring -Source $field 4>&1 } | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] }
+        $quiet | Should -BeNullOrEmpty
+    }
+
     It 'takes hashtables as items' {
         $field = New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz' | New-FieldSource -Uniform
         $r = @{ Name = 'From a hashtable'; Material = 'Silver'; InnerDiameter = '17 mm'; Width = '3 mm'; Thickness = '1.5 mm' } | Get-InductionResponse -Source $field

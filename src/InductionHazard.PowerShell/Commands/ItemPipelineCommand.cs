@@ -26,6 +26,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
     private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
     private int _row;
+    private bool _verbose = true;
 
     /// <summary>How many rows pass between the collections that keep a long stream's memory flat.</summary>
     private const int RowsPerHeapTrim = 50_000;
@@ -140,7 +141,25 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             _materials = MaterialLibrary.BuiltIn.With(AdditionalMaterial);
         }
 
+        _verbose = VerboseWanted();
         _sinceProgress.Start();
+    }
+
+    /// <summary>
+    /// Whether verbose output is wanted: -Verbose as given, else the caller's $VerbosePreference. Anything that cannot
+    /// be read as "silently continue" or "ignore" counts as wanted, so the notes are never lost.
+    /// </summary>
+    private bool VerboseWanted()
+    {
+        if (MyInvocation.BoundParameters.TryGetValue("Verbose", out object? bound))
+        {
+            return bound is SwitchParameter given ? given.IsPresent : LanguagePrimitives.IsTrue(bound);
+        }
+
+        object? preference = GetVariableValue("VerbosePreference");
+        string text = (preference is PSObject wrapped ? wrapped.BaseObject : preference)?.ToString() ?? string.Empty;
+        return !(string.Equals(text, nameof(ActionPreference.SilentlyContinue), StringComparison.OrdinalIgnoreCase)
+            || string.Equals(text, nameof(ActionPreference.Ignore), StringComparison.OrdinalIgnoreCase));
     }
 
     /// <inheritdoc />
@@ -165,7 +184,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             string label = given is null ? ItemRecordReader.Label(row, null)
                 : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, ItemRecordReader.NameOf(record));
             ShowProgress(label);
-            Task<(object Result, string Verbose)> work;
+            Task<(object Result, string? Verbose)> work;
             try
             {
                 if (given is null || given.BaseObject is null)
@@ -181,7 +200,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             }
             catch (Exception ex) when (ex is not PipelineStoppedException)
             {
-                var failed = new TaskCompletionSource<(object, string)>();
+                var failed = new TaskCompletionSource<(object, string?)>();
                 failed.SetException(ex);
                 work = failed.Task;
             }
@@ -202,10 +221,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <summary>Writes one result to the pipeline (called on the pipeline thread, in input order).</summary>
     protected virtual void Emit(object result) => WriteObject(result);
 
-    private (object Result, string Verbose) Solve(Scenario scenario, int row, string label, CancellationToken token)
+    private (object Result, string? Verbose) Solve(Scenario scenario, int row, string label, CancellationToken token)
     {
         InductionResponse response = InductionEngine.Respond(scenario, token);
-        return (Compute(response, row), label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes));
+        // The model and its notes are written out only when verbose output is wanted (the notes stay on the response).
+        return (Compute(response, row), _verbose ? label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes) : null);
     }
 
     private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
@@ -235,8 +255,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             wait = false;
             try
             {
-                (object result, string verbose) = next.Work.GetAwaiter().GetResult();
-                WriteVerbose(verbose);
+                (object result, string? verbose) = next.Work.GetAwaiter().GetResult();
+                if (verbose is not null)
+                {
+                    WriteVerbose(verbose);
+                }
+
                 Emit(result);
             }
             catch (InductionHazardException ex)
@@ -258,14 +282,14 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <summary>One input on its way: its work (done, failed or running) and what names it in errors.</summary>
     private sealed class Pending
     {
-        public Pending(Task<(object Result, string Verbose)> work, PSObject input, string label)
+        public Pending(Task<(object Result, string? Verbose)> work, PSObject input, string label)
         {
             Work = work;
             Input = input;
             Label = label;
         }
 
-        public Task<(object Result, string Verbose)> Work { get; }
+        public Task<(object Result, string? Verbose)> Work { get; }
 
         public PSObject Input { get; }
 
