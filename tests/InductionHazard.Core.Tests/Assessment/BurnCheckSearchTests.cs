@@ -71,6 +71,11 @@ public sealed class BurnCheckSearchTests
             int found = BurnCheck.WorstContact(k => TemperatureHistory.SustainedFor(history, durations[k]), TemperatureHistory.Peak(history), durations, thresholds, start, out _, out double margin);
             Assert.True(expected == found, "trial " + trial + ": contact time " + found + " chosen, every one swept gives " + expected);
             Assert.True(expectedMargin.Equals(margin) || Math.Abs(expectedMargin - margin) <= 1e-12 * expectedMargin, "trial " + trial + ": margin " + margin + " against " + expectedMargin);
+
+            // The same choice from the levels given all at once.
+            double[] levels = Array.ConvertAll(durations, d => TemperatureHistory.SustainedFor(history, d));
+            int direct = BurnCheck.Smallest(levels, thresholds, start, out _, out double directMargin);
+            Assert.True(expected == direct && (expectedMargin.Equals(directMargin) || Math.Abs(expectedMargin - directMargin) <= 1e-12 * expectedMargin), "trial " + trial + ": from all levels, contact time " + direct + " against " + expected);
         }
     }
 }

@@ -88,8 +88,10 @@ public sealed class BurnCheck : IHazardCheck
             // Every contact time at once by a sweep through the levels; for a history with many peaks, one window
             // sweep per contact time, skipping those that cannot be the worst.
             double[]? everyLevel = levels.ForAll(durations);
-            Func<int, double> held = everyLevel is null ? k => levels.For(durations[k]) : k => everyLevel[k];
-            int at = WorstContact(held, TemperatureHistory.Peak(history), durations, durationThresholds, start, out double heldThere, out double marginThere);
+            double heldThere, marginThere;
+            int at = everyLevel is null
+                ? WorstContact(k => levels.For(durations[k]), TemperatureHistory.Peak(history), durations, durationThresholds, start, out heldThere, out marginThere)
+                : Smallest(everyLevel, durationThresholds, start, out heldThere, out marginThere);
             worst = (marginThere, durations[at], heldThere, durationThresholds[at]);
         }
 
@@ -217,6 +219,33 @@ public sealed class BurnCheck : IHazardCheck
 
         heldThere = levels[worst];
         margin = Margin(worst);
+        return worst;
+    }
+
+    /// <summary>
+    /// With every contact time's level known, the one whose margin is smallest (on a tie the shortest; if any margin is
+    /// NaN, the shortest whose margin is NaN), as <see cref="WorstContact"/> finds it.
+    /// </summary>
+    internal static int Smallest(IReadOnlyList<double> levels, IReadOnlyList<double> thresholds, double start, out double heldThere, out double margin)
+    {
+        int worst = 0;
+        margin = double.NaN;
+        for (int k = 0; k < levels.Count; k++)
+        {
+            double m = RiseMargin(thresholds[k], levels[k], start);
+            if (double.IsNaN(m))
+            {
+                (worst, margin) = (k, m);
+                break;
+            }
+
+            if (k == 0 || m < margin)
+            {
+                (worst, margin) = (k, m);
+            }
+        }
+
+        heldThere = levels[worst];
         return worst;
     }
 
