@@ -39,7 +39,7 @@ public sealed class FieldSource
         }
 
         Name = string.IsNullOrWhiteSpace(name) ? "source" : name.Trim();
-        Terms = terms;
+        Terms = terms.ToArray();
     }
 
     /// <summary>The source's name, as it appears in assessments and reports.</summary>
@@ -108,12 +108,22 @@ public sealed class FieldSource
     public double EndSeconds => Terms.Max(t => t.Waveform.EndSeconds);
 
     /// <summary>True when every term is periodic with the same period (a phasor-capable source).</summary>
-    public bool IsPeriodic =>
-        Terms.All(t => t.Waveform.IsPeriodic)
-        && Terms.Select(t => t.Waveform.PeriodSeconds).Distinct().Count() == 1;
+    public bool IsPeriodic => _periodic != 0 ? _periodic == 2 : Remember(ref _periodic,
+        Terms.All(t => t.Waveform.IsPeriodic) && Terms.Select(t => t.Waveform.PeriodSeconds).Distinct().Count() == 1);
 
     /// <summary>True when every term is a sinusoid of one frequency.</summary>
-    public bool IsSinusoidal => IsPeriodic && Terms.All(t => t.Waveform is SineWaveform);
+    public bool IsSinusoidal => _sinusoidal != 0 ? _sinusoidal == 2 : Remember(ref _sinusoidal, IsPeriodic && Terms.All(t => t.Waveform is SineWaveform));
+
+    // Found once (0 not yet, 1 false, 2 true: one word, so any thread may read it): the terms are copied when the
+    // source is made, and a waveform does not change.
+    private int _periodic;
+    private int _sinusoidal;
+
+    private static bool Remember(ref int known, bool value)
+    {
+        known = value ? 2 : 1;
+        return value;
+    }
 
     /// <summary>The field per unit drive of every term at a point.</summary>
     /// <exception cref="FieldEvaluationException">The point is on a conductor, outside a map, or where a model does not hold.</exception>

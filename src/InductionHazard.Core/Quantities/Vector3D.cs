@@ -115,6 +115,12 @@ public readonly struct Vector3D : IEquatable<Vector3D>
     }
 
     /// <summary>"(x, y, z)" with invariant formatting.</summary>
-    public override string ToString() =>
-        string.Format(CultureInfo.InvariantCulture, "({0:G4}, {1:G4}, {2:G4})", X, Y, Z);
+    public override string ToString() => "(" + Component(X) + ", " + Component(Y) + ", " + Component(Z) + ")";
+
+    /// <summary>One component as "G4" writes it; the values every axis and origin is made of are written without the formatter.</summary>
+    private static string Component(double value)
+    {
+        long bits = BitConverter.DoubleToInt64Bits(value);
+        return bits == 0 ? "0" : value == 1 ? "1" : value == -1 ? "-1" : value.ToString("G4", CultureInfo.InvariantCulture);
+    }
 }

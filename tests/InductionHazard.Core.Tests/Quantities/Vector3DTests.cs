@@ -28,4 +28,23 @@ public class Vector3DTests
         var ex = Assert.Throws<InvalidInputException>(() => Require.Direction("Normal", new Vector3D(x, y, z)));
         Assert.Equal("Normal", ex.Field);
     }
+
+    [Fact]
+    public void AVectorReadsAsTheFormatterWritesIt()
+    {
+        // Axes and the origin are written without the formatter: the text must be the formatter's, negative zero included.
+        var random = new System.Random(20261202);
+        double[] special = { 0.0, -0.0, 1, -1, 0.5, 1e-9, -2.5e7, 123456.789, double.NaN };
+        foreach (double x in special)
+        {
+            foreach (double y in special)
+            {
+                foreach (double z in new[] { 0.0, -0.0, 1.0, random.NextDouble() })
+                {
+                    var v = new Vector3D(x, y, z);
+                    Assert.Equal(string.Format(System.Globalization.CultureInfo.InvariantCulture, "({0:G4}, {1:G4}, {2:G4})", x, y, z), v.ToString());
+                }
+            }
+        }
+    }
 }
