@@ -9,7 +9,8 @@ internal static class ItemInput
 {
     /// <summary>The named values of a row, read once (they are read by several readers); null for an item object.</summary>
     public static IReadOnlyList<KeyValuePair<string, object?>>? RecordOf(PSObject input) =>
-        input.BaseObject is ConductiveItem ? null : System.Linq.Enumerable.ToArray(Records.From(input));
+        input.BaseObject is ConductiveItem ? null
+            : Records.From(input) is var values && values is KeyValuePair<string, object?>[] read ? read : System.Linq.Enumerable.ToArray(values);
 
     /// <summary>The item for one input whose record has been read (<see cref="RecordOf"/>).</summary>
     /// <exception cref="Errors.RecordException">The row cannot make an item.</exception>

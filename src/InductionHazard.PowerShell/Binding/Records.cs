@@ -22,10 +22,17 @@ internal static class Records
             return From(dictionary);
         }
 
-        return input.Properties
-            .Where(p => p.IsGettable && p.MemberType is PSMemberTypes.NoteProperty or PSMemberTypes.Property or PSMemberTypes.AliasProperty or PSMemberTypes.ScriptProperty)
-            .Select(p => new KeyValuePair<string, object?>(p.Name, QuantityAttribute.Unwrap(SafeValue(p))))
-            .ToArray();
+        // One pass without LINQ: the shell builds the object's member collection on every enumeration, and this runs for every row.
+        var values = new List<KeyValuePair<string, object?>>();
+        foreach (PSPropertyInfo p in input.Properties)
+        {
+            if (p.IsGettable && p.MemberType is PSMemberTypes.NoteProperty or PSMemberTypes.Property or PSMemberTypes.AliasProperty or PSMemberTypes.ScriptProperty)
+            {
+                values.Add(new KeyValuePair<string, object?>(p.Name, QuantityAttribute.Unwrap(SafeValue(p))));
+            }
+        }
+
+        return values.ToArray();
     }
 
     private static object? SafeValue(PSPropertyInfo property)
