@@ -100,10 +100,11 @@ public class TemperatureHistoryTests
             int n = random.Next(2, 40);
             var history = new HeatingSample[n];
             double t = 0;
-            bool plateaus = trial % 3 == 0;
+            bool plateaus = trial % 3 == 0, repeats = trial % 4 == 1;
             for (int k = 0; k < n; k++)
             {
-                t += k == 0 ? 0 : 0.1 + (random.NextDouble() * 10);
+                // Some histories repeat a time (a step that ends on a breakpoint), so that a piece has no length.
+                t += k == 0 || (repeats && random.Next(3) == 0) ? 0 : 0.1 + (random.NextDouble() * 10);
                 // Some histories take few distinct values, so that samples share levels and stretches join at them.
                 double temperature = plateaus ? 30 + random.Next(4) : 30 + (random.NextDouble() * 40);
                 history[k] = new HeatingSample(t, temperature, 0);
