@@ -372,13 +372,55 @@ public sealed class RecordFields
         return chars.ToString().ToLowerInvariant();
     }
 
+    /// <summary>
+    /// A field's name and aliases, normalized: found once per alias list (the readers pass the same list for a field
+    /// on every row), or each time for a list seen with another field.
+    /// </summary>
+    private static string[] KeysOf(string field, string[] aliases)
+    {
+        if (KeysByAliases.TryGetValue(aliases, out (string Field, string[] Keys) known) && ReferenceEquals(known.Field, field))
+        {
+            return known.Keys;
+        }
+
+        var keys = new string[aliases.Length + 1];
+        keys[0] = Normalize(field);
+        for (int k = 0; k < aliases.Length; k++)
+        {
+            keys[k + 1] = Normalize(aliases[k]);
+        }
+
+        if (System.Threading.Interlocked.Increment(ref _keysAdded) % 1024 == 0)
+        {
+            KeysByAliases.Clear();
+        }
+
+        KeysByAliases[aliases] = (field, keys);
+        return keys;
+    }
+
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string[], (string Field, string[] Keys)> KeysByAliases = new(SameList.Instance);
+
+    private static int _keysAdded;
+
+    /// <summary>Alias lists compared as objects.</summary>
+    private sealed class SameList : IEqualityComparer<string[]>
+    {
+        public static readonly SameList Instance = new();
+
+        public bool Equals(string[]? x, string[]? y) => ReferenceEquals(x, y);
+
+        public int GetHashCode(string[] obj) => System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(obj);
+    }
+
     private string? Find(string field, string[] aliases)
     {
         string? found = null;
         bool more = false;
-        for (int k = -1; k < aliases.Length; k++)
+        string[]? keys = aliases.Length == 0 ? null : KeysOf(field, aliases);
+        for (int k = 0; k < (keys?.Length ?? 1); k++)
         {
-            string key = Normalize(k < 0 ? field : aliases[k]);
+            string key = keys is null ? Normalize(field) : keys[k];
             if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
             {
                 more |= found is not null && found != key;

@@ -50,4 +50,23 @@ public sealed class RecordFieldsTests
         Assert.Equal(0.02, agreeing.Quantity("Diameter", QuantityKind.Length, required: true, "OD")!.Value, 12);
         Assert.Empty(agreeing.Errors);
     }
+
+    [Fact]
+    public void OneAliasListGivenWithTwoFieldsFindsEachFieldsOwnColumn()
+    {
+        // Alias lists are remembered with the field they came with: the same list with another field must not find the first's column.
+        string[] shared = { "Span" };
+        var fields = new RecordFields(new[]
+        {
+            new KeyValuePair<string, object?>("Diameter", "20 mm"),
+            new KeyValuePair<string, object?>("Width", "3 mm"),
+        });
+        for (int round = 0; round < 3; round++)
+        {
+            Assert.Equal(0.02, fields.Quantity("Diameter", QuantityKind.Length, required: true, shared)!.Value, 12);
+            Assert.Equal(0.003, fields.Quantity("Width", QuantityKind.Length, required: true, shared)!.Value, 12);
+        }
+
+        Assert.Empty(fields.Errors);
+    }
 }
