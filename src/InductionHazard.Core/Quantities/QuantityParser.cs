@@ -82,7 +82,7 @@ public static class QuantityParser
     }
 
     /// <summary>Strings already read, by text and kind (successes only: a refusal is worked out again, with its reason).</summary>
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<(string Text, QuantityKind Kind), double> Parsed = new();
+    private static readonly BoundedCache<(string Text, QuantityKind Kind), double> Parsed = new(ParsedCapacity);
 
     /// <summary>How many read strings are kept before the store is emptied.</summary>
     private const int ParsedCapacity = 20000;
@@ -102,7 +102,7 @@ public static class QuantityParser
                 value = Convert.ToDouble(input, Invariant);
                 return CheckFinite(value, Display(input), out error);
             case string text:
-                if (Parsed.TryGetValue((text, kind), out value))
+                if (Parsed.TryGet((text, kind), out value))
                 {
                     return true;
                 }
@@ -113,12 +113,7 @@ public static class QuantityParser
                 }
 
                 // Inventories repeat their unit strings; the unit library's parse is slow (tens of microseconds).
-                if (Parsed.Count >= ParsedCapacity)
-                {
-                    Parsed.Clear();
-                }
-
-                Parsed[(text, kind)] = value;
+                Parsed.Add((text, kind), value);
                 return true;
             default:
                 error = "got a " + input.GetType().Name + " ('" + Display(input) + "'); expected " + Expectation(info);
@@ -161,24 +156,17 @@ public static class QuantityParser
     /// <summary>True when the text is a number with no unit ("18", " 0.5 ").</summary>
     public static bool IsBareNumber(string text)
     {
-        if (Bare.TryGetValue(text, out bool bare))
+        if (Bare.TryGet(text, out bool bare))
         {
             return bare;
         }
 
         Match m = NumberAndUnit.Match(text);
-        bare = m.Success && m.Groups["unit"].Value.Length == 0;
-        if (Bare.Count >= ParsedCapacity)
-        {
-            Bare.Clear();
-        }
-
-        Bare[text] = bare;
-        return bare;
+        return Bare.Add(text, m.Success && m.Groups["unit"].Value.Length == 0);
     }
 
     /// <summary>Texts already asked whether they are bare numbers (inventories repeat them).</summary>
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, bool> Bare = new(StringComparer.Ordinal);
+    private static readonly BoundedCache<string, bool> Bare = new(ParsedCapacity, StringComparer.Ordinal);
 
     private static bool TryParseText(string text, QuantityKindInfo info, out double value, out string? error)
     {

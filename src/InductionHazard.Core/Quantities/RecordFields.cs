@@ -156,22 +156,10 @@ public sealed class RecordFields
     private static (string Name, string? Unit) SplitUnit(string name)
     {
         // Every row of a file has the same column names: each is split once.
-        if (SplitNames.TryGetValue(name, out (string Name, string? Unit) known))
-        {
-            return known;
-        }
-
-        (string Name, string? Unit) split = SplitUnitOnce(name);
-        if (SplitNames.Count >= 4096)
-        {
-            SplitNames.Clear();
-        }
-
-        SplitNames[name] = split;
-        return split;
+        return SplitNames.TryGet(name, out (string Name, string? Unit) known) ? known : SplitNames.Add(name, SplitUnitOnce(name));
     }
 
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, (string Name, string? Unit)> SplitNames = new(StringComparer.Ordinal);
+    private static readonly BoundedCache<string, (string Name, string? Unit)> SplitNames = new(4096, StringComparer.Ordinal);
 
     private static (string Name, string? Unit) SplitUnitOnce(string name)
     {
@@ -315,48 +303,12 @@ public sealed class RecordFields
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
     {
-        // The same name objects come back on every row (the code's field names, a file's header): known by identity first.
-        if (Normalized.TryGetValue(name, out string? known))
-        {
-            return known;
-        }
-
-        bool plain = true;
-        foreach (char c in name)
-        {
-            if (char.IsWhiteSpace(c) || c == '-' || c == '_' || c == '.' || char.ToLowerInvariant(c) != c)
-            {
-                plain = false;
-                break;
-            }
-        }
-
-        string normalized = plain ? name : NormalizeOnce(name);
-        if (System.Threading.Interlocked.Increment(ref _normalizedAdded) % 4096 == 0)
-        {
-            // Names made afresh for every row would otherwise fill it: it starts again (counted, as the store's own
-            // count takes all its locks).
-            Normalized.Clear();
-        }
-
-        Normalized[name] = normalized;
-        return normalized;
+        // The same name objects come back on every row (the code's field names, a file's header): each is worked out once.
+        return Normalized.TryGet(name, out string known) ? known : Normalized.Add(name, NormalizeOnce(name));
     }
 
     /// <summary>Names already normalized: field names, their aliases and a file's columns come back on every row.</summary>
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, string> Normalized = new(SameObject.Instance);
-
-    private static int _normalizedAdded;
-
-    /// <summary>Strings compared as objects: a lookup costs no hashing of the text (an equal text in another object is only a miss).</summary>
-    private sealed class SameObject : IEqualityComparer<string>
-    {
-        public static readonly SameObject Instance = new();
-
-        public bool Equals(string? x, string? y) => ReferenceEquals(x, y);
-
-        public int GetHashCode(string obj) => System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(obj);
-    }
+    private static readonly BoundedCache<string, string> Normalized = new(4096, SameObject<string>.Instance);
 
     private static string NormalizeOnce(string name)
     {
@@ -378,7 +330,7 @@ public sealed class RecordFields
     /// </summary>
     private static string[] KeysOf(string field, string[] aliases)
     {
-        if (KeysByAliases.TryGetValue(aliases, out (string Field, string[] Keys) known) && ReferenceEquals(known.Field, field))
+        if (KeysByAliases.TryGet(aliases, out (string Field, string[] Keys) known) && ReferenceEquals(known.Field, field))
         {
             return known.Keys;
         }
@@ -390,28 +342,10 @@ public sealed class RecordFields
             keys[k + 1] = Normalize(aliases[k]);
         }
 
-        if (System.Threading.Interlocked.Increment(ref _keysAdded) % 1024 == 0)
-        {
-            KeysByAliases.Clear();
-        }
-
-        KeysByAliases[aliases] = (field, keys);
-        return keys;
+        return KeysByAliases.Add(aliases, (field, keys)).Keys;
     }
 
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string[], (string Field, string[] Keys)> KeysByAliases = new(SameList.Instance);
-
-    private static int _keysAdded;
-
-    /// <summary>Alias lists compared as objects.</summary>
-    private sealed class SameList : IEqualityComparer<string[]>
-    {
-        public static readonly SameList Instance = new();
-
-        public bool Equals(string[]? x, string[]? y) => ReferenceEquals(x, y);
-
-        public int GetHashCode(string[] obj) => System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(obj);
-    }
+    private static readonly BoundedCache<string[], (string Field, string[] Keys)> KeysByAliases = new(1024, SameObject<string[]>.Instance);
 
     private string? Find(string field, string[] aliases)
     {

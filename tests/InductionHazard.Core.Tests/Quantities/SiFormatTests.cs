@@ -54,6 +54,7 @@ public class SiFormatTests
         return rounded.ToString("0." + new string('#', System.Math.Max(1, decimals)), System.Globalization.CultureInfo.InvariantCulture);
     }
 
+    [Validates("numbers to 1-15 significant figures without trailing zeros, 200,000 random values and rounding edges", ".NET's custom numeric format \"0.##\" after rounding away from zero (general-purpose reference library)", "the same text")]
     [Fact]
     public void PlainNumbersReadAsTheRuntimesOwnFormatterWritesThem()
     {

@@ -29,6 +29,7 @@ public class Vector3DTests
         Assert.Equal("Normal", ex.Field);
     }
 
+    [Validates("a vector's text, axes, the origin and negative zero among 324 vectors", ".NET composite format \"({0:G4}, {1:G4}, {2:G4})\" (general-purpose reference library)", "the same text")]
     [Fact]
     public void AVectorReadsAsTheFormatterWritesIt()
     {

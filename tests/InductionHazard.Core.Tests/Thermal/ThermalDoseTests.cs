@@ -119,6 +119,7 @@ public class ThermalDoseTests
         Assert.True(compared > 50, compared + " histories had a dose margin to compare");
     }
 
+    [Validates("the dose a heating adds, each sample's weight shared by the pieces beside it, 300 random histories across 43 degC", "CEM43 of Sapareto and Dewey (1984) integrated piece by piece and split at 43 degC (independent implementation)", "1e-9 of the whole dose")]
     [Fact]
     public void TheAddedDoseIsTheHistorysDoseLessTheHeldStartsOnRandomHistoriesAcross43Degrees()
     {
