@@ -26,12 +26,25 @@ public static class HazardAssessor
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
     {
         policy.Validated();
-        MechanismResult[] results = Checks.Select(c => c.Evaluate(response, policy)).ToArray();
-        MechanismResult[] applicable = results.Where(r => r.Applies).ToArray();
-        Verdict verdict = VerdictRules.Combine(applicable.Select(r => r.Verdict!.Value));
+        // Loops rather than queries: an assessment is made hundreds of thousands of times in an audit.
+        var results = new MechanismResult[Checks.Length];
+        var applicableList = new List<MechanismResult>(Checks.Length);
+        bool anyIndeterminate = false;
+        for (int k = 0; k < Checks.Length; k++)
+        {
+            results[k] = Checks[k].Evaluate(response, policy);
+            if (results[k].Applies)
+            {
+                applicableList.Add(results[k]);
+                anyIndeterminate |= results[k].Verdict == Verdict.Indeterminate;
+            }
+        }
+
+        MechanismResult[] applicable = applicableList.ToArray();
+        Verdict verdict = VerdictRules.Combine(VerdictsOf(applicable));
         MechanismResult? governing = Governing(applicable, verdict);
         // A Hazard stands even beside mechanisms that could not be judged: its smallest judged margin is the minimum.
-        double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : applicable.Where(r => r.Verdict != Verdict.Indeterminate).Min(r => r.Margin);
+        double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : SmallestJudgedMargin(applicable);
 
         var reasons = new List<string>();
         if (applicable.Length == 0)
@@ -40,19 +53,46 @@ public static class HazardAssessor
         }
 
         // Each broken assumption once, however many mechanisms it stops; then the findings of judged mechanisms.
-        if (applicable.Any(r => r.Verdict == Verdict.Indeterminate))
+        if (anyIndeterminate)
         {
-            reasons.AddRange(response.ValidityIssues.Select(i => i.Reason).Distinct());
+            foreach (ValidityIssue issue in response.ValidityIssues)
+            {
+                if (!reasons.Contains(issue.Reason))
+                {
+                    reasons.Add(issue.Reason);
+                }
+            }
 
             // A mechanism stopped by a reason of its own (not one of the response's), such as an exposure the
             // weighted-peak method cannot judge.
-            reasons.AddRange(applicable
-                .Where(r => r.Verdict == Verdict.Indeterminate && !response.ValidityIssues.Any(i => r.Detail.Contains(i.Reason)))
-                .Select(r => r.Mechanism + ": " + r.Detail));
+            foreach (MechanismResult r in applicable)
+            {
+                if (r.Verdict == Verdict.Indeterminate && !response.ValidityIssues.Any(i => r.Detail.Contains(i.Reason)))
+                {
+                    reasons.Add(r.Mechanism + ": " + r.Detail);
+                }
+            }
         }
 
-        reasons.AddRange(applicable.Where(r => r.Verdict is Verdict.Caution or Verdict.Hazard).Select(r => r.Mechanism + ": " + r.Detail));
-        string[] standards = applicable.SelectMany(r => r.Sources).Append(Standards.SafetyFactorOf(policy)).Distinct().ToArray();
+        foreach (MechanismResult r in applicable)
+        {
+            if (r.Verdict is Verdict.Caution or Verdict.Hazard)
+            {
+                reasons.Add(r.Mechanism + ": " + r.Detail);
+            }
+        }
+
+        var standardList = new List<string>();
+        foreach (MechanismResult r in applicable)
+        {
+            foreach (string source in r.Sources)
+            {
+                AddOnce(standardList, source);
+            }
+        }
+
+        AddOnce(standardList, Standards.SafetyFactorOf(policy));
+        string[] standards = standardList.ToArray();
 
         return new InductionAssessment
         {
@@ -95,6 +135,46 @@ public static class HazardAssessor
         };
     }
 
+    private static Verdict[] VerdictsOf(MechanismResult[] applicable)
+    {
+        var verdicts = new Verdict[applicable.Length];
+        for (int k = 0; k < applicable.Length; k++)
+        {
+            verdicts[k] = applicable[k].Verdict!.Value;
+        }
+
+        return verdicts;
+    }
+
+    /// <summary>The smallest margin of the judged mechanisms (NaN if any is NaN), as <see cref="Enumerable.Min(IEnumerable{double})"/> gives it.</summary>
+    private static double SmallestJudgedMargin(MechanismResult[] applicable)
+    {
+        double minimum = double.PositiveInfinity;
+        foreach (MechanismResult r in applicable)
+        {
+            if (r.Verdict != Verdict.Indeterminate)
+            {
+                if (double.IsNaN(r.Margin))
+                {
+                    return double.NaN;
+                }
+
+                minimum = Math.Min(minimum, r.Margin);
+            }
+        }
+
+        return minimum;
+    }
+
+    /// <summary>Adds a text not yet in the list (the list keeps the order of first appearance).</summary>
+    private static void AddOnce(List<string> list, string text)
+    {
+        if (!list.Contains(text))
+        {
+            list.Add(text);
+        }
+    }
+
     /// <summary>The time as recorded, to the second; the last one written is kept, as a run writes the same second many times.</summary>
     private static string Stamp(DateTime utc)
     {
@@ -129,7 +209,17 @@ public static class HazardAssessor
             return applicable.First(r => r.Verdict == Verdict.Indeterminate);
         }
 
-        return applicable.Where(r => r.Verdict != Verdict.Indeterminate).OrderBy(r => r.Margin).First();
+        // The judged mechanism of smallest margin, the first on a tie; a NaN margin sorts first, as ordering by the margin puts it.
+        MechanismResult? best = null;
+        foreach (MechanismResult r in applicable)
+        {
+            if (r.Verdict != Verdict.Indeterminate && (best is null || r.Margin.CompareTo(best.Margin) < 0))
+            {
+                best = r;
+            }
+        }
+
+        return best!;
     }
 
     private static double? MarginOf(MechanismResult[] results, HazardMechanism mechanism)

@@ -164,29 +164,96 @@ public static class InductionEngine
         double leaving = c.Scenario.Leaves ? c.Scenario.LeaveSeconds : 0;
         double outside = leave + leaving;
         double end = outside + CoolingTail(c);
-        double Linked(double[] perUnitDrive, double t) => Sum(perUnitDrive, k => terms[k].Waveform.Value(t));
+        double Linked(double[] perUnitDrive, double t)
+        {
+            double sum = 0;
+            for (int k = 0; k < perUnitDrive.Length; k++)
+            {
+                sum += perUnitDrive[k] * terms[k].Waveform.Value(t);
+            }
+
+            return sum;
+        }
+
         double fluxAtLeave = Linked(c.Coupling, leave);
 
         // Leaving is a flux change of its own: the flux the loop holds falls linearly to zero while it is carried out.
-        double Emf(double t) => t < leave ? -Sum(c.Coupling, k => terms[k].Waveform.Rate(t)) : t < outside ? fluxAtLeave / leaving : 0;
+        double Emf(double t)
+        {
+            if (!(t < leave))
+            {
+                return t < outside ? fluxAtLeave / leaving : 0;
+            }
 
-        double[] breakpoints = source.BreakpointsBetween(begin, end).Where(t => t < leave).Append(leave).Append(outside).Where(t => t < end).Distinct().OrderBy(t => t).ToArray();
-        double[] times = DriveSampling.Times(terms.Select(t => t.Waveform).ToArray()).Where(t => t < leave).Append(begin).Append(leave).Distinct().OrderBy(t => t).ToArray();
-        double peakEmf = times.Max(t => Math.Abs(Emf(t)));
+            double sum = 0;
+            for (int k = 0; k < c.Coupling.Length; k++)
+            {
+                sum += c.Coupling[k] * terms[k].Waveform.Rate(t);
+            }
+
+            return -sum;
+        }
+
+        // Sorted and distinct, by loops: this runs for every transient assessment.
+        var breakpointList = new List<double>();
+        foreach (double t in source.BreakpointsBetween(begin, end))
+        {
+            if (t < leave && t < end)
+            {
+                breakpointList.Add(t);
+            }
+        }
+
+        AddBefore(breakpointList, leave, end);
+        AddBefore(breakpointList, outside, end);
+        double[] breakpoints = SortedDistinct(breakpointList);
+        var timeList = new List<double>();
+        foreach (double t in DriveSampling.Times(WaveformsOf(terms)))
+        {
+            if (t < leave)
+            {
+                timeList.Add(t);
+            }
+        }
+
+        timeList.Add(begin);
+        timeList.Add(leave);
+        double[] times = SortedDistinct(timeList);
+        double peakEmf = Largest(times, t => Math.Abs(Emf(t)));
         if (leaving > 0)
         {
             peakEmf = Math.Max(peakEmf, Math.Abs(fluxAtLeave / leaving));
         }
 
         double flux0 = Linked(c.Coupling, begin);
-        double swingAt = times.OrderByDescending(t => Math.Abs(Linked(c.Coupling, t) - flux0)).First();
+
+        // The first time of the largest swing (a NaN swing counts as the smallest).
+        double swingAt = times[0], largestSwing = Math.Abs(Linked(c.Coupling, times[0]) - flux0);
+        for (int i = 1; i < times.Length; i++)
+        {
+            double swing = Math.Abs(Linked(c.Coupling, times[i]) - flux0);
+            if (swing.CompareTo(largestSwing) > 0)
+            {
+                (swingAt, largestSwing) = (times[i], swing);
+            }
+        }
+
         double fluxSwing = Math.Abs(Linked(c.Coupling, swingAt) - flux0);
-        double[] driveSwing = terms.Select(term => term.Waveform.Value(swingAt) - term.Waveform.Value(begin)).ToArray();
+        var driveSwing = new double[terms.Count];
+        for (int k = 0; k < terms.Count; k++)
+        {
+            driveSwing[k] = terms[k].Waveform.Value(swingAt) - terms[k].Waveform.Value(begin);
+        }
+
         if (leaving > 0 && Math.Abs(flux0) > fluxSwing)
         {
             fluxSwing = Math.Abs(flux0);
-            driveSwing = terms.Select(term => -term.Waveform.Value(begin)).ToArray();
+            for (int k = 0; k < terms.Count; k++)
+            {
+                driveSwing[k] = -terms[k].Waveform.Value(begin);
+            }
         }
+
         double fluxChange = (leaving > 0 ? 0 : fluxAtLeave) - flux0;
         c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s")
             + (leaving > 0 ? ", is carried out over " + SiFormat.Format(leaving, "s") + " (the flux it holds, " + SiFormat.Format(fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
@@ -194,8 +261,8 @@ public static class InductionEngine
 
         InductionResponse drive = Base(c) with
         {
-            PeakFluxDensityTesla = times.Max(t => Math.Abs(Linked(c.NormalField, t))),
-            PeakFluxWebers = times.Max(t => Math.Abs(Linked(c.Coupling, t))),
+            PeakFluxDensityTesla = Largest(times, t => Math.Abs(Linked(c.NormalField, t))),
+            PeakFluxWebers = Largest(times, t => Math.Abs(Linked(c.Coupling, t))),
             FluxChangeWebers = fluxChange,
             EmfKind = EmfKind.Unidirectional,
             PeakEmfVolts = peakEmf,
@@ -387,15 +454,57 @@ public static class InductionEngine
         return Math.Max(10 * c.Ldc / c.Rdc, double.IsInfinity(cooling) ? 0 : 3 * cooling);
     }
 
-    private static double Sum(double[] perUnitDrive, Func<int, double> drive)
+    private static FieldWaveform[] WaveformsOf(IReadOnlyList<Fields.SourceTerm> terms)
     {
-        double sum = 0;
-        for (int k = 0; k < perUnitDrive.Length; k++)
+        var waveforms = new FieldWaveform[terms.Count];
+        for (int k = 0; k < waveforms.Length; k++)
         {
-            sum += perUnitDrive[k] * drive(k);
+            waveforms[k] = terms[k].Waveform;
         }
 
-        return sum;
+        return waveforms;
+    }
+
+    /// <summary>Adds a time to the list when it is before the end.</summary>
+    private static void AddBefore(List<double> times, double t, double end)
+    {
+        if (t < end)
+        {
+            times.Add(t);
+        }
+    }
+
+    /// <summary>The times ascending, each once, as ordering the distinct times gives them.</summary>
+    private static double[] SortedDistinct(List<double> times)
+    {
+        times.Sort();
+        int kept = 0;
+        for (int i = 0; i < times.Count; i++)
+        {
+            if (kept == 0 || times[i] != times[kept - 1])
+            {
+                times[kept++] = times[i];
+            }
+        }
+
+        times.RemoveRange(kept, times.Count - kept);
+        return times.ToArray();
+    }
+
+    /// <summary>The largest value of f over the times, NaN only when every value is NaN (as <see cref="Enumerable.Max(IEnumerable{double})"/> gives it).</summary>
+    private static double Largest(double[] times, Func<double, double> f)
+    {
+        double largest = f(times[0]);
+        for (int i = 1; i < times.Length; i++)
+        {
+            double value = f(times[i]);
+            if (value > largest || double.IsNaN(largest))
+            {
+                largest = value;
+            }
+        }
+
+        return largest;
     }
 
     /// <summary>
@@ -404,19 +513,39 @@ public static class InductionEngine
     /// </summary>
     private static void CheckFinite(InductionResponse r, List<ValidityIssue> issues)
     {
-        var failures = new (string Name, double? Value, AffectedResults Needs)[]
+        List<string>? failures = null;
+        void Check(string name, double? value, AffectedResults needs)
+        {
+            if (value is { } v && !Finite.Is(v) && !Covered(issues, needs))
             {
-                ("the peak emf", r.PeakEmfVolts, AffectedResults.Emf), ("the rms emf", r.RmsEmfVolts, AffectedResults.Emf),
-                ("the peak current", r.PeakCurrentAmperes, AffectedResults.Current), ("the energy", r.EnergyDissipatedJoules, AffectedResults.Current | AffectedResults.Heating),
-                ("the peak temperature", r.PeakTemperatureCelsius, AffectedResults.Heating), ("the final temperature", r.FinalTemperatureCelsius, AffectedResults.Heating),
+                (failures ??= new List<string>()).Add(name + " is " + v.ToString(System.Globalization.CultureInfo.InvariantCulture));
             }
-            .Where(f => f.Value is { } v && !Finite.Is(v) && !issues.Any(i => (i.Affects & f.Needs) == f.Needs))
-            .Select(f => f.Name + " is " + f.Value!.Value.ToString(System.Globalization.CultureInfo.InvariantCulture))
-            .ToArray();
-        if (failures.Length > 0)
+        }
+
+        Check("the peak emf", r.PeakEmfVolts, AffectedResults.Emf);
+        Check("the rms emf", r.RmsEmfVolts, AffectedResults.Emf);
+        Check("the peak current", r.PeakCurrentAmperes, AffectedResults.Current);
+        Check("the energy", r.EnergyDissipatedJoules, AffectedResults.Current | AffectedResults.Heating);
+        Check("the peak temperature", r.PeakTemperatureCelsius, AffectedResults.Heating);
+        Check("the final temperature", r.FinalTemperatureCelsius, AffectedResults.Heating);
+        if (failures is not null)
         {
             issues.Add(new ValidityIssue("numerical failure: " + string.Join(", ", failures) + " (are the inputs physically sensible?)", AffectedResults.All));
         }
+    }
+
+    /// <summary>True when a recorded issue already covers every result in <paramref name="needs"/>.</summary>
+    private static bool Covered(List<ValidityIssue> issues, AffectedResults needs)
+    {
+        foreach (ValidityIssue issue in issues)
+        {
+            if ((issue.Affects & needs) == needs)
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 
     private static string Regime(double ratio, string name)

@@ -40,6 +40,8 @@ public sealed class FieldSource
 
         Name = string.IsNullOrWhiteSpace(name) ? "source" : name.Trim();
         Terms = terms.ToArray();
+        StartSeconds = Terms.Min(t => t.Waveform.StartSeconds);
+        EndSeconds = Terms.Max(t => t.Waveform.EndSeconds);
     }
 
     /// <summary>The source's name, as it appears in assessments and reports.</summary>
@@ -101,11 +103,11 @@ public sealed class FieldSource
     /// <summary>The highest significant frequency over the terms, Hz.</summary>
     public double SignificantFrequencyHertz => Terms.Max(t => t.Waveform.SignificantFrequencyHertz);
 
-    /// <summary>The earliest start of any term, s.</summary>
-    public double StartSeconds => Terms.Min(t => t.Waveform.StartSeconds);
+    /// <summary>The earliest start of any term, s (found once: the terms are copied when the source is made, and a waveform does not change).</summary>
+    public double StartSeconds { get; }
 
     /// <summary>The latest end of any term, s (infinity when one runs on).</summary>
-    public double EndSeconds => Terms.Max(t => t.Waveform.EndSeconds);
+    public double EndSeconds { get; }
 
     /// <summary>True when every term is periodic with the same period (a phasor-capable source).</summary>
     public bool IsPeriodic => _periodic != 0 ? _periodic == 2 : Remember(ref _periodic,

@@ -55,8 +55,9 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
             }
         }
 
+        // Squared lengths compared (the square root is monotone): one root at the end instead of two per phase.
         Vector3D peak = Vector3D.Zero, mean = Vector3D.Zero;
-        double peakTorque = 0;
+        double peakSquared = 0, peakTorqueSquared = 0;
         for (int n = 0; n < Samples; n++)
         {
             double sin = Sines[n], cos = Cosines[n];
@@ -76,10 +77,15 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
             }
 
             mean += (1.0 / Samples) * force;
-            peak = force.Length > peak.Length ? force : peak;
-            peakTorque = Math.Max(peakTorque, torque.Length);
+            double squared = force.Dot(force);
+            if (squared > peakSquared)
+            {
+                (peak, peakSquared) = (force, squared);
+            }
+
+            peakTorqueSquared = Math.Max(peakTorqueSquared, torque.Dot(torque));
         }
 
-        return new SteadyMechanics(peak, mean, peakTorque);
+        return new SteadyMechanics(peak, mean, Math.Sqrt(peakTorqueSquared));
     }
 }

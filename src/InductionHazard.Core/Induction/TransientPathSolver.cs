@@ -131,9 +131,11 @@ public sealed class TransientPathSolver
         bool budgetExceeded = false;
         double? melted = null;
 
+        // G at the item's temperature, found again only when the temperature moves (each step's start, and its time constant).
+        double conductance = _thermal.Conductance(temperature);
         foreach (double edge in edges)
         {
-            double h = FreshStep(temperature, edge - t, t);
+            double h = FreshStep(temperature, conductance, edge - t, t);
             while (t < edge)
             {
                 if (++steps > MaxSteps)
@@ -184,15 +186,15 @@ public sealed class TransientPathSolver
 
                 // s(T) at the mid-step temperature: predicted with the last step's power, then corrected once more
                 // only when the step's own energy moves the end temperature by more than a hundredth of the step limit.
-                double predicted = _thermal.Advance(temperature, lastPower, h);
+                double predicted = _thermal.Advance(temperature, lastPower, h, conductance);
                 double s = _scaleAt(0.5 * (temperature + predicted));
                 double stepEnergy = Sweep(z, work, s, h, cross);
-                double next = _thermal.Advance(temperature, stepEnergy / h, h);
+                double next = _thermal.Advance(temperature, stepEnergy / h, h, conductance);
                 if (Math.Abs(next - predicted) > 0.01 * MaxStepKelvin)
                 {
                     s = _scaleAt(0.5 * (temperature + next));
                     stepEnergy = Sweep(z, work, s, h, cross);
-                    next = _thermal.Advance(temperature, stepEnergy / h, h);
+                    next = _thermal.Advance(temperature, stepEnergy / h, h, conductance);
                 }
 
                 if (Math.Abs(next - temperature) > MaxStepKelvin && h > 1e-15 * Math.Max(1, Math.Abs(t)))
@@ -214,6 +216,7 @@ public sealed class TransientPathSolver
                 lastPower = stepEnergy / h;
                 mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h);
                 temperature = next;
+                conductance = _thermal.Conductance(temperature);
                 bool melting = temperature > StopAboveCelsius;
                 if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
                 {
@@ -232,7 +235,7 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : Growth), MaxStep(temperature, t));
+                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : Growth), MaxStep(conductance, t));
             }
 
             if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))
@@ -381,11 +384,12 @@ public sealed class TransientPathSolver
         || Math.Abs(current - last.CurrentAmperes) > 0.02 * Math.Max(Math.Abs(current), Math.Abs(last.CurrentAmperes));
 
     /// <summary>The first step of a segment: an eighth of the leading mode's time constant, so its exponential is resolved from its start.</summary>
-    private double FreshStep(double celsius, double segment, double t) =>
-        Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / 8, segment), MaxStep(celsius, t));
+    private double FreshStep(double celsius, double conductance, double segment, double t) =>
+        Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / 8, segment), MaxStep(conductance, t));
 
-    private double MaxStep(double celsius, double t) =>
-        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantSeconds(celsius) / (t >= CoolingFromSeconds ? 1 : 10), 1e-6));
+    /// <summary>The longest step at a time, with the conductance G at the item's temperature then.</summary>
+    private double MaxStep(double conductance, double t) =>
+        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantFor(conductance) / (t >= CoolingFromSeconds ? 1 : 10), 1e-6));
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork

@@ -6,7 +6,7 @@ namespace InductionHazard.Thermal;
 
 /// <summary>
 /// Integrates the lumped heating equation for a heating power that depends on time and temperature (for
-/// example I^2 R(T)), by exact steps of <see cref="LumpedThermalModel.Advance"/> with the power from an embedded
+/// example I^2 R(T)), by exact steps of <see cref="LumpedThermalModel.Advance(double, double, double)"/> with the power from an embedded
 /// Runge-Kutta pair in exponential form: Euler's power at the step's start (first order) and Heun's mean of the
 /// powers at its ends (second order). Their difference is the step's error estimate: a step whose estimate
 /// exceeds <see cref="ErrorToleranceKelvin"/>, or whose temperature changes by more than a set amount, is taken
@@ -99,10 +99,11 @@ public static class HeatingIntegrator
             }
 
             double p0 = power(t, temperature);
-            double predicted = model.Advance(temperature, p0, h);
+            double g = model.Conductance(temperature);
+            double predicted = model.Advance(temperature, p0, h, g);
             double p1 = power(t + h, predicted);
             double mean = 0.5 * (p0 + p1);
-            double next = model.Advance(temperature, mean, h);
+            double next = model.Advance(temperature, mean, h, g);
             double error = Math.Abs(next - predicted);
             bool shortest = !(h > 1e-9 * Math.Max(1, t1 - t0));
             if (!shortest && (Math.Abs(next - temperature) > maxStepKelvin || error > ErrorToleranceKelvin))

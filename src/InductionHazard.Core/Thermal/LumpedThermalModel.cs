@@ -45,20 +45,25 @@ public sealed class LumpedThermalModel
     }
 
     /// <summary>The cooling time constant m c / (h A) at a temperature, s (infinite without cooling).</summary>
-    public double TimeConstantSeconds(double celsius)
-    {
-        double g = TransferCoefficient(celsius) * SurfaceSquareMeters;
-        return g > 0 ? HeatCapacityJoulesPerKelvin / g : double.PositiveInfinity;
-    }
+    public double TimeConstantSeconds(double celsius) => TimeConstantFor(Conductance(celsius));
+
+    /// <summary>The conductance to the surroundings G = h_total(T) A at a temperature, W/K.</summary>
+    internal double Conductance(double celsius) => TransferCoefficient(celsius) * SurfaceSquareMeters;
+
+    /// <summary>The cooling time constant m c / G for a conductance, s (infinite without cooling).</summary>
+    internal double TimeConstantFor(double conductance) =>
+        conductance > 0 ? HeatCapacityJoulesPerKelvin / conductance : double.PositiveInfinity;
 
     /// <summary>
     /// Advances the temperature over dt with a constant heating power: the exact solution of the linear
     /// equation m c dT/dt = P - G (T - Ta), G = h_total(T) A held at its value at the start of the step.
     /// Stable for any step.
     /// </summary>
-    public double Advance(double celsius, double powerWatts, double dtSeconds)
+    public double Advance(double celsius, double powerWatts, double dtSeconds) => Advance(celsius, powerWatts, dtSeconds, Conductance(celsius));
+
+    /// <summary>The same, with the conductance at the starting temperature already known (<see cref="Conductance"/>).</summary>
+    internal double Advance(double celsius, double powerWatts, double dtSeconds, double g)
     {
-        double g = TransferCoefficient(celsius) * SurfaceSquareMeters;
         double net = powerWatts - (g * (celsius - Environment.AmbientCelsius));
         double rate = g * dtSeconds / HeatCapacityJoulesPerKelvin;
         if (rate < 1e-12)

@@ -77,8 +77,8 @@ public static class TemperatureHistory
     {
         private readonly double[] _times;
         private readonly double[] _temps;
-        private readonly double[] _slopes;
-        private readonly int[] _queue;
+        private double[]? _slopes;
+        private int[]? _queue;
 
         /// <summary>Copies the history once.</summary>
         public SustainedLevels(IReadOnlyList<HeatingSample> history)
@@ -86,23 +86,32 @@ public static class TemperatureHistory
             int n = history.Count;
             _times = new double[n];
             _temps = new double[n];
-            _slopes = new double[n];
-            _queue = new int[n];
             for (int k = 0; k < n; k++)
             {
                 _times[k] = history[k].TimeSeconds;
                 _temps[k] = history[k].TemperatureCelsius;
             }
-
-            for (int k = 0; k + 1 < n; k++)
-            {
-                double span = _times[k + 1] - _times[k];
-                _slopes[k] = span > 0 ? (_temps[k + 1] - _temps[k]) / span : 0;
-            }
         }
 
         /// <summary>The highest temperature held for a duration, °C; NaN when the history is shorter.</summary>
-        public double For(double seconds) => Sustained(_times, _temps, _slopes, seconds, _queue);
+        public double For(double seconds)
+        {
+            // The pieces' slopes and the window's queue, made on the first sweep (the sweep through the levels needs neither).
+            if (_slopes is null || _queue is null)
+            {
+                int n = _times.Length;
+                var slopes = new double[n];
+                for (int k = 0; k + 1 < n; k++)
+                {
+                    double span = _times[k + 1] - _times[k];
+                    slopes[k] = span > 0 ? (_temps[k + 1] - _temps[k]) / span : 0;
+                }
+
+                (_slopes, _queue) = (slopes, new int[n]);
+            }
+
+            return Sustained(_times, _temps, _slopes, seconds, _queue);
+        }
 
         /// <summary>
         /// The highest temperature held for each of several durations (ascending), in one sweep down through the
@@ -143,13 +152,12 @@ public static class TemperatureHistory
         }
 
         Array.Sort((double[])temps.Clone(), order);
-        var runEnd = new int[n];     // for the first sample of a stretch, its last; -1 while a sample is below the level
-        var runStart = new int[n];   // for the last sample of a stretch, its first
-        for (int k = 0; k < n; k++)
-        {
-            runEnd[k] = -1;
-            runStart[k] = -1;
-        }
+
+        // For the first sample of a stretch, its last (runEnd, the first n); for the last, its first (runStart, the next
+        // n); -1 while a sample is below the level. One array for both.
+        var runs = new int[2 * n];
+        runs.AsSpan().Fill(-1);
+        Span<int> runEnd = runs.AsSpan(0, n), runStart = runs.AsSpan(n, n);
 
         var starts = new List<int>(MostPeaks);
         int pending = 0;
