@@ -15,6 +15,9 @@ internal sealed class StepMechanics
     private readonly double[] _drive;
     private Vector3D _last;
 
+    // Squared lengths compared (the square root is monotone): no root per step.
+    private double _peakForceSquared, _peakTorqueSquared;
+
     public StepMechanics(ModalCircuit circuit, Func<double, double>[]? values, Vector3D[]? torqueField, int terms)
     {
         _circuit = circuit;
@@ -29,7 +32,7 @@ internal sealed class StepMechanics
 
     public Vector3D Impulse { get; private set; }
 
-    public double PeakTorque { get; private set; }
+    public double PeakTorque => Math.Sqrt(_peakTorqueSquared);
 
     /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
     public void Record(double[] z, double driveAt, double t, double h)
@@ -65,9 +68,10 @@ internal sealed class StepMechanics
 
             Impulse += 0.5 * h * (force + _last);
             _last = force;
-            if (force.Length > PeakForce.Length)
+            double squared = force.Dot(force);
+            if (squared > _peakForceSquared)
             {
-                PeakForce = force;
+                (PeakForce, _peakForceSquared) = (force, squared);
                 PeakForceAt = t;
             }
         }
@@ -86,7 +90,7 @@ internal sealed class StepMechanics
                 torque += (moment * _drive[j]) * nxb[j];
             }
 
-            PeakTorque = Math.Max(PeakTorque, torque.Length);
+            _peakTorqueSquared = Math.Max(_peakTorqueSquared, torque.Dot(torque));
         }
     }
 }
