@@ -53,6 +53,11 @@ public sealed class SinusoidalPathSolver
     public SinusoidalRun Run(Complex emfPhasor, double frequencyHertz, double fieldOn, double fieldOff, double exposureEnd, double celsius0, CancellationToken cancellation, double stopAboveCelsius = double.PositiveInfinity)
     {
         double peakCurrent = 0;
+
+        // The last temperature asked and its state: once the item settles, a step's start is the last step's prediction
+        // and the same temperature is asked again (the state depends on the temperature alone).
+        double askedCelsius = double.NaN;
+        SteadyState asked = default;
         double Power(double t, double celsius)
         {
             if (t > fieldOff)
@@ -60,7 +65,12 @@ public sealed class SinusoidalPathSolver
                 return 0;
             }
 
-            SteadyState state = _responseAt(celsius);
+            if (!(celsius == askedCelsius))
+            {
+                (asked, askedCelsius) = (_responseAt(celsius), celsius);
+            }
+
+            SteadyState state = asked;
             Complex i = state.CurrentPhasor;
             peakCurrent = Math.Max(peakCurrent, Math.Sqrt((i.Real * i.Real) + (i.Imaginary * i.Imaginary)));
             return state.PowerWatts;

@@ -124,7 +124,14 @@ public static class ThermalDose
             }
 
             double newton = x - (gx / gSlope);
-            x = Finite.Is(gx) && gSlope > 0 && newton > low && newton < high ? newton : 0.5 * (low + high);
+            bool inside = Finite.Is(gx) && gSlope > 0 && newton > low && newton < high;
+            if (inside && Math.Abs(newton - x) <= 1e-10 * x)
+            {
+                // A step this small lands within its square of the root (G is smooth): no need to evaluate there.
+                return newton;
+            }
+
+            x = inside ? newton : 0.5 * (low + high);
             gx = G(x, out gSlope);
         }
 

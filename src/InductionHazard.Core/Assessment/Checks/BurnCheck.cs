@@ -65,25 +65,10 @@ public sealed class BurnCheck : IHazardCheck
         // the surroundings alone reach (the item starts at or above it) is the place's own hazard, not the field's: it is
         // said, and what the field adds there is judged by the dose it adds.
         (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
-        (double[] all, double[] thresholds) = Durations(curve, span);
-        var durations = new List<double>(all.Length);
-        var durationThresholds = new List<double>(all.Length);
-        double? placeSeconds = null;
-        for (int k = 0; k < all.Length; k++)
-        {
-            if (thresholds[k] > start)
-            {
-                durations.Add(all[k]);
-                durationThresholds.Add(thresholds[k]);
-            }
-            else
-            {
-                placeSeconds ??= all[k];
-            }
-        }
+        (double[] durations, double[] durationThresholds, double? placeSeconds) = Judged(Durations(curve, span), start);
 
         var levels = new TemperatureHistory.SustainedLevels(history);
-        if (durations.Count > 0)
+        if (durations.Length > 0)
         {
             // Every contact time at once by a sweep through the levels; for a history with many peaks, one window
             // sweep per contact time, skipping those that cannot be the worst.
@@ -117,7 +102,7 @@ public sealed class BurnCheck : IHazardCheck
             ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
               + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
             : string.Empty;
-        bool contactJudged = durations.Count > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
+        bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
         if (!contactJudged)
         {
             contactText = "contact temperature not the criterion: the surroundings alone reach its threshold";
@@ -291,6 +276,44 @@ public sealed class BurnCheck : IHazardCheck
         LastGrid = new DurationGrid(curve, last, grid.Seconds, grid.Celsius);
         return grid;
     }
+
+    /// <summary>
+    /// The contact times whose threshold lies above the starting temperature, with their thresholds, and the shortest
+    /// whose threshold the start already reaches (the place's own hazard); remembered for the last grid and start, as
+    /// most items start at the skin's temperature.
+    /// </summary>
+    private static (double[] Seconds, double[] Celsius, double? Place) Judged((double[] Seconds, double[] Celsius) grid, double start)
+    {
+        if (LastJudged is { } known && ReferenceEquals(known.Grid, grid.Seconds) && known.Start.Equals(start))
+        {
+            return (known.Seconds, known.Celsius, known.Place);
+        }
+
+        var seconds = new List<double>(grid.Seconds.Length);
+        var celsius = new List<double>(grid.Seconds.Length);
+        double? place = null;
+        for (int k = 0; k < grid.Seconds.Length; k++)
+        {
+            if (grid.Celsius[k] > start)
+            {
+                seconds.Add(grid.Seconds[k]);
+                celsius.Add(grid.Celsius[k]);
+            }
+            else
+            {
+                place ??= grid.Seconds[k];
+            }
+        }
+
+        var judged = new JudgedTimes(grid.Seconds, start, seconds.ToArray(), celsius.ToArray(), place);
+        LastJudged = judged;
+        return (judged.Seconds, judged.Celsius, judged.Place);
+    }
+
+    /// <summary>The last contact times judged, with the grid and start they came from (read and replaced whole, so any thread may).</summary>
+    private static JudgedTimes? LastJudged;
+
+    private sealed record JudgedTimes(double[] Grid, double Start, double[] Seconds, double[] Celsius, double? Place);
 
     /// <summary>The last grid made, with its curve and its longest contact time (read and replaced whole, so any thread may).</summary>
     private static DurationGrid? LastGrid;
