@@ -43,15 +43,14 @@ public static class SiFormat
             return v.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) + " " + unit;
         }
 
-        double scaled = v / Math.Pow(10, 3 * (index - UnitPrefixIndex));
-        string digits = Round(scaled, significantDigits, out double shown);
+        string? digits = Round(v / Scales[index], significantDigits, out double shown, Prefixes[index], unit);
         if (Math.Abs(shown) >= 1000 && index < Prefixes.Length - 1)
         {
             index++;
-            digits = Round(v / Math.Pow(10, 3 * (index - UnitPrefixIndex)), significantDigits);
+            digits = Round(v / Scales[index], significantDigits, out _, Prefixes[index], unit);
         }
 
-        return digits + " " + Prefixes[index] + unit;
+        return digits;
     }
 
     /// <summary>
@@ -108,34 +107,61 @@ public static class SiFormat
             return string.Empty;
         }
 
-        return Finite.Is(value.Value)
-            ? value.Value.ToString("0.0", CultureInfo.InvariantCulture) + " °C"
-            : Plain(value);
+        return Finite.Is(value.Value) ? OneDecimal(value.Value) : Plain(value);
     }
 
-    private static string Round(double value, int significantDigits) => Round(value, significantDigits, out _);
+    private static string Round(double value, int significantDigits) => Round(value, significantDigits, out _, null, null);
+
+    /// <summary>
+    /// A temperature to one decimal, followed by " °C", as .NET's custom format "0.0" writes it. That format first takes
+    /// the value to 15 significant digits and then rounds half away from zero, so a value within a few units of the
+    /// fifteenth digit of a half-tenth can round up where the value itself is below the half: those, and values of a
+    /// million or more, are left to the formatter; every other value rounds the same either way and is written out by
+    /// integer arithmetic.
+    /// </summary>
+    private static string OneDecimal(double value)
+    {
+        double tenths = value * 10;
+        double fromHalf = Math.Abs(tenths - Math.Floor(tenths) - 0.5);
+        if (!(Math.Abs(value) < 1e6) || fromHalf <= (1e-13 * Math.Abs(tenths)) + 1e-9)
+        {
+            return value.ToString("0.0", CultureInfo.InvariantCulture) + " °C";
+        }
+
+        return Digits(value, 1, keepZeros: true, out _, null, "°C");
+    }
 
     /// <summary>
     /// The value to a number of significant digits, without trailing zeros ("0.##" in .NET's custom format), and the
-    /// rounded value itself. Written out by integer arithmetic: the formatter's custom patterns cost most of a report's
-    /// time, and this gives the same text.
+    /// rounded value itself; with a prefix and unit, " " + prefix + unit follows. Written out by integer arithmetic:
+    /// the formatter's custom patterns cost most of a report's time, and this gives the same text.
     /// </summary>
-    private static string Round(double value, int significantDigits, out double rounded)
+    private static string Round(double value, int significantDigits, out double rounded, string? prefix, string? unit)
     {
         if (value == 0)
         {
             rounded = 0;
-            return "0";
+            return unit is null ? "0" : "0 " + prefix + unit;
         }
 
         int magnitude = (int)Math.Floor(Math.Log10(Math.Abs(value))) + 1;
-        int decimals = Math.Max(0, Math.Min(15, significantDigits - magnitude));
+        return Digits(value, Math.Max(0, Math.Min(15, significantDigits - magnitude)), keepZeros: false, out rounded, prefix, unit);
+    }
+
+    /// <summary>
+    /// The value rounded half away from zero to a number of decimals, written without trailing zeros ("0.##") or with
+    /// them ("0.00"), then " " + prefix + unit when a unit is given; and the rounded value.
+    /// </summary>
+    private static string Digits(double value, int decimals, bool keepZeros, out double rounded, string? prefix, string? unit)
+    {
         rounded = Math.Round(value, decimals, MidpointRounding.AwayFromZero);
         double scale = Powers[decimals];
         double units = Math.Abs(rounded) * scale;
+        string suffix = unit is null ? string.Empty : " " + prefix + unit;
         if (!(units < 1e15))
         {
-            return rounded.ToString(Patterns[Math.Max(1, decimals)], CultureInfo.InvariantCulture);
+            string pattern = keepZeros ? "0." + new string('0', Math.Max(1, decimals)) : Patterns[Math.Max(1, decimals)];
+            return rounded.ToString(pattern, CultureInfo.InvariantCulture) + suffix;
         }
 
         // The rounded value is the nearest double to a decimal of this many places: its digits are those of
@@ -144,16 +170,78 @@ public static class SiFormat
         long whole = decimals == 0 ? digits : digits / (long)scale;
         long fraction = decimals == 0 ? 0 : digits % (long)scale;
         int places = decimals;
-        while (places > 0 && fraction % 10 == 0)
+        while (!keepZeros && places > 0 && fraction % 10 == 0)
         {
             fraction /= 10;
             places--;
         }
 
-        string sign = rounded < 0 || (rounded == 0 && BitConverter.DoubleToInt64Bits(rounded) < 0) ? "-" : string.Empty;
-        return places == 0
-            ? sign + whole.ToString(CultureInfo.InvariantCulture)
-            : sign + whole.ToString(CultureInfo.InvariantCulture) + "." + fraction.ToString(CultureInfo.InvariantCulture).PadLeft(places, '0');
+        bool negative = rounded < 0 || (rounded == 0 && BitConverter.DoubleToInt64Bits(rounded) < 0);
+        return Compose(negative, whole, fraction, places, prefix, unit);
+    }
+
+    /// <summary>Writes [-]whole[.fraction to its places][ prefix unit] into one string.</summary>
+    private static string Compose(bool negative, long whole, long fraction, int places, string? prefix, string? unit)
+    {
+        int wholeDigits = 1;
+        for (long w = whole; w >= 10; w /= 10)
+        {
+            wholeDigits++;
+        }
+
+        int length = (negative ? 1 : 0) + wholeDigits + (places > 0 ? places + 1 : 0) + (unit is null ? 0 : 1 + (prefix?.Length ?? 0) + unit.Length);
+        char[] text = length <= 64 ? (Buffer ??= new char[64]) : new char[length];
+        int n = 0;
+        if (negative)
+        {
+            text[n++] = '-';
+        }
+
+        for (int i = wholeDigits - 1; i >= 0; i--, whole /= 10)
+        {
+            text[n + i] = (char)('0' + (whole % 10));
+        }
+
+        n += wholeDigits;
+        if (places > 0)
+        {
+            text[n++] = '.';
+            for (int i = places - 1; i >= 0; i--, fraction /= 10)
+            {
+                text[n + i] = (char)('0' + (fraction % 10));
+            }
+
+            n += places;
+        }
+
+        if (unit is not null)
+        {
+            text[n++] = ' ';
+            prefix?.CopyTo(0, text, n, prefix.Length);
+            n += prefix?.Length ?? 0;
+            unit.CopyTo(0, text, n, unit.Length);
+            n += unit.Length;
+        }
+
+        return new string(text, 0, n);
+    }
+
+    /// <summary>Each thread's buffer for composing a figure.</summary>
+    [ThreadStatic]
+    private static char[]? Buffer;
+
+    /// <summary>10^(3 (k - 8)) for each prefix index k, from the runtime's own power so that every scaled value is as before.</summary>
+    private static readonly double[] Scales = BuildScales();
+
+    private static double[] BuildScales()
+    {
+        var scales = new double[Prefixes.Length];
+        for (int k = 0; k < scales.Length; k++)
+        {
+            scales[k] = Math.Pow(10, 3 * (k - UnitPrefixIndex));
+        }
+
+        return scales;
     }
 
     private static readonly double[] Powers = { 1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15 };

@@ -82,4 +82,86 @@ public class SiFormatTests
             Assert.Equal(ByTheFormatter(edge, 3), SiFormat.Plain(edge, 3));
         }
     }
+
+    /// <summary>A quantity with its prefix as first written: the scaled value by .NET's "0.##" after rounding away from zero.</summary>
+    private static string FormatByTheFormatter(double v, string unit, int digits)
+    {
+        string[] prefixes = { "y", "z", "a", "f", "p", "n", "µ", "m", string.Empty, "k", "M", "G", "T", "P", "E", "Z", "Y" };
+        int index = (int)System.Math.Floor(System.Math.Log10(System.Math.Abs(v)) / 3.0) + 8;
+        double scaled = v / System.Math.Pow(10, 3 * (index - 8));
+        if (System.Math.Abs(System.Math.Round(scaled, System.Math.Max(0, System.Math.Min(15, digits - ((int)System.Math.Floor(System.Math.Log10(System.Math.Abs(scaled))) + 1))), System.MidpointRounding.AwayFromZero)) >= 1000 && index < prefixes.Length - 1)
+        {
+            index++;
+            scaled = v / System.Math.Pow(10, 3 * (index - 8));
+        }
+
+        return ByTheFormatter(scaled, digits) + " " + prefixes[index] + unit;
+    }
+
+    [Validates("quantities with SI prefixes to 1-6 significant figures, 200,000 random values from 1e-23 to 1e26 and rounding edges", ".NET's custom numeric format \"0.##\" of the value scaled by Math.Pow (general-purpose reference library)", "the same text")]
+    [Fact]
+    public void QuantitiesReadAsTheRuntimesOwnFormatterWritesThem()
+    {
+        var random = new System.Random(20261204);
+        for (int trial = 0; trial < 200_000; trial++)
+        {
+            int digits = 1 + random.Next(6);
+            double value = (random.Next(2) == 0 ? -1 : 1) * System.Math.Pow(10, -23 + (49 * random.NextDouble()));
+            if (trial % 3 == 0)
+            {
+                // On a rounding edge: the digits kept and then a 5 (999.5, 1.235 and the like), at the value's own decade.
+                double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
+                double mantissa = value / decade;
+                value = (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
+            }
+
+            Assert.Equal(FormatByTheFormatter(value, "V", digits), SiFormat.Format(value, "V", digits));
+        }
+
+        foreach (double edge in new[] { 999.5, 999.4999, 0.0015, 1e-3, 1, 1000, 999999.5, 1.005, 2.675e-6, -0.1, 123456.5, 1e24 * 0.9995 })
+        {
+            Assert.Equal(FormatByTheFormatter(edge, "A", 3), SiFormat.Format(edge, "A"));
+        }
+    }
+
+    [Validates("temperatures to one decimal, 300,000 random values of either sign up to 3e7 degC, halves, near-halves and negative zeros", ".NET's custom numeric format \"0.0\" (general-purpose reference library)", "the same text")]
+    [Fact]
+    public void TemperaturesReadAsTheRuntimesOwnFormatterWritesThem()
+    {
+        var random = new System.Random(20261203);
+        var culture = System.Globalization.CultureInfo.InvariantCulture;
+        for (int trial = 0; trial < 300_000; trial++)
+        {
+            double value = -300 + (3300 * random.NextDouble());
+            switch (trial % 4)
+            {
+                case 0:
+                    // On a rounding edge: a whole number of tenths and a half, as the nearest double has it.
+                    value = System.Math.Round(value, 1) + 0.05;
+                    break;
+                case 1:
+                    // Within a few units in the last place of such an edge, either side.
+                    value = System.Math.Round(value, 1) + 0.05;
+                    for (int step = random.Next(-4, 5); step != 0; step -= System.Math.Sign(step))
+                    {
+                        value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
+                    }
+
+                    break;
+                case 2:
+                    value /= System.Math.Pow(10, random.Next(8));
+                    break;
+                default:
+                    value *= System.Math.Pow(10, random.Next(5));
+                    break;
+            }
+
+            Assert.Equal(value.ToString("0.0", culture) + " °C", SiFormat.Celsius(value));
+        }
+
+        foreach (double edge in new[] { 0.0, -0.0, -0.04, 0.05, -0.05, 47.15, 36.45, 740.95, 99.95, 999999.95, 1e6, -1e18 })
+        {
+            Assert.Equal(edge.ToString("0.0", culture) + " °C", SiFormat.Celsius(edge));
+        }
+    }
 }
