@@ -58,7 +58,14 @@ public static class ThermalDose
     /// exactly integrated dose (which grows with k). Infinity when nothing is added. Null when that factor would take the history above
     /// <see cref="FittedUpToCelsius"/>, where the relation does not hold: the dose cannot then be the criterion.
     /// </summary>
-    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes)
+    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes) =>
+        RiseMargin(history, startCelsius, limitMinutes, out _);
+
+    /// <summary>
+    /// The same, and the dose the heating adds as it is (<see cref="AddedCem43Minutes"/>), which the search finds on its
+    /// way: it starts from the history as it is, k = 1.
+    /// </summary>
+    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes, out double addedMinutes)
     {
         double peak = double.NegativeInfinity;
         foreach (HeatingSample s in history)
@@ -67,23 +74,21 @@ public static class ThermalDose
         }
 
         double rise = peak - startCelsius;
-        if (!(rise > 0))
+        double inRange = (FittedUpToCelsius - startCelsius) / rise;
+        if (!(rise > 0) || !(inRange > 0))
         {
-            return double.PositiveInfinity;
+            addedMinutes = AddedCem43Minutes(history, startCelsius);
+            return rise > 0 ? null : double.PositiveInfinity;
         }
 
         double baseline = Scaled(history, startCelsius, 0);
-        double inRange = (FittedUpToCelsius - startCelsius) / rise;
-        if (!(inRange > 0))
-        {
-            return null;
-        }
+        addedMinutes = double.NaN;
 
         // G(k) = ln(added dose / limit) and its slope, in one pass. A scaled history far beyond the range overflows
         // the exponential: that dose is beyond any limit.
-        double G(double k, out double slope)
+        double G(double k, out double slope, out double added)
         {
-            double added = Scaled(history, startCelsius, k, out double derivative, slope: true) - baseline;
+            added = Scaled(history, startCelsius, k, out double derivative, slope: true) - baseline;
             if (double.IsNaN(added) || double.IsPositiveInfinity(added))
             {
                 slope = double.NaN;
@@ -94,24 +99,32 @@ public static class ThermalDose
             return added > 0 ? Math.Log(added / limitMinutes) : double.NegativeInfinity;
         }
 
-        double x = inRange;
-        double gx = G(x, out double gSlope);
-        if (gx < 0)
+        // The added dose grows with k from 0 at k = 0, close to exponentially (the CEM43 rate is 2 per kelvin above
+        // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the history as it is (k = 1, or
+        // the range's end if nearer), kept inside the bracket [0, inRange] (a bisection step wherever Newton's would
+        // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it: there
+        // G below zero means the limit is not reached within the range. Four or so passes over the history.
+        double low = 0, high = inRange;
+        double x = Math.Min(1, inRange);
+        double gx = G(x, out double gSlope, out double addedAtX);
+        if (x == 1)
         {
+            addedMinutes = addedAtX;
+        }
+
+        bool highKnown = x == inRange;
+        if (highKnown && gx < 0)
+        {
+            addedMinutes = AddedCem43Minutes(history, startCelsius);
             return null;
         }
 
-        // The added dose grows with k from 0 at k = 0, close to exponentially (the CEM43 rate is 2 per kelvin above
-        // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the range's end, kept inside the
-        // bracket [0, inRange] that holds the root (a bisection step wherever Newton's would leave it, or G or its
-        // slope is not finite). Five or so passes over the history instead of bisection's forty.
-        double low = 0, high = inRange;
         for (int i = 0; i < 200 && high - low > 1e-12 * high; i++)
         {
             if (Math.Abs(gx) < 1e-13)
             {
                 // The dose at x is the limit to 1e-13 relative: x is the root to about that, over the log's slope.
-                return x;
+                break;
             }
 
             if (gx < 0)
@@ -120,7 +133,7 @@ public static class ThermalDose
             }
             else
             {
-                high = x;
+                (high, highKnown) = (x, true);
             }
 
             double newton = x - (gx / gSlope);
@@ -128,11 +141,48 @@ public static class ThermalDose
             if (inside && Math.Abs(newton - x) <= 1e-10 * x)
             {
                 // A step this small lands within its square of the root (G is smooth): no need to evaluate there.
-                return newton;
+                x = newton;
+                gx = 0;
+                break;
+            }
+
+            if (!inside && !highKnown)
+            {
+                // The step leaves the part known to hold the root: first whether the range's end reaches the limit.
+                (x, highKnown) = (inRange, true);
+                gx = G(x, out gSlope, out _);
+                if (gx < 0)
+                {
+                    x = double.NaN;
+                    break;
+                }
+
+                continue;
             }
 
             x = inside ? newton : 0.5 * (low + high);
-            gx = G(x, out gSlope);
+            gx = G(x, out gSlope, out _);
+        }
+
+        if (double.IsNaN(addedMinutes))
+        {
+            addedMinutes = AddedCem43Minutes(history, startCelsius);
+        }
+
+        if (double.IsNaN(x))
+        {
+            return null;
+        }
+
+        if (Math.Abs(gx) < 1e-13 || gx == 0)
+        {
+            return x;
+        }
+
+        // The bracket has closed: the root lies in it, once the range's end is known to reach the limit.
+        if (!highKnown && G(inRange, out _, out _) < 0)
+        {
+            return null;
         }
 
         return 0.5 * (low + high);

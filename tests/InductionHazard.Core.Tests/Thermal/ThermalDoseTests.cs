@@ -74,49 +74,65 @@ public class ThermalDoseTests
     [Fact]
     public void TheDoseMarginEqualsAPlainBisectionOnRandomHistories()
     {
-        // The root finder (regula falsi on the log of the dose) against plain bisection on the dose itself, on 300
-        // random heating histories (fixed seed): the same factor to 1e-9.
+        // The root finder (Newton's steps on the log of the dose, from the history as it is) against plain bisection on
+        // the dose itself, on 300 random heating histories (fixed seed) and limits from 0.01 to 50 CEM43: the same factor
+        // to 1e-9, below and above 1; null exactly where the dose at the range's end stays below the limit; and the
+        // added dose it finds on its way the same as AddedCem43Minutes to the last bit.
         var random = new Random(20261202);
-        int compared = 0;
-        for (int trial = 0; trial < 300; trial++)
+        int compared = 0, belowOne = 0, nulls = 0;
+        foreach (double limit in new[] { 0.01, 2.0, 50 })
         {
-            double start = 30 + (random.NextDouble() * 8), t = 0, celsius = start;
-            var history = new List<HeatingSample> { new(0, start, 0) };
-            for (int k = 0; k < 5 + random.Next(60); k++)
+            for (int trial = 0; trial < 300; trial++)
             {
-                t += 1 + (random.NextDouble() * 300);
-                celsius = Math.Max(start, celsius + ((random.NextDouble() - 0.3) * 3));
-                history.Add(new HeatingSample(t, celsius, 0));
-            }
-
-            double? margin = ThermalDose.RiseMargin(history, start, 2.0);
-            if (margin is not { } m || double.IsInfinity(m))
-            {
-                continue;
-            }
-
-            double Added(double f) =>
-                ThermalDose.Cem43Minutes(history.ConvertAll(h => new HeatingSample(h.TimeSeconds, start + (f * (h.TemperatureCelsius - start)), 0)))
-                - ThermalDose.Cem43Minutes(history.ConvertAll(h => new HeatingSample(h.TimeSeconds, start, 0)));
-            double low = 0, high = (ThermalDose.FittedUpToCelsius - start) / (history.Max(h => h.TemperatureCelsius) - start);
-            for (int i = 0; i < 200; i++)
-            {
-                double mid = 0.5 * (low + high);
-                if (Added(mid) < 2.0)
+                // A third of the histories brief (steps of milliseconds), whose dose may not reach the limit even at the range's end.
+                double start = 30 + (random.NextDouble() * 8), t = 0, celsius = start, pace = trial % 3 == 0 ? 1e-3 : 1;
+                var history = new List<HeatingSample> { new(0, start, 0) };
+                for (int k = 0; k < 5 + random.Next(60); k++)
                 {
-                    low = mid;
+                    t += pace * (1 + (random.NextDouble() * 300));
+                    celsius = Math.Max(start, celsius + ((random.NextDouble() - 0.3) * 3));
+                    history.Add(new HeatingSample(t, celsius, 0));
                 }
-                else
-                {
-                    high = mid;
-                }
-            }
 
-            Within.Relative(0.5 * (low + high), m, 1e-9, "dose margin, trial " + trial);
-            compared++;
+                double? margin = ThermalDose.RiseMargin(history, start, limit, out double added);
+                Assert.Equal(ThermalDose.AddedCem43Minutes(history, start), added);
+                Assert.Equal(margin, ThermalDose.RiseMargin(history, start, limit));
+                if (margin is { } infinite && double.IsInfinity(infinite))
+                {
+                    continue;
+                }
+
+                double Added(double f) =>
+                    ThermalDose.Cem43Minutes(history.ConvertAll(h => new HeatingSample(h.TimeSeconds, start + (f * (h.TemperatureCelsius - start)), 0)))
+                    - ThermalDose.Cem43Minutes(history.ConvertAll(h => new HeatingSample(h.TimeSeconds, start, 0)));
+                double low = 0, high = (ThermalDose.FittedUpToCelsius - start) / (history.Max(h => h.TemperatureCelsius) - start);
+                Assert.True((margin is null) == (Added(high) < limit), "trial " + trial + ": a margin exactly where the dose at the range's end reaches the limit");
+                if (margin is null)
+                {
+                    nulls++;
+                    continue;
+                }
+
+                for (int i = 0; i < 200; i++)
+                {
+                    double mid = 0.5 * (low + high);
+                    if (Added(mid) < limit)
+                    {
+                        low = mid;
+                    }
+                    else
+                    {
+                        high = mid;
+                    }
+                }
+
+                Within.Relative(0.5 * (low + high), margin.Value, 1e-9, "dose margin, limit " + limit + ", trial " + trial);
+                compared++;
+                belowOne += margin.Value < 1 ? 1 : 0;
+            }
         }
 
-        Assert.True(compared > 50, compared + " histories had a dose margin to compare");
+        Assert.True(compared > 150 && belowOne > 20 && compared - belowOne > 20 && nulls > 20, compared + " margins compared (" + belowOne + " below 1), " + nulls + " without one");
     }
 
     [Validates("the dose a heating adds, each sample's weight shared by the pieces beside it, 300 random histories across 43 degC", "CEM43 of Sapareto and Dewey (1984) integrated piece by piece and split at 43 degC (independent implementation)", "1e-9 of the whole dose")]

@@ -90,8 +90,7 @@ public sealed class BurnCheck : IHazardCheck
         // The dose the field adds over the baseline (the item held at its starting temperature), judged by the factor
         // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
         // fitted on, beyond which the contact-temperature criterion above governs alone.
-        double dose = ThermalDose.AddedCem43Minutes(history, start);
-        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes);
+        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double dose);
         string doseText = doseMargin is { } dm
             ? "thermal dose added " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
             : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
