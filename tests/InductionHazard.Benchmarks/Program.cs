@@ -9,7 +9,9 @@ namespace InductionHazard.Benchmarks;
 /// <summary>
 /// Runs the engine's benchmarks (BenchmarkDotNet; pass its usual arguments, such as --filter '*'), or with
 /// "memory capture" or "memory baseline" loads the 1,000,000-row capture once in this process and prints the
-/// process's peak working set, so two runs compare the memory of the module's loader with the baseline's.
+/// process's peak working set, so two runs compare the memory of the module's loader with the baseline's; or with
+/// "loop" and a number of seconds, times the ring assessments of <see cref="EngineBenchmarks"/> in a plain loop, one
+/// line per case (tests/bench/CompareEngine.ps1 runs it against an earlier commit, alternately, in one session).
 /// </summary>
 public static class Program
 {
@@ -33,7 +35,46 @@ public static class Program
             return 0;
         }
 
+        if (args.Length == 2 && args[0] == "loop")
+        {
+            Loop(double.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture));
+            return 0;
+        }
+
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
         return 0;
+    }
+
+    /// <summary>Each case of <see cref="EngineBenchmarks"/> for about the time given, after a warm-up: microseconds per assessment.</summary>
+    private static void Loop(double seconds)
+    {
+        var cases = new EngineBenchmarks();
+        cases.Setup();
+        foreach ((string name, Func<object> run) in new (string, Func<object>)[]
+        {
+            ("sine", () => cases.SineContinuous()),
+            ("ramp10ms", () => cases.Ramp10Milliseconds()),
+            ("ramp1s", () => cases.Ramp1Second()),
+        })
+        {
+            for (int i = 0; i < 20_000; i++)
+            {
+                run();
+            }
+
+            long count = 0;
+            var watch = Stopwatch.StartNew();
+            while (watch.Elapsed.TotalSeconds < seconds)
+            {
+                for (int i = 0; i < 1000; i++)
+                {
+                    run();
+                }
+
+                count += 1000;
+            }
+
+            Console.WriteLine(FormattableString.Invariant($"{name} {watch.Elapsed.TotalMilliseconds * 1000 / count:F2} us"));
+        }
     }
 }
