@@ -102,8 +102,9 @@ public static class ThermalDose
         // The added dose grows with k from 0 at k = 0, close to exponentially (the CEM43 rate is 2 per kelvin above
         // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the history as it is (k = 1, or
         // the range's end if nearer), kept inside the bracket [0, inRange] (a bisection step wherever Newton's would
-        // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it: there
-        // G below zero means the limit is not reached within the range. Four or so passes over the history.
+        // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it or
+        // the root lies far off: there G below zero means the limit is not reached within the range. Three to five
+        // passes over the history, the first of which gives the added dose as it is.
         double low = 0, high = inRange;
         double x = Math.Min(1, inRange);
         double gx = G(x, out double gSlope, out double addedAtX);
@@ -146,9 +147,11 @@ public static class ThermalDose
                 break;
             }
 
-            if (!inside && !highKnown)
+            if (!highKnown && (!inside || newton > 8 * x))
             {
-                // The step leaves the part known to hold the root: first whether the range's end reaches the limit.
+                // The step leaves the part known to hold the root, or the root lies far off (where the dose still grows
+                // about linearly in k and Newton's steps on its log would creep up on it): first whether the range's end
+                // reaches the limit, then on from there.
                 (x, highKnown) = (inRange, true);
                 gx = G(x, out gSlope, out _);
                 if (gx < 0)
