@@ -103,8 +103,8 @@ public static class ThermalDose
         // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the history as it is (k = 1, or
         // the range's end if nearer), kept inside the bracket [0, inRange] (a bisection step wherever Newton's would
         // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it or
-        // the root lies far off: there G below zero means the limit is not reached within the range. Three to five
-        // passes over the history, the first of which gives the added dose as it is.
+        // the root lies far off: there G below zero means the limit is not reached within the range. Five or six passes
+        // over the history, the first of which gives the added dose as it is.
         double low = 0, high = inRange;
         double x = Math.Min(1, inRange);
         double gx = G(x, out double gSlope, out double addedAtX);
@@ -113,7 +113,7 @@ public static class ThermalDose
             addedMinutes = addedAtX;
         }
 
-        bool highKnown = x == inRange;
+        bool highKnown = x == inRange, unreached = false;
         if (highKnown && gx < 0)
         {
             addedMinutes = AddedCem43Minutes(history, startCelsius);
@@ -156,7 +156,7 @@ public static class ThermalDose
                 gx = G(x, out gSlope, out _);
                 if (gx < 0)
                 {
-                    x = double.NaN;
+                    unreached = true;
                     break;
                 }
 
@@ -172,12 +172,12 @@ public static class ThermalDose
             addedMinutes = AddedCem43Minutes(history, startCelsius);
         }
 
-        if (double.IsNaN(x))
+        if (unreached)
         {
             return null;
         }
 
-        if (Math.Abs(gx) < 1e-13 || gx == 0)
+        if (Math.Abs(gx) < 1e-13)
         {
             return x;
         }
