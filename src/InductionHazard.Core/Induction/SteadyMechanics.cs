@@ -37,6 +37,12 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
     /// <param name="torqueField">n x b_j per term (null for no torque).</param>
     public static SteadyMechanics Of(ModalCircuit circuit, Complex[] modal, Complex[] drives, Vector3D[]? torqueField)
     {
+        if (Inert(circuit, modal, drives, torqueField))
+        {
+            // No field gradient and no field across the moment: every phase's force and torque are exactly zero.
+            return new SteadyMechanics(Vector3D.Zero, Vector3D.Zero, 0);
+        }
+
         int terms = drives.Length;
         var forceRe = new Vector3D[terms];
         var forceIm = new Vector3D[terms];
@@ -87,5 +93,57 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
         }
 
         return new SteadyMechanics(peak, mean, Math.Sqrt(peakTorqueSquared));
+    }
+
+    /// <summary>
+    /// True when the loop below would give exactly zero: every force coupling and torque field zero (or absent), and
+    /// every amplitude, drive and moment weight finite (a zero times anything else is not zero).
+    /// </summary>
+    private static bool Inert(ModalCircuit circuit, Complex[] modal, Complex[] drives, Vector3D[]? torqueField)
+    {
+        if (circuit.ForceCoupling is { } g)
+        {
+            foreach (Vector3D v in g)
+            {
+                if (v.X != 0 || v.Y != 0 || v.Z != 0)
+                {
+                    return false;
+                }
+            }
+        }
+
+        foreach (Vector3D v in torqueField ?? Array.Empty<Vector3D>())
+        {
+            if (v.X != 0 || v.Y != 0 || v.Z != 0)
+            {
+                return false;
+            }
+        }
+
+        foreach (Complex c in modal)
+        {
+            if (!Finite.Is(c.Real) || !Finite.Is(c.Imaginary))
+            {
+                return false;
+            }
+        }
+
+        foreach (Complex d in drives)
+        {
+            if (!Finite.Is(d.Real) || !Finite.Is(d.Imaginary))
+            {
+                return false;
+            }
+        }
+
+        foreach (double a in circuit.MomentWeights ?? Array.Empty<double>())
+        {
+            if (!Finite.Is(a))
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 }
