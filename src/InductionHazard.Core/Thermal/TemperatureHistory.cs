@@ -177,6 +177,7 @@ public static class TemperatureHistory
             return length;
         }
 
+        Span<double> tops = stackalloc double[MostPeaks + 1], bottoms = stackalloc double[MostPeaks + 1];
         int next = n - 1;
         while (next >= 0 && pending < held.Length)
         {
@@ -215,10 +216,12 @@ public static class TemperatureHistory
                 return null;
             }
 
+            // Each stretch's length at this level and at the next (kept for the contact times between them).
             double longest = 0;
-            foreach (int i in starts)
+            for (int s = 0; s < starts.Count; s++)
             {
-                longest = Math.Max(longest, Length(i, runEnd[i], level));
+                tops[s] = Length(starts[s], runEnd[starts[s]], level);
+                longest = Math.Max(longest, tops[s]);
             }
 
             while (pending < held.Length && ascending[pending] <= longest)
@@ -234,17 +237,18 @@ public static class TemperatureHistory
             // Down to the next sample level: each stretch grows linearly; the highest level at which one reaches d.
             double below = temps[order[next]];
             double reach = 0;
-            foreach (int i in starts)
+            for (int s = 0; s < starts.Count; s++)
             {
-                reach = Math.Max(reach, Length(i, runEnd[i], below));
+                bottoms[s] = Length(starts[s], runEnd[starts[s]], below);
+                reach = Math.Max(reach, bottoms[s]);
             }
 
             while (pending < held.Length && ascending[pending] < reach)
             {
                 double d = ascending[pending], best = double.NegativeInfinity;
-                foreach (int i in starts)
+                for (int s = 0; s < starts.Count; s++)
                 {
-                    double top = Length(i, runEnd[i], level), bottom = Length(i, runEnd[i], below);
+                    double top = tops[s], bottom = bottoms[s];
                     if (bottom > d)
                     {
                         best = Math.Max(best, level + ((below - level) * (d - top) / (bottom - top)));
