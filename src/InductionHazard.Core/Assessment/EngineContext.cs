@@ -56,11 +56,18 @@ internal sealed class EngineContext
 
             Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop);
             Vector3D[] b = source.FieldPerUnitDrive(centre);
-            NormalField = b.Select(v => v.Dot(Normal)).ToArray();
-            Vector3D facing = Normal;
-            // A normal along the field to within rounding (1e-9 rad) feels no torque: its cross product is the
-            // rounding's, not a tilt, and would print torques of zepto-newton metres.
-            TorqueField = b.Select(v => facing.Cross(v)).Select((t, j) => t.Length <= 1e-9 * b[j].Length ? Vector3D.Zero : t).ToArray();
+            NormalField = new double[b.Length];
+            TorqueField = new Vector3D[b.Length];
+            for (int j = 0; j < b.Length; j++)
+            {
+                NormalField[j] = b[j].Dot(Normal);
+
+                // A normal along the field to within rounding (1e-9 rad) feels no torque: its cross product is the
+                // rounding's, not a tilt, and would print torques of zepto-newton metres.
+                Vector3D torque = Normal.Cross(b[j]);
+                TorqueField[j] = torque.Length <= 1e-9 * b[j].Length ? Vector3D.Zero : torque;
+            }
+
             FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
             if (loop is BodyGeometry)
             {

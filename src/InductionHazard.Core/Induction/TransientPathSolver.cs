@@ -204,7 +204,11 @@ public sealed class TransientPathSolver
                 }
 
                 (double stepPeak, double stepPeakAt) = PeakWithin(z, work, s, h, total);
-                Array.Copy(work.Next, z, modes);
+                for (int k = 0; k < modes; k++)
+                {
+                    z[k] = work.Next[k];
+                }
+
                 total = Total(z);
                 if (Math.Abs(stepPeak) > Math.Abs(peak.current))
                 {
