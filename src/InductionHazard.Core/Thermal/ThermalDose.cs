@@ -103,8 +103,9 @@ public static class ThermalDose
         // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the history as it is (k = 1, or
         // the range's end if nearer), kept inside the bracket [0, inRange] (a bisection step wherever Newton's would
         // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it or
-        // the root lies far off: there G below zero means the limit is not reached within the range. Five or six passes
-        // over the history, the first of which gives the added dose as it is.
+        // the root lies far off: there G below zero means the limit is not reached within the range. Four or five
+        // passes over the history besides the baseline's (which takes no exponential), the first giving the added dose
+        // as it is.
         double low = 0, high = inRange;
         double x = Math.Min(1, inRange);
         double gx = G(x, out double gSlope, out double addedAtX);
@@ -139,9 +140,10 @@ public static class ThermalDose
 
             double newton = x - (gx / gSlope);
             bool inside = Finite.Is(gx) && gSlope > 0 && newton > low && newton < high;
-            if (inside && Math.Abs(newton - x) <= 1e-10 * x)
+            if (inside && Math.Abs(newton - x) <= 1e-7 * x)
             {
-                // A step this small lands within its square of the root (G is smooth): no need to evaluate there.
+                // A step this small lands within about its square of the root, relative to the factor (G is smooth, its
+                // curvature over its slope about 1/k or less): some 1e-14, with no need to evaluate there.
                 x = newton;
                 gx = 0;
                 break;
@@ -149,9 +151,9 @@ public static class ThermalDose
 
             if (!highKnown && (!inside || newton > 8 * x))
             {
-                // The step leaves the part known to hold the root, or the root lies far off (where the dose still grows
-                // about linearly in k and Newton's steps on its log would creep up on it): first whether the range's end
-                // reaches the limit, then on from there.
+                // The step leaves the part known to hold the root, or the root lies far off (where the dose still
+                // grows about linearly in k and Newton's steps on its log would creep up on it): first whether the
+                // range's end reaches the limit, then on from there.
                 (x, highKnown) = (inRange, true);
                 gx = G(x, out gSlope, out _);
                 if (gx < 0)
