@@ -50,7 +50,10 @@ public static class ThermalDose
     /// starting temperature for the same time, minutes.
     /// </summary>
     public static double AddedCem43Minutes(IReadOnlyList<HeatingSample> history, double startCelsius) =>
-        Scaled(history, startCelsius, 1) - Scaled(history, startCelsius, 0);
+        Added(new Pieces(history, startCelsius), startCelsius);
+
+    private static double Added(Pieces pieces, double startCelsius) =>
+        Scaled(pieces, startCelsius, 1) - Scaled(pieces, startCelsius, 0);
 
     /// <summary>
     /// The margin on the rise for a dose limit: the factor k on the temperature rise the field adds (T' = start +
@@ -75,20 +78,22 @@ public static class ThermalDose
 
         double rise = peak - startCelsius;
         double inRange = (FittedUpToCelsius - startCelsius) / rise;
+        // The history's times and rises read once, for the passes over it.
+        var pieces = new Pieces(history, startCelsius);
         if (!(rise > 0) || !(inRange > 0))
         {
-            addedMinutes = AddedCem43Minutes(history, startCelsius);
+            addedMinutes = Added(pieces, startCelsius);
             return rise > 0 ? null : double.PositiveInfinity;
         }
 
-        double baseline = Scaled(history, startCelsius, 0);
+        double baseline = Scaled(pieces, startCelsius, 0);
         addedMinutes = double.NaN;
 
         // G(k) = ln(added dose / limit) and its slope, in one pass. A scaled history far beyond the range overflows
         // the exponential: that dose is beyond any limit.
         double G(double k, out double slope, out double added)
         {
-            added = Scaled(history, startCelsius, k, out double derivative, slope: true) - baseline;
+            added = Scaled(pieces, startCelsius, k, out double derivative, slope: true) - baseline;
             if (double.IsNaN(added) || double.IsPositiveInfinity(added))
             {
                 slope = double.NaN;
@@ -117,7 +122,7 @@ public static class ThermalDose
         bool highKnown = x == inRange, unreached = false;
         if (highKnown && gx < 0)
         {
-            addedMinutes = AddedCem43Minutes(history, startCelsius);
+            addedMinutes = Added(pieces, startCelsius);
             return null;
         }
 
@@ -171,7 +176,7 @@ public static class ThermalDose
 
         if (double.IsNaN(addedMinutes))
         {
-            addedMinutes = AddedCem43Minutes(history, startCelsius);
+            addedMinutes = Added(pieces, startCelsius);
         }
 
         if (unreached)
@@ -198,38 +203,58 @@ public static class ThermalDose
     /// Each piece integrates exactly as <see cref="Segment"/> does, written as the logarithmic mean of the weights
     /// R^(43 - T) at its ends, (w1 - w0) / ln(w1 / w0) times its length, so that each sample's weight is one
     /// exponential shared by the two pieces beside it; a piece whose weights differ by less than 0.1 % takes the
-    /// series of e^x - 1 instead (no cancellation). The root search for the margin calls this five or so times.
+    /// series of e^x - 1 instead (no cancellation). The root search for the margin calls this five or six times.
     /// </remarks>
-    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k) => Scaled(history, startCelsius, k, out _, slope: false);
+    private static double Scaled(Pieces pieces, double startCelsius, double k) => Scaled(pieces, startCelsius, k, out _, slope: false);
+
+    /// <summary>A history's sample times and rises over the start, read once for several passes.</summary>
+    private readonly struct Pieces
+    {
+        public Pieces(IReadOnlyList<HeatingSample> history, double startCelsius)
+        {
+            Times = new double[history.Count];
+            Rises = new double[history.Count];
+            for (int i = 0; i < Times.Length; i++)
+            {
+                Times[i] = history[i].TimeSeconds;
+                Rises[i] = history[i].TemperatureCelsius - startCelsius;
+            }
+        }
+
+        public double[] Times { get; }
+
+        public double[] Rises { get; }
+    }
 
     /// <summary>The same, and with <paramref name="slope"/> its derivative in k, minutes per unit k (for Newton's steps).</summary>
-    private static double Scaled(IReadOnlyList<HeatingSample> history, double startCelsius, double k, out double derivative, bool slope)
+    private static double Scaled(Pieces pieces, double startCelsius, double k, out double derivative, bool slope)
     {
+        double[] times = pieces.Times, rises = pieces.Rises;
         derivative = 0;
         if (k == 0 && !slope)
         {
             // Held at the start throughout: one weight over the whole span.
             double seconds = 0;
-            for (int i = 1; i < history.Count; i++)
+            for (int i = 1; i < times.Length; i++)
             {
-                seconds += Math.Max(0, history[i].TimeSeconds - history[i - 1].TimeSeconds);
+                seconds += Math.Max(0, times[i] - times[i - 1]);
             }
 
             return Weight(startCelsius) * seconds / 60.0;
         }
 
         double minutes = 0;
-        HeatingSample a = history[0];
-        double ra = a.TemperatureCelsius - startCelsius;
+        double ta = times[0];
+        double ra = rises[0];
         double ca = startCelsius + (k * ra);
         double wa = Weight(ca);
-        for (int i = 1; i < history.Count; i++)
+        for (int i = 1; i < times.Length; i++)
         {
-            HeatingSample b = history[i];
-            double rb = b.TemperatureCelsius - startCelsius;
+            double tb = times[i];
+            double rb = rises[i];
             double cb = startCelsius + (k * rb);
             double wb = Weight(cb);
-            double seconds = b.TimeSeconds - a.TimeSeconds;
+            double seconds = tb - ta;
             if (seconds > 0)
             {
                 if ((ca - BreakpointCelsius) * (cb - BreakpointCelsius) < 0)
@@ -247,7 +272,7 @@ public static class ThermalDose
                 }
             }
 
-            (a, ra, ca, wa) = (b, rb, cb, wb);
+            (ta, ra, ca, wa) = (tb, rb, cb, wb);
         }
 
         return minutes;
