@@ -9,15 +9,17 @@ public static class TemperatureHistory
     /// <summary>The highest temperature in the history, °C.</summary>
     public static double Peak(IReadOnlyList<HeatingSample> history)
     {
+        // By index: a foreach over the list's interface would box its enumerator on every call.
         double peak = double.NegativeInfinity;
-        foreach (HeatingSample sample in history)
+        for (int k = 0; k < history.Count; k++)
         {
-            if (double.IsNaN(sample.TemperatureCelsius))
+            double celsius = history[k].TemperatureCelsius;
+            if (double.IsNaN(celsius))
             {
                 return double.NaN;
             }
 
-            peak = Math.Max(peak, sample.TemperatureCelsius);
+            peak = Math.Max(peak, celsius);
         }
 
         return peak;

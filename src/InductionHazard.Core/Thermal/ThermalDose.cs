@@ -70,16 +70,16 @@ public static class ThermalDose
     /// </summary>
     public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes, out double addedMinutes)
     {
-        double peak = double.NegativeInfinity;
-        foreach (HeatingSample s in history)
+        // The history's times and rises read once, for the passes over it; the largest rise is the peak's (subtracting
+        // the start keeps the order), NaN if any is.
+        var pieces = new Pieces(history, startCelsius);
+        double rise = double.NegativeInfinity;
+        foreach (double r in pieces.Rises)
         {
-            peak = Math.Max(peak, s.TemperatureCelsius);
+            rise = Math.Max(rise, r);
         }
 
-        double rise = peak - startCelsius;
         double inRange = (FittedUpToCelsius - startCelsius) / rise;
-        // The history's times and rises read once, for the passes over it.
-        var pieces = new Pieces(history, startCelsius);
         if (!(rise > 0) || !(inRange > 0))
         {
             addedMinutes = Added(pieces, startCelsius);
