@@ -85,9 +85,9 @@ public static class HazardAssessor
         var standardList = new List<string>();
         foreach (MechanismResult r in applicable)
         {
-            foreach (string source in r.Sources)
+            for (int k = 0; k < r.Sources.Count; k++)
             {
-                AddOnce(standardList, source);
+                AddOnce(standardList, r.Sources[k]);
             }
         }
 

@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Linq;
 using InductionHazard.Criteria;
 using InductionHazard.Items;
@@ -67,11 +68,30 @@ public static class RecommendedAction
             return string.Empty;
         }
 
-        MechanismResult? own = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard).OrderBy(r => r.Margin).FirstOrDefault();
+        // The item's own Hazard of smallest margin (the first on a tie; a NaN margin sorts first, as ordering by it does).
+        MechanismResult? own = null;
+        List<string>? unjudged = null;
+        for (int k = 0; k < applicable.Count; k++)
+        {
+            MechanismResult r = applicable[k];
+            if (r.Mechanism == HazardMechanism.Exposure)
+            {
+                continue;
+            }
+
+            if (r.Verdict == Verdict.Hazard && (own is null || r.Margin.CompareTo(own.Margin) < 0))
+            {
+                own = r;
+            }
+            else if (r.Verdict == Verdict.Indeterminate)
+            {
+                (unjudged ??= new List<string>()).Add(r.Mechanism.ToString());
+            }
+        }
+
         if (own is null)
         {
-            string[] unjudged = applicable.Where(r => r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Indeterminate).Select(r => r.Mechanism.ToString()).ToArray();
-            return unjudged.Length == 0
+            return unjudged is null
                 ? string.Empty
                 : " The item itself could not be judged (" + string.Join(", ", unjudged) + "): treat it as unsafe here until it is assessed another way.";
         }

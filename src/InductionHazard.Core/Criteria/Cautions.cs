@@ -20,14 +20,19 @@ public static class Cautions
         "An Indeterminate verdict is not a pass: treat the item as unsafe at that place until it is assessed "
         + "another way.";
 
-    /// <summary>The last few lists made, by the very strings they were made from (most inventories repeat a handful).</summary>
-    private static readonly System.Collections.Concurrent.ConcurrentQueue<(string[] Sources, IReadOnlyList<string> Cautions)> Recent = new();
+    /// <summary>
+    /// The last few lists made, newest first, by the very strings they were made from (most inventories repeat a
+    /// handful): an array read without locks and replaced whole when a list is added, so any thread may.
+    /// </summary>
+    private static (string[] Sources, IReadOnlyList<string> Cautions)[] Recent = System.Array.Empty<(string[], IReadOnlyList<string>)>();
 
     /// <summary>The standard cautions, followed by the sources of the limits used.</summary>
     public static IReadOnlyList<string> For(IEnumerable<string> limitSources)
     {
-        string[] sources = System.Linq.Enumerable.ToArray(limitSources);
-        foreach ((string[] known, IReadOnlyList<string> cautions) in Recent)
+        // An array is compared as it is (no copy); it is copied only when it is kept.
+        string[] sources = limitSources as string[] ?? System.Linq.Enumerable.ToArray(limitSources);
+        (string[] Sources, IReadOnlyList<string> Cautions)[] recent = Recent;
+        foreach ((string[] known, IReadOnlyList<string> cautions) in recent)
         {
             if (Same(known, sources))
             {
@@ -36,11 +41,10 @@ public static class Cautions
         }
 
         IReadOnlyList<string> made = System.Array.AsReadOnly(new[] { EngineeringEstimate, Governance, Indeterminate, "Limits from: " + string.Join("; ", sources) + "." });
-        Recent.Enqueue((sources, made));
-        while (Recent.Count > 16 && Recent.TryDequeue(out _))
-        {
-        }
-
+        var next = new (string[] Sources, IReadOnlyList<string> Cautions)[System.Math.Min(16, recent.Length + 1)];
+        next[0] = ((string[])sources.Clone(), made);
+        System.Array.Copy(recent, 0, next, 1, next.Length - 1);
+        Recent = next;
         return made;
     }
 

@@ -233,8 +233,26 @@ public sealed class BurnCheck : IHazardCheck
         return worst;
     }
 
-    private static string[] SourcesOf(HazardPolicy policy) =>
-        new[] { policy.ContactBurn.Source, Standards.ThermalDoseModel, policy.SourceOf("ThermalDoseLimit") };
+    /// <summary>
+    /// The check's sources under a policy, made once for the last policy seen (a policy does not change); read-only,
+    /// as every result under that policy shares them.
+    /// </summary>
+    private static IReadOnlyList<string> SourcesOf(HazardPolicy policy)
+    {
+        if (LastSources is { } known && ReferenceEquals(known.Policy, policy))
+        {
+            return known.Sources;
+        }
+
+        var made = new PolicySources(policy, Array.AsReadOnly(new[] { policy.ContactBurn.Source, Standards.ThermalDoseModel, policy.SourceOf("ThermalDoseLimit") }));
+        LastSources = made;
+        return made.Sources;
+    }
+
+    /// <summary>The sources made for the last policy seen (read and replaced whole, so any thread may).</summary>
+    private static PolicySources? LastSources;
+
+    private sealed record PolicySources(HazardPolicy Policy, IReadOnlyList<string> Sources);
 
     /// <summary>Allowed rise over predicted rise; a start already at the threshold has no margin at all.</summary>
     private static double RiseMargin(double threshold, double predicted, double start)

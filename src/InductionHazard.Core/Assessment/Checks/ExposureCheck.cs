@@ -55,7 +55,16 @@ public sealed class ExposureCheck : IHazardCheck
             return MechanismResult.Indeterminate(Mechanism, fallback, new[] { new ValidityIssue("the field at the wearer's place cannot be evaluated: " + ex.Message, AffectedResults.Field) });
         }
 
-        string[] sources = exposure.Standards.Where(s => s != ExposureLimits.ActionLevelSource).ToArray();
+        var kept = new List<string>(exposure.Standards.Count);
+        for (int k = 0; k < exposure.Standards.Count; k++)
+        {
+            if (exposure.Standards[k] != ExposureLimits.ActionLevelSource)
+            {
+                kept.Add(exposure.Standards[k]);
+            }
+        }
+
+        string[] sources = kept.ToArray();
         if (exposure.Verdict == Verdict.Indeterminate || !Finite.Is(exposure.Margin))
         {
             string reason = exposure.Finding.StartsWith("Indeterminate: ", StringComparison.Ordinal) ? exposure.Finding.Substring("Indeterminate: ".Length) : exposure.Finding;
