@@ -43,7 +43,7 @@ public static class SiFormat
             return v.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture) + " " + unit;
         }
 
-        string? digits = Round(v / Scales[index], significantDigits, out double shown, Prefixes[index], unit);
+        string digits = Round(v / Scales[index], significantDigits, out double shown, Prefixes[index], unit);
         if (Math.Abs(shown) >= 1000 && index < Prefixes.Length - 1)
         {
             index++;
@@ -157,11 +157,10 @@ public static class SiFormat
         rounded = Math.Round(value, decimals, MidpointRounding.AwayFromZero);
         double scale = Powers[decimals];
         double units = Math.Abs(rounded) * scale;
-        string suffix = unit is null ? string.Empty : " " + prefix + unit;
         if (!(units < 1e15))
         {
             string pattern = keepZeros ? "0." + new string('0', Math.Max(1, decimals)) : Patterns[Math.Max(1, decimals)];
-            return rounded.ToString(pattern, CultureInfo.InvariantCulture) + suffix;
+            return rounded.ToString(pattern, CultureInfo.InvariantCulture) + (unit is null ? string.Empty : " " + prefix + unit);
         }
 
         // The rounded value is the nearest double to a decimal of this many places: its digits are those of
