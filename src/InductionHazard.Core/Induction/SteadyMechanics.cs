@@ -97,7 +97,7 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
 
     /// <summary>
     /// True when the loop below would give exactly zero: every force coupling and torque field zero (or absent), and
-    /// every amplitude, drive and moment weight finite (a zero times anything else is not zero).
+    /// every amplitude, drive and moment weight finite (zero times an infinity or a NaN is not zero).
     /// </summary>
     private static bool Inert(ModalCircuit circuit, Complex[] modal, Complex[] drives, Vector3D[]? torqueField)
     {
