@@ -303,12 +303,24 @@ public sealed class RecordFields
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
     {
-        // The same name objects come back on every row (the code's field names, a file's header): each is worked out once.
-        return Normalized.TryGet(name, out string known) ? known : Normalized.Add(name, NormalizeOnce(name));
+        // The same name objects come back on every row (the code's field names, a file's header): each is worked out
+        // once. A value read from each row (a material's or a station's name) is a new string with the same text: found
+        // by its text, and not kept by object, where it would crowd out the names that do come back.
+        if (Normalized.TryGet(name, out string known) || NormalizedText.TryGet(name, out known))
+        {
+            return known;
+        }
+
+        known = NormalizeOnce(name);
+        NormalizedText.Add(name, known);
+        return Normalized.Add(name, known);
     }
 
-    /// <summary>Names already normalized: field names, their aliases and a file's columns come back on every row.</summary>
+    /// <summary>Names already normalized, by object: field names, their aliases and a file's columns come back on every row.</summary>
     private static readonly BoundedCache<string, string> Normalized = new(4096, SameObject<string>.Instance);
+
+    /// <summary>Names already normalized, by text.</summary>
+    private static readonly BoundedCache<string, string> NormalizedText = new(4096, System.StringComparer.Ordinal);
 
     private static string NormalizeOnce(string name)
     {
