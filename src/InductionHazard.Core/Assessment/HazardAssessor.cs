@@ -57,10 +57,7 @@ public static class HazardAssessor
         {
             foreach (ValidityIssue issue in response.ValidityIssues)
             {
-                if (!reasons.Contains(issue.Reason))
-                {
-                    reasons.Add(issue.Reason);
-                }
+                AddOnce(reasons, issue.Reason);
             }
 
             // A mechanism stopped by a reason of its own (not one of the response's), such as an exposure the
@@ -209,11 +206,11 @@ public static class HazardAssessor
             return applicable.First(r => r.Verdict == Verdict.Indeterminate);
         }
 
-        // The judged mechanism of smallest margin, the first on a tie; a NaN margin sorts first, as ordering by the margin puts it.
+        // The judged mechanism of smallest margin, the first on a tie (see MechanismResult.MarginBelow).
         MechanismResult? best = null;
         foreach (MechanismResult r in applicable)
         {
-            if (r.Verdict != Verdict.Indeterminate && (best is null || r.Margin.CompareTo(best.Margin) < 0))
+            if (r.Verdict != Verdict.Indeterminate && r.MarginBelow(best))
             {
                 best = r;
             }

@@ -36,6 +36,12 @@ public sealed class MechanismResult
     /// <summary>Limit over predicted (for temperatures: the allowed rise over the predicted rise); at least 1 passes.</summary>
     public double Margin { get; private set; } = double.NaN;
 
+    /// <summary>
+    /// True when this margin comes before another result's in ascending order (or there is none yet): the order of
+    /// sorting by margin, NaN first, so that a scan keeping the first of equals picks what ordering by it would.
+    /// </summary>
+    internal bool MarginBelow(MechanismResult? other) => other is null || Margin.CompareTo(other.Margin) < 0;
+
     /// <summary>Where the limits come from, one source per entry (ConvertTo-Json gives them in one line, as Basis).</summary>
     [Newtonsoft.Json.JsonIgnore]
     public IReadOnlyList<string> Sources { get; private set; } = System.Array.Empty<string>();

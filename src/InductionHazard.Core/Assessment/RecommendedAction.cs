@@ -68,7 +68,7 @@ public static class RecommendedAction
             return string.Empty;
         }
 
-        // The item's own Hazard of smallest margin (the first on a tie; a NaN margin sorts first, as ordering by it does).
+        // The item's own Hazard of smallest margin (the first on a tie; see MechanismResult.MarginBelow).
         MechanismResult? own = null;
         List<string>? unjudged = null;
         for (int k = 0; k < applicable.Count; k++)
@@ -79,7 +79,7 @@ public static class RecommendedAction
                 continue;
             }
 
-            if (r.Verdict == Verdict.Hazard && (own is null || r.Margin.CompareTo(own.Margin) < 0))
+            if (r.Verdict == Verdict.Hazard && r.MarginBelow(own))
             {
                 own = r;
             }
