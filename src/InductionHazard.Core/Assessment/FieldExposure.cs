@@ -70,7 +70,7 @@ public sealed record FieldExposure
         string basis;
         double compared, limit;
         string? indeterminate = null;
-        if (!source.IsSinusoidal && f < ExposureLimits.LowestHertz)
+        if (!source.IsSinusoidal && ExposureLimits.CountsAsStatic(f))
         {
             basis = "static, peak";
             compared = peak;
@@ -81,10 +81,10 @@ public sealed record FieldExposure
         {
             basis = "sinusoid, rms";
             compared = peak / Math.Sqrt(2);
-            limit = f < ExposureLimits.LowestHertz
+            limit = ExposureLimits.CountsAsStatic(f)
                 ? (publicExposure ? ExposureLimits.StaticPublicTesla : policy.StaticExposureLimitTesla)
                 : publicExposure ? ExposureLimits.PublicTesla(f) : ExposureLimits.OccupationalTesla(f);
-            standards.Add(f < ExposureLimits.LowestHertz ? staticSource : ExposureLimits.TimeVaryingSource);
+            standards.Add(ExposureLimits.CountsAsStatic(f) ? staticSource : ExposureLimits.TimeVaryingSource);
             if (double.IsNaN(limit))
             {
                 indeterminate = "the frequency (" + SiFormat.Format(f, "Hz") + ") is beyond the reference levels used here (1 Hz to 10 MHz)";

@@ -10,6 +10,13 @@ public static class ExposureLimits
     /// <summary>The lowest frequency of the time-varying reference levels, Hz; below it a field counts as static.</summary>
     public const double LowestHertz = 1;
 
+    /// <summary>
+    /// True when a frequency counts as static: below <see cref="LowestHertz"/> by more than rounding. A frequency at
+    /// 1 Hz to within rounding (the knee of a 0.35 s rise read as "350 ms" is 0.9999999999999999 Hz) takes the
+    /// time-varying levels, the stricter side, so that how a value was written cannot move it across the line.
+    /// </summary>
+    public static bool CountsAsStatic(double f) => f < LowestHertz * (1 - 1e-9);
+
     /// <summary>The highest frequency of the reference levels used here, Hz.</summary>
     public const double HighestHertz = 10e6;
 
@@ -45,7 +52,7 @@ public static class ExposureLimits
     /// 0.3/f (300 Hz-3 kHz), 1e-4 (3 kHz-10 MHz); NaN outside 1 Hz-10 MHz.
     /// </summary>
     public static double OccupationalTesla(double f) =>
-        f < LowestHertz || f > HighestHertz ? double.NaN
+        CountsAsStatic(f) || f > HighestHertz ? double.NaN
         : f < 8 ? 0.2 / (f * f)
         : f < 25 ? 2.5e-2 / f
         : f < 300 ? 1e-3
@@ -57,7 +64,7 @@ public static class ExposureLimits
     /// 8e-2/f (400 Hz-3 kHz), 2.7e-5 (3 kHz-10 MHz); NaN outside 1 Hz-10 MHz.
     /// </summary>
     public static double PublicTesla(double f) =>
-        f < LowestHertz || f > HighestHertz ? double.NaN
+        CountsAsStatic(f) || f > HighestHertz ? double.NaN
         : f < 8 ? 4e-2 / (f * f)
         : f < 25 ? 5e-3 / f
         : f < 400 ? 2e-4

@@ -1,4 +1,5 @@
 using System;
+using System.Linq;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
 using InductionHazard.Fields;
@@ -59,6 +60,23 @@ public class ExposureLimitsTests
         Within.Relative(0.4 / 2, visitor.Margin, 1e-12, "2 T against 400 mT");
         Assert.Equal(Verdict.Hazard, visitor.Verdict);
         Assert.True(worker.ImplantLineExceeded && worker.ProjectileLineExceeded);
+    }
+
+    [Fact]
+    public void AFieldAtOneHertzToWithinRoundingIsJudgedAsTimeVaryingHoweverItsTimeWasWritten()
+    {
+        // The knee of a 0.35 s rise is 1 Hz: as "0.35 s" it is 1.0 Hz, as "350 ms" 0.9999999999999999 Hz. Either way the
+        // field takes the time-varying limits (the stricter side of ICNIRP's 1 Hz line; the static limit gave a margin
+        // twenty times larger); a field clearly below the line is still judged as static.
+        double parsed = QuantityParser.Parse("350 ms", QuantityKind.Time);
+        Assert.NotEqual(0.35, parsed);
+        FieldExposure[] exposures = new[] { 0.35, parsed }
+            .Select(seconds => FieldExposure.At(FieldSource.Uniform("ramp", new RampWaveform(0, 5, seconds, drive: DriveKind.FluxDensity), Vector3D.UnitZ), Vector3D.Zero, publicExposure: false, HazardPolicy.Default))
+            .ToArray();
+        Assert.All(exposures, e => Assert.StartsWith("pulsed or mixed", e.Basis, StringComparison.Ordinal));
+        Assert.All(exposures, e => Assert.True(e.Margin < 0.05, "margin " + e.Margin + ": the weighted peak's, not the static limit's 0.4"));
+        Assert.True(ExposureLimits.CountsAsStatic(0.999) && !ExposureLimits.CountsAsStatic(0.9999999999999999) && !ExposureLimits.CountsAsStatic(1));
+        Assert.False(double.IsNaN(ExposureLimits.OccupationalTesla(0.9999999999999999)), "no gap between the static and time-varying levels");
     }
 
     [Validates("a 50 Hz sinusoid at the occupational reference level: rms 1 mT, margin 1", "ICNIRP 2010 table 3", "1e-12")]
