@@ -126,7 +126,7 @@ public static class WeightedPeak
     /// </summary>
     public static Complex Filter(double f, bool publicExposure)
     {
-        if (f < ExposureLimits.LowestHertz)
+        if (ExposureLimits.CountsAsStatic(f))
         {
             return Complex.Zero;
         }
@@ -137,14 +137,17 @@ public static class WeightedPeak
         return Complex.FromPolarCoordinates(1.0 / (Math.Sqrt(2) * rms), phase) / new Complex(0, 2 * Math.PI * f);
     }
 
-    /// <summary>The weighting's phase: pi where the levels fall as 1/f^2, pi/2 where as 1/f, 0 where flat.</summary>
+    /// <summary>
+    /// The weighting's phase: pi where the levels fall as 1/f^2, pi/2 where as 1/f, 0 where flat; a frequency within
+    /// rounding of a corner takes the band above it, as the corner itself does.
+    /// </summary>
     public static double PhaseRadians(double f, bool publicExposure)
     {
         double firstFlat = 25, secondSlope = publicExposure ? 400 : 300;
-        return f < 8 ? Math.PI
-            : f < firstFlat ? Math.PI / 2
-            : f < secondSlope ? 0
-            : f < 3000 ? Math.PI / 2
+        return ExposureLimits.Below(f, 8) ? Math.PI
+            : ExposureLimits.Below(f, firstFlat) ? Math.PI / 2
+            : ExposureLimits.Below(f, secondSlope) ? 0
+            : ExposureLimits.Below(f, 3000) ? Math.PI / 2
             : 0;
     }
 

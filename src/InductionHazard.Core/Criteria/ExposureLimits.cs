@@ -15,7 +15,16 @@ public static class ExposureLimits
     /// 1 Hz to within rounding (the knee of a 0.35 s rise read as "350 ms" is 0.9999999999999999 Hz) takes the
     /// time-varying levels, the stricter side, so that how a value was written cannot move it across the line.
     /// </summary>
-    public static bool CountsAsStatic(double f) => f < LowestHertz * (1 - 1e-9);
+    public static bool CountsAsStatic(double f) => Below(f, LowestHertz);
+
+    /// <summary>
+    /// True when a frequency lies below a corner of the reference levels by more than rounding: a frequency within
+    /// rounding of a corner is read as the corner itself, which belongs to the band above it, as in the tables. A
+    /// record's harmonic at 25 Hz is then weighted alike whether its window came out as 1.4 s or 1.4000000000000001 s.
+    /// </summary>
+    /// <param name="f">The frequency, Hz.</param>
+    /// <param name="corner">The corner, Hz.</param>
+    public static bool Below(double f, double corner) => f < corner * (1 - 1e-9);
 
     /// <summary>The highest frequency of the reference levels used here, Hz.</summary>
     public const double HighestHertz = 10e6;
@@ -53,10 +62,10 @@ public static class ExposureLimits
     /// </summary>
     public static double OccupationalTesla(double f) =>
         CountsAsStatic(f) || f > HighestHertz ? double.NaN
-        : f < 8 ? 0.2 / (f * f)
-        : f < 25 ? 2.5e-2 / f
-        : f < 300 ? 1e-3
-        : f < 3000 ? 0.3 / f
+        : Below(f, 8) ? 0.2 / (f * f)
+        : Below(f, 25) ? 2.5e-2 / f
+        : Below(f, 300) ? 1e-3
+        : Below(f, 3000) ? 0.3 / f
         : 1e-4;
 
     /// <summary>
@@ -65,9 +74,9 @@ public static class ExposureLimits
     /// </summary>
     public static double PublicTesla(double f) =>
         CountsAsStatic(f) || f > HighestHertz ? double.NaN
-        : f < 8 ? 4e-2 / (f * f)
-        : f < 25 ? 5e-3 / f
-        : f < 400 ? 2e-4
-        : f < 3000 ? 8e-2 / f
+        : Below(f, 8) ? 4e-2 / (f * f)
+        : Below(f, 25) ? 5e-3 / f
+        : Below(f, 400) ? 2e-4
+        : Below(f, 3000) ? 8e-2 / f
         : 2.7e-5;
 }

@@ -70,4 +70,31 @@ public sealed class WeightedPeakTests
         Assert.Equal(Verdict.Hazard, held.Verdict);
         Within.Relative(ExposureLimits.StaticOccupationalTesla / 7, held.Margin, 1e-9, "static margin");
     }
+
+    [Fact]
+    public void AHarmonicWithinRoundingOfACornerIsWeightedAsTheCornerItself()
+    {
+        // A 0.35 s ramp to 5 T from t = 0 has a 1.4 s record, whose 35th harmonic is 25 Hz, a corner where the
+        // weighting's phase turns from 90 to 0 degrees. Written as "350 ms" (0.35000000000000003 s), or started at
+        // 1 s, the same harmonic came out at 24.999999999999996 Hz and was weighted as the band below: indices of
+        // 51.6 against 50.1. Every way of writing the ramp must give one index.
+        double parsed = QuantityParser.Parse("350 ms", QuantityKind.Time);
+        double[] indices = new[] { (0.35, 0.0), (parsed, 0.0), (0.35, 1.0), (parsed, 1.0) }
+            .Select(c => WeightedPeak.At(FieldSource.Uniform("ramp", new RampWaveform(0, 5, c.Item1, c.Item2, DriveKind.FluxDensity), Vector3D.UnitZ), Vector3D.Zero, publicExposure: false).Index)
+            .ToArray();
+        Assert.All(indices, i => Within.Relative(indices[0], i, 1e-9, "index"));
+
+        foreach (double corner in new[] { 1.0, 8, 25, 300, 400, 3000 })
+        {
+            double below = corner * (1 - 1e-15);
+            Assert.Equal(WeightedPeak.PhaseRadians(corner, publicExposure: false), WeightedPeak.PhaseRadians(below, publicExposure: false));
+            Assert.Equal(WeightedPeak.PhaseRadians(corner, publicExposure: true), WeightedPeak.PhaseRadians(below, publicExposure: true));
+            Assert.Equal(ExposureLimits.PublicTesla(corner), ExposureLimits.PublicTesla(below), 1e-12);
+            Assert.Equal(ExposureLimits.OccupationalTesla(corner), ExposureLimits.OccupationalTesla(below), 1e-12);
+        }
+
+        // Clearly below a corner is still the band below.
+        Assert.Equal(Math.PI / 2, WeightedPeak.PhaseRadians(24.9, publicExposure: false));
+        Assert.Equal(8e-2 / 2999, ExposureLimits.PublicTesla(2999));
+    }
 }
