@@ -155,6 +155,10 @@ public sealed class TransientPathSolver
                     h = edge - t;
                 }
 
+                // A step to the edge ends on it exactly: t + (edge - t) can fall an ulp short, which left a sliver step
+                // whose sample took the emf after the edge's jump in place of the one before it.
+                bool toEdge = h == edge - t;
+
                 if (!(t + h > t))
                 {
                     // Time no longer advances at this magnitude: stop and say so rather than loop.
@@ -215,7 +219,7 @@ public sealed class TransientPathSolver
                     peak = (stepPeak, t + stepPeakAt);
                 }
 
-                t += h;
+                t = toEdge ? edge : t + h;
                 energy += stepEnergy;
                 lastPower = stepEnergy / h;
                 mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h);

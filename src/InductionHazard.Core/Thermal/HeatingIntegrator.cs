@@ -112,7 +112,8 @@ public static class HeatingIntegrator
                 continue;
             }
 
-            t += h;
+            // A step to the end lands on it exactly (t + (t1 - t) can fall an ulp short and leave a sliver step).
+            t = h == t1 - t ? t1 : t + h;
             energy += mean * h;
             temperature = next;
             samples.Add(new HeatingSample(t, temperature, p1));

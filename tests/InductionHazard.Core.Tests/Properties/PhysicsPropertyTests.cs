@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
 using CsCheck;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
@@ -183,6 +184,19 @@ public class PhysicsPropertyTests
                 Assert.True(Severity(loose) <= Severity(strict), "doubled limits gave " + loose + " against " + strict);
             }
         }, seed: "0N0XIzNsQ0O7", iter: Iterations);
+    }
+
+    [Fact]
+    public void AStepToABreakpointEndsOnItAndRecordsTheEmfBeforeTheJump()
+    {
+        // A case the energy property once drew: a 93 mm copper ring in a 5 T ramp of 0.88 s settles in 7 ms, and the
+        // next step, to the ramp's end, came out an ulp short of 0.88 s; a sliver step then recorded the sample at
+        // 0.88 s with the emf after the ramp (zero), and the work read from the series was half the heat.
+        InductionResponse r = Respond(Ring(0.0933797073910052, 0.008032663001376793, 0), Ramp(5, 0.88));
+        InductionHazard.Induction.CircuitSample atEnd = r.CircuitSeries.Single(s => s.TimeSeconds == 0.88);
+        double rampEmf = -5 / 0.88 * r.Scenario.Item.Loop.LoopAreaSquareMeters;
+        Within.Relative(rampEmf, atEnd.EmfVolts, 1e-9, "emf recorded at the ramp's end, its value before the end");
+        Assert.DoesNotContain(r.CircuitSeries, s => s.TimeSeconds < 0.88 && s.TimeSeconds > 0.88 * (1 - 1e-12));
     }
 
     [Fact]
