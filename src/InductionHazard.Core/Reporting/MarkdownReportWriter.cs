@@ -131,7 +131,7 @@ public static class MarkdownReportWriter
         }
 
         w.Write("| Input | Value |\n|---|---|\n" + string.Concat(ReportLines.Inputs(a).Select(l => "| " + M(l.Label) + " | " + M(l.Text) + " |\n")) + "\n");
-        w.Write("Model: " + string.Join(" ", ReportLines.Model(a).Select(l => M(l).TrimEnd('.') + ".")) + "\n\n");
+        w.Write("Model:\n\n" + string.Concat(ReportLines.Model(a).Select(l => "- " + M(l) + "\n")) + "\n");
         w.Write("| Mechanism | Verdict | Compared | Predicted | Limit | Margin | Finding | Limit's source |\n|---|---|---|---:|---:|---:|---|---|\n");
         foreach (MechanismResult m in a.Mechanisms.Where(m => m.Applies))
         {

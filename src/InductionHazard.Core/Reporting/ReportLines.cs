@@ -44,19 +44,32 @@ public static class ReportLines
         return lines;
     }
 
-    /// <summary>The model that ran and why, with its notes.</summary>
+    /// <summary>The model that ran and why, with its notes, one line each, each starting with a capital.</summary>
     public static IReadOnlyList<string> Model(InductionAssessment a)
     {
         InductionResponse r = a.Response;
-        var lines = new List<string> { r.Model + (r.PathCount > 1 ? " (" + r.PathCount.ToString(CultureInfo.InvariantCulture) + " current paths)" : string.Empty) };
+        var lines = new List<string> { AsLine(r.Model + (r.PathCount > 1 ? " (" + r.PathCount.ToString(CultureInfo.InvariantCulture) + " current paths)" : string.Empty)) };
         if (r.Regime.Length > 0)
         {
             lines.Add("Regime: " + r.Regime);
         }
 
-        lines.AddRange(r.ModelNotes);
+        foreach (string note in r.ModelNotes)
+        {
+            lines.Add(AsLine(note));
+        }
+
         return lines;
     }
+
+    /// <summary>
+    /// A note ("topic: what was found") as a line of its own in a report: its first letter a capital, unless it opens
+    /// an abbreviation written with points (d.c., a.c.), which keeps its case.
+    /// </summary>
+    private static string AsLine(string note) =>
+        note.Length > 0 && char.IsLower(note[0]) && !(note.Length > 1 && note[1] == '.')
+            ? char.ToUpperInvariant(note[0]) + note.Substring(1)
+            : note;
 
     /// <summary>The figures that apply to the item, each with its unit.</summary>
     public static IReadOnlyList<(string Label, string Text)> Figures(InductionAssessment a)

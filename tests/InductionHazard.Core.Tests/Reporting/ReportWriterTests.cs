@@ -89,6 +89,23 @@ public sealed class ReportWriterTests
         }
     }
 
+    [Fact]
+    public void TheModelAndItsNotesAreListedOneALineEachAsASentence()
+    {
+        // Common practice for a report read by people: a list of findings, each opening with a capital, in place of a
+        // run of lower-case "topic: finding" fragments; an abbreviation written with points (d.c.) keeps its case, and a figure opens a line as it is.
+        IReadOnlyList<string> lines = ReportLines.Model(Hot);
+        Assert.Equal(Hot.Response.ModelNotes.Count + (Hot.Response.Regime.Length > 0 ? 2 : 1), lines.Count);
+        Assert.All(lines, l => Assert.True(char.IsUpper(l[0]) || char.IsDigit(l[0]) || l.StartsWith("d.c.", StringComparison.Ordinal) || l.StartsWith("a.c.", StringComparison.Ordinal), l));
+        Assert.Contains(lines, l => l.StartsWith("Lumped heating", StringComparison.Ordinal));
+
+        string md = Write(Report(Hot), MarkdownReportWriter.Write);
+        int model = md.IndexOf("Model:\n\n", StringComparison.Ordinal);
+        Assert.True(model >= 0, "a Model section");
+        string[] listed = md.Substring(model + 8).Split('\n').TakeWhile(l => l.Length > 0).ToArray();
+        Assert.Equal(lines.Select(l => "- " + MarkdownReportWriter.M(l)), listed);
+    }
+
     [Theory]
     [InlineData("=HYPERLINK(\"x\")", "'=HYPERLINK(\"x\")")]
     [InlineData("+1", "'+1")]
