@@ -24,7 +24,15 @@ internal sealed class StepMechanics
         _values = values;
         _torqueField = torqueField;
         _drive = new double[terms];
+        Inert = IsZero(circuit.ForceCoupling) && IsZero(torqueField);
     }
+
+    /// <summary>
+    /// True when no step can give a force or a torque: every force coupling and torque field is zero or absent (a
+    /// loop in a uniform field facing it), so nothing is read at the steps' ends but the current, whose peak each
+    /// step finds within itself.
+    /// </summary>
+    public bool Inert { get; }
 
     public Vector3D PeakForce { get; private set; }
 
@@ -33,6 +41,19 @@ internal sealed class StepMechanics
     public Vector3D Impulse { get; private set; }
 
     public double PeakTorque => Math.Sqrt(_peakTorqueSquared);
+
+    private static bool IsZero(System.Collections.IEnumerable? vectors)
+    {
+        foreach (Vector3D v in vectors ?? Array.Empty<Vector3D>())
+        {
+            if (v.X != 0 || v.Y != 0 || v.Z != 0)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 
     /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
     public void Record(double[] z, double driveAt, double t, double h)

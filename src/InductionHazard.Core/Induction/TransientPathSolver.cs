@@ -21,6 +21,14 @@ public sealed class TransientPathSolver
     private const double Growth = 1.25;
 
     /// <summary>
+    /// The growth before the modes settle when no force or torque is read at the steps' ends (<see
+    /// cref="StepMechanics.Inert"/>): each step is exact for its drive and finds the current's peak within itself, so
+    /// only a chart's resolution and the temperature's step limit bound it. Where forces are read at the ends, the
+    /// smaller growth keeps a peak between two ends from being missed by more than about 1e-4.
+    /// </summary>
+    private const double InertGrowth = 1.5;
+
+    /// <summary>
     /// The growth of a step once it is eight times the slowest mode's time constant: every mode has then decayed to
     /// e^-8 of what a change of drive started within one step, and the step is exact for a drive linear over it,
     /// so only the temperature (0.5 K a step) and the longest step bound it.
@@ -243,7 +251,7 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : Growth), MaxStep(conductance, t));
+                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : mechanics.Inert ? InertGrowth : Growth), MaxStep(conductance, t));
             }
 
             if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))
