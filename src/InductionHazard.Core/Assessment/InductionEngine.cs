@@ -206,7 +206,7 @@ public static class InductionEngine
 
         AddBefore(breakpointList, leave, end);
         AddBefore(breakpointList, outside, end);
-        double[] breakpoints = SortedDistinct(breakpointList);
+        double[] breakpoints = DriveSampling.SortedDistinct(breakpointList);
         var timeList = new List<double>();
         foreach (double t in DriveSampling.Times(WaveformsOf(terms)))
         {
@@ -218,7 +218,7 @@ public static class InductionEngine
 
         timeList.Add(begin);
         timeList.Add(leave);
-        double[] times = SortedDistinct(timeList);
+        double[] times = DriveSampling.SortedDistinct(timeList);
         double peakEmf = Largest(times, t => Math.Abs(Emf(t)));
         if (leaving > 0)
         {
@@ -472,23 +472,6 @@ public static class InductionEngine
         {
             times.Add(t);
         }
-    }
-
-    /// <summary>The times ascending, each once, as ordering the distinct times gives them.</summary>
-    private static double[] SortedDistinct(List<double> times)
-    {
-        times.Sort();
-        int kept = 0;
-        for (int i = 0; i < times.Count; i++)
-        {
-            if (kept == 0 || times[i] != times[kept - 1])
-            {
-                times[kept++] = times[i];
-            }
-        }
-
-        times.RemoveRange(kept, times.Count - kept);
-        return times.ToArray();
     }
 
     /// <summary>The largest value of f over the times, NaN only when every value is NaN (as <see cref="Enumerable.Max(IEnumerable{double})"/> gives it).</summary>

@@ -1,6 +1,5 @@
 using System;
 using System.Collections.Generic;
-using System.Linq;
 using System.Threading;
 using InductionHazard.Quantities;
 using InductionHazard.Thermal;
@@ -126,7 +125,7 @@ public sealed class TransientPathSolver
     public TransientRun Run(Func<double, double>[] drives, Func<double, double> outlineEmf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation)
     {
         int modes = _circuit.Count, terms = drives.Length;
-        double[] edges = breakpoints.Where(b => b > tStart && b < tEnd).Append(tEnd).Distinct().OrderBy(b => b).ToArray();
+        double[] edges = EdgesWithin(breakpoints, tStart, tEnd);
         var circuit = new List<CircuitSample> { new(tStart, outlineEmf(tStart), 0, celsius0) };
         var heating = new List<HeatingSample> { new(tStart, celsius0, 0) };
         double recordSpacing = (tEnd - tStart) / MaxRecordedSamples;
@@ -428,5 +427,21 @@ public sealed class TransientPathSolver
         public double[] Start { get; }
 
         public double[] Slope { get; }
+    }
+
+    /// <summary>The breakpoints after the start and before the end, and the end: ascending, each once.</summary>
+    private static double[] EdgesWithin(IEnumerable<double> breakpoints, double tStart, double tEnd)
+    {
+        var edges = new List<double>();
+        foreach (double b in breakpoints)
+        {
+            if (b > tStart && b < tEnd)
+            {
+                edges.Add(b);
+            }
+        }
+
+        edges.Add(tEnd);
+        return Waveforms.DriveSampling.SortedDistinct(edges);
     }
 }

@@ -39,8 +39,7 @@ public static class DriveSampling
         {
             // Piecewise-linear drives: values are extreme at breakpoints and rates constant between them, so the
             // breakpoints and the midpoints between them are every time that matters.
-            times.Sort();
-            double[] corners = times.Distinct().ToArray();
+            double[] corners = SortedDistinct(times);
             var all = new List<double>(2 * corners.Length);
             for (int k = 0; k < corners.Length; k++)
             {
@@ -67,8 +66,27 @@ public static class DriveSampling
             }
         }
 
-        times.Sort();
-        return times.Distinct().ToArray();
+        return SortedDistinct(times);
+    }
+
+    /// <summary>
+    /// The values ascending, each once: what sorting and then Enumerable.Distinct give (NaN first, and once), by a
+    /// loop over the sorted list in place of a hash set (this runs for every assessment).
+    /// </summary>
+    internal static double[] SortedDistinct(List<double> values)
+    {
+        values.Sort();
+        int kept = 0;
+        for (int i = 0; i < values.Count; i++)
+        {
+            if (kept == 0 || !values[i].Equals(values[kept - 1]))
+            {
+                values[kept++] = values[i];
+            }
+        }
+
+        values.RemoveRange(kept, values.Count - kept);
+        return values.ToArray();
     }
 
     /// <summary>How much of a drive that runs on is looked at: two periods, or its time scales.</summary>
