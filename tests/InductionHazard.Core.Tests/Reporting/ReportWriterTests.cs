@@ -93,7 +93,8 @@ public sealed class ReportWriterTests
     public void TheModelAndItsNotesAreListedOneALineEachAsASentence()
     {
         // Common practice for a report read by people: a list of findings, each opening with a capital, in place of a
-        // run of lower-case "topic: finding" fragments; an abbreviation written with points (d.c.) keeps its case, and a figure opens a line as it is.
+        // run of lower-case "topic: finding" fragments; an abbreviation written with points (d.c.) keeps its case,
+        // and a figure opens a line as it is.
         IReadOnlyList<string> lines = ReportLines.Model(Hot);
         Assert.Equal(Hot.Response.ModelNotes.Count + (Hot.Response.Regime.Length > 0 ? 2 : 1), lines.Count);
         Assert.All(lines, l => Assert.True(char.IsUpper(l[0]) || char.IsDigit(l[0]) || l.StartsWith("d.c.", StringComparison.Ordinal) || l.StartsWith("a.c.", StringComparison.Ordinal), l));
