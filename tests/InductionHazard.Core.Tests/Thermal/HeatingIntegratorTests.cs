@@ -1,4 +1,5 @@
 using System.Collections.Generic;
+using CsCheck;
 using System.Threading;
 using InductionHazard.Thermal;
 using Xunit;
@@ -59,5 +60,20 @@ public class HeatingIntegratorTests
         var samples = new List<HeatingSample>();
         HeatingIntegration run = HeatingIntegrator.Run(Uncooled(), (_, _) => 0.0, 1e17, 2e17, 20, samples, CancellationToken.None, maxStepSeconds: 1);
         Assert.True(run.BudgetExceeded);
+    }
+
+    [Fact]
+    public void ARunEndsExactlyAtItsEndWithNoSliverStepBeforeIt()
+    {
+        // t + (t1 - t) can fall an ulp short of t1 when t is below half of t1 (for t = 0.11898231354594568 and t1 =
+        // 1.3619209154143326 it gives 1.3619209154143324): the run then took a sliver step and recorded two samples an
+        // ulp apart. Runs whose one step covers all of such a span end with one sample at t1 exactly.
+        Gen.Select(Gen.Double[0, 0.5], Gen.Double[0.6, 2]).Sample((t0, t1) =>
+        {
+            var samples = new List<HeatingSample>();
+            HeatingIntegrator.Run(Uncooled(), (_, _) => 1e-3, t0, t1, 20, samples, CancellationToken.None, maxStepSeconds: t1 - t0);
+            Assert.Equal(t1, samples[samples.Count - 1].TimeSeconds);
+            Assert.DoesNotContain(samples, x => x.TimeSeconds < t1 && x.TimeSeconds > t1 - (1e-12 * t1));
+        }, seed: "0HeatEnd7Q2x", iter: 3000);
     }
 }
