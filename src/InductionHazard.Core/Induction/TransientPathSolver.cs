@@ -20,10 +20,11 @@ public sealed class TransientPathSolver
     private const double Growth = 1.25;
 
     /// <summary>
-    /// The growth before the modes settle when no force or torque is read at the steps' ends (<see
-    /// cref="StepMechanics.Inert"/>): each step is exact for its drive and finds the current's peak within itself, so
-    /// only a chart's resolution and the temperature's step limit bound it. Where a force or torque is read at the
-    /// ends, the growth stays 1.25: with 1.5 the demo's peak forces fell by up to 7e-5, a peak between two ends missed.
+    /// The growth before the mode settles for one path on which no force or torque is read at the steps' ends (<see
+    /// cref="StepMechanics.Inert"/>): each step is exact for its drive and finds the current's peak within itself
+    /// exactly, so only a chart's resolution and the temperature's step limit bound it. Where a force or torque is
+    /// read at the ends the growth stays 1.25 (with 1.5 the demo's peak forces fell by up to 7e-5, a peak between two
+    /// ends missed), and for a set of paths too, whose peak within a step is interpolated, not exact.
     /// </summary>
     private const double InertGrowth = 1.5;
 
@@ -134,6 +135,7 @@ public sealed class TransientPathSolver
         double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
         var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms);
+        bool onePathInert = modes == 1 && mechanics.Inert;
         int steps = 0;
         bool budgetExceeded = false;
         double? melted = null;
@@ -250,7 +252,7 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : mechanics.Inert ? InertGrowth : Growth), MaxStep(conductance, t));
+                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : onePathInert ? InertGrowth : Growth), MaxStep(conductance, t));
             }
 
             if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))
