@@ -66,6 +66,27 @@ Describe 'The laid-out module' {
         }
     }
 
+    It 'never cuts a figure so that its right end shows: at any console width a cut figure keeps its leading digits' {
+        # PowerShell cuts the table column at the console's edge; a right-aligned figure cut that way kept its right
+        # end ("…0 °C" for 33.0 °C), which reads as another figure. Figures are left-aligned, so a cut ends in the
+        # ellipsis. Every width from 60 to 140 columns, for the tables of assessments, responses, materials,
+        # waveforms, field strengths and safe distances.
+        $item = New-ConductiveItem -Name 'Band' -Material Gold -InnerDiameter '18 mm' -Width '4 mm' -Thickness '1.6 mm'
+        $source = New-FieldWaveform -Ramp -From '0 T' -To '1 T' -Duration '10 ms' | New-FieldSource -Uniform
+        $tables = [ordered]@{
+            assessments = @(Test-InductionHazard -Item $item -Source $source); responses = @(Get-InductionResponse -Item $item -Source $source)
+            materials = @(Get-ConductorMaterial); waveforms = @(New-FieldWaveform -Sine -Amplitude '1 mT' -Frequency '50 Hz')
+            strengths = @(Get-FieldStrength -Source $source -Position '0,0,0')
+            distances = @(Find-SafeDistance -Item $item -Source $source -Direction x -MaxDistance '10 cm' -WarningAction SilentlyContinue)
+        }
+        foreach ($name in $tables.Keys) {
+            foreach ($width in 60..140) {
+                $text = $tables[$name] | Format-Table | Out-String -Width $width
+                $text | Should -Not -Match '(^|\s)\u2026\S' -Because "a cut in the $name table at $width columns keeps a figure's leading digits"
+            }
+        }
+    }
+
     It 'has about topics for the site file and the policy file that name every key' {
         $site = Get-Help about_InductionHazard_SiteFile | Out-String
         foreach ($key in 'Site', 'Stations', 'Policy', 'Sources', 'Waveform', 'Position', 'Normal', 'Velocity', 'ExposureTime', 'LeaveTime', 'Description') { $site | Should -Match "\b$key\b" }
