@@ -101,23 +101,9 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
     /// </summary>
     private static bool Inert(ModalCircuit circuit, Complex[] modal, Complex[] drives, Vector3D[]? torqueField)
     {
-        if (circuit.ForceCoupling is { } g)
+        if (!StepMechanics.NoForceOrTorque(circuit, torqueField))
         {
-            foreach (Vector3D v in g)
-            {
-                if (v.X != 0 || v.Y != 0 || v.Z != 0)
-                {
-                    return false;
-                }
-            }
-        }
-
-        foreach (Vector3D v in torqueField ?? Array.Empty<Vector3D>())
-        {
-            if (v.X != 0 || v.Y != 0 || v.Z != 0)
-            {
-                return false;
-            }
+            return false;
         }
 
         foreach (Complex c in modal)

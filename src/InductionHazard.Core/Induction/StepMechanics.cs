@@ -24,7 +24,7 @@ internal sealed class StepMechanics
         _values = values;
         _torqueField = torqueField;
         _drive = new double[terms];
-        Inert = IsZero(circuit.ForceCoupling) && IsZero(torqueField);
+        Inert = NoForceOrTorque(circuit, torqueField);
     }
 
     /// <summary>
@@ -42,9 +42,24 @@ internal sealed class StepMechanics
 
     public double PeakTorque => Math.Sqrt(_peakTorqueSquared);
 
-    private static bool IsZero(System.Collections.IEnumerable? vectors)
+    /// <summary>
+    /// True when every force coupling and every torque field is zero or absent (a loop in a uniform field facing it):
+    /// no current in any path can then give a force or a torque. Shared by the transient and steady mechanics.
+    /// </summary>
+    internal static bool NoForceOrTorque(ModalCircuit circuit, Vector3D[]? torqueField)
     {
-        foreach (Vector3D v in vectors ?? Array.Empty<Vector3D>())
+        if (circuit.ForceCoupling is { } g)
+        {
+            foreach (Vector3D v in g)
+            {
+                if (v.X != 0 || v.Y != 0 || v.Z != 0)
+                {
+                    return false;
+                }
+            }
+        }
+
+        foreach (Vector3D v in torqueField ?? Array.Empty<Vector3D>())
         {
             if (v.X != 0 || v.Y != 0 || v.Z != 0)
             {

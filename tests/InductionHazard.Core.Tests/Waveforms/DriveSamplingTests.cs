@@ -10,6 +10,7 @@ namespace InductionHazard.Tests.Waveforms;
 public sealed class DriveSamplingTests
 {
     [Fact]
+    [Validates("the sample times, breakpoints and contact times sorted and each kept once, 2,000 random lists with repeats, NaN, infinities and both zeros", ".NET's Enumerable.OrderBy then Distinct (general-purpose reference library)", "the same values")]
     public void SortedDistinctGivesWhatOrderingAndDistinctGive()
     {
         // Against the general-purpose library's own OrderBy and Distinct, with repeats, NaN, infinities and both zeros

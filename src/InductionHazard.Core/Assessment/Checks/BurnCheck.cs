@@ -354,17 +354,7 @@ public sealed class BurnCheck : IHazardCheck
             }
         }
 
-        seconds.Sort();
-        var distinct = new List<double>(seconds.Count);
-        foreach (double t in seconds)
-        {
-            if (distinct.Count == 0 || distinct[distinct.Count - 1] != t)
-            {
-                distinct.Add(t);
-            }
-        }
-
-        double[] result = distinct.ToArray();
+        double[] result = Waveforms.DriveSampling.SortedDistinct(seconds);
         var celsius = new double[result.Length];
         for (int k = 0; k < result.Length; k++)
         {
