@@ -133,10 +133,13 @@ public static class TemperatureHistory
     /// levels the stretches keep their samples, and each one's length is linear in L, so the level for d is found by
     /// interpolation; where stretches join at a sample level, the length jumps and the level is that sample's.
     /// </summary>
-    private static double[]? ByLevels(double[] times, double[] temps, IReadOnlyList<double> ascending)
+    private static double[]? ByLevels(double[] times, double[] temps, IReadOnlyList<double> durations)
     {
         int n = times.Length;
-        var held = new double[ascending.Count];
+
+        // Read as an array (the burn check's is one), not through the list's interface in the loops below.
+        double[] ascending = durations as double[] ?? new List<double>(durations).ToArray();
+        var held = new double[ascending.Length];
         if (n < 2)
         {
             return null;
@@ -149,11 +152,17 @@ public static class TemperatureHistory
             {
                 return null;
             }
-
-            order[k] = k;
         }
 
-        Array.Sort((double[])temps.Clone(), order);
+        if (!ByRuns(temps, order))
+        {
+            for (int k = 0; k < n; k++)
+            {
+                order[k] = k;
+            }
+
+            Array.Sort((double[])temps.Clone(), order);
+        }
 
         // For the first sample of a stretch, its last (runEnd, the first n); for the last, its first (runStart, the next
         // n); -1 while a sample is below the level. One array for both.
@@ -163,22 +172,6 @@ public static class TemperatureHistory
 
         var starts = new List<int>(MostPeaks);
         int pending = 0;
-        double Length(int i, int j, double level)
-        {
-            double length = times[j] - times[i];
-            if (i > 0 && level < temps[i])
-            {
-                length += (times[i] - times[i - 1]) * (temps[i] - level) / (temps[i] - temps[i - 1]);
-            }
-
-            if (j < n - 1 && level < temps[j])
-            {
-                length += (times[j + 1] - times[j]) * (temps[j] - level) / (temps[j] - temps[j + 1]);
-            }
-
-            return length;
-        }
-
         Span<double> tops = stackalloc double[MostPeaks + 1], bottoms = stackalloc double[MostPeaks + 1];
         int next = n - 1;
         while (next >= 0 && pending < held.Length)
@@ -222,7 +215,7 @@ public static class TemperatureHistory
             double longest = 0;
             for (int s = 0; s < starts.Count; s++)
             {
-                tops[s] = Length(starts[s], runEnd[starts[s]], level);
+                tops[s] = StretchLength(times, temps, starts[s], runEnd[starts[s]], level);
                 longest = Math.Max(longest, tops[s]);
             }
 
@@ -241,7 +234,7 @@ public static class TemperatureHistory
             double reach = 0;
             for (int s = 0; s < starts.Count; s++)
             {
-                bottoms[s] = Length(starts[s], runEnd[starts[s]], below);
+                bottoms[s] = StretchLength(times, temps, starts[s], runEnd[starts[s]], below);
                 reach = Math.Max(reach, bottoms[s]);
             }
 
@@ -267,6 +260,77 @@ public static class TemperatureHistory
         }
 
         return held;
+    }
+
+    /// <summary>
+    /// The length of the stretch from sample i to sample j at a level at or below both: the time between them, and on
+    /// either side the part of the piece beyond the sample that lies at or above the level.
+    /// </summary>
+    private static double StretchLength(double[] times, double[] temps, int i, int j, double level)
+    {
+        double length = times[j] - times[i];
+        if (i > 0 && level < temps[i])
+        {
+            length += (times[i] - times[i - 1]) * (temps[i] - level) / (temps[i] - temps[i - 1]);
+        }
+
+        if (j < times.Length - 1 && level < temps[j])
+        {
+            length += (times[j + 1] - times[j]) * (temps[j] - level) / (temps[j] - temps[j + 1]);
+        }
+
+        return length;
+    }
+
+    /// <summary>The most runs (stretches that only rise or only fall) a history may have for <see cref="ByRuns"/> to order it.</summary>
+    private const int MostRuns = 8;
+
+    /// <summary>
+    /// For a history made of at most <see cref="MostRuns"/> runs that each only rise or only fall (most are a few:
+    /// heating, a hold, cooling), its samples in ascending order of temperature, by merging the runs (a falling one read
+    /// backwards) in place of a sort; false for any other history. Samples of equal temperature may come in any order
+    /// (the sweep takes a level's samples together).
+    /// </summary>
+    private static bool ByRuns(double[] temps, int[] order)
+    {
+        int n = temps.Length, runs = 0;
+        Span<int> head = stackalloc int[MostRuns], end = stackalloc int[MostRuns], step = stackalloc int[MostRuns];
+        for (int first = 0; first < n;)
+        {
+            if (runs == MostRuns)
+            {
+                return false;
+            }
+
+            int last = first;
+            bool falls = first + 1 < n && temps[first + 1] < temps[first];
+            while (last + 1 < n && (falls ? temps[last + 1] <= temps[last] : temps[last + 1] >= temps[last]))
+            {
+                last++;
+            }
+
+            // A rising run is read from its first sample up, a falling one from its last down: each ascends.
+            (head[runs], end[runs], step[runs]) = falls ? (last, first - 1, -1) : (first, last + 1, 1);
+            runs++;
+            first = last + 1;
+        }
+
+        for (int o = 0; o < n; o++)
+        {
+            int pick = -1;
+            for (int r = 0; r < runs; r++)
+            {
+                if (head[r] != end[r] && (pick < 0 || temps[head[r]] < temps[head[pick]]))
+                {
+                    pick = r;
+                }
+            }
+
+            order[o] = head[pick];
+            head[pick] += step[pick];
+        }
+
+        return true;
     }
 
     private static double Sustained(double[] times, double[] temps, double[] slopes, double seconds, int[] queue)

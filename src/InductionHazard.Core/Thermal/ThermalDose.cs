@@ -243,7 +243,8 @@ public static class ThermalDose
             return Weight(startCelsius) * seconds / 60.0;
         }
 
-        double minutes = 0;
+        // Summed as weight times seconds and turned into minutes once at the end.
+        double weighted = 0, perK = 0;
         double ta = times[0];
         double ra = rises[0];
         double ca = startCelsius + (k * ra);
@@ -254,29 +255,33 @@ public static class ThermalDose
             double rb = rises[i];
             double cb = startCelsius + (k * rb);
             double wb = Weight(cb);
-            double seconds = tb - ta;
-            if (seconds > 0)
+            double span = tb - ta;
+            if (span > 0)
             {
                 if ((ca - BreakpointCelsius) * (cb - BreakpointCelsius) < 0)
                 {
                     // Split where it crosses 43 degC, where the weight is 1 at either rate (so the split's own motion
                     // with k adds nothing to the derivative).
-                    double before = seconds * (BreakpointCelsius - ca) / (cb - ca);
-                    double rc = ra + ((rb - ra) * (before / seconds));
-                    minutes += LogMean(wa, 1, ca, BreakpointCelsius, ra, rc, Rate(ca), before, slope, ref derivative)
-                        + LogMean(1, wb, BreakpointCelsius, cb, rc, rb, Rate(cb), seconds - before, slope, ref derivative);
+                    double before = span * (BreakpointCelsius - ca) / (cb - ca);
+                    double rc = ra + ((rb - ra) * (before / span));
+                    weighted += LogMean(wa, 1, ca, BreakpointCelsius, ra, rc, LogRate(ca), before, slope, ref perK)
+                        + LogMean(1, wb, BreakpointCelsius, cb, rc, rb, LogRate(cb), span - before, slope, ref perK);
                 }
                 else
                 {
-                    minutes += LogMean(wa, wb, ca, cb, ra, rb, Rate(0.5 * (ca + cb)), seconds, slope, ref derivative);
+                    weighted += LogMean(wa, wb, ca, cb, ra, rb, LogRate(0.5 * (ca + cb)), span, slope, ref perK);
                 }
             }
 
             (ta, ra, ca, wa) = (tb, rb, cb, wb);
         }
 
-        return minutes;
+        derivative = perK / 60.0;
+        return weighted / 60.0;
     }
+
+    /// <summary>ln R for a temperature's side of 43 degC.</summary>
+    private static double LogRate(double celsius) => celsius >= BreakpointCelsius ? LogRateAbove : LogRateBelow;
 
     /// <summary>R^(43 - T) at a temperature, with R for that temperature's side of 43 degC (1 at 43 degC on either).</summary>
     private static double Weight(double celsius) =>
@@ -284,14 +289,13 @@ public static class ThermalDose
 
     /// <summary>
     /// The integral of r^(43 - T) over a piece where T runs linearly from c0 to c1 and the weights are w0 and w1,
-    /// minutes; with <paramref name="slope"/>, adds to <paramref name="derivative"/> its derivative in k when T = start
-    /// + k rise, the rise running from rise0 to rise1: -ln r times the integral of rise times the weight.
+    /// seconds (weight times time); with <paramref name="slope"/>, adds to <paramref name="derivative"/> its derivative in
+    /// k when T = start + k rise, the rise running from rise0 to rise1: -ln r times the integral of rise times the weight.
     /// </summary>
-    private static double LogMean(double w0, double w1, double c0, double c1, double rise0, double rise1, double r, double seconds, bool slope, ref double derivative)
+    private static double LogMean(double w0, double w1, double c0, double c1, double rise0, double rise1, double logRate, double seconds, bool slope, ref double derivative)
     {
-        double logRate = r == RateAbove ? LogRateAbove : LogRateBelow;
         double x = -logRate * (c1 - c0);  // ln(w1 / w0)
-        double mean, firstMoment;
+        double mean, firstMoment, inverse = 0;
         if (Math.Abs(x) < 1e-3)
         {
             // (e^x - 1) / x to five terms: the next is below x^5 / 720, under 2e-18.
@@ -299,7 +303,8 @@ public static class ThermalDose
         }
         else
         {
-            mean = (w1 - w0) / x;
+            inverse = 1 / x;
+            mean = (w1 - w0) * inverse;
         }
 
         if (slope)
@@ -308,11 +313,11 @@ public static class ThermalDose
             // Newton step, whose accuracy only sets how fast the root is reached).
             firstMoment = Math.Abs(x) < 1e-2
                 ? w0 * (0.5 + (x * ((1.0 / 3) + (x * (0.125 + (x * ((1.0 / 30) + (x / 144))))))))
-                : ((w1 * (x - 1)) + w0) / (x * x);
-            derivative += -logRate * seconds / 60.0 * ((rise0 * mean) + ((rise1 - rise0) * firstMoment));
+                : ((w1 * (x - 1)) + w0) * inverse * inverse;
+            derivative += -logRate * seconds * ((rise0 * mean) + ((rise1 - rise0) * firstMoment));
         }
 
-        return seconds / 60.0 * mean;
+        return seconds * mean;
     }
 
     /// <summary>The dose of a constant temperature held for a time, minutes.</summary>

@@ -1,3 +1,5 @@
+using System;
+using System.Collections.Generic;
 using InductionHazard.Thermal;
 using Xunit;
 
@@ -100,7 +102,7 @@ public class TemperatureHistoryTests
             int n = random.Next(2, 40);
             var history = new HeatingSample[n];
             double t = 0;
-            bool plateaus = trial % 3 == 0, repeats = trial % 4 == 1;
+            bool plateaus = trial % 3 == 0, repeats = trial % 4 == 1, runs = trial % 5 < 2;
             for (int k = 0; k < n; k++)
             {
                 // Some histories repeat a time (a step that ends on a breakpoint), so that a piece has no length.
@@ -108,6 +110,31 @@ public class TemperatureHistoryTests
                 // Some histories take few distinct values, so that samples share levels and stretches join at them.
                 double temperature = plateaus ? 30 + random.Next(4) : 30 + (random.NextDouble() * 40);
                 history[k] = new HeatingSample(t, temperature, 0);
+            }
+
+            if (runs)
+            {
+                // Two in five rise and fall in a few runs (as heating, a hold and cooling do, plateaus included), the
+                // case the sweep orders by merging the runs instead of sorting: the values sorted, cut into up to
+                // eight pieces, every other piece reversed.
+                double[] values = Array.ConvertAll(history, h => h.TemperatureCelsius);
+                Array.Sort(values);
+                var cuts = new List<int> { 0, n };
+                for (int c = random.Next(8); c > 0; c--)
+                {
+                    cuts.Add(random.Next(n));
+                }
+
+                cuts.Sort();
+                for (int c = 1; c < cuts.Count; c += 2)
+                {
+                    Array.Reverse(values, cuts[c - 1], cuts[c] - cuts[c - 1]);
+                }
+
+                for (int k = 0; k < n; k++)
+                {
+                    history[k] = new HeatingSample(history[k].TimeSeconds, values[k], 0);
+                }
             }
 
             var durations = new[] { 0.0, 0.01 * t, 0.1 * t, 0.37 * t, 0.8 * t, t, 1.01 * t };
