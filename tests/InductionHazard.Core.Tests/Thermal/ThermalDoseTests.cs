@@ -51,6 +51,25 @@ public class ThermalDoseTests
         Within.Relative(2.0, ThermalDose.AddedCem43Minutes(scaled, 33), 1e-9, "added dose at the margin");
     }
 
+    [Validates("the dose margin of a plateau, solved by hand", "Sapareto and Dewey (1984): t R^(43 - T) for a constant temperature, solved for T", "1e-9")]
+    [Theory]
+    [InlineData(0.5, 480.0)]   // scaled to 39.0 °C: R = 0.25 throughout
+    [InlineData(2.0, 1.0)]     // scaled to 44.0 °C: R = 0.5 at the margin
+    [InlineData(0.01, 60.0)]   // a rise small enough that the added dose is nearly linear in the factor at 1
+    public void TheDoseMarginOfAPlateauIsTheClosedForm(double rise, double minutes)
+    {
+        // From 33 °C to a plateau within a microsecond, held: the added dose at factor k is t (R^(43 - T) - 0.25^10)
+        // with T = 33 + k rise, so the limit L is met where R^(43 - T) = L / t + 0.25^10 = w: T = 43 + log_2 w if w is
+        // at least 1 (T at or above 43 °C, R = 0.5), else 43 + log_4 w (R = 0.25). The microsecond's ramp adds about
+        // 1e-6 s / t relative, below 1e-9.
+        const double Limit = 2.0;
+        double seconds = minutes * 60;
+        HeatingSample[] history = { new(0, 33, 0), new(1e-6, 33 + rise, 0), new(1e-6 + seconds, 33 + rise, 0) };
+        double weight = (Limit / minutes) + Math.Pow(0.25, 10);
+        double scaled = 43 + Math.Log(weight, weight >= 1 ? 2 : 4);
+        Within.Relative((scaled - 33) / rise, ThermalDose.RiseMargin(history, 33, Limit)!.Value, 1e-9, "dose margin of a " + rise + " K plateau for " + minutes + " min");
+    }
+
     [Fact]
     public void NoRiseAddsNoDoseWhateverTheRoom()
     {
