@@ -76,7 +76,8 @@ public sealed class SinusoidalPathSolver
             return state.PowerWatts;
         }
 
-        var heating = new List<HeatingSample> { new(fieldOn, celsius0, Power(fieldOn, celsius0)) };
+        // Room for a typical history from the start (a worn ring's 8 hours take some 30 samples), rather than growing from four.
+        var heating = new List<HeatingSample>(32) { new(fieldOn, celsius0, Power(fieldOn, celsius0)) };
         HeatingIntegration on = HeatingIntegrator.Run(_thermal, Power, fieldOn, fieldOff, celsius0, heating, cancellation, stopAboveCelsius: stopAboveCelsius);
         HeatingIntegration last = on;
         if (exposureEnd > fieldOff && on.StoppedAboveLimitSeconds is null && !on.BudgetExceeded)

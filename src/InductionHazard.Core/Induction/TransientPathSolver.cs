@@ -35,6 +35,7 @@ public sealed class TransientPathSolver
     /// </summary>
     private const double SettledGrowth = 4;
     private const int MaxRecordedSamples = 4000;
+    private const int InitialSampleCapacity = 64;
 
     private readonly ModalCircuit _circuit;
     private readonly Func<double, double> _scaleAt;
@@ -127,8 +128,9 @@ public sealed class TransientPathSolver
     {
         int modes = _circuit.Count, terms = drives.Length;
         double[] edges = EdgesWithin(breakpoints, tStart, tEnd);
-        var circuit = new List<CircuitSample> { new(tStart, outlineEmf(tStart), 0, celsius0) };
-        var heating = new List<HeatingSample> { new(tStart, celsius0, 0) };
+        // Room for a typical run's samples from the start (a ring's ramp records some 40), rather than growing from four.
+        var circuit = new List<CircuitSample>(InitialSampleCapacity) { new(tStart, outlineEmf(tStart), 0, celsius0) };
+        var heating = new List<HeatingSample>(InitialSampleCapacity) { new(tStart, celsius0, 0) };
         double recordSpacing = (tEnd - tStart) / MaxRecordedSamples;
         var z = new double[modes];
         var work = new StepWork(modes, terms);
