@@ -1,5 +1,4 @@
 using System;
-using System.Globalization;
 using InductionHazard.Quantities;
 
 namespace InductionHazard.Assessment;
@@ -49,7 +48,7 @@ internal static class LenzSense
 
         string along = Directions.Describe(fieldDirection);
         double degrees = lagRadians * 180 / Math.PI;
-        string lag = "; the current lags the emf by " + degrees.ToString("0", CultureInfo.InvariantCulture) + "°";
+        string lag = "; the current lags the emf by " + SiFormat.Fixed(degrees, 0, keepZeros: true) + "°";
         string head = "alternating at " + SiFormat.Format(frequencyHertz, "Hz") + ": anticlockwise viewed looking along " + along;
         if (degrees < 30)
         {
@@ -61,7 +60,7 @@ internal static class LenzSense
             return head + " while the flux along " + along + " is positive, clockwise while it is negative (inductance limits the current, which cancels the flux itself rather than its rise)" + lag;
         }
 
-        return head + " from when the flux along " + along + " starts to rise until a " + (degrees / 90).ToString("0.#", CultureInfo.InvariantCulture)
+        return head + " from when the flux along " + along + " starts to rise until a " + SiFormat.Fixed(degrees / 90, 1, keepZeros: false)
             + " quarter cycle after it peaks (between the resistive and the inductive regimes)" + lag;
     }
 }

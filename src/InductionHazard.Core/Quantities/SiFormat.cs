@@ -132,6 +132,25 @@ public static class SiFormat
     }
 
     /// <summary>
+    /// A number to a fixed count of decimals (at most 6), as .NET's custom format writes it: "0", "0.0" and so on with
+    /// <paramref name="keepZeros"/>, "0.#" and so on without. Written out by integer arithmetic except where the
+    /// formatter's own rounding could differ (within a few units of the fifteenth digit of a half in the last place) and
+    /// for a million or more, which are left to the formatter, as for <see cref="Celsius"/>.
+    /// </summary>
+    internal static string Fixed(double value, int decimals, bool keepZeros)
+    {
+        double scaled = value * Powers[decimals];
+        double fromHalf = Math.Abs(scaled - Math.Floor(scaled) - 0.5);
+        if (!(Math.Abs(value) < 1e6) || fromHalf <= (1e-13 * Math.Abs(scaled)) + 1e-9)
+        {
+            string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
+            return value.ToString(pattern, CultureInfo.InvariantCulture);
+        }
+
+        return Digits(value, decimals, keepZeros, out _, null, null);
+    }
+
+    /// <summary>
     /// The value to a number of significant digits, without trailing zeros ("0.##" in .NET's custom format), and the
     /// rounded value itself; with a prefix and unit, " " + prefix + unit follows. Written out by integer arithmetic:
     /// the formatter's custom patterns cost most of a report's time, and this gives the same text.

@@ -164,4 +164,53 @@ public class SiFormatTests
             Assert.Equal(edge.ToString("0.0", culture) + " °C", SiFormat.Celsius(edge));
         }
     }
+
+    [Validates("fixed decimals written by integer arithmetic, 400,000 values with rounding edges", ".NET's custom numeric formats \"0\", \"0.0\", \"0.#\", \"0.##\" (the reference formatter)", "exact text")]
+    [Fact]
+    public void FixedDecimalsAreWrittenAsTheCustomFormatsWriteThem()
+    {
+        var random = new System.Random(20261204);
+        var culture = System.Globalization.CultureInfo.InvariantCulture;
+        for (int trial = 0; trial < 400_000; trial++)
+        {
+            int decimals = trial % 3;
+            bool keepZeros = trial % 2 == 0;
+            double value = -300 + (3300 * random.NextDouble());
+            double half = 0.5 / System.Math.Pow(10, decimals);
+            switch ((trial / 6) % 4)
+            {
+                case 0:
+                    // On a rounding edge: a whole number in the last place and a half, as the nearest double has it.
+                    value = System.Math.Round(value, decimals) + half;
+                    break;
+                case 1:
+                    // Within a few units in the last place of such an edge, either side.
+                    value = System.Math.Round(value, decimals) + half;
+                    for (int step = random.Next(-4, 5); step != 0; step -= System.Math.Sign(step))
+                    {
+                        value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
+                    }
+
+                    break;
+                case 2:
+                    value /= System.Math.Pow(10, random.Next(8));
+                    break;
+                default:
+                    value *= System.Math.Pow(10, random.Next(5));
+                    break;
+            }
+
+            string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
+            Assert.Equal(value.ToString(pattern, culture), SiFormat.Fixed(value, decimals, keepZeros));
+        }
+
+        foreach (double edge in new[] { 0.0, -0.0, -0.04, -0.4, 0.5, -0.5, 1.5, 2.5, 0.05, 89.5, 999999.5, 1e6, -1e18 })
+        {
+            foreach ((int decimals, bool keepZeros) in new[] { (0, true), (1, true), (1, false), (2, false) })
+            {
+                string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
+                Assert.Equal(edge.ToString(pattern, culture), SiFormat.Fixed(edge, decimals, keepZeros));
+            }
+        }
+    }
 }
