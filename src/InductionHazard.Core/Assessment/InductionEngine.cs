@@ -196,11 +196,12 @@ public static class InductionEngine
 
         // Sorted and distinct, by loops: this runs for every transient assessment.
         var breakpointList = new List<double>();
-        foreach (double t in source.BreakpointsBetween(begin, end))
+        IReadOnlyList<double> between = source.BreakpointsBetween(begin, end);
+        for (int i = 0; i < between.Count; i++)
         {
-            if (t < leave && t < end)
+            if (between[i] < leave && between[i] < end)
             {
-                breakpointList.Add(t);
+                breakpointList.Add(between[i]);
             }
         }
 
@@ -274,7 +275,7 @@ public static class InductionEngine
             double[] shown = times.Concat(new[] { outside, end }).Distinct().OrderBy(t => t).ToArray();
             int stride = Math.Max(1, shown.Length / 4000);
             double Flux(double t) => t < leave ? Linked(c.Coupling, t) : t < outside ? fluxAtLeave * (1 - ((t - leave) / leaving)) : leaving > 0 ? 0 : fluxAtLeave;
-            double step = terms.Min(t => t.Waveform.MaxStepSeconds);
+            double step = LeastMaxStep(terms);
             bool thinned = !double.IsInfinity(step) && (times[times.Length - 1] - times[0]) / step > DriveSampling.MaxTimes;
             return Open(drive, c, shown.Where((_, i) => i % stride == 0).Select(t => new CircuitSample(t, Emf(t), 0, c.Start)).ToArray(), begin, end) with
             {
@@ -287,7 +288,7 @@ public static class InductionEngine
             return unsolved;
         }
 
-        double maxStep = terms.Min(t => t.Waveform.MaxStepSeconds);
+        double maxStep = LeastMaxStep(terms);
         int budget = HeatingIntegrator.DefaultMaxSteps + (4 * breakpoints.Length);
         double curvedUntil = Math.Min(leave, fieldEnd);
         bool overBudget = !double.IsInfinity(maxStep) && (curvedUntil - begin) / maxStep > budget;
@@ -472,6 +473,18 @@ public static class InductionEngine
         {
             times.Add(t);
         }
+    }
+
+    /// <summary>The shortest of the terms' longest steps, s (NaN if any is, as Enumerable.Min gives it).</summary>
+    private static double LeastMaxStep(IReadOnlyList<Fields.SourceTerm> terms)
+    {
+        double least = double.PositiveInfinity;
+        for (int k = 0; k < terms.Count; k++)
+        {
+            least = Math.Min(least, terms[k].Waveform.MaxStepSeconds);
+        }
+
+        return least;
     }
 
     /// <summary>The largest value of f over the times, NaN only when every value is NaN (as <see cref="Enumerable.Max(IEnumerable{double})"/> gives it).</summary>

@@ -92,13 +92,25 @@ public sealed class FieldSource
         _ => "unspecified units",
     };
 
-    /// <summary>The union of the terms' breakpoints within [from, to], sorted and distinct.</summary>
-    public IReadOnlyList<double> BreakpointsBetween(double from, double to) =>
-        Terms.SelectMany(t => t.Waveform.Breakpoints)
-            .Where(b => b > from && b < to && !double.IsInfinity(b))
-            .Distinct()
-            .OrderBy(b => b)
-            .ToArray();
+    /// <summary>The union of the terms' breakpoints strictly between from and to (finite ones), sorted and distinct.</summary>
+    public IReadOnlyList<double> BreakpointsBetween(double from, double to)
+    {
+        var within = new List<double>();
+        for (int k = 0; k < Terms.Count; k++)
+        {
+            IReadOnlyList<double> breakpoints = Terms[k].Waveform.Breakpoints;
+            for (int i = 0; i < breakpoints.Count; i++)
+            {
+                double b = breakpoints[i];
+                if (b > from && b < to && !double.IsInfinity(b))
+                {
+                    within.Add(b);
+                }
+            }
+        }
+
+        return Waveforms.DriveSampling.SortedDistinct(within);
+    }
 
     /// <summary>The highest significant frequency over the terms, Hz.</summary>
     public double SignificantFrequencyHertz => Terms.Max(t => t.Waveform.SignificantFrequencyHertz);
