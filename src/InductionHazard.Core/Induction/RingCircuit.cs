@@ -13,6 +13,9 @@ public sealed class RingCircuit
 {
     private readonly ConductiveItem _item;
 
+    /// <summary>The external inductance of a round wire's loop, H; NaN until first asked.</summary>
+    private double _external = double.NaN;
+
     /// <summary>Creates the circuit of a ring.</summary>
     public RingCircuit(ConductiveItem item)
     {
@@ -38,15 +41,21 @@ public sealed class RingCircuit
     public Complex ImpedanceOhms(double frequencyHertz, double celsius)
     {
         double omega = 2 * Math.PI * frequencyHertz;
-        double rdc = DcResistanceOhms(celsius);
+        double rho = _item.Material.ResistivityAt(celsius);
+        double rdc = rho * _item.Loop.PathLengthMeters / _item.Loop.Section.AreaSquareMeters;
         if (_item.Loop.Section is RoundWire wire)
         {
-            double delta = SkinEffect.SkinDepthMeters(_item.Material.ResistivityAt(celsius), frequencyHertz, _item.Material.RelativePermeability);
+            double delta = SkinEffect.SkinDepthMeters(rho, frequencyHertz, _item.Material.RelativePermeability);
             Complex internalRatio = SkinEffect.RoundWireImpedanceRatio(wire.RadiusMeters, delta);
-            double external = _item.Loop is RectangularLoopGeometry r
-                ? RectangleInductance.ExternalHenries(r.WidthMeters, r.HeightMeters, wire.RadiusMeters)
-                : RingInductance.ExternalHenries(_item.Loop.HalfSpanMeters, wire.RadiusMeters);
-            return (rdc * internalRatio) + new Complex(0, omega * external);
+            if (double.IsNaN(_external))
+            {
+                // The geometry's alone: found on the first call, as a heating run asks at every temperature it passes.
+                _external = _item.Loop is RectangularLoopGeometry r
+                    ? RectangleInductance.ExternalHenries(r.WidthMeters, r.HeightMeters, wire.RadiusMeters)
+                    : RingInductance.ExternalHenries(_item.Loop.HalfSpanMeters, wire.RadiusMeters);
+            }
+
+            return (rdc * internalRatio) + new Complex(0, omega * _external);
         }
 
         return new Complex(rdc, omega * DcInductanceHenries);

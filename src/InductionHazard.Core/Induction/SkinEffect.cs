@@ -45,9 +45,7 @@ public static class SkinEffect
         (double ber, double bei, double berP, double beiP) = x <= KelvinSeries.MaxX
             ? KelvinSeries.Evaluate(x)
             : (SpecialFunctions.KelvinBer(x), SpecialFunctions.KelvinBei(x), SpecialFunctions.KelvinBerPrime(x), SpecialFunctions.KelvinBeiPrime(x));
-        double denominator = (berP * berP) + (beiP * beiP);
-        return new Complex(
-            x / 2 * ((ber * beiP) - (bei * berP)) / denominator,
-            x / 2 * ((ber * berP) + (bei * beiP)) / denominator);
+        double scale = x / 2 / ((berP * berP) + (beiP * beiP));
+        return new Complex(scale * ((ber * beiP) - (bei * berP)), scale * ((ber * berP) + (bei * beiP)));
     }
 }
