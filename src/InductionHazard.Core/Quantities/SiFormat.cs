@@ -36,7 +36,7 @@ public static class SiFormat
             return "0 " + unit;
         }
 
-        int exponent3 = (int)Math.Floor(Math.Log10(Math.Abs(v)) / 3.0);
+        int exponent3 = (int)Math.Floor(Decade(Math.Abs(v)) / 3.0);
         int index = exponent3 + UnitPrefixIndex;
         if (index < 0 || index >= Prefixes.Length)
         {
@@ -110,6 +110,53 @@ public static class SiFormat
         return Finite.Is(value.Value) ? OneDecimal(value.Value) : Plain(value);
     }
 
+    /// <summary>The powers of ten from 1e-30 to 1e30, each the double nearest it (as the runtime parses "1e-5").</summary>
+    private static readonly double[] Decades = BuildDecades();
+
+    private const int LeastDecade = -30;
+
+    private static double[] BuildDecades()
+    {
+        var decades = new double[61];
+        for (int k = 0; k < decades.Length; k++)
+        {
+            decades[k] = double.Parse("1e" + (k + LeastDecade).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        }
+
+        return decades;
+    }
+
+    /// <summary>
+    /// floor(log10 a) for a positive finite a, by comparison with the powers of ten (a logarithm's cost saved on every
+    /// figure written); outside 1e-30 to 1e30, by the logarithm. Where the logarithm of a value an ulp below a power of ten
+    /// rounds up to the power's exponent, this gives one less, and the figure written is the same either way (the value
+    /// rounds to the power at either count of decimals).
+    /// </summary>
+    private static int Decade(double a)
+    {
+        if (!(a >= Decades[0] && a < Decades[Decades.Length - 1]))
+        {
+            return (int)Math.Floor(Math.Log10(a));
+        }
+
+        // Decades[low] <= a < Decades[high].
+        int low = 0, high = Decades.Length - 1;
+        while (high - low > 1)
+        {
+            int middle = (low + high) >> 1;
+            if (Decades[middle] <= a)
+            {
+                low = middle;
+            }
+            else
+            {
+                high = middle;
+            }
+        }
+
+        return low + LeastDecade;
+    }
+
     private static string Round(double value, int significantDigits) => Round(value, significantDigits, out _, null, null);
 
     /// <summary>
@@ -163,7 +210,7 @@ public static class SiFormat
             return unit is null ? "0" : "0 " + prefix + unit;
         }
 
-        int magnitude = (int)Math.Floor(Math.Log10(Math.Abs(value))) + 1;
+        int magnitude = Decade(Math.Abs(value)) + 1;
         return Digits(value, Math.Max(0, Math.Min(15, significantDigits - magnitude)), keepZeros: false, out rounded, prefix, unit);
     }
 

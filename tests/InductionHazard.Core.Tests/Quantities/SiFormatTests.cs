@@ -213,4 +213,34 @@ public class SiFormatTests
             }
         }
     }
+
+    [Fact]
+    public void ValuesAnUlpAroundAPowerOfTenReadAsTheFormatterWritesThem()
+    {
+        // The decade of a figure is found by comparison with the powers of ten, not by a logarithm, which rounds up to
+        // the power's exponent for values an ulp or two below it: either way the same text, at every power from 1e-23
+        // to 1e25, one to four ulps either side, one to six significant figures, against the references above.
+        for (int k = -23; k <= 25; k++)
+        {
+            double power = double.Parse("1e" + k, System.Globalization.CultureInfo.InvariantCulture);
+            foreach (int ulps in new[] { -4, -2, -1, 0, 1, 2, 4 })
+            {
+                double value = power;
+                for (int step = ulps; step != 0; step -= System.Math.Sign(step))
+                {
+                    value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
+                }
+
+                for (int digits = 1; digits <= 6; digits++)
+                {
+                    Assert.Equal(FormatByTheFormatter(value, "V", digits), SiFormat.Format(value, "V", digits));
+                    Assert.Equal(FormatByTheFormatter(-value, "V", digits), SiFormat.Format(-value, "V", digits));
+                    if (value >= 1e-3 && value < 1e6)
+                    {
+                        Assert.Equal(ByTheFormatter(value, digits), SiFormat.Plain(value, digits));
+                    }
+                }
+            }
+        }
+    }
 }
