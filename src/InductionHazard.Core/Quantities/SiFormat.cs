@@ -95,9 +95,66 @@ public static class SiFormat
         }
 
         return Math.Abs(v) >= 1e6 || (v != 0 && Math.Abs(v) < 1e-3)
-            ? v.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture)
+            ? General(v, significantDigits)
             : Round(v, significantDigits);
     }
+
+    /// <summary>
+    /// A number as .NET's "G" format writes it to a number of significant digits (1 to 15): fixed-point notation when its
+    /// decimal exponent lies above -5 and below that number, else "d.ddE+XX", trailing zeros dropped. Written out by
+    /// integer arithmetic, except where its digits lie within rounding noise of a half in the last place kept or its
+    /// exponent beyond 25 either way, which are left to the formatter.
+    /// </summary>
+    private static string General(double value, int significantDigits)
+    {
+        double a = Math.Abs(value);
+        int exponent = Decade(a);
+        int shift = significantDigits - 1 - exponent;
+        if (significantDigits < 1 || significantDigits > 15 || Math.Abs(exponent) > 25 || Math.Abs(shift) > 30)
+        {
+            return Formatted(value, significantDigits);
+        }
+
+        // The digits kept, as a whole number: a times 10^shift, by one multiplication or division by a power of ten.
+        double scaled = shift >= 0 ? a * Decades[shift - LeastDecade] : a / Decades[-shift - LeastDecade];
+        double fromHalf = Math.Abs(scaled - Math.Floor(scaled) - 0.5);
+        if (fromHalf <= (1e-12 * scaled) + 1e-9)
+        {
+            return Formatted(value, significantDigits);
+        }
+
+        long digits = (long)Math.Round(scaled);
+        long top = (long)Powers[significantDigits];
+        if (digits >= top)
+        {
+            // Rounded up to the next decade: 9.995e-5 to three digits is 1.00e-4.
+            digits /= 10;
+            exponent++;
+        }
+
+        if (exponent > -5 && exponent < significantDigits)
+        {
+            // Fixed point: the same digits placed by the exponent.
+            return Round(value, significantDigits);
+        }
+
+        // d.ddd without trailing zeros, E, the exponent's sign and at least two of its digits.
+        long whole = digits / (long)Powers[significantDigits - 1];
+        long fraction = digits % (long)Powers[significantDigits - 1];
+        int places = significantDigits - 1;
+        while (places > 0 && fraction % 10 == 0)
+        {
+            fraction /= 10;
+            places--;
+        }
+
+        string mantissa = Compose(value < 0, whole, fraction, places, null, null);
+        int size = Math.Abs(exponent);
+        return mantissa + (exponent < 0 ? "E-" : "E+") + (size < 10 ? "0" : string.Empty) + size.ToString(CultureInfo.InvariantCulture);
+    }
+
+    private static string Formatted(double value, int significantDigits) =>
+        value.ToString("G" + significantDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 
     /// <summary>Formats a temperature in degrees Celsius to one decimal ("36.4 °C").</summary>
     public static string Celsius(double? value)

@@ -243,4 +243,40 @@ public class SiFormatTests
             }
         }
     }
+
+    [Validates("very small and very large numbers to 1-6 significant figures, 400,000 random values and rounding edges", ".NET's standard numeric format \"G\" (the reference formatter)", "the same text")]
+    [Fact]
+    public void VerySmallAndLargeNumbersReadAsTheGeneralFormatWritesThem()
+    {
+        // Plain numbers below 1e-3 or from 1e6 up are written as .NET's "G" format writes them: fixed point down to
+        // 1e-4, "8.65E-06" and "1.23E+06" beyond. Values from 1e-33 to 1e-3 and from 1e6 to 1e33, a third of them on
+        // a rounding edge (the digits kept and then a 5), some within a few ulps of one.
+        var random = new System.Random(20261206);
+        var culture = System.Globalization.CultureInfo.InvariantCulture;
+        for (int trial = 0; trial < 400_000; trial++)
+        {
+            int digits = 1 + random.Next(6);
+            double value = (random.Next(2) == 0 ? -1 : 1) * (random.Next(2) == 0 ? System.Math.Pow(10, -33 + (30 * random.NextDouble())) : System.Math.Pow(10, 6 + (27 * random.NextDouble())));
+            if (trial % 3 == 0)
+            {
+                double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
+                double mantissa = value / decade;
+                value = (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
+                for (int step = random.Next(-3, 4); step != 0; step -= System.Math.Sign(step))
+                {
+                    value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
+                }
+            }
+
+            if (System.Math.Abs(value) >= 1e6 || System.Math.Abs(value) < 1e-3)
+            {
+                Assert.Equal(value.ToString("G" + digits, culture), SiFormat.Plain(value, digits));
+            }
+        }
+
+        foreach (double edge in new[] { 8.65e-6, 0.000442, 0.0009995, 0.00099949, 1e-4, 9.9995e-5, 1e-5, 1234567.0, 9995000.0, 9999999.0, 1e6, 1e25, 1e-25, -3.3e-7 })
+        {
+            Assert.Equal(edge.ToString("G3", culture), SiFormat.Plain(edge, 3));
+        }
+    }
 }
