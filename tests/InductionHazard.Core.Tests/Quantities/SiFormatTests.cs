@@ -142,10 +142,7 @@ public class SiFormatTests
                 case 1:
                     // Within a few units in the last place of such an edge, either side.
                     value = System.Math.Round(value, 1) + 0.05;
-                    for (int step = random.Next(-4, 5); step != 0; step -= System.Math.Sign(step))
-                    {
-                        value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
-                    }
+                    value = Ulps(value, random.Next(-4, 5));
 
                     break;
                 case 2:
@@ -186,10 +183,7 @@ public class SiFormatTests
                 case 1:
                     // Within a few units in the last place of such an edge, either side.
                     value = System.Math.Round(value, decimals) + half;
-                    for (int step = random.Next(-4, 5); step != 0; step -= System.Math.Sign(step))
-                    {
-                        value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
-                    }
+                    value = Ulps(value, random.Next(-4, 5));
 
                     break;
                 case 2:
@@ -225,11 +219,7 @@ public class SiFormatTests
             double power = double.Parse("1e" + k, System.Globalization.CultureInfo.InvariantCulture);
             foreach (int ulps in new[] { -4, -2, -1, 0, 1, 2, 4 })
             {
-                double value = power;
-                for (int step = ulps; step != 0; step -= System.Math.Sign(step))
-                {
-                    value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
-                }
+                double value = Ulps(power, ulps);
 
                 for (int digits = 1; digits <= 6; digits++)
                 {
@@ -262,10 +252,7 @@ public class SiFormatTests
                 double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
                 double mantissa = value / decade;
                 value = (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
-                for (int step = random.Next(-3, 4); step != 0; step -= System.Math.Sign(step))
-                {
-                    value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
-                }
+                value = Ulps(value, random.Next(-3, 4));
             }
 
             if (System.Math.Abs(value) >= 1e6 || System.Math.Abs(value) < 1e-3)
@@ -278,5 +265,16 @@ public class SiFormatTests
         {
             Assert.Equal(edge.ToString("G3", culture), SiFormat.Plain(edge, 3));
         }
+    }
+
+    /// <summary>The value moved by a number of units in the last place, up for a positive count and down for a negative one.</summary>
+    private static double Ulps(double value, int count)
+    {
+        for (int step = count; step != 0; step -= System.Math.Sign(step))
+        {
+            value = step > 0 ? System.Math.BitIncrement(value) : System.Math.BitDecrement(value);
+        }
+
+        return value;
     }
 }
