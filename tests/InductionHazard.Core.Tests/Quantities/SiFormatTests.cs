@@ -109,10 +109,7 @@ public class SiFormatTests
             double value = (random.Next(2) == 0 ? -1 : 1) * System.Math.Pow(10, -23 + (49 * random.NextDouble()));
             if (trial % 3 == 0)
             {
-                // On a rounding edge: the digits kept and then a 5 (999.5, 1.235 and the like), at the value's own decade.
-                double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
-                double mantissa = value / decade;
-                value = (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
+                value = OnEdge(value, digits);
             }
 
             Assert.Equal(FormatByTheFormatter(value, "V", digits), SiFormat.Format(value, "V", digits));
@@ -132,27 +129,7 @@ public class SiFormatTests
         var culture = System.Globalization.CultureInfo.InvariantCulture;
         for (int trial = 0; trial < 300_000; trial++)
         {
-            double value = -300 + (3300 * random.NextDouble());
-            switch (trial % 4)
-            {
-                case 0:
-                    // On a rounding edge: a whole number of tenths and a half, as the nearest double has it.
-                    value = System.Math.Round(value, 1) + 0.05;
-                    break;
-                case 1:
-                    // Within a few units in the last place of such an edge, either side.
-                    value = System.Math.Round(value, 1) + 0.05;
-                    value = Ulps(value, random.Next(-4, 5));
-
-                    break;
-                case 2:
-                    value /= System.Math.Pow(10, random.Next(8));
-                    break;
-                default:
-                    value *= System.Math.Pow(10, random.Next(5));
-                    break;
-            }
-
+            double value = Drawn(random, trial % 4, 1);
             Assert.Equal(value.ToString("0.0", culture) + " °C", SiFormat.Celsius(value));
         }
 
@@ -172,38 +149,15 @@ public class SiFormatTests
         {
             int decimals = trial % 3;
             bool keepZeros = trial % 2 == 0;
-            double value = -300 + (3300 * random.NextDouble());
-            double half = 0.5 / System.Math.Pow(10, decimals);
-            switch ((trial / 6) % 4)
-            {
-                case 0:
-                    // On a rounding edge: a whole number in the last place and a half, as the nearest double has it.
-                    value = System.Math.Round(value, decimals) + half;
-                    break;
-                case 1:
-                    // Within a few units in the last place of such an edge, either side.
-                    value = System.Math.Round(value, decimals) + half;
-                    value = Ulps(value, random.Next(-4, 5));
-
-                    break;
-                case 2:
-                    value /= System.Math.Pow(10, random.Next(8));
-                    break;
-                default:
-                    value *= System.Math.Pow(10, random.Next(5));
-                    break;
-            }
-
-            string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
-            Assert.Equal(value.ToString(pattern, culture), SiFormat.Fixed(value, decimals, keepZeros));
+            double value = Drawn(random, (trial / 6) % 4, decimals);
+            Assert.Equal(value.ToString(Pattern(decimals, keepZeros), culture), SiFormat.Fixed(value, decimals, keepZeros));
         }
 
         foreach (double edge in new[] { 0.0, -0.0, -0.04, -0.4, 0.5, -0.5, 1.5, 2.5, 0.05, 89.5, 999999.5, 1e6, -1e18 })
         {
             foreach ((int decimals, bool keepZeros) in new[] { (0, true), (1, true), (1, false), (2, false) })
             {
-                string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
-                Assert.Equal(edge.ToString(pattern, culture), SiFormat.Fixed(edge, decimals, keepZeros));
+                Assert.Equal(edge.ToString(Pattern(decimals, keepZeros), culture), SiFormat.Fixed(edge, decimals, keepZeros));
             }
         }
     }
@@ -249,10 +203,7 @@ public class SiFormatTests
             double value = (random.Next(2) == 0 ? -1 : 1) * (random.Next(2) == 0 ? System.Math.Pow(10, -33 + (30 * random.NextDouble())) : System.Math.Pow(10, 6 + (27 * random.NextDouble())));
             if (trial % 3 == 0)
             {
-                double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
-                double mantissa = value / decade;
-                value = (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
-                value = Ulps(value, random.Next(-3, 4));
+                value = Ulps(OnEdge(value, digits), random.Next(-3, 4));
             }
 
             if (System.Math.Abs(value) >= 1e6 || System.Math.Abs(value) < 1e-3)
@@ -277,4 +228,32 @@ public class SiFormatTests
 
         return value;
     }
+
+    /// <summary>
+    /// A value for the fixed-decimal checks: from -300 to 3000; by kind, on a rounding edge of the last decimal kept (a
+    /// whole number there and a half, as the nearest double has it), within a few ulps of one, or scaled down or up.
+    /// </summary>
+    private static double Drawn(System.Random random, int kind, int decimals)
+    {
+        double value = -300 + (3300 * random.NextDouble());
+        double half = 0.5 / System.Math.Pow(10, decimals);
+        return kind switch
+        {
+            0 => System.Math.Round(value, decimals) + half,
+            1 => Ulps(System.Math.Round(value, decimals) + half, random.Next(-4, 5)),
+            2 => value / System.Math.Pow(10, random.Next(8)),
+            _ => value * System.Math.Pow(10, random.Next(5)),
+        };
+    }
+
+    /// <summary>The value moved onto a rounding edge at its own decade: the digits kept and then a 5 (999.5, 1.235 and the like).</summary>
+    private static double OnEdge(double value, int digits)
+    {
+        double decade = System.Math.Pow(10, System.Math.Floor(System.Math.Log10(System.Math.Abs(value))));
+        double mantissa = value / decade;
+        return (System.Math.Round(mantissa, digits - 1) + (System.Math.Sign(mantissa) * 0.5 * System.Math.Pow(10, 1 - digits))) * decade;
+    }
+
+    /// <summary>.NET's custom format for a count of decimals: "0", "0.0", "0.#" and so on.</summary>
+    private static string Pattern(int decimals, bool keepZeros) => decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
 }
