@@ -23,8 +23,7 @@ public sealed class RingCircuit
     }
 
     /// <summary>The d.c. resistance around the loop at a temperature, rho(T) l / S, ohm.</summary>
-    public double DcResistanceOhms(double celsius) =>
-        _item.Material.ResistivityAt(celsius) * _item.Loop.PathLengthMeters / _item.Loop.Section.AreaSquareMeters;
+    public double DcResistanceOhms(double celsius) => ResistanceFor(_item.Material.ResistivityAt(celsius));
 
     /// <summary>The self-inductance for uniform current (the low-frequency value), H (Grover 1946, via the section's GMD).</summary>
     public double DcInductanceHenries => _item.Loop switch
@@ -42,7 +41,7 @@ public sealed class RingCircuit
     {
         double omega = 2 * Math.PI * frequencyHertz;
         double rho = _item.Material.ResistivityAt(celsius);
-        double rdc = rho * _item.Loop.PathLengthMeters / _item.Loop.Section.AreaSquareMeters;
+        double rdc = ResistanceFor(rho);
         if (_item.Loop.Section is RoundWire wire)
         {
             double delta = SkinEffect.SkinDepthMeters(rho, frequencyHertz, _item.Material.RelativePermeability);
@@ -60,4 +59,7 @@ public sealed class RingCircuit
 
         return new Complex(rdc, omega * DcInductanceHenries);
     }
+
+    /// <summary>The loop's d.c. resistance at a resistivity, ohm.</summary>
+    private double ResistanceFor(double resistivity) => resistivity * _item.Loop.PathLengthMeters / _item.Loop.Section.AreaSquareMeters;
 }

@@ -116,7 +116,7 @@ public static class SiFormat
         }
 
         // The digits kept, as a whole number: a times 10^shift, by one multiplication or division by a power of ten.
-        double scaled = shift >= 0 ? a * Decades[shift - LeastDecade] : a / Decades[-shift - LeastDecade];
+        double scaled = shift >= 0 ? a * Pow10(shift) : a / Pow10(-shift);
         double fromHalf = Math.Abs(scaled - Math.Floor(scaled) - 0.5);
         if (fromHalf <= (1e-12 * scaled) + 1e-9)
         {
@@ -124,7 +124,7 @@ public static class SiFormat
         }
 
         long digits = (long)Math.Round(scaled);
-        long top = (long)Powers[significantDigits];
+        long top = (long)Pow10(significantDigits);
         if (digits >= top)
         {
             // Rounded up to the next decade: 9.995e-5 to three digits is 1.00e-4.
@@ -139,8 +139,8 @@ public static class SiFormat
         }
 
         // d.ddd without trailing zeros, E, the exponent's sign and at least two of its digits.
-        long whole = digits / (long)Powers[significantDigits - 1];
-        long fraction = digits % (long)Powers[significantDigits - 1];
+        long whole = digits / (long)Pow10(significantDigits - 1);
+        long fraction = digits % (long)Pow10(significantDigits - 1);
         int places = significantDigits - 1;
         while (places > 0 && fraction % 10 == 0)
         {
@@ -171,6 +171,9 @@ public static class SiFormat
     private static readonly double[] Decades = BuildDecades();
 
     private const int LeastDecade = -30;
+
+    /// <summary>10^k for k from -30 to 30 (exact from 1 to 1e22).</summary>
+    private static double Pow10(int k) => Decades[k - LeastDecade];
 
     private static double[] BuildDecades()
     {
@@ -223,17 +226,7 @@ public static class SiFormat
     /// million or more, are left to the formatter; every other value rounds the same either way and is written out by
     /// integer arithmetic.
     /// </summary>
-    private static string OneDecimal(double value)
-    {
-        double tenths = value * 10;
-        double fromHalf = Math.Abs(tenths - Math.Floor(tenths) - 0.5);
-        if (!(Math.Abs(value) < 1e6) || fromHalf <= (1e-13 * Math.Abs(tenths)) + 1e-9)
-        {
-            return value.ToString("0.0", CultureInfo.InvariantCulture) + " °C";
-        }
-
-        return Digits(value, 1, keepZeros: true, out _, null, "°C");
-    }
+    private static string OneDecimal(double value) => Fixed(value, 1, keepZeros: true, "°C");
 
     /// <summary>
     /// A number to a fixed count of decimals (at most 6), as .NET's custom format writes it: "0", "0.0" and so on with
@@ -241,17 +234,20 @@ public static class SiFormat
     /// formatter's own rounding could differ (within a few units of the fifteenth digit of a half in the last place) and
     /// for a million or more, which are left to the formatter, as for <see cref="Celsius"/>.
     /// </summary>
-    internal static string Fixed(double value, int decimals, bool keepZeros)
+    internal static string Fixed(double value, int decimals, bool keepZeros) => Fixed(value, decimals, keepZeros, null);
+
+    /// <summary>The same, followed by " " and a unit when one is given.</summary>
+    private static string Fixed(double value, int decimals, bool keepZeros, string? unit)
     {
-        double scaled = value * Powers[decimals];
+        double scaled = value * Pow10(decimals);
         double fromHalf = Math.Abs(scaled - Math.Floor(scaled) - 0.5);
         if (!(Math.Abs(value) < 1e6) || fromHalf <= (1e-13 * Math.Abs(scaled)) + 1e-9)
         {
             string pattern = decimals == 0 ? "0" : "0." + new string(keepZeros ? '0' : '#', decimals);
-            return value.ToString(pattern, CultureInfo.InvariantCulture);
+            return value.ToString(pattern, CultureInfo.InvariantCulture) + (unit is null ? string.Empty : " " + unit);
         }
 
-        return Digits(value, decimals, keepZeros, out _, null, null);
+        return Digits(value, decimals, keepZeros, out _, null, unit);
     }
 
     /// <summary>
@@ -278,7 +274,7 @@ public static class SiFormat
     private static string Digits(double value, int decimals, bool keepZeros, out double rounded, string? prefix, string? unit)
     {
         rounded = Math.Round(value, decimals, MidpointRounding.AwayFromZero);
-        double scale = Powers[decimals];
+        double scale = Pow10(decimals);
         double units = Math.Abs(rounded) * scale;
         if (!(units < 1e15))
         {
@@ -365,8 +361,6 @@ public static class SiFormat
 
         return scales;
     }
-
-    private static readonly double[] Powers = { 1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15 };
 
     private static readonly string[] Patterns = Build();
 
