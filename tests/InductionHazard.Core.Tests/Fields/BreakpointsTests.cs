@@ -10,6 +10,7 @@ namespace InductionHazard.Tests.Fields;
 
 public class BreakpointsTests
 {
+    [Validates("a source's breakpoints strictly between two times, sorted and each once, 300 random sources of two to four terms sharing corners", ".NET's Enumerable.SelectMany, Where, Distinct and OrderBy (general-purpose reference library)", "the same values")]
     [Fact]
     public void TheBreakpointsBetweenTwoTimesAreEveryTermsOwnWithinThemSortedAndEachOnce()
     {

@@ -162,6 +162,7 @@ public class SiFormatTests
         }
     }
 
+    [Validates("figures one to four ulps either side of every power of ten from 1e-23 to 1e25, 1-6 significant figures, with and without a prefix", ".NET's custom numeric format \"0.##\" after rounding away from zero, with the decade by Math.Log10 (general-purpose reference library)", "the same text")]
     [Fact]
     public void ValuesAnUlpAroundAPowerOfTenReadAsTheFormatterWritesThem()
     {

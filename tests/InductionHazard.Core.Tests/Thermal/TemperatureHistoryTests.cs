@@ -91,7 +91,7 @@ public class TemperatureHistoryTests
         }
     }
 
-    [Validates("the highest temperature held for every contact time at once, by a sweep down through the levels, 300 random histories with plateaus", "bisection on the longest run at or above a level (independent algorithm)", "1e-9")]
+    [Validates("the highest temperature held for every contact time at once, by a sweep down through the levels, 300 random histories with plateaus, two in five as a few rising and falling runs", "bisection on the longest run at or above a level (independent algorithm)", "1e-9")]
     [Fact]
     public void TheSweepThroughTheLevelsEqualsBisectionOnTheLongestRunForRandomHistories()
     {
