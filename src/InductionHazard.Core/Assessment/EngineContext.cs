@@ -83,7 +83,7 @@ internal sealed class EngineContext
             Issues.Add(new ValidityIssue(ex.Message, AffectedResults.All));
         }
 
-        Notes.Add("placement: loop centre at " + centre + " m, " + Orientation);
+        Notes.Add((centre, Orientation), static f => "placement: loop centre at " + f.centre + " m, " + f.Orientation);
     }
 
     /// <summary>
@@ -93,7 +93,7 @@ internal sealed class EngineContext
     public void BuildPaths(bool thin)
     {
         Paths = ItemPaths.For(Scenario.Item, Frequency, Start, thin);
-        Notes.Add("current paths: " + Paths.Description);
+        Notes.Add(Paths.Description, static d => "current paths: " + d);
         if (Paths.Problem is not null || Paths.Modes is null || FieldFailed)
         {
             return;
@@ -221,7 +221,7 @@ internal sealed class EngineContext
 
     public double MeltingCelsius => Scenario.Item.Material.MeltingCelsius;
 
-    public List<string> Notes { get; } = new();
+    public NoteList Notes { get; } = new();
 
     public List<ValidityIssue> Issues { get; } = new();
 

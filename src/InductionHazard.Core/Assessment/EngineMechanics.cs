@@ -25,7 +25,7 @@ internal static class EngineMechanics
         try
         {
             FerromagneticAttraction pull = FerromagneticAttraction.At(c.Scenario.Source, c.Scenario.Placement.Centre, c.Scenario.Item);
-            c.Notes.Add("magnetisation: mu0 M = " + SiFormat.Format(pull.MagnetisationTesla, "T") + " in " + SiFormat.Format(pull.FieldTesla, "T") + " (demagnetising factor " + SiFormat.Plain(pull.DemagnetisingFactor)
+            c.Notes.Add(pull, static pull => "magnetisation: mu0 M = " + SiFormat.Format(pull.MagnetisationTesla, "T") + " in " + SiFormat.Format(pull.FieldTesla, "T") + " (demagnetising factor " + SiFormat.Plain(pull.DemagnetisingFactor)
                 + ", the smallest over orientations), grad |B| = " + SiFormat.Format(pull.GradientTeslaPerMeter, "T/m"));
             return response with { Attraction = pull, PeakTorqueNewtonMeters = pull.TorqueNewtonMeters };
         }
@@ -64,7 +64,7 @@ internal static class EngineMechanics
             }
 
             double motional = Math.Abs(rate);
-            c.Notes.Add("moved at " + SiFormat.Format(v.Length, "m/s") + " along " + v.Normalized() + " through the field at its peak drive: motional emf " + SiFormat.Format(motional, "V"));
+            c.Notes.Add((v, motional), static n => "moved at " + SiFormat.Format(n.v.Length, "m/s") + " along " + n.v.Normalized() + " through the field at its peak drive: motional emf " + SiFormat.Format(n.motional, "V"));
             response = response with
             {
                 MotionalEmfVolts = motional,
@@ -97,7 +97,9 @@ internal static class EngineMechanics
 
         double braking = perSpeed.Length * v.Length;
         double weight = c.Scenario.Item.MassKilograms * PhysicalConstants.StandardGravity;
-        c.Notes.Add("braking in the resistive limit (an upper bound): " + SiFormat.Format(braking, "N") + " at " + SiFormat.Format(v.Length, "m/s") + ", equal to the weight at " + SiFormat.Format(perSpeed.Length > 0 ? weight / perSpeed.Length : double.PositiveInfinity, "m/s"));
+        c.Notes.Add(
+            (braking, speed: v.Length, weightAt: perSpeed.Length > 0 ? weight / perSpeed.Length : double.PositiveInfinity),
+            static n => "braking in the resistive limit (an upper bound): " + SiFormat.Format(n.braking, "N") + " at " + SiFormat.Format(n.speed, "m/s") + ", equal to the weight at " + SiFormat.Format(n.weightAt, "m/s"));
         return response with
         {
             BrakingForceNewtons = braking,
@@ -191,7 +193,7 @@ internal static class EngineMechanics
 
         double perPulse = energyJoules / first.Count / c.Thermal.HeatCapacityJoulesPerKelvin;
         double settled = c.Start + (perPulse / -Exponential.Minus1(-first.PeriodSeconds / tau));
-        c.Notes.Add("pulse train: if it went on, the item would settle near " + SiFormat.Celsius(settled) + " just after each pulse (each pulse adds " + SiFormat.Format(perPulse, "K") + ", cooling time " + SiFormat.Format(tau, "s") + ")");
+        c.Notes.Add((settled, perPulse, tau), static n => "pulse train: if it went on, the item would settle near " + SiFormat.Celsius(n.settled) + " just after each pulse (each pulse adds " + SiFormat.Format(n.perPulse, "K") + ", cooling time " + SiFormat.Format(n.tau, "s") + ")");
         return settled;
     }
 }

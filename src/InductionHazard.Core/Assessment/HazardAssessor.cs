@@ -100,7 +100,7 @@ public static class HazardAssessor
             Verdict = verdict,
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
-            Summary = Summarize(verdict, governing, policy),
+            LaterSummary = LaterText.From((verdict, governing, policy.SafetyFactor), static f => Summarize(f.verdict, f.governing, f.SafetyFactor)),
             Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact),
             ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
             Mechanisms = new MechanismList(results),
@@ -232,7 +232,7 @@ public static class HazardAssessor
         return null;
     }
 
-    private static string Summarize(Verdict verdict, MechanismResult? governing, HazardPolicy policy)
+    private static string Summarize(Verdict verdict, MechanismResult? governing, double safetyFactor)
     {
         if (governing is null)
         {
@@ -241,8 +241,8 @@ public static class HazardAssessor
 
         return verdict switch
         {
-            Verdict.Clear => "Clear: every margin is at least " + SiFormat.Plain(policy.SafetyFactor) + "; the lowest is " + governing.Mechanism + " at " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
-            Verdict.Caution => "Caution: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " is below the safety factor " + SiFormat.Plain(policy.SafetyFactor) + " (" + governing.Detail + ").",
+            Verdict.Clear => "Clear: every margin is at least " + SiFormat.Plain(safetyFactor) + "; the lowest is " + governing.Mechanism + " at " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
+            Verdict.Caution => "Caution: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " is below the safety factor " + SiFormat.Plain(safetyFactor) + " (" + governing.Detail + ").",
             Verdict.Hazard => "Hazard: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
             _ => "Indeterminate: " + governing.Mechanism + " " + governing.Detail + ".",
         };

@@ -35,8 +35,20 @@ public sealed class InductionAssessment
     /// <summary>The lowest margin over the mechanisms that apply; NaN when the verdict is Indeterminate.</summary>
     public double MinimumMargin { get; init; } = double.NaN;
 
-    /// <summary>The finding in one sentence.</summary>
-    public string Summary { get; init; } = string.Empty;
+    private object _summary = string.Empty;
+
+    /// <summary>The finding in one sentence (written when first read).</summary>
+    public string Summary
+    {
+        get => LaterText.Read(ref _summary);
+        init => _summary = value;
+    }
+
+    /// <summary>The finding, to be written when first read.</summary>
+    internal LaterText LaterSummary
+    {
+        init => _summary = value;
+    }
 
     /// <summary>What to do, in plain words: the action for a Hazard or Indeterminate, what restores the margin for a Caution.</summary>
     public string Action { get; init; } = string.Empty;

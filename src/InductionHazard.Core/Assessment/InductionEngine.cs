@@ -82,10 +82,10 @@ public static class InductionEngine
         double leaving = c.Scenario.Leaves && inField < runs ? c.Scenario.LeaveSeconds : 0;
         double off = on + Math.Min(inField + leaving, runs);
         double end = on + inField + leaving + CoolingTail(c);
-        c.Notes.Add("alternating drive at " + SiFormat.Format(f, "Hz") + ", periodic steady state (switch-on transients not modelled); the item is in the field for " + SiFormat.Format(off - on, "s") + ", then cools to " + SiFormat.Format(end - on, "s"));
+        c.Notes.Add((f, inField: off - on, until: end - on), static n => "alternating drive at " + SiFormat.Format(n.f, "Hz") + ", periodic steady state (switch-on transients not modelled); the item is in the field for " + SiFormat.Format(n.inField, "s") + ", then cools to " + SiFormat.Format(n.until, "s"));
         if (leaving > 0)
         {
-            c.Notes.Add("leaving the field takes " + SiFormat.Format(leaving, "s") + ", counted at the full field (the field falls as the item is carried out, so this overstates)");
+            c.Notes.Add(leaving, static s => "leaving the field takes " + SiFormat.Format(s, "s") + ", counted at the full field (the field falls as the item is carried out, so this overstates)");
         }
 
         InductionResponse drive = Base(c) with
@@ -144,10 +144,10 @@ public static class InductionEngine
             AcResistanceOhms = single ? z.Real : null,
             InductanceHenries = single ? z.Imaginary / omega : c.Ldc,
             TimeConstantSeconds = single ? z.Imaginary / omega / z.Real : c.Ldc / c.Rdc,
-            Regime = Regime(z.Imaginary / z.Real, single ? "omega L / R" : "omega L / R of the whole"),
+            LaterRegime = LaterText.From((ratio: z.Imaginary / z.Real, name: single ? "omega L / R" : "omega L / R of the whole"), static r => Regime(r.ratio, r.name)),
             PeakCurrentAmperes = run.PeakCurrentAmperes,
             NaiveCurrentAmperes = emf.Magnitude / c.Rdc,
-            CurrentSense = LenzSense.Alternating(f, Math.Atan2(z.Imaginary, z.Real), c.Normal, c.FieldDirection),
+            LaterCurrentSense = LaterText.From((f, phase: Math.Atan2(z.Imaginary, z.Real), c.Normal, c.FieldDirection), static s => LenzSense.Alternating(s.f, s.phase, s.Normal, s.FieldDirection)),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
         }).WithForces(mechanics.PeakForce, null, mechanics.PeakTorqueNewtonMeters, mechanics.MeanForce);
@@ -256,9 +256,11 @@ public static class InductionEngine
         }
 
         double fluxChange = (leaving > 0 ? 0 : fluxAtLeave) - flux0;
-        c.Notes.Add("transient drive from " + SiFormat.Format(begin, "s") + " to " + SiFormat.Format(fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(leave - begin, "s")
-            + (leaving > 0 ? ", is carried out over " + SiFormat.Format(leaving, "s") + " (the flux it holds, " + SiFormat.Format(fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
-            + ", then cools to " + SiFormat.Format(end - begin, "s"));
+        c.Notes.Add(
+            (begin, fieldEnd, inField: leave - begin, leaving, fluxAtLeave, until: end - begin),
+            static n => "transient drive from " + SiFormat.Format(n.begin, "s") + " to " + SiFormat.Format(n.fieldEnd, "s") + "; the item is in the field for " + SiFormat.Format(n.inField, "s")
+                + (n.leaving > 0 ? ", is carried out over " + SiFormat.Format(n.leaving, "s") + " (the flux it holds, " + SiFormat.Format(n.fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
+                + ", then cools to " + SiFormat.Format(n.until, "s"));
 
         InductionResponse drive = Base(c) with
         {
@@ -338,18 +340,20 @@ public static class InductionEngine
         double tau = c.Ldc / c.Rdc;
         double rampTime = terms.Min(t => t.Waveform.TimeScales[0].Seconds);
         bool single = c.Paths!.IsSingle;
-        c.Notes.Add("circuit: " + run.Steps + " exact exponential steps over " + c.Modal!.Count + (single ? " mode" : " modes") + ", L = " + SiFormat.Format(c.Ldc, "H") + ", L/R = " + SiFormat.Format(tau, "s") + (single ? string.Empty : " (the leading mode's)"));
+        c.Notes.Add(
+            (run.Steps, modes: c.Modal!.Count, single, c.Ldc, tau),
+            static n => "circuit: " + n.Steps + " exact exponential steps over " + n.modes + (n.single ? " mode" : " modes") + ", L = " + SiFormat.Format(n.Ldc, "H") + ", L/R = " + SiFormat.Format(n.tau, "s") + (n.single ? string.Empty : " (the leading mode's)"));
         return (Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
         {
             Model = single
                 ? "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling"
                 : c.Paths.Description + " (" + c.Paths.Paths!.InductanceMethod + "), exact exponential steps over the modes of the (L, R) pencil with R(T)" + CrossWords(c) + "; lumped heating with rho(T) and cooling",
-            Regime = Regime(tau / rampTime, "L/R / ramp time"),
+            LaterRegime = LaterText.From(tau / rampTime, static ratio => Regime(ratio, "L/R / ramp time")),
             PeakCurrentAmperes = Math.Abs(run.PeakCurrentAmperes),
             NaiveCurrentAmperes = peakEmf / c.Rdc,
             InductiveLimitCurrentAmperes = single ? fluxSwing / c.Ldc : EngineMechanics.InductiveLimit(c.Modal, driveSwing),
             PeriodicSteadyStateCelsius = EngineMechanics.PeriodicSteadyState(c, run.EnergyJoules),
-            CurrentSense = LenzSense.Transient(run.PeakCurrentAmperes, c.Normal, c.FieldDirection),
+            LaterCurrentSense = LaterText.From((run.PeakCurrentAmperes, c.Normal, c.FieldDirection), static s => LenzSense.Transient(s.PeakCurrentAmperes, s.Normal, s.FieldDirection)),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
         }).WithForces(run.PeakForce, run.Impulse, run.PeakTorqueNewtonMeters, null);
@@ -368,7 +372,7 @@ public static class InductionEngine
     {
         if (meltedAt is { } t)
         {
-            c.Notes.Add("the item passed its melting point (" + SiFormat.Celsius(c.MeltingCelsius) + ") at t = " + SiFormat.Format(t, "s") + "; the model stops there, as a molten loop opens");
+            c.Notes.Add((c.MeltingCelsius, t), static n => "the item passed its melting point (" + SiFormat.Celsius(n.MeltingCelsius) + ") at t = " + SiFormat.Format(n.t, "s") + "; the model stops there, as a molten loop opens");
         }
 
         if (budgetExceeded)

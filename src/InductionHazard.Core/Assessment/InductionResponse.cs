@@ -96,8 +96,20 @@ public sealed record InductionResponse
     /// <summary>The skin depth at the drive's significant frequency and the starting temperature, m.</summary>
     public double SkinDepthMeters { get; init; }
 
-    /// <summary>Whether resistance or inductance limits the current, with the ratio that says so.</summary>
-    public string Regime { get; init; } = string.Empty;
+    private object _regime = string.Empty;
+
+    /// <summary>Whether resistance or inductance limits the current, with the ratio that says so (written when first read).</summary>
+    public string Regime
+    {
+        get => LaterText.Read(ref _regime);
+        init => _regime = value;
+    }
+
+    /// <summary>The regime, to be written when first read.</summary>
+    internal LaterText LaterRegime
+    {
+        init => _regime = value;
+    }
 
     /// <summary>The largest force on the item, N (zero in a uniform field; from the induced currents in the source's field gradient).</summary>
     public double PeakForceNewtons { get; init; }
@@ -174,8 +186,20 @@ public sealed record InductionResponse
     /// <summary>|Delta Phi| / L, the current a change much faster than L/R tends to, A (transient drives).</summary>
     public double? InductiveLimitCurrentAmperes { get; init; }
 
-    /// <summary>The sense of the current in plain words (Lenz's law).</summary>
-    public string CurrentSense { get; init; } = string.Empty;
+    private object _currentSense = string.Empty;
+
+    /// <summary>The sense of the current in plain words (Lenz's law; written when first read).</summary>
+    public string CurrentSense
+    {
+        get => LaterText.Read(ref _currentSense);
+        init => _currentSense = value;
+    }
+
+    /// <summary>The sense of the current, to be written when first read.</summary>
+    internal LaterText LaterCurrentSense
+    {
+        init => _currentSense = value;
+    }
 
     /// <summary>The energy dissipated in the item, J.</summary>
     public double EnergyDissipatedJoules { get; init; }

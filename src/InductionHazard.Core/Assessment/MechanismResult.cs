@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Linq;
 using InductionHazard.Criteria;
@@ -49,12 +50,18 @@ public sealed class MechanismResult
     /// <summary>Where the limits come from, in one line.</summary>
     public string Basis => string.Join("; ", Sources);
 
-    /// <summary>The finding in one sentence, or why the mechanism does not apply or cannot be judged.</summary>
-    public string Detail { get; private set; } = string.Empty;
+    private object _detail = string.Empty;
+
+    /// <summary>The finding in one sentence, or why the mechanism does not apply or cannot be judged (written when first read).</summary>
+    public string Detail => LaterText.Read(ref _detail);
 
     /// <summary>A mechanism that cannot arise for this item.</summary>
     public static MechanismResult NotApplicable(HazardMechanism mechanism, string reason) =>
-        new(mechanism) { Applies = false, Detail = reason };
+        new(mechanism) { Applies = false, _detail = reason };
+
+    /// <summary>The same, with the reason written by <paramref name="reason"/> from <paramref name="figures"/> when first read.</summary>
+    internal static MechanismResult NotApplicable<T>(HazardMechanism mechanism, T figures, Func<T, string> reason) =>
+        new(mechanism) { Applies = false, _detail = LaterText.From(figures, reason) };
 
     /// <summary>A mechanism that applies but cannot be judged (a broken assumption, a failed number).</summary>
     public static MechanismResult Indeterminate(HazardMechanism mechanism, IReadOnlyList<string> sources, IEnumerable<ValidityIssue> issues) =>
@@ -63,11 +70,18 @@ public sealed class MechanismResult
             Applies = true,
             Verdict = Criteria.Verdict.Indeterminate,
             Sources = sources,
-            Detail = "cannot be judged: " + string.Join("; ", issues.Select(i => i.Reason)),
+            _detail = "cannot be judged: " + string.Join("; ", issues.Select(i => i.Reason)),
         };
 
     /// <summary>A judged mechanism; the verdict follows from the margin and the safety factor.</summary>
     public static MechanismResult Judged(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, IReadOnlyList<string> sources, string detail) =>
+        Judged(mechanism, quantity, predicted, limit, unit, margin, safetyFactor, sources, (object)detail);
+
+    /// <summary>The same, with the finding written by <paramref name="detail"/> from <paramref name="figures"/> when first read.</summary>
+    internal static MechanismResult Judged<T>(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, IReadOnlyList<string> sources, T figures, Func<T, string> detail) =>
+        Judged(mechanism, quantity, predicted, limit, unit, margin, safetyFactor, sources, LaterText.From(figures, detail));
+
+    private static MechanismResult Judged(HazardMechanism mechanism, string quantity, double predicted, double limit, string unit, double margin, double safetyFactor, IReadOnlyList<string> sources, object detail) =>
         new(mechanism)
         {
             Applies = true,
@@ -78,7 +92,7 @@ public sealed class MechanismResult
             Margin = VerdictRules.Bounded(margin),
             Verdict = VerdictRules.FromMargin(margin, safetyFactor),
             Sources = sources,
-            Detail = detail,
+            _detail = detail,
         };
 
     /// <summary>"Burn: Hazard (margin 0.42)".</summary>

@@ -43,7 +43,7 @@ public static class ModelValidity
     /// <param name="thermal">The lumped heating model of the item.</param>
     /// <param name="issues">Receives the broken assumptions.</param>
     /// <param name="notes">Receives what was checked and holds.</param>
-    public static bool Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    public static bool Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, NoteList notes)
     {
         ConductorMaterial material = item.Material;
         if (material.IsFerromagnetic)
@@ -85,7 +85,7 @@ public static class ModelValidity
         bool ring = item.Loop is RingGeometry;
         if (ratio > MaxGmdToLoopRadius && ring)
         {
-            notes.Add("the section is thick for the thin-ring formula (GMD / loop radius = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + "): filaments over the section");
+            notes.Add(ratio, static ratio => "the section is thick for the thin-ring formula (GMD / loop radius = " + Num(ratio) + " > " + Num(MaxGmdToLoopRadius) + "): filaments over the section");
             return false;
         }
 
@@ -97,13 +97,13 @@ public static class ModelValidity
         }
         else
         {
-            notes.Add("thin-loop inductance (Grover 1946): GMD / loop half-span = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
+            notes.Add(ratio, static ratio => "thin-loop inductance (Grover 1946): GMD / loop half-span = " + Num(ratio) + " <= " + Num(MaxGmdToLoopRadius));
         }
 
         return CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
     }
 
-    private static void CheckBiot(ConductiveItem item, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    private static void CheckBiot(ConductiveItem item, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, NoteList notes)
     {
         ConductorMaterial material = item.Material;
         double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Loop.VolumeCubicMeters, item.Loop.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
@@ -113,50 +113,49 @@ public static class ModelValidity
         }
         else
         {
-            notes.Add("lumped heating: Biot number " + Num(biot) + " < 0.1");
+            notes.Add(biot, static biot => "lumped heating: Biot number " + Num(biot) + " < 0.1");
         }
     }
 
-    private static void CheckTemperatureCoefficient(ConductorMaterial material, ICollection<string> notes)
+    private static void CheckTemperatureCoefficient(ConductorMaterial material, NoteList notes)
     {
         if (!material.TemperatureCoefficientKnown)
         {
-            notes.Add(material.Name + ": no confirmed temperature coefficient; resistivity held at its 20 °C value");
+            notes.Add(material.Name, static name => name + ": no confirmed temperature coefficient; resistivity held at its 20 °C value");
         }
     }
 
-    private static bool CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, ICollection<string> notes)
+    private static bool CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, NoteList notes)
     {
         double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
-        string at = " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(delta, "m") + ")";
         bool ring = item.Loop is RingGeometry;
         if (item.Loop.Section is RoundWire wire)
         {
             if (ring && wire.RadiusMeters > DcModelSkinDepths * delta)
             {
-                notes.Add("the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": filaments over the wire's section resolve the current's crowding");
+                notes.Add((wire.RadiusMeters, frequencyHertz, delta), static n => "the wire radius (" + SiFormat.Format(n.RadiusMeters, "m") + ") exceeds the skin depth" + At(n.frequencyHertz, n.delta) + ": filaments over the wire's section resolve the current's crowding");
                 return false;
             }
 
             if (!ring && !alternating && wire.RadiusMeters > DcModelSkinDepths * delta)
             {
-                notes.Add("the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": concentric shells of the wire resolve its skin effect in time (the loop is large against the wire, so its proximity effect is neglected)");
+                notes.Add((wire.RadiusMeters, frequencyHertz, delta), static n => "the wire radius (" + SiFormat.Format(n.RadiusMeters, "m") + ") exceeds the skin depth" + At(n.frequencyHertz, n.delta) + ": concentric shells of the wire resolve its skin effect in time (the loop is large against the wire, so its proximity effect is neglected)");
                 return false;
             }
 
             if (alternating)
             {
-                notes.Add("skin effect by the Kelvin-function formula: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
+                notes.Add((wire.RadiusMeters, frequencyHertz, delta), static n => "skin effect by the Kelvin-function formula: wire radius / skin depth = " + Num(n.RadiusMeters / n.delta) + At(n.frequencyHertz, n.delta));
             }
             else if (wire.RadiusMeters > DcModelSkinDepths * delta)
             {
                 issues.Add(new ValidityIssue(
-                    "the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + at + ": the current does not fill the wire during the pulse, and the d.c. resistance and inductance do not hold (a filament model is needed)",
+                    "the wire radius (" + SiFormat.Format(wire.RadiusMeters, "m") + ") exceeds the skin depth" + At(frequencyHertz, delta) + ": the current does not fill the wire during the pulse, and the d.c. resistance and inductance do not hold (a filament model is needed)",
                     AffectedResults.Current | AffectedResults.Heating));
             }
             else
             {
-                notes.Add("d.c. resistance and inductance hold: wire radius / skin depth = " + Num(wire.RadiusMeters / delta) + at);
+                notes.Add((wire.RadiusMeters, frequencyHertz, delta), static n => "d.c. resistance and inductance hold: wire radius / skin depth = " + Num(n.RadiusMeters / n.delta) + At(n.frequencyHertz, n.delta));
             }
 
             return true;
@@ -167,21 +166,25 @@ public static class ModelValidity
         {
             if (ring)
             {
-                notes.Add("the band (" + band.Describe() + ") is not thin against the skin depth" + at + ": filaments over the band's section");
+                notes.Add((band, frequencyHertz, delta), static n => "the band (" + n.band.Describe() + ") is not thin against the skin depth" + At(n.frequencyHertz, n.delta) + ": filaments over the band's section");
                 return false;
             }
 
             issues.Add(new ValidityIssue(
-                "the band (" + band.Describe() + ") is not thin against the skin depth" + at + ": the d.c. resistance and inductance do not hold (a filament model is needed)",
+                "the band (" + band.Describe() + ") is not thin against the skin depth" + At(frequencyHertz, delta) + ": the d.c. resistance and inductance do not hold (a filament model is needed)",
                 AffectedResults.Current | AffectedResults.Heating));
         }
         else
         {
-            notes.Add("d.c. resistance and inductance hold: band thickness / skin depth = " + Num(band.ThicknessMeters / delta) + at);
+            notes.Add((band.ThicknessMeters, frequencyHertz, delta), static n => "d.c. resistance and inductance hold: band thickness / skin depth = " + Num(n.ThicknessMeters / n.delta) + At(n.frequencyHertz, n.delta));
         }
 
         return true;
     }
+
+    /// <summary>" at 50 Hz (skin depth 9.3 mm)": where a skin-depth note or issue holds.</summary>
+    private static string At(double frequencyHertz, double skinDepthMeters) =>
+        " at " + SiFormat.Format(frequencyHertz, "Hz") + " (skin depth " + SiFormat.Format(skinDepthMeters, "m") + ")";
 
     /// <summary>Three significant figures, so that a small ratio (a Biot number of 2E-05) does not read as 0.</summary>
     private static string Num(double value) => SiFormat.Plain(value);

@@ -34,8 +34,8 @@ public sealed class ArcCheck : IHazardCheck
         double breakdown = GapBreakdown.Volts(gap);
         double margin = VerdictRules.Margin(breakdown, predicted);
         return MechanismResult.Judged(
-            Mechanism, "gap voltage, peak", predicted, breakdown, "V", margin, policy.SafetyFactor, Sources,
-            "peak gap voltage " + SiFormat.Format(predicted, "V") + " against the breakdown of a " + SiFormat.Format(gap, "m") + " gap in air, " + SiFormat.Format(breakdown, "V")
-            + " (in a flammable atmosphere, hazardous-area rules govern any spark)");
+            Mechanism, "gap voltage, peak", predicted, breakdown, "V", margin, policy.SafetyFactor, Sources, (predicted, gap, breakdown),
+            static f => "peak gap voltage " + SiFormat.Format(f.predicted, "V") + " against the breakdown of a " + SiFormat.Format(f.gap, "m") + " gap in air, " + SiFormat.Format(f.breakdown, "V")
+                + " (in a flammable atmosphere, hazardous-area rules govern any spark)");
     }
 }

@@ -26,7 +26,7 @@ public sealed class AttractionCheck : IHazardCheck
 
         if (response.Item.Contact == ContactKind.Fixed)
         {
-            return MechanismResult.NotApplicable(Mechanism, "fixed item: its mounting takes the pull (" + SiFormat.Format(response.AttractionForceNewtons ?? double.NaN, "N") + "); check the mounting's rating");
+            return MechanismResult.NotApplicable(Mechanism, response.AttractionForceNewtons ?? double.NaN, static pull => "fixed item: its mounting takes the pull (" + SiFormat.Format(pull, "N") + "); check the mounting's rating");
         }
 
         var issues = response.IssuesAffecting(AffectedResults.Field);
@@ -43,8 +43,9 @@ public sealed class AttractionCheck : IHazardCheck
 
         double weight = response.MassKilograms * PhysicalConstants.StandardGravity;
         double margin = VerdictRules.Margin(weight, pull.ForceNewtons);
-        string detail = "pull " + SiFormat.Format(pull.ForceNewtons, "N") + " toward stronger field (" + SiFormat.Format(pull.FieldTesla, "T") + ", gradient " + SiFormat.Format(pull.GradientTeslaPerMeter, "T/m")
-            + ", magnetisation " + SiFormat.Format(pull.MagnetisationTesla, "T") + ") against the item's weight " + SiFormat.Format(weight, "N");
-        return MechanismResult.Judged(Mechanism, "pull", pull.ForceNewtons, weight, "N", margin, policy.SafetyFactor, Sources, detail);
+        return MechanismResult.Judged(
+            Mechanism, "pull", pull.ForceNewtons, weight, "N", margin, policy.SafetyFactor, Sources, (pull, weight),
+            static f => "pull " + SiFormat.Format(f.pull.ForceNewtons, "N") + " toward stronger field (" + SiFormat.Format(f.pull.FieldTesla, "T") + ", gradient " + SiFormat.Format(f.pull.GradientTeslaPerMeter, "T/m")
+                + ", magnetisation " + SiFormat.Format(f.pull.MagnetisationTesla, "T") + ") against the item's weight " + SiFormat.Format(f.weight, "N"));
     }
 }

@@ -50,8 +50,9 @@ public sealed class BurnCheck : IHazardCheck
         double margin = RiseMargin(threshold, peak, start);
         return MechanismResult.Judged(
             Mechanism, "peak surface temperature, brief touch", peak, threshold, "°C", margin, policy.SafetyFactor, new[] { policy.ContactBurn.Source, policy.SourceOf("TouchTime") },
-            "a " + SiFormat.Format(policy.TouchSeconds, "s") + " touch of the item at its peak " + SiFormat.Celsius(peak)
-            + " against the burn threshold " + SiFormat.Celsius(threshold) + " (" + response.Item.Contact + " item: not worn or held)");
+            (policy.TouchSeconds, peak, threshold, response.Item.Contact),
+            static f => "a " + SiFormat.Format(f.TouchSeconds, "s") + " touch of the item at its peak " + SiFormat.Celsius(f.peak)
+                + " against the burn threshold " + SiFormat.Celsius(f.threshold) + " (" + f.Contact + " item: not worn or held)");
     }
 
     private MechanismResult Continuous(InductionResponse response, HazardPolicy policy)
@@ -91,36 +92,42 @@ public sealed class BurnCheck : IHazardCheck
         // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
         // fitted on, beyond which the contact-temperature criterion above governs alone.
         double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double dose);
-        string doseText = doseMargin is { } dm
-            ? "thermal dose added " + SiFormat.Plain(dose) + " CEM43 against " + SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
-            : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
-        string contactText = "held " + SiFormat.Celsius(worst.held) + " for " + SiFormat.Format(worst.seconds, "s") + " against the threshold "
-            + SiFormat.Celsius(worst.threshold) + " for that contact time (margin " + SiFormat.Plain(worst.margin) + ")";
         IReadOnlyList<string> basis = SourcesOf(policy);
-        string place = placeSeconds is { } p
-            ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
-              + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
-            : string.Empty;
         bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
-        if (!contactJudged)
+        var found = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, contactJudged, worst.held, worst.seconds, worst.threshold, worst.margin, start, placeSeconds);
+        if (!contactJudged && doseMargin is null)
         {
-            contactText = "contact temperature not the criterion: the surroundings alone reach its threshold";
-            if (doseMargin is null)
-            {
-                // Neither criterion can judge what the field adds: fail closed.
-                return MechanismResult.Judged(Mechanism, "what the field adds to skin already at the burn threshold", double.NaN, double.NaN, "°C", double.NaN, policy.SafetyFactor, basis,
-                    "cannot be judged: " + doseText + "; " + contactText + place);
-            }
+            // Neither criterion can judge what the field adds: fail closed.
+            return MechanismResult.Judged(Mechanism, "what the field adds to skin already at the burn threshold", double.NaN, double.NaN, "°C", double.NaN, policy.SafetyFactor, basis,
+                found, static f => "cannot be judged: " + f.Dose() + "; " + f.Contact() + f.Place());
         }
 
         if (doseMargin is { } byDose && (double.IsNaN(byDose) || byDose < worst.margin || !contactJudged))
         {
             return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", byDose, policy.SafetyFactor, basis,
-                "skin in contact: " + doseText + "; " + contactText + place);
+                found, static f => "skin in contact: " + f.Dose() + "; " + f.Contact() + f.Place());
         }
 
         return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
-            "skin in contact: " + contactText + "; " + doseText + place);
+            found, static f => "skin in contact: " + f.Contact() + "; " + f.Dose() + f.Place());
+    }
+
+    /// <summary>What a worn or held item's burn check found, for its finding's text (written when first read).</summary>
+    private sealed record ContactFindings(
+        double? DoseMargin, double DoseMinutes, double DoseLimitMinutes, bool ContactJudged, double Held, double Seconds, double Threshold, double ContactMargin, double Start, double? PlaceSeconds)
+    {
+        public string Dose() => DoseMargin is { } dm
+            ? "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
+            : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
+
+        public string Contact() => ContactJudged
+            ? "held " + SiFormat.Celsius(Held) + " for " + SiFormat.Format(Seconds, "s") + " against the threshold " + SiFormat.Celsius(Threshold) + " for that contact time (margin " + SiFormat.Plain(ContactMargin) + ")"
+            : "contact temperature not the criterion: the surroundings alone reach its threshold";
+
+        public string Place() => PlaceSeconds is { } p
+            ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(Start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
+              + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
+            : string.Empty;
     }
 
     /// <summary>

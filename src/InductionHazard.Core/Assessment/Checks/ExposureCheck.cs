@@ -35,7 +35,11 @@ public sealed class ExposureCheck : IHazardCheck
     {
         if (response.Item.Contact is ContactKind.Free or ContactKind.Fixed)
         {
-            return MechanismResult.NotApplicable(Mechanism, "a " + (response.Item.Contact == ContactKind.Free ? "loose" : "fixed") + " item puts no one at its place; judge a person's place with Test-FieldExposure");
+            return MechanismResult.NotApplicable(
+                Mechanism,
+                response.Item.Contact == ContactKind.Free
+                    ? "a loose item puts no one at its place; judge a person's place with Test-FieldExposure"
+                    : "a fixed item puts no one at its place; judge a person's place with Test-FieldExposure");
         }
 
         var issues = response.IssuesAffecting(AffectedResults.Field);
@@ -71,11 +75,16 @@ public sealed class ExposureCheck : IHazardCheck
             return MechanismResult.Indeterminate(Mechanism, sources, new[] { new ValidityIssue("the wearer's own exposure cannot be judged: " + reason, AffectedResults.Field) });
         }
 
-        string who = response.Item.Contact == ContactKind.Skin ? "the wearer" : "the person holding it";
-        string detail = "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + " against the occupational limit "
+        return MechanismResult.Judged(
+            Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, (exposure, response.Item.Contact), static f => Detail(f.exposure, f.Contact));
+    }
+
+    private static string Detail(FieldExposure exposure, ContactKind contact)
+    {
+        string who = contact == ContactKind.Skin ? "the wearer" : "the person holding it";
+        return "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + " against the occupational limit "
             + SiFormat.Format(exposure.LimitTesla, "T") + (exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T; a site policy may set StaticExposureLimit up to 8 T where the environment is controlled)" : string.Empty)
             + "; it applies with or without the item";
-        return MechanismResult.Judged(Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, detail);
     }
 
     /// <summary>The occupational exposure at a place, found once per source, place and policy.</summary>

@@ -27,7 +27,7 @@ public sealed class ForceCheck : IHazardCheck
 
         if (response.Item.Contact == ContactKind.Fixed)
         {
-            return MechanismResult.NotApplicable(Mechanism, "fixed item: its mounting takes the force (" + SiFormat.Format(response.PeakForceNewtons, "N") + " at peak); check the mounting's rating");
+            return MechanismResult.NotApplicable(Mechanism, response.PeakForceNewtons, static force => "fixed item: its mounting takes the force (" + SiFormat.Format(force, "N") + " at peak); check the mounting's rating");
         }
 
         var issues = response.IssuesAffecting(AffectedResults.Current);
@@ -52,16 +52,17 @@ public sealed class ForceCheck : IHazardCheck
         {
             return MechanismResult.Judged(
                 Mechanism, "launch speed of the loose item", launch, policy.LaunchSpeedLimit, "m/s", VerdictRules.Margin(policy.LaunchSpeedLimit, launch), policy.SafetyFactor,
-                new[] { Standards.ForceAgainstWeight, policy.SourceOf("LaunchSpeedLimit") },
-                "a loose item would leave at " + SiFormat.Format(launch, "m/s") + " against the site's limit " + SiFormat.Format(policy.LaunchSpeedLimit, "m/s")
-                + " (peak force " + SiFormat.Format(force, "N") + " against its weight " + SiFormat.Format(weight, "N") + ")");
+                new[] { Standards.ForceAgainstWeight, policy.SourceOf("LaunchSpeedLimit") }, (launch, policy.LaunchSpeedLimit, force, weight),
+                static f => "a loose item would leave at " + SiFormat.Format(f.launch, "m/s") + " against the site's limit " + SiFormat.Format(f.LaunchSpeedLimit, "m/s")
+                    + " (peak force " + SiFormat.Format(f.force, "N") + " against its weight " + SiFormat.Format(f.weight, "N") + ")");
         }
 
-        string detail = (braking > response.PeakForceNewtons
-                ? "braking force " + SiFormat.Format(braking, "N") + " against the motion (equal to the weight at " + SiFormat.Format(response.SpeedForWeightMetersPerSecond ?? double.NaN, "m/s") + ")"
-                : "peak force " + SiFormat.Format(response.PeakForceNewtons, "N") + " along " + Directions.Describe(response.PeakForceDirection))
-            + " against the item's weight " + SiFormat.Format(weight, "N")
-            + (response.LaunchSpeedMetersPerSecond is { } v ? "; a loose item would leave at " + SiFormat.Format(v, "m/s") : string.Empty);
-        return MechanismResult.Judged(Mechanism, braking > response.PeakForceNewtons ? "braking force" : "peak force", force, weight, "N", margin, policy.SafetyFactor, Sources, detail);
+        return MechanismResult.Judged(
+            Mechanism, braking > response.PeakForceNewtons ? "braking force" : "peak force", force, weight, "N", margin, policy.SafetyFactor, Sources, (response, braking, weight),
+            static f => (f.braking > f.response.PeakForceNewtons
+                    ? "braking force " + SiFormat.Format(f.braking, "N") + " against the motion (equal to the weight at " + SiFormat.Format(f.response.SpeedForWeightMetersPerSecond ?? double.NaN, "m/s") + ")"
+                    : "peak force " + SiFormat.Format(f.response.PeakForceNewtons, "N") + " along " + Directions.Describe(f.response.PeakForceDirection))
+                + " against the item's weight " + SiFormat.Format(f.weight, "N")
+                + (f.response.LaunchSpeedMetersPerSecond is { } v ? "; a loose item would leave at " + SiFormat.Format(v, "m/s") : string.Empty));
     }
 }

@@ -32,13 +32,18 @@ public sealed class OverheatCheck : IHazardCheck
         double start = response.InitialTemperatureCelsius;
         double peak = response.PeakTemperatureCelsius;
         double margin = VerdictRules.Margin(melting - start, peak - start);
-        string detail = "peak temperature " + SiFormat.Celsius(peak) + " against the melting point of " + response.Item.Material.Name
-            + " " + SiFormat.Celsius(melting) + " (margin on the rise from " + SiFormat.Celsius(start) + ")"
+        return MechanismResult.Judged(Mechanism, "peak temperature", peak, melting, "°C", margin, policy.SafetyFactor, Sources, response, Detail);
+    }
+
+    private static string Detail(InductionResponse response)
+    {
+        double melting = response.Item.Material.MeltingCelsius;
+        return "peak temperature " + SiFormat.Celsius(response.PeakTemperatureCelsius) + " against the melting point of " + response.Item.Material.Name
+            + " " + SiFormat.Celsius(melting) + " (margin on the rise from " + SiFormat.Celsius(response.InitialTemperatureCelsius) + ")"
             + (response.MeltingReachedSeconds is { } t ? "; melting reached at t = " + SiFormat.Format(t, "s") + ", beyond which the model is notional" : string.Empty)
             + (response.MeltThroughSeconds is { } through
                 ? "; its latent heat (" + SiFormat.Format(response.Item.Material.LatentHeatJoulesPerKilogram, "J/kg") + ") would take " + SiFormat.Format(through, "s")
                   + " more to melt it through if the power there held, and the loop would then open"
                 : string.Empty);
-        return MechanismResult.Judged(Mechanism, "peak temperature", peak, melting, "°C", margin, policy.SafetyFactor, Sources, detail);
     }
 }

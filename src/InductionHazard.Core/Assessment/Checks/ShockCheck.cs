@@ -70,9 +70,8 @@ public sealed class ShockCheck : IHazardCheck
         }
 
         return MechanismResult.Judged(
-            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, SourcesOf(policy, alternating),
-            quantity + " " + SiFormat.Format(predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(limit, "V")
-            + (alternating ? " rms" : " d.c."));
+            Mechanism, quantity, predicted, limit, "V", margin, policy.SafetyFactor, SourcesOf(policy, alternating), (quantity, predicted, limit, alternating),
+            static f => f.quantity + " " + SiFormat.Format(f.predicted, "V") + " against the extra-low-voltage limit " + SiFormat.Format(f.limit, "V") + (f.alternating ? " rms" : " d.c."));
     }
 
     /// <summary>
@@ -102,28 +101,35 @@ public sealed class ShockCheck : IHazardCheck
         }
 
         string[] sources = { policy.SourceOf("ImpulseChargeLimit"), policy.SourceOf("BodyResistance") };
-        string pulse = "a " + SiFormat.Format(impulse.WidthSeconds, "s") + " pulse of peak " + SiFormat.Format(peakVolts, "V") + " across the gap drives ";
-        string steady = "; the " + SiFormat.Format(policy.DirectVoltageLimit, "V") + " d.c. limit is for steady voltages";
+        var pulse = new PulseFigures(impulse.WidthSeconds, peakVolts, policy.DirectVoltageLimit, r, charge, energy, policy.ImpulseChargeLimit);
         double chargeMargin = policy.ImpulseChargeLimit / charge, switchMargin = EnergyRuleVolts / peakVolts;
         if (chargeMargin <= switchMargin)
         {
             return MechanismResult.Judged(
-                HazardMechanism.Shock, "charge of a pulse of at most 10 ms through the body", charge, policy.ImpulseChargeLimit, "C", chargeMargin, policy.SafetyFactor, sources,
-                pulse + SiFormat.Format(charge, "C") + " through a body of " + SiFormat.Format(r, "Ω") + ", against the " + SiFormat.Format(policy.ImpulseChargeLimit, "C")
-                + " a person may take from a discharge" + steady);
+                HazardMechanism.Shock, "charge of a pulse of at most 10 ms through the body", charge, policy.ImpulseChargeLimit, "C", chargeMargin, policy.SafetyFactor, sources, pulse,
+                static f => f.Pulse() + SiFormat.Format(f.Charge, "C") + " through a body of " + SiFormat.Format(f.BodyOhms, "Ω") + ", against the " + SiFormat.Format(f.ChargeLimit, "C")
+                    + " a person may take from a discharge" + f.Steady());
         }
 
         double energyMargin = Math.Sqrt(ImpulseEnergyLimitJoules / energy);
         if (energyMargin > switchMargin)
         {
             return MechanismResult.Judged(
-                HazardMechanism.Shock, "energy of a pulse of at most 10 ms in the body", energy, ImpulseEnergyLimitJoules, "J", energyMargin, policy.SafetyFactor, sources,
-                pulse + SiFormat.Format(energy, "J") + " into a body of " + SiFormat.Format(r, "Ω") + ", against the " + SiFormat.Format(ImpulseEnergyLimitJoules, "J")
-                + " a person may take from a discharge above 15 kV (the margin is on the drive: the energy grows with its square)" + steady);
+                HazardMechanism.Shock, "energy of a pulse of at most 10 ms in the body", energy, ImpulseEnergyLimitJoules, "J", energyMargin, policy.SafetyFactor, sources, pulse,
+                static f => f.Pulse() + SiFormat.Format(f.Energy, "J") + " into a body of " + SiFormat.Format(f.BodyOhms, "Ω") + ", against the " + SiFormat.Format(ImpulseEnergyLimitJoules, "J")
+                    + " a person may take from a discharge above 15 kV (the margin is on the drive: the energy grows with its square)" + f.Steady());
         }
 
         return MechanismResult.Judged(
-            HazardMechanism.Shock, "peak of a pulse of at most 10 ms, within its charge limit", peakVolts, EnergyRuleVolts, "V", switchMargin, policy.SafetyFactor, sources,
-            pulse + SiFormat.Format(charge, "C") + ", within its charge limit up to a peak of 15 kV, above which its energy would exceed " + SiFormat.Format(ImpulseEnergyLimitJoules, "J") + steady);
+            HazardMechanism.Shock, "peak of a pulse of at most 10 ms, within its charge limit", peakVolts, EnergyRuleVolts, "V", switchMargin, policy.SafetyFactor, sources, pulse,
+            static f => f.Pulse() + SiFormat.Format(f.Charge, "C") + ", within its charge limit up to a peak of 15 kV, above which its energy would exceed " + SiFormat.Format(ImpulseEnergyLimitJoules, "J") + f.Steady());
+    }
+
+    /// <summary>What the impulse rule found, for its finding's text (written when first read).</summary>
+    private sealed record PulseFigures(double WidthSeconds, double PeakVolts, double DirectLimitVolts, double BodyOhms, double Charge, double Energy, double ChargeLimit)
+    {
+        public string Pulse() => "a " + SiFormat.Format(WidthSeconds, "s") + " pulse of peak " + SiFormat.Format(PeakVolts, "V") + " across the gap drives ";
+
+        public string Steady() => "; the " + SiFormat.Format(DirectLimitVolts, "V") + " d.c. limit is for steady voltages";
     }
 }

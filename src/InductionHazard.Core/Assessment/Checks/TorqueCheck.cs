@@ -48,7 +48,8 @@ public sealed class TorqueCheck : IHazardCheck
 
         double gravitational = response.MassKilograms * PhysicalConstants.StandardGravity * response.Item.Loop.LargestDimensionMeters / 2;
         double margin = VerdictRules.Margin(gravitational, response.PeakTorqueNewtonMeters);
-        string detail = (magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(response.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(gravitational, "N·m");
-        return MechanismResult.Judged(Mechanism, "peak torque", response.PeakTorqueNewtonMeters, gravitational, "N·m", margin, policy.SafetyFactor, Sources, detail);
+        return MechanismResult.Judged(
+            Mechanism, "peak torque", response.PeakTorqueNewtonMeters, gravitational, "N·m", margin, policy.SafetyFactor, Sources, (magnetised, response.PeakTorqueNewtonMeters, gravitational),
+            static f => (f.magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(f.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(f.gravitational, "N·m"));
     }
 }
