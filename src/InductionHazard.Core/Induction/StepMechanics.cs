@@ -73,7 +73,10 @@ internal sealed class StepMechanics
     /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
     public void Record(double[] z, double driveAt, double t, double h)
     {
-        if (_values is not { } values)
+        // An inert item's force and torque are zero at every step while its amplitudes are finite (every coupling and
+        // field is zero), so the drives are not read; amplitudes that are not finite still go through, and carry NaN
+        // into the impulse and the torque as they always did.
+        if (_values is not { } values || (Inert && Finite.All(z)))
         {
             return;
         }
