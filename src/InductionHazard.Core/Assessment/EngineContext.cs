@@ -221,7 +221,7 @@ internal sealed class EngineContext
 
     public double MeltingCelsius => Scenario.Item.Material.MeltingCelsius;
 
-    public NoteList Notes { get; } = new();
+    public TextList Notes { get; } = new();
 
     public List<ValidityIssue> Issues { get; } = new();
 

@@ -46,7 +46,8 @@ public static class HazardAssessor
         // A Hazard stands even beside mechanisms that could not be judged: its smallest judged margin is the minimum.
         double minimum = verdict == Verdict.Indeterminate || applicable.Length == 0 ? double.NaN : SmallestJudgedMargin(applicable);
 
-        var reasons = new List<string>();
+        // A mechanism's reason is its finding, written when first read (see LaterText); a broken assumption's is text already.
+        var reasons = new TextList();
         if (applicable.Length == 0)
         {
             reasons.Add("no mechanism applies that this version can check");
@@ -57,7 +58,10 @@ public static class HazardAssessor
         {
             foreach (ValidityIssue issue in response.ValidityIssues)
             {
-                AddOnce(reasons, issue.Reason);
+                if (!reasons.Contains(issue.Reason))
+                {
+                    reasons.Add(issue.Reason);
+                }
             }
 
             // A mechanism stopped by a reason of its own (not one of the response's), such as an exposure the
@@ -66,7 +70,7 @@ public static class HazardAssessor
             {
                 if (r.Verdict == Verdict.Indeterminate && !response.ValidityIssues.Any(i => r.Detail.Contains(i.Reason)))
                 {
-                    reasons.Add(r.Mechanism + ": " + r.Detail);
+                    reasons.Add(r, Finding);
                 }
             }
         }
@@ -75,7 +79,7 @@ public static class HazardAssessor
         {
             if (r.Verdict is Verdict.Caution or Verdict.Hazard)
             {
-                reasons.Add(r.Mechanism + ": " + r.Detail);
+                reasons.Add(r, Finding);
             }
         }
 
@@ -118,7 +122,7 @@ public static class HazardAssessor
             PeakCurrentAmperes = Trusted(response, AffectedResults.Current, response.PeakCurrentAmperes),
             PeakTemperatureCelsius = Trusted(response, AffectedResults.Current | AffectedResults.Heating, response.PeakTemperatureCelsius),
             EnergyDissipatedJoules = Trusted(response, AffectedResults.Current | AffectedResults.Heating, response.EnergyDissipatedJoules),
-            Reasons = new TextList(reasons),
+            Reasons = reasons,
             Standards = new TextList(standards),
             Cautions = new TextList(Criteria.Cautions.For(standards)),
             PolicyName = policy.Name,
@@ -162,6 +166,9 @@ public static class HazardAssessor
 
         return minimum;
     }
+
+    /// <summary>"Burn: skin in contact: ...": a mechanism's finding as a reason.</summary>
+    private static string Finding(MechanismResult r) => r.Mechanism + ": " + r.Detail;
 
     /// <summary>Adds a text not yet in the list (the list keeps the order of first appearance).</summary>
     private static void AddOnce(List<string> list, string text)

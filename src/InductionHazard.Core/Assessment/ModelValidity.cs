@@ -43,7 +43,7 @@ public static class ModelValidity
     /// <param name="thermal">The lumped heating model of the item.</param>
     /// <param name="issues">Receives the broken assumptions.</param>
     /// <param name="notes">Receives what was checked and holds.</param>
-    public static bool Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, NoteList notes)
+    public static bool Check(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, TextList notes)
     {
         ConductorMaterial material = item.Material;
         if (material.IsFerromagnetic)
@@ -103,7 +103,7 @@ public static class ModelValidity
         return CheckSkinDepth(item, frequencyHertz, alternating, startCelsius, issues, notes);
     }
 
-    private static void CheckBiot(ConductiveItem item, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, NoteList notes)
+    private static void CheckBiot(ConductiveItem item, double startCelsius, LumpedThermalModel thermal, ICollection<ValidityIssue> issues, TextList notes)
     {
         ConductorMaterial material = item.Material;
         double biot = LumpedThermalModel.BiotNumber(thermal.TransferCoefficient(startCelsius), item.Loop.VolumeCubicMeters, item.Loop.SurfaceSquareMeters, material.ThermalConductivityWattsPerMeterKelvin);
@@ -117,7 +117,7 @@ public static class ModelValidity
         }
     }
 
-    private static void CheckTemperatureCoefficient(ConductorMaterial material, NoteList notes)
+    private static void CheckTemperatureCoefficient(ConductorMaterial material, TextList notes)
     {
         if (!material.TemperatureCoefficientKnown)
         {
@@ -125,7 +125,7 @@ public static class ModelValidity
         }
     }
 
-    private static bool CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, NoteList notes)
+    private static bool CheckSkinDepth(ConductiveItem item, double frequencyHertz, bool alternating, double startCelsius, ICollection<ValidityIssue> issues, TextList notes)
     {
         double delta = SkinEffect.SkinDepthMeters(item.Material.ResistivityAt(startCelsius), frequencyHertz, item.Material.RelativePermeability);
         bool ring = item.Loop is RingGeometry;

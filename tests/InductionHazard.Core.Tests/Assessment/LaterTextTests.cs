@@ -18,7 +18,7 @@ public class LaterTextTests
     public void ANoteWithFiguresIsWrittenWhenFirstReadAndOnlyOnce()
     {
         int written = 0;
-        var notes = new NoteList();
+        var notes = new TextList();
         notes.Add("first");
         notes.Add(2.5, x =>
         {
@@ -38,9 +38,9 @@ public class LaterTextTests
     }
 
     [Fact]
-    public void ANoteListGrowsPastItsFirstRoom()
+    public void ATextListGrowsPastItsFirstRoom()
     {
-        var notes = new NoteList();
+        var notes = new TextList();
         for (int k = 0; k < 40; k++)
         {
             if (k % 2 == 0)
@@ -54,6 +54,16 @@ public class LaterTextTests
         }
 
         Assert.Equal(Enumerable.Range(0, 40).Select(k => "note " + k), notes);
+
+        // The list's own searches and copies read the later entries as text; from outside it cannot be changed.
+        Assert.Contains("note 31", notes);
+        Assert.Equal(31, notes.IndexOf("note 31"));
+        Assert.Equal(-1, notes.IndexOf("note 40"));
+        var copy = new string[41];
+        notes.CopyTo(copy, 1);
+        Assert.Equal("note 39", copy[40]);
+        Assert.Throws<NotSupportedException>(() => ((ICollection<string>)notes).Add("note 40"));
+        Assert.Throws<NotSupportedException>(() => ((IList<string>)notes)[0] = "changed");
     }
 
     [Fact]
