@@ -32,12 +32,17 @@ public sealed class SinusoidalPathSolver
     /// </summary>
     public static Func<double, SteadyState> Loop(Func<double, Complex> impedanceAtCelsius, Complex emfPhasor)
     {
-        // Squared magnitudes as sums of squares: the library's magnitude guards against overflow that volts and ohms never reach.
+        // Squared magnitudes as sums of squares, and E / Z as E conj(Z) / |Z|^2 with one division shared with the power:
+        // the library's magnitude and quotient guard against overflow that volts and ohms never reach.
         double e2 = (emfPhasor.Real * emfPhasor.Real) + (emfPhasor.Imaginary * emfPhasor.Imaginary);
         return celsius =>
         {
             Complex z = impedanceAtCelsius(celsius);
-            return new SteadyState(0.5 * e2 * z.Real / ((z.Real * z.Real) + (z.Imaginary * z.Imaginary)), emfPhasor / z);
+            double inverse = 1 / ((z.Real * z.Real) + (z.Imaginary * z.Imaginary));
+            var current = new Complex(
+                ((emfPhasor.Real * z.Real) + (emfPhasor.Imaginary * z.Imaginary)) * inverse,
+                ((emfPhasor.Imaginary * z.Real) - (emfPhasor.Real * z.Imaginary)) * inverse);
+            return new SteadyState(0.5 * e2 * z.Real * inverse, current);
         };
     }
 
@@ -52,7 +57,8 @@ public sealed class SinusoidalPathSolver
     /// <param name="stopAboveCelsius">The melting point: the run stops when the item passes it (a molten loop opens).</param>
     public SinusoidalRun Run(Complex emfPhasor, double frequencyHertz, double fieldOn, double fieldOff, double exposureEnd, double celsius0, CancellationToken cancellation, double stopAboveCelsius = double.PositiveInfinity)
     {
-        double peakCurrent = 0;
+        // The largest squared current magnitude: the root is taken once at the end (it is monotone, so the same peak).
+        double peakSquared = 0;
 
         // The last temperature asked and its state: once the item settles, a step's start is the last step's prediction
         // and the same temperature is asked again (the state depends on the temperature alone).
@@ -72,7 +78,7 @@ public sealed class SinusoidalPathSolver
 
             SteadyState state = asked;
             Complex i = state.CurrentPhasor;
-            peakCurrent = Math.Max(peakCurrent, Math.Sqrt((i.Real * i.Real) + (i.Imaginary * i.Imaginary)));
+            peakSquared = Math.Max(peakSquared, (i.Real * i.Real) + (i.Imaginary * i.Imaginary));
             return state.PowerWatts;
         }
 
@@ -90,7 +96,7 @@ public sealed class SinusoidalPathSolver
         {
             CurrentPhasor = current,
             Impedance = emfPhasor / current,
-            PeakCurrentAmperes = Math.Max(peakCurrent, current.Magnitude),
+            PeakCurrentAmperes = Math.Max(Math.Sqrt(peakSquared), current.Magnitude),
             Circuit = new PeriodSamples(emfPhasor, current, frequencyHertz, fieldOn, celsius0, SamplesPerPeriod),
             Heating = heating,
             EnergyJoules = on.EnergyJoules,

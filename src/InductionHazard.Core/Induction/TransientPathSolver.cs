@@ -201,15 +201,16 @@ public sealed class TransientPathSolver
 
                 // s(T) at the mid-step temperature: predicted with the last step's power, then corrected once more
                 // only when the step's own energy moves the end temperature by more than a hundredth of the step limit.
-                double predicted = _thermal.Advance(temperature, lastPower, h, conductance);
+                var heat = new LumpedThermalModel.Step(_thermal, h, conductance);
+                double predicted = heat.Advance(temperature, lastPower);
                 double s = _scaleAt(0.5 * (temperature + predicted));
                 double stepEnergy = Sweep(z, work, s, h, cross);
-                double next = _thermal.Advance(temperature, stepEnergy / h, h, conductance);
+                double next = heat.Advance(temperature, stepEnergy / h);
                 if (Math.Abs(next - predicted) > 0.01 * MaxStepKelvin)
                 {
                     s = _scaleAt(0.5 * (temperature + next));
                     stepEnergy = Sweep(z, work, s, h, cross);
-                    next = _thermal.Advance(temperature, stepEnergy / h, h, conductance);
+                    next = heat.Advance(temperature, stepEnergy / h);
                 }
 
                 if (Math.Abs(next - temperature) > MaxStepKelvin && h > 1e-15 * Math.Max(1, Math.Abs(t)))

@@ -100,10 +100,11 @@ public static class HeatingIntegrator
 
             double p0 = power(t, temperature);
             double g = model.Conductance(temperature);
-            double predicted = model.Advance(temperature, p0, h, g);
+            var step = new LumpedThermalModel.Step(model, h, g);
+            double predicted = step.Advance(temperature, p0);
             double p1 = power(t + h, predicted);
             double mean = 0.5 * (p0 + p1);
-            double next = model.Advance(temperature, mean, h, g);
+            double next = step.Advance(temperature, mean);
             double error = Math.Abs(next - predicted);
             bool shortest = !(h > 1e-9 * Math.Max(1, t1 - t0));
             if (!shortest && (Math.Abs(next - temperature) > maxStepKelvin || error > ErrorToleranceKelvin))

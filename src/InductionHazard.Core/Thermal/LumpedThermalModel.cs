@@ -62,16 +62,36 @@ public sealed class LumpedThermalModel
     public double Advance(double celsius, double powerWatts, double dtSeconds) => Advance(celsius, powerWatts, dtSeconds, Conductance(celsius));
 
     /// <summary>The same, with the conductance at the starting temperature already known (<see cref="Conductance"/>).</summary>
-    internal double Advance(double celsius, double powerWatts, double dtSeconds, double g)
+    internal double Advance(double celsius, double powerWatts, double dtSeconds, double g) => new Step(this, dtSeconds, g).Advance(celsius, powerWatts);
+
+    /// <summary>
+    /// One step of <see cref="LumpedThermalModel.Advance(double, double, double)"/> from a temperature whose conductance is known, for
+    /// several powers: an integrator's predictor and corrector share the step's decay 1 - e^(-G dt / m c), found once.
+    /// </summary>
+    internal readonly struct Step
     {
-        double net = powerWatts - (g * (celsius - Environment.AmbientCelsius));
-        double rate = g * dtSeconds / HeatCapacityJoulesPerKelvin;
-        if (rate < 1e-12)
+        private readonly LumpedThermalModel _model;
+        private readonly double _dt;
+        private readonly double _g;
+        private readonly double _decay;
+        private readonly bool _linear;
+
+        public Step(LumpedThermalModel model, double dtSeconds, double g)
         {
-            return celsius + (net * dtSeconds / HeatCapacityJoulesPerKelvin);
+            _model = model;
+            _dt = dtSeconds;
+            _g = g;
+            double rate = g * dtSeconds / model.HeatCapacityJoulesPerKelvin;
+            _linear = rate < 1e-12;
+            _decay = _linear ? 0 : -Quantities.Exponential.Minus1(-rate);
         }
 
-        return celsius + (net / g * -Quantities.Exponential.Minus1(-rate));
+        /// <summary>The temperature at the step's end with a constant power over it.</summary>
+        public double Advance(double celsius, double powerWatts)
+        {
+            double net = powerWatts - (_g * (celsius - _model.Environment.AmbientCelsius));
+            return _linear ? celsius + (net * _dt / _model.HeatCapacityJoulesPerKelvin) : celsius + (net / _g * _decay);
+        }
     }
 
     /// <summary>
