@@ -45,7 +45,19 @@ public sealed class TextList : ReadOnlyCollection<string>
 
         public Entries(IEnumerable<string> items)
         {
-            _entries = items.ToArray<object>();
+            if (items is IList<string> list)
+            {
+                _entries = new object[list.Count];
+                for (int i = 0; i < _entries.Length; i++)
+                {
+                    _entries[i] = list[i];
+                }
+            }
+            else
+            {
+                _entries = items.ToArray<object>();
+            }
+
             _count = _entries.Length;
         }
 

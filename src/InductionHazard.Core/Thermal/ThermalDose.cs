@@ -254,7 +254,8 @@ public static class ThermalDose
             double tb = times[i];
             double rb = rises[i];
             double cb = startCelsius + (k * rb);
-            double wb = Weight(cb);
+            // A sample at the same rise as the last (a plateau's, which the heating samples hourly) has its weight.
+            double wb = rb == ra ? wa : Weight(cb);
             double span = tb - ta;
             if (span > 0)
             {
