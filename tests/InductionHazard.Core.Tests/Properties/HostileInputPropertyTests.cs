@@ -88,8 +88,27 @@ public class HostileInputPropertyTests
 
             assessed++;
             NeverAnUnfoundedClear(a);
+            EveryTextReads(a);
         }, seed: seed, iter: iterations, threads: 1);
         return (assessed, refused);
+    }
+
+    /// <summary>
+    /// Every text of the assessment and its response reads as words: they are written when first read, after the
+    /// assessment is made, so a writer that failed on an odd figure would fail here and not in a report.
+    /// </summary>
+    private static void EveryTextReads(InductionAssessment a)
+    {
+        var texts = new List<string> { a.Summary, a.Action, a.Reasons.ToString(), a.Mechanisms.ToString(), a.Response.Regime, a.Response.CurrentSense, a.Response.ModelNotes.ToString() ?? string.Empty };
+        texts.AddRange(a.Mechanisms.Select(m => m.Detail));
+        texts.AddRange(a.Response.ModelNotes);
+        foreach (string text in texts)
+        {
+            Assert.NotNull(text);
+            Assert.DoesNotContain("InductionHazard.", text, StringComparison.Ordinal);
+        }
+
+        Assert.NotEmpty(a.Summary);
     }
 
     /// <summary>Clear only when every margin is a number at least the safety factor; a NaN minimum margin only beside Indeterminate.</summary>
