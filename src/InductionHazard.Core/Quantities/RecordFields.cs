@@ -13,14 +13,17 @@ namespace InductionHazard.Quantities;
 /// </summary>
 public sealed class RecordFields
 {
-    private readonly Dictionary<string, object?> _values = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, string> _keyByName = new(StringComparer.Ordinal);
+    // Each field's value with its name as given, by its normalized name.
+    private readonly Dictionary<string, (string Name, object? Value)> _values = new(StringComparer.Ordinal);
     private readonly HashSet<string> _used = new(StringComparer.Ordinal);
-    private readonly List<FieldError> _errors = new();
-    private readonly List<KeyValuePair<string, object?>> _shadowed = new();
-    private readonly HashSet<string> _conflictsReported = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, string> _unitByKey = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, string> _defaultUnits = new(StringComparer.Ordinal);
+
+    // Made when first needed: most records have no errors, no second spelling of a field and no units in their names,
+    // and a row is read by several readers (its name, the item, its placement), each with its own fields.
+    private List<FieldError>? _errors;
+    private List<KeyValuePair<string, object?>>? _shadowed;
+    private HashSet<string>? _conflictsReported;
+    private Dictionary<string, string>? _unitByKey;
+    private Dictionary<string, string>? _defaultUnits;
 
     /// <summary>The units a name may carry after an underscore ("Diameter_mm"): a short list, so that "Holder_A" stays a name.</summary>
     private static readonly HashSet<string> UnderscoreUnits = new(StringComparer.Ordinal) { "mm", "cm", "um", "µm", "m", "in", "ms", "us", "s", "min", "degC", "mT", "uT", "kA", "Hz", "kHz" };
@@ -37,7 +40,7 @@ public sealed class RecordFields
         {
             foreach (KeyValuePair<string, string> unit in defaultUnits)
             {
-                _defaultUnits[Normalize(unit.Key)] = unit.Value;
+                (_defaultUnits ??= new(StringComparer.Ordinal))[Normalize(unit.Key)] = unit.Value;
             }
         }
 
@@ -46,26 +49,25 @@ public sealed class RecordFields
             (string name, string? unitOfName) = SplitUnit(given.Key);
             var pair = new KeyValuePair<string, object?>(name, given.Value);
             string key = Normalize(pair.Key);
-            if (unitOfName is not null && !_unitByKey.ContainsKey(key))
+            if (unitOfName is not null && !(_unitByKey?.ContainsKey(key) ?? false))
             {
-                _unitByKey[key] = unitOfName;
+                (_unitByKey ??= new(StringComparer.Ordinal))[key] = unitOfName;
             }
 
             if (!_values.ContainsKey(key))
             {
-                _values[key] = pair.Value;
-                _keyByName[key] = pair.Key;
+                _values[key] = (pair.Key, pair.Value);
             }
             else
             {
                 // A second column that means the same field ("WireDiameter" and "Wire Diameter"): kept to be checked.
-                _shadowed.Add(pair);
+                (_shadowed ??= new()).Add(pair);
             }
         }
     }
 
     /// <summary>The problems found so far.</summary>
-    public IReadOnlyList<FieldError> Errors => _errors;
+    public IReadOnlyList<FieldError> Errors => (IReadOnlyList<FieldError>?)_errors ?? Array.Empty<FieldError>();
 
     /// <summary>True when a field (or one of its aliases) holds a non-empty value.</summary>
     public bool Has(string field, params string[] aliases) => Find(field, aliases) is not null;
@@ -86,7 +88,7 @@ public sealed class RecordFields
             string? unit = UnitOf(field, aliases);
             if (unit is null)
             {
-                _errors.Add(new FieldError(
+                (_errors ??= new()).Add(new FieldError(
                     field,
                     "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + text.Trim() + " " + QuantityKindInfo.Of(kind).CanonicalSymbol + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
                     "MissingUnit"));
@@ -95,7 +97,7 @@ public sealed class RecordFields
 
             if (!QuantityParser.IsUnitOf(unit, kind))
             {
-                _errors.Add(new FieldError(field, "the unit '" + unit + "' named for this column is not a unit of " + QuantityKindInfo.Of(kind).Description.Substring(QuantityKindInfo.Of(kind).Description.IndexOf(' ') + 1), "InvalidQuantity"));
+                (_errors ??= new()).Add(new FieldError(field, "the unit '" + unit + "' named for this column is not a unit of " + QuantityKindInfo.Of(kind).Description.Substring(QuantityKindInfo.Of(kind).Description.IndexOf(' ') + 1), "InvalidQuantity"));
                 return null;
             }
 
@@ -107,7 +109,7 @@ public sealed class RecordFields
             return value;
         }
 
-        _errors.Add(new FieldError(field, error!, "InvalidQuantity"));
+        (_errors ??= new()).Add(new FieldError(field, error!, "InvalidQuantity"));
         return null;
     }
 
@@ -117,7 +119,7 @@ public sealed class RecordFields
         foreach (string name in new[] { field }.Concat(aliases))
         {
             string key = Normalize(name);
-            if (_values.TryGetValue(key, out object? v) && !IsEmpty(v) && _unitByKey.TryGetValue(key, out string? unit))
+            if (_values.TryGetValue(key, out var v) && !IsEmpty(v.Value) && _unitByKey is not null && _unitByKey.TryGetValue(key, out string? unit))
             {
                 return unit;
             }
@@ -125,7 +127,7 @@ public sealed class RecordFields
 
         foreach (string name in new[] { field }.Concat(aliases))
         {
-            if (_defaultUnits.TryGetValue(Normalize(name), out string? unit))
+            if (_defaultUnits is not null && _defaultUnits.TryGetValue(Normalize(name), out string? unit))
             {
                 return unit;
             }
@@ -197,7 +199,7 @@ public sealed class RecordFields
             return value;
         }
 
-        _errors.Add(new FieldError(field, "'" + text + "' is not a finite number", "InvalidQuantity"));
+        (_errors ??= new()).Add(new FieldError(field, "'" + text + "' is not a finite number", "InvalidQuantity"));
         return null;
     }
 
@@ -216,14 +218,14 @@ public sealed class RecordFields
         {
             if (required)
             {
-                _errors.Add(new FieldError(field, "is missing", "InvalidInput"));
+                (_errors ??= new()).Add(new FieldError(field, "is missing", "InvalidInput"));
             }
 
             return null;
         }
 
         _used.Add(key);
-        return _values[key];
+        return _values[key].Value;
     }
 
     /// <summary>Reads a value of an enumeration by name (case-insensitive); null when absent.</summary>
@@ -256,7 +258,7 @@ public sealed class RecordFields
 
     /// <summary>Records a problem found by the caller.</summary>
     public void AddError(string field, string message, string errorId = "InvalidInput") =>
-        _errors.Add(new FieldError(field, message, errorId));
+        (_errors ??= new()).Add(new FieldError(field, message, errorId));
 
     /// <summary>The form a record names: a Form value (aliases Kind, Type), or exactly one true switch named after a form.</summary>
     /// <exception cref="RecordException">No form, an unknown one, or more than one.</exception>
@@ -298,7 +300,7 @@ public sealed class RecordFields
 
     /// <summary>The record's field names (as given) that no read has used.</summary>
     public IEnumerable<string> UnusedNames() =>
-        _values.Where(p => !_used.Contains(p.Key) && !IsEmpty(p.Value)).Select(p => _keyByName[p.Key]);
+        _values.Where(p => !_used.Contains(p.Key) && !IsEmpty(p.Value.Value)).Select(p => p.Value.Name);
 
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
@@ -367,7 +369,7 @@ public sealed class RecordFields
         for (int k = 0; k < (keys?.Length ?? 1); k++)
         {
             string key = keys is null ? Normalize(field) : keys[k];
-            if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
+            if (_values.TryGetValue(key, out var entry) && !IsEmpty(entry.Value))
             {
                 more |= found is not null && found != key;
                 found ??= key;
@@ -375,7 +377,7 @@ public sealed class RecordFields
         }
 
         // A field given by one column (and no second spelling of it) has nothing to compare.
-        if (found is not null && (more || _shadowed.Count > 0))
+        if (found is not null && (more || _shadowed is not null))
         {
             CheckOneValue(field, aliases);
         }
@@ -389,7 +391,7 @@ public sealed class RecordFields
     /// </summary>
     private void CheckOneValue(string field, string[] aliases)
     {
-        if (_conflictsReported.Contains(field))
+        if (_conflictsReported?.Contains(field) ?? false)
         {
             return;
         }
@@ -400,27 +402,27 @@ public sealed class RecordFields
         for (int k = -1; k < aliases.Length && !more; k++)
         {
             string key = Normalize(k < 0 ? field : aliases[k]);
-            if (_values.TryGetValue(key, out object? value) && !IsEmpty(value))
+            if (_values.TryGetValue(key, out var entry) && !IsEmpty(entry.Value))
             {
                 more = first is not null && first != key;
                 first ??= key;
             }
         }
 
-        if (!more && _shadowed.Count == 0)
+        if (!more && _shadowed is null)
         {
             return;
         }
 
         var keys = new HashSet<string>(new[] { field }.Concat(aliases).Select(Normalize), StringComparer.Ordinal);
-        var given = _values.Where(p => keys.Contains(p.Key) && !IsEmpty(p.Value)).Select(p => new KeyValuePair<string, object?>(_keyByName[p.Key], p.Value))
-            .Concat(_shadowed.Where(p => keys.Contains(Normalize(p.Key)) && !IsEmpty(p.Value)))
+        var given = _values.Where(p => keys.Contains(p.Key) && !IsEmpty(p.Value.Value)).Select(p => new KeyValuePair<string, object?>(p.Value.Name, p.Value.Value))
+            .Concat((_shadowed ?? Enumerable.Empty<KeyValuePair<string, object?>>()).Where(p => keys.Contains(Normalize(p.Key)) && !IsEmpty(p.Value)))
             .ToArray();
         string[] distinct = given.Select(p => Shown(p.Value)).Distinct(StringComparer.Ordinal).ToArray();
         if (distinct.Length > 1)
         {
-            _conflictsReported.Add(field);
-            _errors.Add(new FieldError(
+            (_conflictsReported ??= new(StringComparer.Ordinal)).Add(field);
+            (_errors ??= new()).Add(new FieldError(
                 field,
                 "is given by more than one column with different values (" + string.Join(", ", given.Select(p => "'" + p.Key + "' = '" + Shown(p.Value) + "'")) + "); keep one column",
                 "InvalidInput"));
