@@ -121,10 +121,6 @@ public static class TemperatureHistory
         /// above some level, where asking <see cref="For"/> for each is the cheaper way.
         /// </summary>
         public double[]? ForAll(IReadOnlyList<double> ascending) => ByLevels(_times, _temps, ascending);
-
-        /// <summary>The dose margin of the same history (<see cref="ThermalDose.RiseMargin(IReadOnlyList{HeatingSample}, double, double, out double)"/>), from the copy already made.</summary>
-        internal double? DoseRiseMargin(double startCelsius, double limitMinutes, out double addedMinutes) =>
-            ThermalDose.RiseMargin(_times, _temps, startCelsius, limitMinutes, out addedMinutes);
     }
 
     /// <summary>The most separate stretches above a level that the sweep through the levels keeps before it gives up.</summary>

@@ -68,17 +68,11 @@ public static class ThermalDose
     /// The same, and the dose the heating adds as it is (<see cref="AddedCem43Minutes"/>), which the search finds on its
     /// way: it starts from the history as it is, k = 1.
     /// </summary>
-    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes, out double addedMinutes) =>
-        RiseMargin(new Pieces(history, startCelsius), startCelsius, limitMinutes, out addedMinutes);
-
-    /// <summary>The same, for a history's sample times and temperatures already read into arrays.</summary>
-    internal static double? RiseMargin(double[] times, double[] celsius, double startCelsius, double limitMinutes, out double addedMinutes) =>
-        RiseMargin(new Pieces(times, celsius, startCelsius), startCelsius, limitMinutes, out addedMinutes);
-
-    private static double? RiseMargin(Pieces pieces, double startCelsius, double limitMinutes, out double addedMinutes)
+    public static double? RiseMargin(IReadOnlyList<HeatingSample> history, double startCelsius, double limitMinutes, out double addedMinutes)
     {
         // The history's times and rises read once, for the passes over it; the largest rise is the peak's (subtracting
         // the start keeps the order), NaN if any is.
+        var pieces = new Pieces(history, startCelsius);
         double rise = double.NegativeInfinity;
         foreach (double r in pieces.Rises)
         {
@@ -224,17 +218,6 @@ public static class ThermalDose
             {
                 Times[i] = history[i].TimeSeconds;
                 Rises[i] = history[i].TemperatureCelsius - startCelsius;
-            }
-        }
-
-        /// <summary>The same from arrays already read: the times shared, the rises worked out.</summary>
-        public Pieces(double[] times, double[] celsius, double startCelsius)
-        {
-            Times = times;
-            Rises = new double[celsius.Length];
-            for (int i = 0; i < Rises.Length; i++)
-            {
-                Rises[i] = celsius[i] - startCelsius;
             }
         }
 

@@ -91,7 +91,7 @@ public sealed class BurnCheck : IHazardCheck
         // The dose the field adds over the baseline (the item held at its starting temperature), judged by the factor
         // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
         // fitted on, beyond which the contact-temperature criterion above governs alone.
-        double? doseMargin = levels.DoseRiseMargin(start, policy.ThermalDoseLimitMinutes, out double dose);
+        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double dose);
         IReadOnlyList<string> basis = SourcesOf(policy);
         bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
         var found = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, contactJudged, worst.held, worst.seconds, worst.threshold, worst.margin, start, placeSeconds);

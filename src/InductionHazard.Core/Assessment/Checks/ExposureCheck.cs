@@ -25,10 +25,7 @@ public sealed class ExposureCheck : IHazardCheck
     /// <summary>The most places whose exposure is kept for one source.</summary>
     public const int PlacesPerSource = 256;
 
-    private static readonly ConditionalWeakTable<FieldSource, ConcurrentDictionary<(Vector3D Place, string Policy), Known>> Found = new();
-
-    /// <summary>The limits' sources when the exposure cannot be found (shared, read-only).</summary>
-    private static readonly string[] Fallback = { ExposureLimits.StaticSource, ExposureLimits.TimeVaryingSource };
+    private static readonly ConditionalWeakTable<FieldSource, ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure>> Found = new();
 
     /// <inheritdoc />
     public HazardMechanism Mechanism => HazardMechanism.Exposure;
@@ -46,22 +43,32 @@ public sealed class ExposureCheck : IHazardCheck
         }
 
         var issues = response.IssuesAffecting(AffectedResults.Field);
+        string[] fallback = { ExposureLimits.StaticSource, ExposureLimits.TimeVaryingSource };
         if (issues.Count > 0)
         {
-            return MechanismResult.Indeterminate(Mechanism, Fallback, issues);
+            return MechanismResult.Indeterminate(Mechanism, fallback, issues);
         }
 
-        Known known;
+        FieldExposure exposure;
         try
         {
-            known = At(response.Scenario.Source, response.Scenario.Placement.Centre, policy);
+            exposure = At(response.Scenario.Source, response.Scenario.Placement.Centre, policy);
         }
         catch (InductionHazardException ex)
         {
-            return MechanismResult.Indeterminate(Mechanism, Fallback, new[] { new ValidityIssue("the field at the wearer's place cannot be evaluated: " + ex.Message, AffectedResults.Field) });
+            return MechanismResult.Indeterminate(Mechanism, fallback, new[] { new ValidityIssue("the field at the wearer's place cannot be evaluated: " + ex.Message, AffectedResults.Field) });
         }
 
-        (FieldExposure exposure, string[] sources) = (known.Exposure, known.Sources);
+        var kept = new List<string>(exposure.Standards.Count);
+        for (int k = 0; k < exposure.Standards.Count; k++)
+        {
+            if (exposure.Standards[k] != ExposureLimits.ActionLevelSource)
+            {
+                kept.Add(exposure.Standards[k]);
+            }
+        }
+
+        string[] sources = kept.ToArray();
         if (exposure.Verdict == Verdict.Indeterminate || !Finite.Is(exposure.Margin))
         {
             string reason = exposure.Finding.StartsWith("Indeterminate: ", StringComparison.Ordinal) ? exposure.Finding.Substring("Indeterminate: ".Length) : exposure.Finding;
@@ -80,27 +87,17 @@ public sealed class ExposureCheck : IHazardCheck
             + "; it applies with or without the item";
     }
 
-    /// <summary>The occupational exposure at a place and the sources of its limits (all but the action level), found once per source, place and policy.</summary>
-    private static Known At(FieldSource source, Vector3D place, HazardPolicy policy)
+    /// <summary>The occupational exposure at a place, found once per source, place and policy.</summary>
+    private static FieldExposure At(FieldSource source, Vector3D place, HazardPolicy policy)
     {
         var key = (place, policy.Fingerprint);
-        ConcurrentDictionary<(Vector3D Place, string Policy), Known> places = Found.GetValue(source, _ => new ConcurrentDictionary<(Vector3D Place, string Policy), Known>());
-        if (places.TryGetValue(key, out Known? known))
+        ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure> places = Found.GetValue(source, _ => new ConcurrentDictionary<(Vector3D Place, string Policy), FieldExposure>());
+        if (places.TryGetValue(key, out FieldExposure? known))
         {
             return known;
         }
 
-        FieldExposure exposure = FieldExposure.At(source, place, publicExposure: false, policy);
-        var kept = new List<string>(exposure.Standards.Count);
-        for (int k = 0; k < exposure.Standards.Count; k++)
-        {
-            if (exposure.Standards[k] != ExposureLimits.ActionLevelSource)
-            {
-                kept.Add(exposure.Standards[k]);
-            }
-        }
-
-        var found = new Known(exposure, kept.ToArray());
+        FieldExposure found = FieldExposure.At(source, place, publicExposure: false, policy);
         if (places.Count >= PlacesPerSource)
         {
             places.Clear();
@@ -109,7 +106,4 @@ public sealed class ExposureCheck : IHazardCheck
         places[key] = found;
         return found;
     }
-
-    /// <summary>An exposure found at a place, with the sources of its limits (shared, read-only).</summary>
-    private sealed record Known(FieldExposure Exposure, string[] Sources);
 }
