@@ -102,16 +102,19 @@ internal static class RlStep
 
 
         double a = (e0 - (slope * tau)) / r, b = slope / r, c = i0 - a;
-        double decay = Math.Exp(-x);
+        // Beyond x = 746 e^-x is below half the smallest double and rounds to zero: not asked of the runtime's underflow path.
+        double decay = x < 746 ? Math.Exp(-x) : 0;
         double integral = (a * a * h) + (a * b * h * h) + (b * b * h * h * h / 3)
             + (2 * a * c * tau * (1 - decay)) + (2 * b * c * tau * tau * (1 - (decay * (1 + x)))) + (c * c * tau * 0.5 * (1 - (decay * decay)));
         return (a + (b * h) + (c * decay), r * integral);
     }
 
-    /// <summary>The largest |i| over [0, h] and where it occurs: the ends or the one interior extremum of i(s).</summary>
-    public static (double Current, double At) Peak(double l, double r, double i0, double e0, double slope, double h)
+    /// <summary>
+    /// The largest |i| over [0, h] and where it occurs: the ends or the one interior extremum of i(s), with the current
+    /// at the end as <see cref="Advance"/> found it (not found again).
+    /// </summary>
+    public static (double Current, double At) Peak(double l, double r, double i0, double e0, double slope, double h, double end)
     {
-        double end = Current(l, r, i0, e0, slope, h);
         (double current, double at) best = Math.Abs(end) > Math.Abs(i0) ? (end, h) : (i0, 0.0);
 
         // i(s) = a + b s + c e^(-s/tau); di/ds = 0 where e^(-s/tau) = b tau / c.

@@ -310,7 +310,7 @@ public sealed class TransientPathSolver
         if (z.Length == 1)
         {
             double w = _circuit.TotalWeights[0];
-            (double peak, double at) = RlStep.Peak(_circuit.Lambdas[0], s, z[0], work.Start[0], work.Slope[0], h);
+            (double peak, double at) = RlStep.Peak(_circuit.Lambdas[0], s, z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
             return (w * peak, at);
         }
 

@@ -21,6 +21,13 @@ public static class Exponential
     /// </summary>
     public static double Minus1(double x)
     {
+        if (x < -40)
+        {
+            // e^x is below 5e-18, under half a unit in the last place of 1: the difference rounds to -1 exactly, and
+            // the exponential is not asked (far below, it would take the runtime's underflow path).
+            return -1.0;
+        }
+
         double a = Math.Abs(x);
         if (!(a < SeriesBelow))
         {

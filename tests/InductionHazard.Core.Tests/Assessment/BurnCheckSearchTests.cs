@@ -1,5 +1,7 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
+using InductionHazard.Assessment;
 using InductionHazard.Assessment.Checks;
 using InductionHazard.Criteria;
 using InductionHazard.Thermal;
@@ -77,5 +79,91 @@ public sealed class BurnCheckSearchTests
             int direct = BurnCheck.Smallest(levels, thresholds, start, out _, out double directMargin);
             Assert.True(expected == direct && (expectedMargin.Equals(directMargin) || Math.Abs(expectedMargin - directMargin) <= 1e-12 * expectedMargin), "trial " + trial + ": from all levels, contact time " + direct + " against " + expected);
         }
+    }
+
+    [Fact]
+    public void NoContactTimesMarginIsBelowTheBoundThatLetsTheDoseGovernUnswept()
+    {
+        // The bound is the peak against the lowest threshold; every level held for a contact time is at most the peak,
+        // also for rises of a few units in the last place of the temperature, where rounding in the interpolation of a
+        // level would show first.
+        var random = new Random(20261204);
+        for (int trial = 0; trial < 600; trial++)
+        {
+            int n = random.Next(2, 60);
+            double start = trial % 3 == 0 ? 30 + (random.NextDouble() * 5) : 20 + (random.NextDouble() * 900);
+            double scale = Math.Pow(10, -13 + (random.NextDouble() * 14));
+            var history = new HeatingSample[n];
+            double t = 0;
+            for (int k = 0; k < n; k++)
+            {
+                t += k == 0 ? 0 : 0.1 + (random.NextDouble() * 100);
+                history[k] = new HeatingSample(t, k == 0 ? start : start + (scale * Math.Round(random.NextDouble() * 20, random.Next(0, 4))), 0);
+            }
+
+            int count = random.Next(1, 70);
+            var durations = new double[count];
+            var thresholds = new double[count];
+            for (int k = 0; k < count; k++)
+            {
+                durations[k] = t * Math.Pow(10, -3 + (3.0 * k / Math.Max(1, count - 1)));
+                thresholds[k] = start + (scale * (1 + (30 * Math.Pow(1 - ((double)k / count), 2))));
+            }
+
+            double bound = BurnCheck.ContactMarginBound(history, thresholds, start);
+            EverySwept(history, durations, thresholds, start, out double smallest);
+            Assert.True(bound <= smallest, "trial " + trial + ": bound " + bound.ToString("R") + " above the smallest margin " + smallest.ToString("R"));
+            double[]? levels = new TemperatureHistory.SustainedLevels(history).ForAll(durations);
+            if (levels is not null)
+            {
+                BurnCheck.Smallest(levels, thresholds, start, out _, out double swept);
+                Assert.True(bound <= swept, "trial " + trial + ": bound " + bound.ToString("R") + " above the level sweep's smallest margin " + swept.ToString("R"));
+            }
+        }
+
+        var broken = new[] { new HeatingSample(0, 33, 0), new HeatingSample(1, double.NaN, 0), new HeatingSample(2, 34, 0) };
+        Assert.True(double.IsNaN(BurnCheck.ContactMarginBound(broken, new[] { 45.0 }, 33)), "a history with a NaN gives no bound");
+    }
+
+    [Fact]
+    public void AWornRingsBurnMarginIsTheSmallerOfTheDoseMarginAndEveryContactTimeSwept()
+    {
+        // Where the dose governs, the contact times are swept only when the finding is read: the verdict must be what
+        // sweeping every contact time first would give, and the finding must name the same worst contact time.
+        var cases = new (InductionHazard.Items.ConductiveItem Item, InductionHazard.Fields.FieldSource Source)[]
+        {
+            (Fixtures.Ring(), Fixtures.UniformSine(0.01, 50)),
+            (Fixtures.Ring(), Fixtures.UniformSine(0.004, 12000)),
+            (Fixtures.Ring(), Fixtures.UniformSine(0.002, 2000)),
+            (Fixtures.Ring("Copper", 0.03, 0.003), Fixtures.UniformSine(0.02, 400, duration: 120)),
+            (Fixtures.Ring(), Fixtures.UniformRamp(0, 1, 0.01)),
+            (Fixtures.Ring("Titanium", 0.02, 0.002), Fixtures.UniformRamp(0, 3, 1)),
+            (Fixtures.Band("Aluminium", 0.06, 0.01, 0.001), Fixtures.UniformSine(0.001, 1000)),
+            (Fixtures.Ring("Copper", 0.02, 0.002, contact: "Held"), Fixtures.UniformSine(0.003, 5000, duration: 30)),
+        };
+        int byDose = 0, byContact = 0;
+        foreach (var (item, source) in cases)
+        foreach (var policy in new[] { HazardPolicy.Default, new HazardPolicy { ThermalDoseLimitMinutes = 240 }, new HazardPolicy { ThermalDoseLimitMinutes = 1000 } })
+        {
+            InductionResponse response = Fixtures.Respond(item, source);
+            MechanismResult burn = HazardAssessor.Assess(response, policy).Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
+            IReadOnlyList<HeatingSample> history = response.HeatingSeries;
+            double start = response.InitialTemperatureCelsius;
+            double span = history[history.Count - 1].TimeSeconds - history[0].TimeSeconds;
+            (double[] durations, double[] thresholds, _) = BurnCheck.Judged(BurnCheck.Durations(policy.ContactBurn, span), start);
+            Assert.NotEmpty(durations);
+            int worst = EverySwept(history, durations, thresholds, start, out double contact);
+            double? dose = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes);
+            bool doseGoverns = dose is { } d && (double.IsNaN(d) || d < contact);
+            _ = doseGoverns ? byDose++ : byContact++;
+            string label = item.Name + " at " + source.Name;
+            Assert.Equal(doseGoverns ? "thermal dose added" : "skin contact temperature held for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s"), burn.Quantity);
+            double expected = VerdictRules.Bounded(doseGoverns ? dose!.Value : contact);
+            Assert.True(Math.Abs(expected - burn.Margin) <= 1e-9 * expected, label + ": margin " + burn.Margin + " against " + expected);
+            Assert.Contains("for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s") + " against the threshold " + InductionHazard.Quantities.SiFormat.Celsius(thresholds[worst]), burn.Detail, StringComparison.Ordinal);
+            Assert.Contains("(margin " + InductionHazard.Quantities.SiFormat.Plain(VerdictRules.Bounded(contact)) + ")", burn.Detail, StringComparison.Ordinal);
+        }
+
+        Assert.True(byDose >= 2 && byContact >= 2, "the cases should include both criteria governing: dose " + byDose + ", contact " + byContact);
     }
 }

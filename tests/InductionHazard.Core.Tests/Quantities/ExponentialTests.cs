@@ -21,6 +21,24 @@ public class ExponentialTests
         Assert.Equal(0.0, Exponential.Minus1(0));
     }
 
+    [Fact]
+    public void MinusOneFarBelowZeroIsExactlyWhatTheSubtractionGives()
+    {
+        // Below x = -40 the series is not summed and the exponential not asked: e^x - 1 rounds to -1 there, which is
+        // what Math.Exp(x) - 1 gives to the last bit, down to the underflow and beyond.
+        var random = new Random(20261203);
+        for (int k = 0; k < 2000; k++)
+        {
+            double x = -30 - (random.NextDouble() * 1000);
+            Assert.Equal(Math.Exp(x) - 1, Exponential.Minus1(x));
+        }
+
+        Assert.Equal(Math.Exp(-40.0) - 1, Exponential.Minus1(-40.0));
+        Assert.Equal(Math.Exp(-38.0) - 1, Exponential.Minus1(-38.0));
+        Assert.Equal(-1.0, Exponential.Minus1(double.NegativeInfinity));
+        Assert.True(double.IsNaN(Exponential.Minus1(double.NaN)));
+    }
+
     private static double Reference(double x)
     {
         if (Math.Abs(x) >= 0.5)

@@ -68,17 +68,26 @@ public sealed class BurnCheck : IHazardCheck
         (double margin, double seconds, double held, double threshold) worst = (double.PositiveInfinity, curve.ShortestSeconds, start, curve.CelsiusFor(curve.ShortestSeconds));
         (double[] durations, double[] durationThresholds, double? placeSeconds) = Judged(Durations(curve, span), start);
 
-        var levels = new TemperatureHistory.SustainedLevels(history);
+        // The dose the field adds over the baseline (the item held at its starting temperature), judged by the factor
+        // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
+        // fitted on, beyond which the contact-temperature criterion above governs alone.
+        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double dose);
+        IReadOnlyList<string> basis = SourcesOf(policy);
+        if (durations.Length > 0 && doseMargin is { } first && first < ContactMarginBound(history, durationThresholds, start))
+        {
+            // The dose governs whatever the contact times hold: no level held for any of them exceeds the peak, so no
+            // contact margin is below the bound. What they hold is swept only if the finding is read.
+            var deferred = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, true, double.NaN, double.NaN, double.NaN, double.NaN, start, placeSeconds)
+            {
+                Sweep = new ContactSweep(history, durations, durationThresholds),
+            };
+            return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", first, policy.SafetyFactor, basis,
+                deferred, static f => "skin in contact: " + f.Dose() + "; " + f.Contact() + f.Place());
+        }
+
         if (durations.Length > 0)
         {
-            // Every contact time at once by a sweep through the levels; for a history with many peaks, one window
-            // sweep per contact time, skipping those that cannot be the worst.
-            double[]? everyLevel = levels.ForAll(durations);
-            double heldThere, marginThere;
-            int at = everyLevel is null
-                ? WorstContact(k => levels.For(durations[k]), TemperatureHistory.Peak(history), durations, durationThresholds, start, out heldThere, out marginThere)
-                : Smallest(everyLevel, durationThresholds, start, out heldThere, out marginThere);
-            worst = (marginThere, durations[at], heldThere, durationThresholds[at]);
+            worst = WorstOver(history, durations, durationThresholds, start);
         }
 
         if (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start)
@@ -88,11 +97,6 @@ public sealed class BurnCheck : IHazardCheck
             worst = (RiseMargin(worst.threshold, peak, start), span, peak, worst.threshold);
         }
 
-        // The dose the field adds over the baseline (the item held at its starting temperature), judged by the factor
-        // on the rise that brings it to the limit, found by solving; only inside the range the dose relation was
-        // fitted on, beyond which the contact-temperature criterion above governs alone.
-        double? doseMargin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double dose);
-        IReadOnlyList<string> basis = SourcesOf(policy);
         bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
         var found = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, contactJudged, worst.held, worst.seconds, worst.threshold, worst.margin, start, placeSeconds);
         if (!contactJudged && doseMargin is null)
@@ -116,18 +120,67 @@ public sealed class BurnCheck : IHazardCheck
     private sealed record ContactFindings(
         double? DoseMargin, double DoseMinutes, double DoseLimitMinutes, bool ContactJudged, double Held, double Seconds, double Threshold, double ContactMargin, double Start, double? PlaceSeconds)
     {
+        /// <summary>Where the dose governed before the contact times were swept: what to sweep for the finding.</summary>
+        public ContactSweep? Sweep { get; init; }
+
         public string Dose() => DoseMargin is { } dm
             ? "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
             : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
 
-        public string Contact() => ContactJudged
-            ? "held " + SiFormat.Celsius(Held) + " for " + SiFormat.Format(Seconds, "s") + " against the threshold " + SiFormat.Celsius(Threshold) + " for that contact time (margin " + SiFormat.Plain(ContactMargin) + ")"
-            : "contact temperature not the criterion: the surroundings alone reach its threshold";
+        public string Contact()
+        {
+            if (!ContactJudged)
+            {
+                return "contact temperature not the criterion: the surroundings alone reach its threshold";
+            }
+
+            (double margin, double seconds, double held, double threshold) = Sweep is { } sweep
+                ? WorstOver(sweep.History, sweep.Durations, sweep.Thresholds, Start)
+                : (ContactMargin, Seconds, Held, Threshold);
+            return "held " + SiFormat.Celsius(held) + " for " + SiFormat.Format(seconds, "s") + " against the threshold " + SiFormat.Celsius(threshold) + " for that contact time (margin " + SiFormat.Plain(margin) + ")";
+        }
 
         public string Place() => PlaceSeconds is { } p
             ? "; the surroundings alone hold the skin at " + SiFormat.Celsius(Start) + ", at or above the burn threshold for contact of " + SiFormat.Format(p, "s")
               + " or longer: a hazard of the place itself, apart from the field, which this check does not judge (judged is what the field adds)"
             : string.Empty;
+    }
+
+    /// <summary>A history and the contact times to sweep it for (the history is the response's, which does not change).</summary>
+    private sealed record ContactSweep(IReadOnlyList<HeatingSample> History, double[] Durations, double[] Thresholds);
+
+    /// <summary>
+    /// The contact time with the smallest margin, what the history holds for it and its threshold: every contact time
+    /// at once by a sweep through the levels; for a history with many peaks, one window sweep per contact time,
+    /// skipping those that cannot be the worst.
+    /// </summary>
+    private static (double Margin, double Seconds, double Held, double Threshold) WorstOver(IReadOnlyList<HeatingSample> history, double[] durations, double[] thresholds, double start)
+    {
+        var levels = new TemperatureHistory.SustainedLevels(history);
+        double[]? everyLevel = levels.ForAll(durations);
+        double heldThere, marginThere;
+        int at = everyLevel is null
+            ? WorstContact(k => levels.For(durations[k]), TemperatureHistory.Peak(history), durations, thresholds, start, out heldThere, out marginThere)
+            : Smallest(everyLevel, thresholds, start, out heldThere, out marginThere);
+        return (marginThere, durations[at], heldThere, thresholds[at]);
+    }
+
+    /// <summary>
+    /// A bound below every contact time's margin: no level held for a contact time exceeds the history's peak, so each
+    /// margin is at least that of the peak against the lowest threshold. The peak is taken a part in 1e12 higher, so
+    /// that a level interpolated a few units in its last place above it stays under the bound. NaN (no bound) if the
+    /// history holds a NaN.
+    /// </summary>
+    internal static double ContactMarginBound(IReadOnlyList<HeatingSample> history, double[] thresholds, double start)
+    {
+        double lowest = double.PositiveInfinity;
+        foreach (double threshold in thresholds)
+        {
+            lowest = Math.Min(lowest, threshold);
+        }
+
+        double peak = TemperatureHistory.Peak(history);
+        return RiseMargin(lowest, peak + (Math.Abs(peak) * 1e-12), start);
     }
 
     /// <summary>
@@ -282,7 +335,7 @@ public sealed class BurnCheck : IHazardCheck
     /// The contact times judged, ascending and distinct: 12 a decade from the curve's shortest to the longer of its
     /// longest and the history's span, with the curve's own points among them; and the threshold of each.
     /// </summary>
-    private static (double[] Seconds, double[] Celsius) Durations(ContactBurnThreshold curve, double span)
+    internal static (double[] Seconds, double[] Celsius) Durations(ContactBurnThreshold curve, double span)
     {
         double first = curve.ShortestSeconds, last = Math.Min(curve.LongestSeconds, span);
         if (last < first)
@@ -306,7 +359,7 @@ public sealed class BurnCheck : IHazardCheck
     /// whose threshold the start already reaches (the place's own hazard); remembered for the last grid and start, as
     /// most items start at the skin's temperature.
     /// </summary>
-    private static (double[] Seconds, double[] Celsius, double? Place) Judged((double[] Seconds, double[] Celsius) grid, double start)
+    internal static (double[] Seconds, double[] Celsius, double? Place) Judged((double[] Seconds, double[] Celsius) grid, double start)
     {
         if (LastJudged is { } known && ReferenceEquals(known.Grid, grid.Seconds) && known.Start.Equals(start))
         {
