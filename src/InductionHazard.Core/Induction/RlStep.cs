@@ -23,13 +23,43 @@ internal static class RlStep
     private const double SeriesBelowX = 0.04;
 
     /// <summary>The current after s seconds.</summary>
-    public static double Current(double l, double r, double i0, double e0, double slope, double s)
+    public static double Current(double l, double r, double i0, double e0, double slope, double s) => Current(new Circuit(l, r), i0, e0, slope, s);
+
+    private static double Current(Circuit rl, double i0, double e0, double slope, double s)
     {
-        double tau = l / r;
-        double x = s / tau;
+        double tau = rl.Tau;
+        double x = s * rl.InverseTau;
         double phi1 = -Exponential.Minus1(-x);              // 1 - e^(-x)
         double phi2 = x < 1e-4 ? tau * x * x * (0.5 - (x / 6) + (x * x / 24)) : s - (tau * phi1); // s - tau (1 - e^(-x)), without cancellation
-        return (i0 * (1 - phi1)) + (e0 / r * phi1) + (slope / r * phi2);
+        return (i0 * (1 - phi1)) + (e0 * rl.InverseR * phi1) + (slope * rl.InverseR * phi2);
+    }
+
+    /// <summary>
+    /// One circuit's constants for a step: tau = L / R, 1 / tau and 1 / R, found once (a step's arithmetic then
+    /// multiplies where it divided; divisions were much of a step's time).
+    /// </summary>
+    internal readonly struct Circuit
+    {
+        public Circuit(double l, double r)
+        {
+            InverseR = 1 / r;
+            Tau = l * InverseR;
+            InverseTau = r / l;
+        }
+
+        /// <summary>From a mode's time constant lambda at unit scale, its reciprocal, and 1 / s: tau = lambda / s, R = s.</summary>
+        public Circuit(double lambda, double inverseLambda, double s, double inverseS)
+        {
+            InverseR = inverseS;
+            Tau = lambda * inverseS;
+            InverseTau = s * inverseLambda;
+        }
+
+        public double Tau { get; }
+
+        public double InverseTau { get; }
+
+        public double InverseR { get; }
     }
 
     /// <summary>
@@ -38,23 +68,24 @@ internal static class RlStep
     /// + c^2 tau (1 - e^-2x)/2 for x = h/tau above a quarter; 4-point Gauss-Legendre on the exact current below it,
     /// where the closed form's terms cancel (its error there is below 1e-9 of the energy).
     /// </summary>
-    public static double Energy(double l, double r, double i0, double e0, double slope, double h)
+    public static double Energy(double l, double r, double i0, double e0, double slope, double h) => Energy(new Circuit(l, r), r, i0, e0, slope, h);
+
+    private static double Energy(Circuit rl, double r, double i0, double e0, double slope, double h)
     {
-        double tau = l / r;
-        double x = h / tau;
+        double x = h * rl.InverseTau;
         if (x >= SeriesBelowX && x <= QuadratureUpToX)
         {
             double sum = 0;
             for (int k = 0; k < Nodes.Length; k++)
             {
-                double i = Current(l, r, i0, e0, slope, Nodes[k] * h);
+                double i = Current(rl, i0, e0, slope, Nodes[k] * h);
                 sum += Weights[k] * i * i;
             }
 
             return r * sum * h;
         }
 
-        return Advance(l, r, i0, e0, slope, h).Energy;
+        return Advance(rl, r, i0, e0, slope, h).Energy;
     }
 
     /// <summary>
@@ -65,14 +96,17 @@ internal static class RlStep
     /// b_2 = (g tau/R - (e0/R - i0)) x^2 / 2, b_n = -b_(n-1) x / n; the end current is sum b_n and the energy
     /// R h sum_m sum_n b_m b_n / (m + n + 1), written out for the nine terms so that it runs in registers.
     /// </summary>
-    public static (double Current, double Energy) Advance(double l, double r, double i0, double e0, double slope, double h)
+    public static (double Current, double Energy) Advance(double l, double r, double i0, double e0, double slope, double h) => Advance(new Circuit(l, r), r, i0, e0, slope, h);
+
+    /// <summary>The same, with the circuit's constants found once for the step (<see cref="Circuit"/>).</summary>
+    internal static (double Current, double Energy) Advance(Circuit rl, double r, double i0, double e0, double slope, double h)
     {
-        double tau = l / r;
-        double x = h / tau;
+        double tau = rl.Tau;
+        double x = h * rl.InverseTau;
         if (x < SeriesBelowX)
         {
-            double beta = e0 / r;
-            double b0 = i0, b1 = (beta - i0) * x, b2 = ((slope * tau / r) - (beta - i0)) * x * x * 0.5;
+            double beta = e0 * rl.InverseR;
+            double b0 = i0, b1 = (beta - i0) * x, b2 = ((slope * tau * rl.InverseR) - (beta - i0)) * x * x * 0.5;
             double b3 = -b2 * x * 0.3333333333333333;
             double b4 = -b3 * x * 0.25;
             double b5 = -b4 * x * 0.2;
@@ -97,11 +131,10 @@ internal static class RlStep
 
         if (x <= QuadratureUpToX)
         {
-            return (Current(l, r, i0, e0, slope, h), Energy(l, r, i0, e0, slope, h));
+            return (Current(rl, i0, e0, slope, h), Energy(rl, r, i0, e0, slope, h));
         }
 
-
-        double a = (e0 - (slope * tau)) / r, b = slope / r, c = i0 - a;
+        double a = (e0 - (slope * tau)) * rl.InverseR, b = slope * rl.InverseR, c = i0 - a;
         // Beyond x = 746 e^-x is below half the smallest double and rounds to zero: not asked of the runtime's underflow path.
         double decay = x < 746 ? Math.Exp(-x) : 0;
         double integral = (a * a * h) + (a * b * h * h) + (b * b * h * h * h / 3)
@@ -111,16 +144,16 @@ internal static class RlStep
 
     /// <summary>
     /// The largest |i| over [0, h] and where it occurs: the ends or the one interior extremum of i(s), with the current
-    /// at the end as <see cref="Advance"/> found it (not found again).
+    /// at the end as <see cref="Advance(Circuit, double, double, double, double, double)"/> found it (not found again).
     /// </summary>
-    public static (double Current, double At) Peak(double l, double r, double i0, double e0, double slope, double h, double end)
+    internal static (double Current, double At) Peak(Circuit rl, double i0, double e0, double slope, double h, double end)
     {
         (double current, double at) best = Math.Abs(end) > Math.Abs(i0) ? (end, h) : (i0, 0.0);
 
         // i(s) = a + b s + c e^(-s/tau); di/ds = 0 where e^(-s/tau) = b tau / c.
-        double tau = l / r;
-        double b = slope / r;
-        double c = i0 - (e0 / r) + (slope * tau / r);
+        double tau = rl.Tau;
+        double b = slope * rl.InverseR;
+        double c = i0 - (e0 * rl.InverseR) + (slope * tau * rl.InverseR);
         if (b != 0 && c != 0)
         {
             double ratio = b * tau / c;
@@ -129,7 +162,7 @@ internal static class RlStep
                 double s = -tau * Math.Log(ratio);
                 if (s > 0 && s < h)
                 {
-                    double i = Current(l, r, i0, e0, slope, s);
+                    double i = Current(rl, i0, e0, slope, s);
                     if (Math.Abs(i) > Math.Abs(best.current))
                     {
                         best = (i, s);

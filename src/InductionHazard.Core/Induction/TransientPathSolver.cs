@@ -43,6 +43,9 @@ public sealed class TransientPathSolver
     private readonly double _leadTimeConstant;
     private readonly double _slowestTimeConstant;
 
+    /// <summary>1 / lambda of each mode, so that a step's time constants and ratios are products.</summary>
+    private readonly double[] _inverseLambdas;
+
     /// <summary>Creates the solver.</summary>
     /// <param name="circuit">The modes and their coupling to the drives.</param>
     /// <param name="scaleAtCelsius">s(T) = rho(T) / rho_ref: the resistance of every path relative to the one the modes were found at.</param>
@@ -52,6 +55,12 @@ public sealed class TransientPathSolver
         _circuit = circuit;
         _scaleAt = scaleAtCelsius;
         _thermal = thermal;
+        _inverseLambdas = new double[circuit.Count];
+        for (int k = 0; k < circuit.Count; k++)
+        {
+            _inverseLambdas[k] = 1 / circuit.Lambdas[k];
+        }
+
         // The time constant of the mode that stores most energy for a sudden unit drive (sum_j C_kj^2 lambda_k).
         double best = -1;
         for (int k = 0; k < circuit.Count; k++)
@@ -184,6 +193,8 @@ public sealed class TransientPathSolver
                     work.DriveB[j] = drives[j](t + (3 * h / 4));
                 }
 
+                double inverseH = 1 / h, twoOverH = 2 * inverseH;
+
                 for (int k = 0; k < modes; k++)
                 {
                     double ea = 0, eb = 0;
@@ -193,7 +204,7 @@ public sealed class TransientPathSolver
                         eb += _circuit.Coupling[k, j] * work.DriveB[j];
                     }
 
-                    work.Slope[k] = (eb - ea) / (h / 2);
+                    work.Slope[k] = (eb - ea) * twoOverH;
                     work.Start[k] = ea - (work.Slope[k] * h / 4);
                 }
 
@@ -205,12 +216,14 @@ public sealed class TransientPathSolver
                 double predicted = heat.Advance(temperature, lastPower);
                 double s = _scaleAt(0.5 * (temperature + predicted));
                 double stepEnergy = Sweep(z, work, s, h, cross);
-                double next = heat.Advance(temperature, stepEnergy / h);
+                double power = stepEnergy * inverseH;
+                double next = heat.Advance(temperature, power);
                 if (Math.Abs(next - predicted) > 0.01 * MaxStepKelvin)
                 {
                     s = _scaleAt(0.5 * (temperature + next));
                     stepEnergy = Sweep(z, work, s, h, cross);
-                    next = heat.Advance(temperature, stepEnergy / h);
+                    power = stepEnergy * inverseH;
+                    next = heat.Advance(temperature, power);
                 }
 
                 if (Math.Abs(next - temperature) > MaxStepKelvin && h > 1e-15 * Math.Max(1, Math.Abs(t)))
@@ -233,7 +246,7 @@ public sealed class TransientPathSolver
 
                 t = toEdge ? edge : t + h;
                 energy += stepEnergy;
-                lastPower = stepEnergy / h;
+                lastPower = power;
                 mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h);
                 temperature = next;
                 conductance = _thermal.Conductance(temperature);
@@ -241,7 +254,7 @@ public sealed class TransientPathSolver
                 if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
                 {
                     circuit.Add(new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature));
-                    heating.Add(new HeatingSample(t, temperature, stepEnergy / h));
+                    heating.Add(new HeatingSample(t, temperature, power));
                 }
 
                 if (!Finite.Is(total) || !Finite.Is(temperature))
@@ -289,10 +302,11 @@ public sealed class TransientPathSolver
     /// </summary>
     private double Sweep(double[] z, StepWork work, double s, double h, double crossAtUnitScale)
     {
-        double energy = crossAtUnitScale / s;
+        double inverseS = 1 / s;
+        double energy = crossAtUnitScale * inverseS;
         for (int k = 0; k < z.Length; k++)
         {
-            (double end, double stepEnergy) = RlStep.Advance(_circuit.Lambdas[k], s, z[k], work.Start[k], work.Slope[k], h);
+            (double end, double stepEnergy) = RlStep.Advance(new RlStep.Circuit(_circuit.Lambdas[k], _inverseLambdas[k], s, inverseS), s, z[k], work.Start[k], work.Slope[k], h);
             work.Next[k] = end;
             energy += stepEnergy;
         }
@@ -310,18 +324,18 @@ public sealed class TransientPathSolver
         if (z.Length == 1)
         {
             double w = _circuit.TotalWeights[0];
-            (double peak, double at) = RlStep.Peak(_circuit.Lambdas[0], s, z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
+            (double peak, double at) = RlStep.Peak(new RlStep.Circuit(_circuit.Lambdas[0], _inverseLambdas[0], s, 1 / s), z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
             return (w * peak, at);
         }
 
         double end = 0, rate0 = 0, rate1 = 0;
-        double[] weights = _circuit.TotalWeights, lambdas = _circuit.Lambdas;
+        double[] weights = _circuit.TotalWeights, inverseLambdas = _inverseLambdas;
         for (int k = 0; k < z.Length; k++)
         {
             double next = work.Next[k];
             end += weights[k] * next;
-            rate0 += weights[k] * (work.Start[k] - (s * z[k])) / lambdas[k];
-            rate1 += weights[k] * (work.Start[k] + (work.Slope[k] * h) - (s * next)) / lambdas[k];
+            rate0 += weights[k] * (work.Start[k] - (s * z[k])) * inverseLambdas[k];
+            rate1 += weights[k] * (work.Start[k] + (work.Slope[k] * h) - (s * next)) * inverseLambdas[k];
         }
 
         (double best, double bestAt) = Math.Abs(end) > Math.Abs(total0) ? (end, h) : (total0, 0.0);

@@ -21,7 +21,11 @@ public sealed class LumpedThermalModel
         HeatCapacityJoulesPerKelvin = heatCapacityJoulesPerKelvin;
         SurfaceSquareMeters = surfaceSquareMeters;
         Environment = environment;
+        _inverseHeatCapacity = 1 / heatCapacityJoulesPerKelvin;
     }
+
+    /// <summary>1 / (m c), for the steps' multiplications in place of divisions.</summary>
+    private readonly double _inverseHeatCapacity;
 
     /// <summary>m c, J/K.</summary>
     public double HeatCapacityJoulesPerKelvin { get; }
@@ -70,28 +74,22 @@ public sealed class LumpedThermalModel
     /// </summary>
     internal readonly struct Step
     {
-        private readonly LumpedThermalModel _model;
-        private readonly double _dt;
+        private readonly double _ambient;
         private readonly double _g;
-        private readonly double _decay;
-        private readonly bool _linear;
+        private readonly double _gain;
 
         public Step(LumpedThermalModel model, double dtSeconds, double g)
         {
-            _model = model;
-            _dt = dtSeconds;
+            _ambient = model.Environment.AmbientCelsius;
             _g = g;
-            double rate = g * dtSeconds / model.HeatCapacityJoulesPerKelvin;
-            _linear = rate < 1e-12;
-            _decay = _linear ? 0 : -Quantities.Exponential.Minus1(-rate);
+            double rate = g * dtSeconds * model._inverseHeatCapacity;
+
+            // T1 = T0 + net gain: gain = (1 - e^(-G dt / m c)) / G, or dt / (m c) where the decay is below rounding.
+            _gain = rate < 1e-12 ? dtSeconds * model._inverseHeatCapacity : -Quantities.Exponential.Minus1(-rate) / g;
         }
 
         /// <summary>The temperature at the step's end with a constant power over it.</summary>
-        public double Advance(double celsius, double powerWatts)
-        {
-            double net = powerWatts - (_g * (celsius - _model.Environment.AmbientCelsius));
-            return _linear ? celsius + (net * _dt / _model.HeatCapacityJoulesPerKelvin) : celsius + (net / _g * _decay);
-        }
+        public double Advance(double celsius, double powerWatts) => celsius + ((powerWatts - (_g * (celsius - _ambient))) * _gain);
     }
 
     /// <summary>
