@@ -268,7 +268,18 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                h = Math.Min(h * (h * s >= 8 * _slowestTimeConstant ? SettledGrowth : onePathInert ? InertGrowth : Growth), MaxStep(conductance, t));
+                bool settled = h * s >= 8 * _slowestTimeConstant;
+                h = Math.Min(h * (settled ? SettledGrowth : onePathInert ? InertGrowth : Growth), MaxStep(conductance, t));
+                if (settled && t >= CoolingFromSeconds)
+                {
+                    // Every drive is zero and the currents have died away (to e^-8 of what they were when the drive
+                    // stopped, their heating to e^-16): the item only cools, and the step may go straight to a tenth of
+                    // the cooling time constant, or the step over which cooling moves it by the step's limit, rather
+                    // than grow there from the currents' time scale through steps that change nothing.
+                    double tauCooling = _thermal.TimeConstantFor(conductance);
+                    double cooling = Math.Min(tauCooling / 10, tauCooling * MaxStepKelvin / Math.Abs(temperature - _thermal.Environment.AmbientCelsius));
+                    h = Math.Min(Math.Max(h, cooling), MaxStep(conductance, t));
+                }
             }
 
             if (budgetExceeded || melted is not null || !Finite.Is(total) || !Finite.Is(temperature))

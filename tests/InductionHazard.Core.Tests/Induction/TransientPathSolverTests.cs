@@ -117,4 +117,41 @@ public class TransientPathSolverTests
             Assert.True(onChord >= f.TemperatureCelsius - 1e-3, "at t = " + f.TimeSeconds + " s the coarse history reads " + onChord + " against " + f.TemperatureCelsius);
         }
     }
+
+    [Validates("cooling after a pulse: T = Ta + (T1 - Ta) exp(-G t / m c)", "Newton's law of cooling (closed form, convection only)", "1e-9")]
+    [Fact]
+    public void AfterThePulseTheLongCoolingStepsLieOnNewtonsCoolingCurve()
+    {
+        // Convection only (no radiation), so G is fixed and the cooling is an exact exponential. Once the currents have
+        // died the steps jump to a tenth of the cooling time constant (or less, by the step's 0.5 K limit): every sample from there must lie on the closed
+        // form to 1e-9 of the rise, and the straight pieces between samples above it (the curve is convex).
+        const double HeatCapacity = 0.21, Surface = 2e-4, Convection = 10, Ambient = 20;
+        var thermal = new LumpedThermalModel(HeatCapacity, Surface, new ThermalEnvironment(Ambient, Convection, 0));
+        double tauCooling = HeatCapacity / (Convection * Surface);
+        Func<double, double> emf = t => t < 1 ? 0.03 : 0;
+        TransientRun run = new TransientPathSolver(ModalCircuit.OneLoop(L, R), _ => 1, thermal) { CoolingFromSeconds = 1.0 }
+            .Run(emf, new[] { 1.0 }, 0, 3 * tauCooling, 20, CancellationToken.None);
+        // The tail starts at the sample where the steps leave the currents' time scale (the first longer than 1000 L/R).
+        int first = Enumerable.Range(1, run.Heating.Count - 1).First(k => run.Heating[k].TimeSeconds > 1 && run.Heating[k].TimeSeconds - run.Heating[k - 1].TimeSeconds > 1000 * Tau) - 1;
+        HeatingSample settled = run.Heating[first];
+        Assert.True(settled.TimeSeconds < 1 + (100 * Tau), "the currents' steps end " + ((settled.TimeSeconds - 1) / Tau) + " L/R after the pulse");
+        double rise = settled.TemperatureCelsius - Ambient;
+        Assert.True(rise > 5, "the pulse heats the ring by " + rise + " K");
+        double Exact(double t) => Ambient + (rise * Math.Exp(-(t - settled.TimeSeconds) / tauCooling));
+        var tail = run.Heating.Where(h => h.TimeSeconds >= settled.TimeSeconds).ToList();
+        // The first cooling step: a tenth of the time constant, or the step in which cooling moves the item by the
+        // step limit of 0.5 K (halved at most once where the curve's start is steeper than that estimate).
+        double expected = Math.Min(tauCooling / 10, tauCooling * 0.5 / rise);
+        Assert.True(tail[1].TimeSeconds - tail[0].TimeSeconds >= expected / 2.01, "the first cooling step, " + (tail[1].TimeSeconds - tail[0].TimeSeconds) + " s, against " + expected + " s");
+        for (int k = 0; k < tail.Count; k++)
+        {
+            Within.Absolute(Exact(tail[k].TimeSeconds), tail[k].TemperatureCelsius, 1e-9 * rise, "T at t = " + tail[k].TimeSeconds + " s");
+            if (k > 0)
+            {
+                double middle = 0.5 * (tail[k - 1].TimeSeconds + tail[k].TimeSeconds);
+                double chord = 0.5 * (tail[k - 1].TemperatureCelsius + tail[k].TemperatureCelsius);
+                Assert.True(chord >= Exact(middle), "at t = " + middle + " s the history reads " + chord + " K, below the cooling curve's " + Exact(middle));
+            }
+        }
+    }
 }
