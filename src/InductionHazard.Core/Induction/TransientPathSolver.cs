@@ -314,6 +314,7 @@ public sealed class TransientPathSolver
     private double Sweep(double[] z, StepWork work, double s, double h, double crossAtUnitScale)
     {
         double inverseS = 1 / s;
+        work.InverseScale = inverseS;
         double energy = crossAtUnitScale * inverseS;
         for (int k = 0; k < z.Length; k++)
         {
@@ -335,7 +336,7 @@ public sealed class TransientPathSolver
         if (z.Length == 1)
         {
             double w = _circuit.TotalWeights[0];
-            (double peak, double at) = RlStep.Peak(new RlStep.Circuit(_circuit.Lambdas[0], _inverseLambdas[0], s, 1 / s), z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
+            (double peak, double at) = RlStep.Peak(new RlStep.Circuit(_circuit.Lambdas[0], _inverseLambdas[0], s, work.InverseScale), z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
             return (w * peak, at);
         }
 
@@ -434,7 +435,7 @@ public sealed class TransientPathSolver
 
     /// <summary>The longest step at a time, with the conductance G at the item's temperature then.</summary>
     private double MaxStep(double conductance, double t) =>
-        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantFor(conductance) / (t >= CoolingFromSeconds ? 1 : 10), 1e-6));
+        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantFor(conductance) * (t >= CoolingFromSeconds ? 1 : 0.1), 1e-6));
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork
@@ -449,6 +450,9 @@ public sealed class TransientPathSolver
         }
 
         public double[] Next { get; }
+
+        /// <summary>1 / s of the last sweep, which the step's peak shares.</summary>
+        public double InverseScale { get; set; }
 
         public double[] DriveA { get; }
 
