@@ -34,7 +34,11 @@ public sealed class ItemPaths
         Description = description;
         Problem = problem;
         ReferenceResistivityOhmMeters = referenceResistivity;
+        _inverseReference = 1 / referenceResistivity;
     }
+
+    /// <summary>1 / rho_ref: <see cref="ScaleAt"/> runs at every step of a transient, where a division held up the step.</summary>
+    private readonly double _inverseReference;
 
     /// <summary>The item.</summary>
     public ConductiveItem Item { get; }
@@ -57,8 +61,8 @@ public sealed class ItemPaths
     /// <summary>The resistivity the modes were found at (the item's at its starting temperature), ohm m.</summary>
     public double ReferenceResistivityOhmMeters { get; }
 
-    /// <summary>s(T) = rho(T) / rho_ref: every path's resistance relative to the reference.</summary>
-    public double ScaleAt(double celsius) => Item.Material.ResistivityAt(celsius) / ReferenceResistivityOhmMeters;
+    /// <summary>s(T) = rho(T) / rho_ref: every path's resistance relative to the reference (as rho(T) times 1 / rho_ref, within an ulp of the quotient).</summary>
+    public double ScaleAt(double celsius) => Item.Material.ResistivityAt(celsius) * _inverseReference;
 
     /// <summary>Chooses and builds the paths for an item at a drive's significant frequency.</summary>
     /// <param name="item">The item (closed).</param>
