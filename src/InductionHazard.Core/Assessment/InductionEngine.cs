@@ -338,7 +338,12 @@ public static class InductionEngine
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
         double tau = c.Ldc / c.Rdc;
-        double rampTime = terms.Min(t => t.Waveform.TimeScales[0].Seconds);
+        double rampTime = double.PositiveInfinity;
+        for (int k = 0; k < terms.Count; k++)
+        {
+            rampTime = Math.Min(rampTime, terms[k].Waveform.TimeScales[0].Seconds);
+        }
+
         bool single = c.Paths!.IsSingle;
         c.Notes.Add(
             (run.Steps, modes: c.Modal!.Count, single, c.Ldc, tau),

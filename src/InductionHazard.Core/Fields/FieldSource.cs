@@ -113,7 +113,24 @@ public sealed class FieldSource
     }
 
     /// <summary>The highest significant frequency over the terms, Hz.</summary>
-    public double SignificantFrequencyHertz => Terms.Max(t => t.Waveform.SignificantFrequencyHertz);
+    public double SignificantFrequencyHertz
+    {
+        get
+        {
+            // By a loop, as Enumerable.Max would (every assessment asks).
+            double highest = Terms[0].Waveform.SignificantFrequencyHertz;
+            for (int k = 1; k < Terms.Count; k++)
+            {
+                double f = Terms[k].Waveform.SignificantFrequencyHertz;
+                if (f > highest || double.IsNaN(highest))
+                {
+                    highest = f;
+                }
+            }
+
+            return highest;
+        }
+    }
 
     /// <summary>The earliest start of any term, s (found once: the terms are copied when the source is made, and a waveform does not change).</summary>
     public double StartSeconds { get; }

@@ -71,7 +71,12 @@ public static class FluxCoupling
         }
         else
         {
-            FieldWaveform[] drives = source.Terms.Select(t => t.Waveform).ToArray();
+            var drives = new FieldWaveform[n];
+            for (int k = 0; k < n; k++)
+            {
+                drives[k] = source.Terms[k].Waveform;
+            }
+
             double[] times = DriveSampling.Times(drives);
             Vector3D Flux(double t)
             {

@@ -17,9 +17,22 @@ public static class DriveSampling
     /// <summary>The sample times over the drives' active spans, sorted and distinct.</summary>
     public static double[] Times(IReadOnlyList<FieldWaveform> drives)
     {
+        if (drives.Count == 0)
+        {
+            throw new ArgumentException("no drives to sample", nameof(drives));
+        }
+
         var times = new List<double>();
-        double start = drives.Min(d => d.StartSeconds);
-        double end = drives.Max(d => double.IsInfinity(d.EndSeconds) ? d.StartSeconds + Span(d) : d.EndSeconds);
+
+        // The drives' earliest start, latest end and least step, by one loop (this runs for every transient assessment).
+        double start = double.PositiveInfinity, end = double.NegativeInfinity, step = double.PositiveInfinity;
+        for (int k = 0; k < drives.Count; k++)
+        {
+            FieldWaveform d = drives[k];
+            start = Math.Min(start, d.StartSeconds);
+            end = Math.Max(end, double.IsInfinity(d.EndSeconds) ? d.StartSeconds + Span(d) : d.EndSeconds);
+            step = Math.Min(step, d.MaxStepSeconds);
+        }
         foreach (FieldWaveform d in drives)
         {
             foreach (double b in d.Breakpoints)
@@ -31,7 +44,6 @@ public static class DriveSampling
             }
         }
 
-        double step = drives.Min(d => d.MaxStepSeconds);
         double span = end - start;
         times.Add(start);
         times.Add(end);
