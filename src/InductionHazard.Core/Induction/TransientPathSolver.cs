@@ -138,7 +138,8 @@ public sealed class TransientPathSolver
         int modes = _circuit.Count, terms = drives.Length;
         double[] edges = EdgesWithin(breakpoints, tStart, tEnd);
         // Room for a typical run's samples from the start (a ring's ramp records some 40), rather than growing from four.
-        var circuit = new List<CircuitSample>(InitialSampleCapacity) { new(tStart, outlineEmf(tStart), 0, celsius0) };
+        var last = new CircuitSample(tStart, outlineEmf(tStart), 0, celsius0);
+        var circuit = new List<CircuitSample>(InitialSampleCapacity) { last };
         var heating = new List<HeatingSample>(InitialSampleCapacity) { new(tStart, celsius0, 0) };
         double recordSpacing = (tEnd - tStart) / MaxRecordedSamples;
         var z = new double[modes];
@@ -208,7 +209,7 @@ public sealed class TransientPathSolver
                     work.Start[k] = ea - (work.Slope[k] * h / 4);
                 }
 
-                double cross = CrossEnergyAtUnitScale(work, h);
+                double cross = CrossCoupling is null ? 0 : CrossEnergyAtUnitScale(work, h);
 
                 // s(T) at the mid-step temperature: predicted with the last step's power, then corrected once more
                 // only when the step's own energy moves the end temperature by more than a hundredth of the step limit.
@@ -251,9 +252,10 @@ public sealed class TransientPathSolver
                 temperature = next;
                 conductance = _thermal.Conductance(temperature);
                 bool melting = temperature > StopAboveCelsius;
-                if (melting || t >= edge || t - circuit[circuit.Count - 1].TimeSeconds >= recordSpacing || Changed(circuit[circuit.Count - 1], total, temperature))
+                if (melting || t >= edge || t - last.TimeSeconds >= recordSpacing || Changed(last, total, temperature))
                 {
-                    circuit.Add(new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature));
+                    last = new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature);
+                    circuit.Add(last);
                     heating.Add(new HeatingSample(t, temperature, power));
                 }
 
