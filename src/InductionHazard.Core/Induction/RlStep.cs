@@ -23,8 +23,6 @@ internal static class RlStep
     private const double SeriesBelowX = 0.04;
 
     /// <summary>The current after s seconds.</summary>
-    public static double Current(double l, double r, double i0, double e0, double slope, double s) => Current(new Circuit(l, r), i0, e0, slope, s);
-
     private static double Current(Circuit rl, double i0, double e0, double slope, double s)
     {
         double tau = rl.Tau;
@@ -40,13 +38,6 @@ internal static class RlStep
     /// </summary>
     internal readonly struct Circuit
     {
-        public Circuit(double l, double r)
-        {
-            InverseR = 1 / r;
-            Tau = l * InverseR;
-            InverseTau = r / l;
-        }
-
         /// <summary>From a mode's time constant lambda at unit scale, its reciprocal, and 1 / s: tau = lambda / s, R = s.</summary>
         public Circuit(double lambda, double inverseLambda, double s, double inverseS)
         {
@@ -68,8 +59,6 @@ internal static class RlStep
     /// + c^2 tau (1 - e^-2x)/2 for x = h/tau above a quarter; 4-point Gauss-Legendre on the exact current below it,
     /// where the closed form's terms cancel (its error there is below 1e-9 of the energy).
     /// </summary>
-    public static double Energy(double l, double r, double i0, double e0, double slope, double h) => Energy(new Circuit(l, r), r, i0, e0, slope, h);
-
     private static double Energy(Circuit rl, double r, double i0, double e0, double slope, double h)
     {
         double x = h * rl.InverseTau;
@@ -96,9 +85,6 @@ internal static class RlStep
     /// b_2 = (g tau/R - (e0/R - i0)) x^2 / 2, b_n = -b_(n-1) x / n; the end current is sum b_n and the energy
     /// R h sum_m sum_n b_m b_n / (m + n + 1), written out for the nine terms so that it runs in registers.
     /// </summary>
-    public static (double Current, double Energy) Advance(double l, double r, double i0, double e0, double slope, double h) => Advance(new Circuit(l, r), r, i0, e0, slope, h);
-
-    /// <summary>The same, with the circuit's constants found once for the step (<see cref="Circuit"/>).</summary>
     internal static (double Current, double Energy) Advance(Circuit rl, double r, double i0, double e0, double slope, double h)
     {
         double tau = rl.Tau;

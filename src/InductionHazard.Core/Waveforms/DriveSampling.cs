@@ -33,6 +33,7 @@ public static class DriveSampling
             end = Math.Max(end, double.IsInfinity(d.EndSeconds) ? d.StartSeconds + Span(d) : d.EndSeconds);
             step = Math.Min(step, d.MaxStepSeconds);
         }
+
         foreach (FieldWaveform d in drives)
         {
             foreach (double b in d.Breakpoints)
