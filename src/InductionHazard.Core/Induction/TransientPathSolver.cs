@@ -83,7 +83,11 @@ public sealed class TransientPathSolver
     /// <summary>The largest temperature change in one step, K.</summary>
     public double MaxStepKelvin { get; init; } = HeatingIntegrator.DefaultMaxStepKelvin;
 
-    /// <summary>The largest step, s (for drives that are not piecewise linear), while the drive is curved.</summary>
+    /// <summary>
+    /// The largest step, s (for drives that are not piecewise linear), while the drive is curved. Infinite (the
+    /// default) says every drive is linear between the breakpoints: each drive's line is then read at a segment's first
+    /// step and serves the rest of it.
+    /// </summary>
     public double MaxStepSeconds { get; init; } = double.PositiveInfinity;
 
     /// <summary>Until when <see cref="MaxStepSeconds"/> applies, s: after it the emf is piecewise linear (leaving, cooling).</summary>
@@ -157,6 +161,7 @@ public sealed class TransientPathSolver
         foreach (double edge in edges)
         {
             double h = FreshStep(temperature, conductance, edge - t, t);
+            bool lineKnown = false;
             while (t < edge)
             {
                 if (++steps > MaxSteps)
@@ -187,11 +192,38 @@ public sealed class TransientPathSolver
                     break;
                 }
 
-                // Each drive over the step as a line through its values at h/4 and 3h/4: exact for linear drives.
-                for (int j = 0; j < terms; j++)
+                // Each drive over the step as a line through its values at h/4 and 3h/4: exact for linear drives. Where
+                // every drive is linear up to the edge (past the curved part, or none is curved), the line read at the
+                // segment's first step serves its later steps (a piecewise-constant emf, a ramp's, the same values).
+                bool linear = t >= CurvedUntilSeconds || double.IsPositiveInfinity(MaxStepSeconds);
+                if (linear && lineKnown)
                 {
-                    work.DriveA[j] = drives[j](t + (h / 4));
-                    work.DriveB[j] = drives[j](t + (3 * h / 4));
+                    double a = t + (h / 4) - work.LineFrom, b = t + (3 * h / 4) - work.LineFrom;
+                    for (int j = 0; j < terms; j++)
+                    {
+                        work.DriveA[j] = work.LineAt[j] + (work.LineSlope[j] * a);
+                        work.DriveB[j] = work.LineAt[j] + (work.LineSlope[j] * b);
+                    }
+                }
+                else
+                {
+                    for (int j = 0; j < terms; j++)
+                    {
+                        work.DriveA[j] = drives[j](t + (h / 4));
+                        work.DriveB[j] = drives[j](t + (3 * h / 4));
+                    }
+
+                    if (linear)
+                    {
+                        work.LineFrom = t + (h / 4);
+                        for (int j = 0; j < terms; j++)
+                        {
+                            work.LineAt[j] = work.DriveA[j];
+                            work.LineSlope[j] = (work.DriveB[j] - work.DriveA[j]) / (h / 2);
+                        }
+
+                        lineKnown = true;
+                    }
                 }
 
                 double inverseH = 1 / h, twoOverH = 2 * inverseH;
@@ -446,12 +478,23 @@ public sealed class TransientPathSolver
         {
             DriveA = new double[terms];
             DriveB = new double[terms];
+            LineAt = new double[terms];
+            LineSlope = new double[terms];
             Start = new double[modes];
             Slope = new double[modes];
             Next = new double[modes];
         }
 
         public double[] Next { get; }
+
+        /// <summary>Each drive's value at <see cref="LineFrom"/> on a segment where it is linear.</summary>
+        public double[] LineAt { get; }
+
+        /// <summary>Each drive's rate on that segment.</summary>
+        public double[] LineSlope { get; }
+
+        /// <summary>Where the drives' lines were read, s.</summary>
+        public double LineFrom { get; set; }
 
         /// <summary>1 / s of the last sweep, which the step's peak shares.</summary>
         public double InverseScale { get; set; }

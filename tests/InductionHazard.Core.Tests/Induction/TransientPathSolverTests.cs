@@ -32,6 +32,25 @@ public class TransientPathSolverTests
         Within.Relative(e / R * (1 - Math.Exp(-20)), run.PeakCurrentAmperes, 1e-9, "peak current at the end of the ramp");
     }
 
+    [Validates("i(t) = (g/R)(t - tau (1 - exp(-t/tau))) for an emf rising as g t", "RL circuit theory (closed form)", "1e-9")]
+    [Fact]
+    public void AnEmfRisingLinearlyGivesTheClosedFormCurrent()
+    {
+        // A linear emf e = g t (a field rising as t^2), linear between its breakpoints, so each segment's line is read
+        // once: i(t) = (g/R)(t - tau (1 - exp(-t/tau))) with tau = L/R (RL circuit theory), then a constant emf g t1
+        // from t1 = 10 L/R: i = (g t1/R) + (i(t1) - g t1/R) exp(-(t - t1)/tau).
+        double g = 5.0, t1 = 10 * Tau;
+        double Exact(double t) => t <= t1
+            ? g / R * (t - (Tau * (1 - Math.Exp(-t / Tau))))
+            : (g * t1 / R) + ((g / R * (t1 - (Tau * (1 - Math.Exp(-t1 / Tau))))) - (g * t1 / R)) * Math.Exp(-(t - t1) / Tau);
+        TransientRun run = FixedResistance().Run(t => t < t1 ? g * t : g * t1, new[] { t1 }, 0, 30 * Tau, 20, CancellationToken.None);
+        Assert.True(run.Circuit.Count > 10, "the series resolves the rise");
+        foreach (CircuitSample s in run.Circuit.Skip(1))
+        {
+            Within.Relative(Exact(s.TimeSeconds), s.CurrentAmperes, 1e-9, "i at t = " + s.TimeSeconds);
+        }
+    }
+
     [Validates("exponential decay after the ramp", "RL circuit theory", "1e-8")]
     [Fact]
     public void AfterTheRampTheCurrentDecaysWithTimeConstantLOverR()
