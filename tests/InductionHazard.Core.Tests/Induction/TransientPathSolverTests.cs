@@ -142,8 +142,9 @@ public class TransientPathSolverTests
     public void AfterThePulseTheLongCoolingStepsLieOnNewtonsCoolingCurve()
     {
         // Convection only (no radiation), so G is fixed and the cooling is an exact exponential. Once the currents have
-        // died the steps jump to a tenth of the cooling time constant (or less, by the step's 0.5 K limit): every sample from there must lie on the closed
-        // form to 1e-9 of the rise, and the straight pieces between samples above it (the curve is convex).
+        // died the steps jump to a tenth of the cooling time constant (or less, by the step's 0.5 K limit): every sample
+        // from there must lie on the closed form to 1e-9 of the rise, and the straight pieces between samples above it
+        // (the curve is convex).
         const double HeatCapacity = 0.21, Surface = 2e-4, Convection = 10, Ambient = 20;
         var thermal = new LumpedThermalModel(HeatCapacity, Surface, new ThermalEnvironment(Ambient, Convection, 0));
         double tauCooling = HeatCapacity / (Convection * Surface);
