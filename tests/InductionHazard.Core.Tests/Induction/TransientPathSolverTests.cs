@@ -174,4 +174,47 @@ public class TransientPathSolverTests
             }
         }
     }
+
+    [Validates("i(t) after a change of emf too small to see beside the peak, stepped over in long steps", "RL circuit theory (closed form)", "1e-9")]
+    [Fact]
+    public void AChangeTooSmallToSeeBesideThePeakIsSteppedOverInLongStepsAndStaysExact()
+    {
+        // A constant emf e for 20 L/R, then 0.4 % more for 20 L/R: i = e'/R + (i(t1) - e'/R) exp(-(t - t1)/tau) after t1
+        // (RL circuit theory). The change moves the current by under 1 % of its peak, which a chart on the peak's scale
+        // cannot show, so its steps grow sixteenfold where a visible change's grow by half: exact all the same (each
+        // step is the exact exponential update), in fewer steps than the first segment's rise takes.
+        double e = 1e-3, bumped = 1.004 * e, t1 = 20 * Tau, t2 = 40 * Tau;
+        double atT1 = e / R * (1 - Math.Exp(-20));
+        double Exact(double t) => t <= t1 ? e / R * (1 - Math.Exp(-t / Tau)) : (bumped / R) + ((atT1 - (bumped / R)) * Math.Exp(-(t - t1) / Tau));
+        TransientRun run = FixedResistance().Run(t => t < t1 ? e : bumped, new[] { t1 }, 0, t2, 20, CancellationToken.None);
+        TransientRun rise = FixedResistance().Run(t => e, new[] { t1 }, 0, t1, 20, CancellationToken.None);
+        foreach (CircuitSample s in run.Circuit.Skip(1))
+        {
+            Within.Relative(Exact(s.TimeSeconds), s.CurrentAmperes, 1e-9, "i at t = " + s.TimeSeconds);
+        }
+
+        Within.Relative(Exact(t2), run.PeakCurrentAmperes, 1e-9, "the peak current, at the end");
+        int after = run.Steps - rise.Steps;
+        Assert.True(after > 0 && after <= rise.Steps / 2, "the small change took " + after + " steps, the rise " + rise.Steps);
+    }
+
+    [Validates("temperature of an uncooled loop under a constant emf: T0 + (e^2/R)(t - 2 tau (1 - e^(-t/tau)) + (tau/2)(1 - e^(-2t/tau))) / m c", "RL circuit theory and the heat balance (closed form)", "1e-9")]
+    [Fact]
+    public void AStronglyHeatedLoopStepsAtTheTemperatureLimitWithoutStepsThrownAway()
+    {
+        // A fixed resistance in a loop with no cooling: its temperature is T0 + W(t) / (m c), W the integral of R i^2 with
+        // i = (e/R)(1 - e^(-t/tau)) (RL circuit theory), (e^2/R)(t - 2 tau (1 - e^(-t/tau)) + (tau/2)(1 - e^(-2t/tau))). Heated by 40 K, its steps are bounded by the 0.5 K a step: each step after the first is sized from
+        // the last one's rate of heating (to nine tenths of the limit) rather than grown past it and halved, so the run
+        // takes about 40 / 0.45 steps besides the current's rise, and no more than a tenth above that.
+        const double HeatCapacity = 1e-3, Start = 20;
+        double e = 1e-3, end = 40 * HeatCapacity * R / (e * e);
+        var thermal = new LumpedThermalModel(HeatCapacity, 1e-4, new ThermalEnvironment(Start, 0, 0));
+        TransientRun run = new TransientPathSolver(ModalCircuit.OneLoop(L, R), _ => 1, thermal).Run(t => e, Array.Empty<double>(), 0, end, Start, CancellationToken.None);
+        double energy = e * e / R * (end - (2 * Tau * (1 - Math.Exp(-end / Tau))) + (Tau / 2 * (1 - Math.Exp(-2 * end / Tau))));
+        Within.Relative(energy, run.EnergyJoules, 1e-9, "the energy");
+        Within.Relative(Start + (energy / HeatCapacity), run.FinalCelsius, 1e-9, "the final temperature");
+        TransientRun rise = new TransientPathSolver(ModalCircuit.OneLoop(L, R), _ => 1, thermal).Run(t => e, Array.Empty<double>(), 0, 20 * Tau, Start, CancellationToken.None);
+        double least = (run.FinalCelsius - Start) / (0.9 * 0.5);
+        Assert.True(run.Steps <= rise.Steps + (1.1 * least), run.Steps + " steps, against " + least + " at nine tenths of the limit and " + rise.Steps + " for the current's rise");
+    }
 }
