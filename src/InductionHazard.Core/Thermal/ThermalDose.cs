@@ -265,12 +265,16 @@ public static class ThermalDose
                     // with k adds nothing to the derivative).
                     double before = span * (BreakpointCelsius - ca) / (cb - ca);
                     double rc = ra + ((rb - ra) * (before / span));
-                    weighted += LogMean(wa, 1, ca, BreakpointCelsius, ra, rc, LogRate(ca), before, slope, ref perK)
-                        + LogMean(1, wb, BreakpointCelsius, cb, rc, rb, LogRate(cb), span - before, slope, ref perK);
+                    (double first, double firstPerK) = LogMean(wa, 1, ca, BreakpointCelsius, ra, rc, LogRate(ca), before, slope);
+                    (double second, double secondPerK) = LogMean(1, wb, BreakpointCelsius, cb, rc, rb, LogRate(cb), span - before, slope);
+                    weighted += first + second;
+                    perK += firstPerK + secondPerK;
                 }
                 else
                 {
-                    weighted += LogMean(wa, wb, ca, cb, ra, rb, LogRate(0.5 * (ca + cb)), span, slope, ref perK);
+                    (double piece, double piecePerK) = LogMean(wa, wb, ca, cb, ra, rb, LogRate(0.5 * (ca + cb)), span, slope);
+                    weighted += piece;
+                    perK += piecePerK;
                 }
             }
 
@@ -290,17 +294,22 @@ public static class ThermalDose
 
     /// <summary>
     /// The integral of r^(43 - T) over a piece where T runs linearly from c0 to c1 and the weights are w0 and w1,
-    /// seconds (weight times time); with <paramref name="slope"/>, adds to <paramref name="derivative"/> its derivative in
-    /// k when T = start + k rise, the rise running from rise0 to rise1: -ln r times the integral of rise times the weight.
+    /// seconds (weight times time); with <paramref name="slope"/>, also its derivative in k when T = start + k rise, the
+    /// rise running from rise0 to rise1: -ln r times the integral of rise times the weight (zero without).
     /// </summary>
-    private static double LogMean(double w0, double w1, double c0, double c1, double rise0, double rise1, double logRate, double seconds, bool slope, ref double derivative)
+    /// <remarks>
+    /// The series multiply by their coefficients' reciprocals rather than divide (a division takes several times as
+    /// long, and four of them a piece were a sixth of a pass), and the derivative is returned rather than added through
+    /// a reference, which kept the running sum in memory.
+    /// </remarks>
+    private static (double Weighted, double PerK) LogMean(double w0, double w1, double c0, double c1, double rise0, double rise1, double logRate, double seconds, bool slope)
     {
         double x = -logRate * (c1 - c0);  // ln(w1 / w0)
-        double mean, firstMoment, inverse = 0;
+        double mean, inverse = 0;
         if (Math.Abs(x) < 1e-3)
         {
             // (e^x - 1) / x to five terms: the next is below x^5 / 720, under 2e-18.
-            mean = w0 * (1 + (x / 2 * (1 + (x / 3 * (1 + (x / 4 * (1 + (x / 5))))))));
+            mean = w0 * (1 + (x * 0.5 * (1 + (x * (1.0 / 3) * (1 + (x * 0.25 * (1 + (x * 0.2))))))));
         }
         else
         {
@@ -308,17 +317,17 @@ public static class ThermalDose
             mean = (w1 - w0) * inverse;
         }
 
-        if (slope)
+        if (!slope)
         {
-            // w0 times the integral of u e^(x u) over [0, 1]: (e^x (x - 1) + 1) / x^2, or its series for small x (for a
-            // Newton step, whose accuracy only sets how fast the root is reached).
-            firstMoment = Math.Abs(x) < 1e-2
-                ? w0 * (0.5 + (x * ((1.0 / 3) + (x * (0.125 + (x * ((1.0 / 30) + (x / 144))))))))
-                : ((w1 * (x - 1)) + w0) * inverse * inverse;
-            derivative += -logRate * seconds * ((rise0 * mean) + ((rise1 - rise0) * firstMoment));
+            return (seconds * mean, 0);
         }
 
-        return seconds * mean;
+        // w0 times the integral of u e^(x u) over [0, 1]: (e^x (x - 1) + 1) / x^2, or its series for small x (for a
+        // Newton step, whose accuracy only sets how fast the root is reached).
+        double firstMoment = Math.Abs(x) < 1e-2
+            ? w0 * (0.5 + (x * ((1.0 / 3) + (x * (0.125 + (x * ((1.0 / 30) + (x * (1.0 / 144)))))))))
+            : ((w1 * (x - 1)) + w0) * inverse * inverse;
+        return (seconds * mean, -logRate * seconds * ((rise0 * mean) + ((rise1 - rise0) * firstMoment)));
     }
 
     /// <summary>The dose of a constant temperature held for a time, minutes.</summary>
