@@ -209,7 +209,7 @@ public static class InductionEngine
         AddBefore(breakpointList, outside, end);
         double[] breakpoints = DriveSampling.SortedDistinct(breakpointList);
         var timeList = new List<double>();
-        foreach (double t in DriveSampling.Times(WaveformsOf(terms)))
+        foreach (double t in source.DriveTimes)
         {
             if (t < leave)
             {
@@ -462,17 +462,6 @@ public static class InductionEngine
     {
         double cooling = c.Thermal.TimeConstantSeconds(c.Start);
         return Math.Max(10 * c.Ldc / c.Rdc, double.IsInfinity(cooling) ? 0 : 3 * cooling);
-    }
-
-    private static FieldWaveform[] WaveformsOf(IReadOnlyList<Fields.SourceTerm> terms)
-    {
-        var waveforms = new FieldWaveform[terms.Count];
-        for (int k = 0; k < waveforms.Length; k++)
-        {
-            waveforms[k] = terms[k].Waveform;
-        }
-
-        return waveforms;
     }
 
     /// <summary>Adds a time to the list when it is before the end.</summary>

@@ -150,6 +150,14 @@ public sealed class FieldSource
     private int _periodic;
     private int _sinusoidal;
 
+    /// <summary>
+    /// The times at which the drives are sampled for their extremes (<see cref="DriveSampling.Times"/> over the terms'
+    /// waveforms), found once: every transient assessment at this source reads them twice. Shared: not to be changed.
+    /// </summary>
+    internal double[] DriveTimes => _driveTimes ??= DriveSampling.Times(Terms.Select(t => t.Waveform).ToArray());
+
+    private double[]? _driveTimes;
+
     private static bool Remember(ref int known, bool value)
     {
         known = value ? 2 : 1;

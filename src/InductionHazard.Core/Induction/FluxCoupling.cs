@@ -77,7 +77,7 @@ public static class FluxCoupling
                 drives[k] = source.Terms[k].Waveform;
             }
 
-            double[] times = DriveSampling.Times(drives);
+            double[] times = source.DriveTimes;
             Vector3D Flux(double t)
             {
                 Vector3D sum = Vector3D.Zero;

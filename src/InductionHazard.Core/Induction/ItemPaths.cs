@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using System.Globalization;
 using System.Numerics;
+using System.Threading;
 using InductionHazard.Fields;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
@@ -71,6 +72,26 @@ public sealed class ItemPaths
     /// <param name="thinLoop">True when the loop is thin against its span and the skin depth (one path holds).</param>
     /// <param name="refinement">Multiplies the fewest cells across each dimension, and divides the surface cell (to show convergence).</param>
     public static ItemPaths For(ConductiveItem item, double frequencyHertz, double startCelsius, bool thinLoop, int refinement = 1)
+    {
+        // The item's last paths serve again when asked for the same (an item is assessed at many places and distances;
+        // a filament body's modes take milliseconds): everything below depends on these and the item alone, and an
+        // item does not change.
+        var key = (frequencyHertz, startCelsius, thinLoop, refinement);
+        if (Volatile.Read(ref item.LastPaths) is { } last && last._key.Equals(key))
+        {
+            return last;
+        }
+
+        ItemPaths paths = Build(item, frequencyHertz, startCelsius, thinLoop, refinement);
+        paths._key = key;
+        Volatile.Write(ref item.LastPaths, paths);
+        return paths;
+    }
+
+    /// <summary>What the key asks for, built.</summary>
+    private (double Frequency, double Start, bool Thin, int Refinement) _key;
+
+    private static ItemPaths Build(ConductiveItem item, double frequencyHertz, double startCelsius, bool thinLoop, int refinement)
     {
         double rho = item.Material.ResistivityAt(startCelsius);
         if (!thinLoop && item.Loop is RectangularLoopGeometry frame && item.Loop.Section is RoundWire wire)

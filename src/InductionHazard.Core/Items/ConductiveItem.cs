@@ -36,6 +36,12 @@ public sealed class ConductiveItem
     /// <summary>How a person touches the item.</summary>
     public ContactKind Contact { get; }
 
+    /// <summary>
+    /// The current paths last built for the item, with what they were built for (see <see cref="Induction.ItemPaths.For"/>):
+    /// one reference, so any thread may read or replace it (written with release semantics once they are complete).
+    /// </summary>
+    internal Induction.ItemPaths? LastPaths;
+
     /// <summary>True for a split ring or open loop (a gap that carries the emf and no current).</summary>
     public bool IsSplit => GapMeters > 0;
 
