@@ -25,8 +25,9 @@ public static class InductionEngine
         InductionResponse response;
         if (c.FieldFailed)
         {
-            response = Base(c) with
+            response = new InductionResponse
             {
+                Context = c,
                 Model = "not solved: the source's field cannot be evaluated over the item",
                 PeakEmfVolts = double.NaN,
                 PeakCurrentAmperes = double.NaN,
@@ -88,8 +89,9 @@ public static class InductionEngine
             c.Notes.Add(leaving, static s => "leaving the field takes " + SiFormat.Format(s, "s") + ", counted at the full field (the field falls as the item is carried out, so this overstates)");
         }
 
-        InductionResponse drive = Base(c) with
+        InductionResponse drive = new()
         {
+            Context = c,
             PeakFluxDensityTesla = field.Magnitude,
             PeakFluxWebers = flux.Magnitude,
             EmfKind = EmfKind.Alternating,
@@ -136,8 +138,9 @@ public static class InductionEngine
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the heating integrator");
         Complex z = run.Impedance;
         bool single = c.Paths.IsSingle;
-        return (Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
+        return drive with
         {
+            Heating = Heated(c, run.Heating, run.FinalCelsius, run.EnergyJoules),
             Model = single
                 ? "thin ring (Grover 1946) in periodic steady state: phasor current with skin effect (Kelvin functions); lumped heating with rho(T) and cooling, cycle-averaged"
                 : c.Paths.Description + " (" + c.Paths.Paths!.InductanceMethod + "), in periodic steady state by phasors over the modes of the (L, R) pencil" + CrossWords(c) + "; lumped heating with rho(T) and cooling, cycle-averaged",
@@ -150,7 +153,8 @@ public static class InductionEngine
             LaterCurrentSense = LaterText.From((f, phase: Math.Atan2(z.Imaginary, z.Real), c.Normal, c.FieldDirection), static s => LenzSense.Alternating(s.f, s.phase, s.Normal, s.FieldDirection)),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
-        }).WithForces(mechanics.PeakForce, null, mechanics.PeakTorqueNewtonMeters, mechanics.MeanForce);
+            Forces = (mechanics.PeakForce, null, mechanics.PeakTorqueNewtonMeters, mechanics.MeanForce),
+        };
     }
 
     private static InductionResponse Transient(EngineContext c, CancellationToken cancellation)
@@ -262,8 +266,9 @@ public static class InductionEngine
                 + (n.leaving > 0 ? ", is carried out over " + SiFormat.Format(n.leaving, "s") + " (the flux it holds, " + SiFormat.Format(n.fluxAtLeave, "Wb") + ", falling to zero)" : ", stays in place (fixed)")
                 + ", then cools to " + SiFormat.Format(n.until, "s"));
 
-        InductionResponse drive = Base(c) with
+        InductionResponse drive = new()
         {
+            Context = c,
             PeakFluxDensityTesla = Largest(times, t => Math.Abs(Linked(c.NormalField, t))),
             PeakFluxWebers = Largest(times, t => Math.Abs(Linked(c.Coupling, t))),
             FluxChangeWebers = fluxChange,
@@ -348,8 +353,9 @@ public static class InductionEngine
         c.Notes.Add(
             (run.Steps, modes: c.Modal!.Count, single, c.Ldc, tau),
             static n => "circuit: " + n.Steps + " exact exponential steps over " + n.modes + (n.single ? " mode" : " modes") + ", L = " + SiFormat.Format(n.Ldc, "H") + ", L/R = " + SiFormat.Format(n.tau, "s") + (n.single ? string.Empty : " (the leading mode's)"));
-        return (Heated(drive, c, run.Heating, run.FinalCelsius, run.EnergyJoules) with
+        return drive with
         {
+            Heating = Heated(c, run.Heating, run.FinalCelsius, run.EnergyJoules),
             Model = single
                 ? "thin ring (Grover 1946) as an RL circuit, exact exponential steps with R(T); lumped heating with rho(T) and cooling"
                 : c.Paths.Description + " (" + c.Paths.Paths!.InductanceMethod + "), exact exponential steps over the modes of the (L, R) pencil with R(T)" + CrossWords(c) + "; lumped heating with rho(T) and cooling",
@@ -361,7 +367,8 @@ public static class InductionEngine
             LaterCurrentSense = LaterText.From((run.PeakCurrentAmperes, c.Normal, c.FieldDirection), static s => LenzSense.Transient(s.PeakCurrentAmperes, s.Normal, s.FieldDirection)),
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
-        }).WithForces(run.PeakForce, run.Impulse, run.PeakTorqueNewtonMeters, null);
+            Forces = (run.PeakForce, run.Impulse, run.PeakTorqueNewtonMeters, null),
+        };
     }
 
     /// <summary>The words for the cross-axis heating, when the field has a part across a body's axis.</summary>
@@ -387,37 +394,11 @@ public static class InductionEngine
     }
 
     /// <summary>What every response has: the scenario, the notes and issues, the loop, and the item at its starting temperature.</summary>
-    private static InductionResponse Base(EngineContext c) => new()
-    {
-        Scenario = c.Scenario,
-        ModelNotes = c.Notes,
-        ValidityIssues = c.Issues,
-        Normal = c.Normal,
-        Orientation = c.Orientation,
-        LoopAreaSquareMeters = c.Scenario.Item.Loop.LoopAreaSquareMeters,
-        FrequencyHertz = c.Frequency,
-        ResistanceOhms = c.Rdc,
-        InductanceHenries = c.Ldc,
-        TimeConstantSeconds = c.Ldc / c.Rdc,
-        SkinDepthMeters = SkinEffect.SkinDepthMeters(c.Scenario.Item.Material.ResistivityAt(c.Start), c.Frequency, c.Scenario.Item.Material.RelativePermeability),
-        InitialTemperatureCelsius = c.Start,
-        PeakTemperatureCelsius = c.Start,
-        FinalTemperatureCelsius = c.Start,
-    };
-
     /// <summary>A closed loop's heating history and what follows from it.</summary>
-    private static InductionResponse Heated(InductionResponse r, EngineContext c, IReadOnlyList<HeatingSample> heating, double finalCelsius, double energy)
+    private static HeatingFindings Heated(EngineContext c, IReadOnlyList<HeatingSample> heating, double finalCelsius, double energy)
     {
         double? melted = TemperatureHistory.FirstReaching(heating, c.Scenario.Item.Material.MeltingCelsius);
-        return r with
-        {
-            EnergyDissipatedJoules = energy,
-            PeakTemperatureCelsius = TemperatureHistory.Peak(heating),
-            FinalTemperatureCelsius = finalCelsius,
-            MeltingReachedSeconds = melted,
-            MeltThroughSeconds = melted is { } t ? MeltThrough(c, heating, t) : null,
-            HeatingSeries = heating,
-        };
+        return new HeatingFindings(heating, energy, TemperatureHistory.Peak(heating), finalCelsius, melted, melted is { } t ? MeltThrough(c, heating, t) : null);
     }
 
     /// <summary>

@@ -155,23 +155,64 @@ public sealed record InductionResponse
     public double MassKilograms => Scenario.Item.MassKilograms;
 
     /// <summary>
-    /// This response with its forces: the peak force and its direction, the ratio to the item's weight, the impulse
-    /// and the launch speed of a free item (a transient drive), the mean force (an alternating one), the peak torque.
+    /// What every response has, set first within the initializer that makes it: the scenario, the notes and issues,
+    /// the loop, and the item at its starting temperature.
     /// </summary>
-    public InductionResponse WithForces(Vector3D peakForce, Vector3D? impulse, double peakTorque, Vector3D? meanForce)
+    internal EngineContext Context
     {
-        double mass = Scenario.Item.MassKilograms;
-        double impulseSize = impulse?.Length ?? double.NaN;
-        return this with
+        init
         {
-            PeakForceNewtons = peakForce.Length,
-            PeakForceDirection = peakForce.Length > 0 ? peakForce.Normalized() : Vector3D.Zero,
-            ForceToWeightRatio = peakForce.Length / (mass * PhysicalConstants.StandardGravity),
-            ImpulseNewtonSeconds = impulse is null ? null : impulseSize,
-            LaunchSpeedMetersPerSecond = impulse is null || Scenario.Item.Contact != Items.ContactKind.Free ? null : impulseSize / mass,
-            MeanForceNewtons = meanForce?.Length,
-            PeakTorqueNewtonMeters = peakTorque,
-        };
+            Scenario = value.Scenario;
+            ModelNotes = value.Notes;
+            ValidityIssues = value.Issues;
+            Normal = value.Normal;
+            Orientation = value.Orientation;
+            LoopAreaSquareMeters = value.Scenario.Item.Loop.LoopAreaSquareMeters;
+            FrequencyHertz = value.Frequency;
+            ResistanceOhms = value.Rdc;
+            InductanceHenries = value.Ldc;
+            TimeConstantSeconds = value.Ldc / value.Rdc;
+            SkinDepthMeters = Induction.SkinEffect.SkinDepthMeters(value.Scenario.Item.Material.ResistivityAt(value.Start), value.Frequency, value.Scenario.Item.Material.RelativePermeability);
+            InitialTemperatureCelsius = value.Start;
+            PeakTemperatureCelsius = value.Start;
+            FinalTemperatureCelsius = value.Start;
+        }
+    }
+
+    /// <summary>
+    /// The forces, set within the initializer that makes the response (after <see cref="Scenario"/>, whose item's
+    /// mass and contact they read): the peak force and its direction, the ratio to the item's weight, the impulse and
+    /// the launch speed of a free item (a transient drive), the mean force (an alternating one), the peak torque. The
+    /// engine makes each response in one initializer rather than copying it for each part.
+    /// </summary>
+    internal (Vector3D Peak, Vector3D? Impulse, double Torque, Vector3D? Mean) Forces
+    {
+        init
+        {
+            double mass = Scenario.Item.MassKilograms;
+            double impulseSize = value.Impulse?.Length ?? double.NaN;
+            PeakForceNewtons = value.Peak.Length;
+            PeakForceDirection = value.Peak.Length > 0 ? value.Peak.Normalized() : Vector3D.Zero;
+            ForceToWeightRatio = value.Peak.Length / (mass * PhysicalConstants.StandardGravity);
+            ImpulseNewtonSeconds = value.Impulse is null ? null : impulseSize;
+            LaunchSpeedMetersPerSecond = value.Impulse is null || Scenario.Item.Contact != Items.ContactKind.Free ? null : impulseSize / mass;
+            MeanForceNewtons = value.Mean?.Length;
+            PeakTorqueNewtonMeters = value.Torque;
+        }
+    }
+
+    /// <summary>A closed item's heating, set within the initializer that makes the response.</summary>
+    internal HeatingFindings Heating
+    {
+        init
+        {
+            EnergyDissipatedJoules = value.EnergyJoules;
+            PeakTemperatureCelsius = value.PeakCelsius;
+            FinalTemperatureCelsius = value.FinalCelsius;
+            MeltingReachedSeconds = value.MeltingReachedSeconds;
+            MeltThroughSeconds = value.MeltThroughSeconds;
+            HeatingSeries = value.Series;
+        }
     }
 
     /// <summary>The number of current paths the item was solved with: 1 for a thin loop, the filament count for a thick section or a body; 0 when not solved.</summary>
@@ -262,3 +303,6 @@ public sealed record InductionResponse
         return affecting is null ? Array.Empty<ValidityIssue>() : affecting.ToArray();
     }
 }
+
+/// <summary>What a closed item's heating history gives a response: its energy, peak and final temperatures, when it reaches its melting point and how long it then takes to melt through.</summary>
+internal readonly record struct HeatingFindings(IReadOnlyList<HeatingSample> Series, double EnergyJoules, double PeakCelsius, double FinalCelsius, double? MeltingReachedSeconds, double? MeltThroughSeconds);

@@ -249,13 +249,14 @@ public static class ThermalDose
         double ra = rises[0];
         double ca = startCelsius + (k * ra);
         double wa = Weight(ca);
+        int chained = 0;
         for (int i = 1; i < times.Length; i++)
         {
             double tb = times[i];
             double rb = rises[i];
             double cb = startCelsius + (k * rb);
             // A sample at the same rise as the last (a plateau's, which the heating samples hourly) has its weight.
-            double wb = rb == ra ? wa : Weight(cb);
+            double wb = rb == ra ? wa : NextWeight(wa, ca, cb, ref chained);
             double span = tb - ta;
             if (span > 0)
             {
@@ -288,6 +289,33 @@ public static class ThermalDose
     /// <summary>ln R for a temperature's side of 43 degC.</summary>
     private static double LogRate(double celsius) => celsius >= BreakpointCelsius ? LogRateAbove : LogRateBelow;
 
+    /// <summary>
+    /// The weight at <paramref name="cb"/> from <paramref name="wa"/> at <paramref name="ca"/> beside it: where both
+    /// lie on one side of 43 degC and the exponent between them, x, is below 1e-3, wa (1 + x (e^x - 1) / x) by the
+    /// series <see cref="LogMean"/> takes for the piece (no exponential: the samples of a current settling, a few
+    /// microkelvin apart, take most of a margin's passes); else R^(43 - T) afresh. A run of such steps restarts from
+    /// an exponential every 64 samples, so that their rounding (an ulp or two each) stays below some 1e-14.
+    /// </summary>
+    private static double NextWeight(double wa, double ca, double cb, ref int chained)
+    {
+        double logRate = LogRate(cb);
+        if (chained < 64 && LogRate(ca) == logRate)
+        {
+            double x = -logRate * (cb - ca);
+            if (Math.Abs(x) < 1e-3)
+            {
+                chained++;
+                return wa + (wa * x * ExpMinus1OverX(x));
+            }
+        }
+
+        chained = 0;
+        return Weight(cb);
+    }
+
+    /// <summary>(e^x - 1) / x for |x| below 1e-3, to five terms: the next is below x^5 / 720, under 2e-18.</summary>
+    private static double ExpMinus1OverX(double x) => 1 + (x * 0.5 * (1 + (x * (1.0 / 3) * (1 + (x * 0.25 * (1 + (x * 0.2)))))));
+
     /// <summary>R^(43 - T) at a temperature, with R for that temperature's side of 43 degC (1 at 43 degC on either).</summary>
     private static double Weight(double celsius) =>
         Math.Exp((celsius >= BreakpointCelsius ? LogRateAbove : LogRateBelow) * (BreakpointCelsius - celsius));
@@ -308,8 +336,7 @@ public static class ThermalDose
         double mean, inverse = 0;
         if (Math.Abs(x) < 1e-3)
         {
-            // (e^x - 1) / x to five terms: the next is below x^5 / 720, under 2e-18.
-            mean = w0 * (1 + (x * 0.5 * (1 + (x * (1.0 / 3) * (1 + (x * 0.25 * (1 + (x * 0.2))))))));
+            mean = w0 * ExpMinus1OverX(x);
         }
         else
         {

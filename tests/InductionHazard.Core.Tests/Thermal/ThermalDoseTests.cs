@@ -33,6 +33,23 @@ public class ThermalDoseTests
         Within.Relative(ThermalDose.Cem43Minutes(fine), ThermalDose.Cem43Minutes(coarse), 1e-6, "dose of the ramp");
     }
 
+    [Validates("the dose and its margin over a history sampled microkelvins apart", "the definition integrated in closed form over one linear piece", "1e-10")]
+    [Theory]
+    [InlineData(33.0, 39.0)]   // below 43 °C throughout
+    [InlineData(40.0, 46.0)]   // across the breakpoint
+    public void AFinelySampledRampHasTheDoseAndMarginOfItsOnePiece(double from, double to)
+    {
+        // 200,000 samples of a ramp over ten minutes, each some 30 microkelvin above the last (the weights of such
+        // neighbours are found from each other, not afresh), against the same ramp as one piece. Added over the start:
+        // the closed form t (w1 - w0) / ln(w1 / w0) on each side of 43 °C (Cem43Minutes), less t R^(43 - start).
+        const int Samples = 200_000;
+        var coarse = new[] { new HeatingSample(0, from, 0), new HeatingSample(600, to, 0) };
+        var fine = Enumerable.Range(0, Samples + 1).Select(k => new HeatingSample(600.0 * k / Samples, from + ((to - from) * k / Samples), 0)).ToArray();
+        double added = ThermalDose.Cem43Minutes(coarse) - ThermalDose.Cem43Minutes(from, 600);
+        Within.Relative(added, ThermalDose.AddedCem43Minutes(fine, from), 1e-10, "added dose of the finely sampled ramp");
+        Within.Relative(ThermalDose.RiseMargin(coarse, from, 2.0)!.Value, ThermalDose.RiseMargin(fine, from, 2.0)!.Value, 1e-10, "dose margin of the finely sampled ramp");
+    }
+
     private static HeatingSample[] Plateau(double start, double plateau, double minutes) => new[]
     {
         new HeatingSample(0, start, 0), new HeatingSample(60, plateau, 0), new HeatingSample(60 + (minutes * 60), plateau, 0), new HeatingSample(120 + (minutes * 60), start, 0),

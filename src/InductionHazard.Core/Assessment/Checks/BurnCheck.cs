@@ -330,7 +330,6 @@ public sealed class BurnCheck : IHazardCheck
         return VerdictRules.Margin(threshold - start, Math.Max(0, predicted - start));
     }
 
-    /// <summary>Contact durations to test: the curve's points and a logarithmic grid, all within the history's span.</summary>
     /// <summary>
     /// The contact times judged, ascending and distinct: 12 a decade from the curve's shortest to the longer of its
     /// longest and the history's span, with the curve's own points among them; and the threshold of each.
