@@ -2,7 +2,8 @@
 .SYNOPSIS
     Times a 20,000-row inventory from Import-Csv through Test-InductionHazard against the same rows through a
     ForEach-Object that computes only the textbook emf and e/R, in the same process, for a ramp and a sine: both
-    warmed up first, then timed alternately, the fastest round of each compared.
+    warmed up first, then timed alternately, the fastest round of each compared. Test-InductionHazard is timed
+    serially (its default) and with -ThrottleLimit 2.
 #>
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
@@ -31,19 +32,21 @@ function Measure-Textbook([string] $Path) {
         } | Out-Null
     }
 }
-function Measure-Module([string] $Path, $Source) {
-    Measure-Command { Import-Csv $Path | Test-InductionHazard -Source $Source -WarningAction SilentlyContinue | Out-Null }
+function Measure-Module([string] $Path, $Source, [int] $Threads = 1) {
+    Measure-Command { Import-Csv $Path | Test-InductionHazard -Source $Source -ThrottleLimit $Threads -WarningAction SilentlyContinue | Out-Null }
 }
 # Both pipelines are warmed up on 500 rows first (whichever ran first would otherwise pay the shell's start-up),
 # then each is timed $Rounds times alternately; the fastest round of each is compared.
 foreach ($name in $sources.Keys) {
     $null = Measure-Textbook $warm
     $null = Measure-Module $warm $sources[$name]
-    $textbook = [double]::MaxValue; $module = [double]::MaxValue
+    $null = Measure-Module $warm $sources[$name] 2
+    $textbook = [double]::MaxValue; $module = [double]::MaxValue; $threaded = [double]::MaxValue
     foreach ($round in 1..$Rounds) {
         $textbook = [math]::Min($textbook, (Measure-Textbook $csv).TotalSeconds)
         $module = [math]::Min($module, (Measure-Module $csv $sources[$name]).TotalSeconds)
+        $threaded = [math]::Min($threaded, (Measure-Module $csv $sources[$name] 2).TotalSeconds)
     }
-    '{0}: {1} rows, textbook {2:F2} s, Test-InductionHazard {3:F2} s, ratio {4:F1} (fastest of {5} rounds each, after a warm-up)' -f $name, $Rows, $textbook, $module, ($module / $textbook), $Rounds
+    '{0}: {1} rows, textbook {2:F2} s, Test-InductionHazard {3:F2} s (ratio {4:F1}), with -ThrottleLimit 2 {5:F2} s (ratio {6:F1}) (fastest of {7} rounds each, after a warm-up)' -f $name, $Rows, $textbook, $module, ($module / $textbook), $threaded, ($threaded / $textbook), $Rounds
 }
 Remove-Item $csv, $warm

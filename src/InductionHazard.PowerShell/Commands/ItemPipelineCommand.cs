@@ -28,6 +28,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private int _row;
     private bool _verbose = true;
 
+    /// <summary>The switch as bound, read once for the workers that make the scenarios.</summary>
+    private bool _acceptUnusualSize;
+
     /// <summary>How many rows pass between the collections that keep a long stream's memory flat.</summary>
     private const int RowsPerHeapTrim = 50_000;
     private FieldSource _source = null!;
@@ -142,6 +145,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         }
 
         _verbose = VerboseWanted();
+        AtSite = ParameterSetName == SiteSet;
+        _acceptUnusualSize = AcceptUnusualSize.IsPresent;
         _sinceProgress.Start();
     }
 
@@ -192,11 +197,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                     throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
                 }
 
-                Scenario scenario = ScenarioOf(input, record, label, row);
+                // The row's fields are read here, on the pipeline thread (the shell's objects are not for other threads);
+                // the item, its placement and its assessment are made from them on a worker when there are several.
                 CancellationToken token = _cancellation.Token;
                 work = ThrottleLimit > 1
-                    ? Task.Run(() => Solve(scenario, row, label, token), token)
-                    : Task.FromResult(Solve(scenario, row, label, token));
+                    ? Task.Run(() => Solve(ScenarioOf(input, record, label, row), row, label, token), token)
+                    : Task.FromResult(Solve(ScenarioOf(input, record, label, row), row, label, token));
             }
             catch (Exception ex) when (ex is not PipelineStoppedException)
             {
@@ -215,6 +221,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [ValidateRange(1, 64)]
     public int ThrottleLimit { get; set; } = 1;
 
+    /// <summary>Whether the items are assessed at a site's stations (-Site), as bound; read once, for the workers.</summary>
+    protected bool AtSite { get; private set; }
+
     /// <summary>What the command makes of one item's response (called on any thread: no writing here).</summary>
     protected abstract object Compute(InductionResponse response, int row);
 
@@ -230,9 +239,9 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
     {
-        ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, AcceptUnusualSize.IsPresent);
+        ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, _acceptUnusualSize);
         (Vector3D? rowPosition, Vector3D? rowNormal) = record is null ? (null, null) : PlacementRecordReader.Read(record, label, _units);
-        Station? station = ParameterSetName != SiteSet ? null
+        Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
             : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
         var placement = new Placement(

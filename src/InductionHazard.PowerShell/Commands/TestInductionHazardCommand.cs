@@ -17,7 +17,7 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
 
     /// <inheritdoc />
     protected override object Compute(InductionResponse response, int row) =>
-        HazardAssessor.Assess(response, Policy ?? (ParameterSetName == SiteSet ? Site.Policy : null) ?? HazardPolicy.Default, row);
+        HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.Policy : null) ?? HazardPolicy.Default, row);
 
     /// <inheritdoc />
     protected override void Emit(object result)
