@@ -122,6 +122,34 @@ Describe 'Test-InductionHazard' {
         }
     }
 
+    Context 'row objects of any shape (a custom object is read from the members it holds once its type names are known to add none)' {
+        AfterAll { Remove-TypeData -TypeName 'InductionHazardTest.RingRow' -ErrorAction SilentlyContinue }
+
+        It 'reads a column that only a later row of the same type names has' {
+            $rows = @(
+                [pscustomobject]@{ Name = 'First'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+                [pscustomobject]@{ Name = 'Second'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'T-2' }
+                [pscustomobject]@{ Name = 'Third'; Material = 'Copper'; Diameter = '22 mm'; WireDiameter = '2 mm'; AssetTag = 'T-3'; Room = 'B4' }
+            )
+            $out = @($rows | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue)
+            $out.Count | Should -Be 3
+            $out[1].AssetTag | Should -Be 'T-2'
+            $out[2].AssetTag | Should -Be 'T-3'
+            $out[2].Room | Should -Be 'B4'
+            $out[2].Response.Item.Loop.HalfSpanMeters * 2 | Should -BeGreaterThan 0.0209 -Because 'the third row is its own diameter, not the first row'
+        }
+
+        It 'reads a property that the type names add (extended type data) as a column, on every row' {
+            Update-TypeData -TypeName 'InductionHazardTest.RingRow' -MemberType ScriptProperty -MemberName WireDiameter -Value { '2 mm' } -Force
+            Update-TypeData -TypeName 'InductionHazardTest.RingRow' -MemberType ScriptProperty -MemberName AssetTag -Value { 'E-' + $this.Name } -Force
+            $rows = foreach ($k in 1..3) { [pscustomobject]@{ PSTypeName = 'InductionHazardTest.RingRow'; Name = "Ring $k"; Material = 'Copper'; Diameter = '20 mm' } }
+            $out = @($rows | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorVariable bad -ErrorAction SilentlyContinue)
+            $bad.Count | Should -Be 0 -Because 'the wire diameter comes from the type data'
+            $out.Count | Should -Be 3
+            $out.AssetTag | Should -Be 'E-Ring 1', 'E-Ring 2', 'E-Ring 3'
+        }
+    }
+
     Context 'on several threads' {
         It 'gives with -ThrottleLimit 4 the same assessments in the same order as a serial run, bad rows included' {
             $rows = @(Import-Csv $inventoryPath) + @([pscustomobject]@{ Name = 'Bad'; Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' }) + @(Import-Csv $inventoryPath)

@@ -22,8 +22,14 @@ internal static class Records
             return From(dictionary);
         }
 
-        // One pass without LINQ: the shell builds the object's member collection on every enumeration, and this runs for every row.
+        // One pass without LINQ: the shell builds the object's member collection on every enumeration, and this runs for
+        // every row; a custom object's own members where they can be trusted (OwnMembers).
         var values = new List<KeyValuePair<string, object?>>();
+        if (OwnMembers.TryRead(input, values, static p => QuantityAttribute.Unwrap(SafeValue(p))))
+        {
+            return values.ToArray();
+        }
+
         foreach (PSPropertyInfo p in input.Properties)
         {
             if (p.IsGettable && p.MemberType is PSMemberTypes.NoteProperty or PSMemberTypes.Property or PSMemberTypes.AliasProperty or PSMemberTypes.ScriptProperty)
