@@ -393,7 +393,6 @@ public static class InductionEngine
         }
     }
 
-    /// <summary>What every response has: the scenario, the notes and issues, the loop, and the item at its starting temperature.</summary>
     /// <summary>A closed loop's heating history and what follows from it.</summary>
     private static HeatingFindings Heated(EngineContext c, IReadOnlyList<HeatingSample> heating, double finalCelsius, double energy)
     {
