@@ -35,6 +35,7 @@ internal sealed class EngineContext
         Rdc = Circuit.DcResistanceOhms(Start);
         Ldc = Circuit.DcInductanceHenries;
         Frequency = source.SignificantFrequencyHertz;
+        SkinDepthMeters = SkinEffect.SkinDepthMeters(scenario.Item.Material.ResistivityAt(Start), Frequency, scenario.Item.Material.RelativePermeability);
         Normal = scenario.Placement.Normal ?? Vector3D.UnitZ;
         FieldDirection = Normal;
         Coupling = new double[source.Terms.Count];
@@ -218,6 +219,9 @@ internal sealed class EngineContext
     public double Ldc { get; private set; }
 
     public double Frequency { get; }
+
+    /// <summary>The skin depth in the item's material at its starting temperature and the drive's significant frequency, m.</summary>
+    public double SkinDepthMeters { get; }
 
     public double MeltingCelsius => Scenario.Item.Material.MeltingCelsius;
 

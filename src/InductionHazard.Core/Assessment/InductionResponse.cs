@@ -172,7 +172,7 @@ public sealed record InductionResponse
             ResistanceOhms = value.Rdc;
             InductanceHenries = value.Ldc;
             TimeConstantSeconds = value.Ldc / value.Rdc;
-            SkinDepthMeters = Induction.SkinEffect.SkinDepthMeters(value.Scenario.Item.Material.ResistivityAt(value.Start), value.Frequency, value.Scenario.Item.Material.RelativePermeability);
+            SkinDepthMeters = value.SkinDepthMeters;
             InitialTemperatureCelsius = value.Start;
             PeakTemperatureCelsius = value.Start;
             FinalTemperatureCelsius = value.Start;
