@@ -35,6 +35,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private const int RowsPerHeapTrim = 50_000;
     private FieldSource _source = null!;
     private readonly Queue<Pending> _pending = new();
+
+    /// <summary>
+    /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
+    /// them at once, whatever the machine's core count (the pool alone would run every queued task a core is free for).
+    /// </summary>
+    private TaskFactory? _workers;
     private IReadOnlyDictionary<string, string>? _units;
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
@@ -147,6 +153,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         _verbose = VerboseWanted();
         AtSite = ParameterSetName == SiteSet;
         _acceptUnusualSize = AcceptUnusualSize.IsPresent;
+        if (ThrottleLimit > 1)
+        {
+            var limited = new ConcurrentExclusiveSchedulerPair(TaskScheduler.Default, ThrottleLimit).ConcurrentScheduler;
+            _workers = new TaskFactory(_cancellation.Token, TaskCreationOptions.DenyChildAttach, TaskContinuationOptions.None, limited);
+        }
+
         _sinceProgress.Start();
     }
 
@@ -200,8 +212,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                 // The row's fields are read here, on the pipeline thread (the shell's objects are not for other threads);
                 // the item, its placement and its assessment are made from them on a worker when there are several.
                 CancellationToken token = _cancellation.Token;
-                work = ThrottleLimit > 1
-                    ? Task.Run(() => Solve(ScenarioOf(input, record, label, row), row, label, token), token)
+                work = _workers is not null
+                    ? _workers.StartNew(() => Solve(ScenarioOf(input, record, label, row), row, label, token), token)
                     : Task.FromResult(Solve(ScenarioOf(input, record, label, row), row, label, token));
             }
             catch (Exception ex) when (ex is not PipelineStoppedException)
