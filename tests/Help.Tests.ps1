@@ -10,6 +10,19 @@ BeforeAll {
     $common = [System.Management.Automation.Cmdlet]::CommonParameters + [System.Management.Automation.Cmdlet]::OptionalCommonParameters
 }
 
+Describe 'Default values in help' {
+    It 'shows -<Parameter> of <Command> with the default value <Expected>' -TestCases @(
+        @{ Command = 'Test-InductionHazard'; Parameter = 'AmbientTemperature'; Expected = '20 °C' }
+        @{ Command = 'Test-InductionHazard'; Parameter = 'ThrottleLimit'; Expected = '1' }
+        @{ Command = 'New-FieldWaveform'; Parameter = 'ClearingTime'; Expected = '1 s' }
+        @{ Command = 'Test-InductionHazard'; Parameter = 'Site'; Expected = 'None' }
+        @{ Command = 'New-ConductiveItem'; Parameter = 'ClosedEnds'; Expected = 'False' }
+    ) {
+        (Get-Help $Command -Parameter $Parameter).defaultValue | Should -Be $Expected
+        (Get-Help $Command -Parameter $Parameter | Out-String) | Should -Match ('Default value\s+' + [regex]::Escape($Expected))
+    }
+}
+
 Describe 'Help for <Name>' -ForEach $commands {
     BeforeAll {
         $help = Get-Help $Name -Full
@@ -26,6 +39,19 @@ Describe 'Help for <Name>' -ForEach $commands {
         foreach ($p in $command.Parameters.Keys | Where-Object { $_ -notin $common }) {
             $described = $help.parameters.parameter | Where-Object name -EQ $p
             ($described.description.Text -join ' ') | Should -Not -BeNullOrEmpty -Because "-$p needs a description"
+        }
+    }
+
+    It 'gives every parameter a default value: the one its description speaks of, else None (False for a switch)' {
+        foreach ($p in $command.Parameters.Keys | Where-Object { $_ -notin $common }) {
+            $described = $help.parameters.parameter | Where-Object name -EQ $p
+            $text = $described.description.Text -join ' '
+            $described.defaultValue | Should -Not -BeNullOrEmpty -Because "-$p needs a default value"
+            $described.defaultValue | Should -Not -Match '^Default value' -Because 'the line is the value, not its label'
+            $text | Should -Not -Match 'Default value:' -Because "-$p's default value line belongs to the field, not the description"
+            if ($text -match '\bdefaults?\b') {
+                $described.defaultValue | Should -Not -BeIn @('None', 'False') -Because "-$p's description speaks of a default"
+            }
         }
     }
 

@@ -6,7 +6,9 @@
     ## Parameters (### -Name, one per parameter), ## Examples (### Example N: title, a powershell code block,
     then remarks), ## Inputs, ## Outputs, ## Notes, ## Related links. Syntax, types, positions, pipeline input
     and aliases come from the cmdlets themselves, so the help cannot drift from the code. A parameter the
-    cmdlet has but the Markdown does not describe (or the other way round) stops the build.
+    cmdlet has but the Markdown does not describe (or the other way round) stops the build. A parameter's
+    "Default value: ..." line becomes the default value Get-Help shows; a description that speaks of a default
+    without that line stops the build too.
 #>
 [CmdletBinding()]
 param(
@@ -89,6 +91,13 @@ function Write-Parameter {
         $typeName = $meta.ParameterType.GetGenericArguments()[0].Name
     }
 
+    # The "Default value: ..." line is the help's default value, not part of the description.
+    $default = ''
+    if ($Description -match '(?m)^Default value: (.+)$') {
+        $default = $Matches[1].Trim()
+        $Description = ($Description -replace '(?m)^Default value: .+$', '').Trim()
+    }
+
     $W.WriteStartElement('command', 'parameter', $command)
     $W.WriteAttributeString('required', ([string] $attr.IsMandatory).ToLowerInvariant())
     $W.WriteAttributeString('variableLength', ([string] $meta.ParameterType.IsArray).ToLowerInvariant())
@@ -106,6 +115,7 @@ function Write-Parameter {
         $W.WriteEndElement()
     }
     $W.WriteStartElement('dev', 'type', $dev); $W.WriteElementString('maml', 'name', $maml, $meta.ParameterType.FullName); $W.WriteEndElement()
+    $W.WriteElementString('dev', 'defaultValue', $dev, $(if ($default) { $default } elseif ($meta.ParameterType -eq [switch]) { 'False' } else { 'None' }))
     $W.WriteEndElement()
 }
 
@@ -129,6 +139,10 @@ foreach ($cmd in Get-Command -Module $module.Name -CommandType Cmdlet | Sort-Obj
     $parameters = @($cmd.Parameters.Values | Where-Object Name -NotIn $common)
     foreach ($p in $parameters) { if (-not $doc.Parameters.Contains($p.Name)) { $problems.Add("$($cmd.Name): -$($p.Name) is not described") } }
     foreach ($name in $doc.Parameters.Keys) { if ($name -notin $parameters.Name) { $problems.Add("$($cmd.Name): the help describes -$name, which the cmdlet does not have") } }
+    foreach ($name in $doc.Parameters.Keys) {
+        $text = $doc.Parameters[$name]
+        if ($text -match '\bdefaults?\b' -and $text -notmatch '(?m)^Default value: \S') { $problems.Add("$($cmd.Name): -$name speaks of a default but has no 'Default value:' line") }
+    }
     foreach ($s in 'Synopsis', 'Description') { if (-not $doc.Sections.Contains($s) -or -not $doc.Sections[$s]) { $problems.Add("$($cmd.Name): no $s") } }
 
     $writer.WriteStartElement('command', 'command', $command)
