@@ -62,6 +62,40 @@ public class InductionEngineTests
         Assert.Contains("resistive", r.Regime, StringComparison.Ordinal);
     }
 
+    [Validates("the temperature a ring in a continuous 50 Hz field settles at, where the cycle-averaged power E^2 R(T) / 2|Z(T)|^2 meets the convection and radiation it loses", "heat balance solved by bisection, with R(T) from IEC 60028 copper (1.7241e-8 ohm m, alpha 0.00393/K), L from Grover (1946) and the Stefan-Boltzmann law unlinearised", "0.01 K")]
+    [Fact]
+    public void ARingInAContinuousSineSettlesWhereItsHeatingMeetsItsCooling()
+    {
+        // After 8 h (some 80 cooling time constants) the ring's temperature is the root of
+        // E^2 R(T) / (2 (R(T)^2 + (w L)^2)) = A (h (T - Ta) + eps sigma (T^4 - Ta^4)), E = w B pi d^2 / 4 the emf's
+        // amplitude, R(T) = rho20 l / S (1 + alpha (T - 20)) (IEC 60028), L from Grover's formula, A = pi^2 d w the
+        // surface of the torus, and still air (h = 5 W/(m^2 K), eps = 0.05, 20 °C) as the scenario's default. At 50 Hz
+        // the wire is a tenth of a skin depth: R_ac = R_dc. A field of 0.1 T heats it by some 55 K.
+        double d = 0.02, a = 0.001, b = 0.1, f = 50, omega = 2 * Math.PI * f, ambient = 20;
+        double emf = omega * b * Math.PI * d * d / 4;
+        double resistance20 = 1.7241e-8 * Math.PI * d / (Math.PI * a * a);
+        double inductance = Mu0 * (d / 2) * (Math.Log(8 * (d / 2) / a) - 1.75);
+        double surface = Math.PI * Math.PI * d * 2 * a;
+        double Balance(double celsius)
+        {
+            double r = resistance20 * (1 + (0.00393 * (celsius - 20)));
+            double heating = emf * emf * r / (2 * ((r * r) + (omega * inductance * omega * inductance)));
+            double kelvin = celsius + 273.15, ambientKelvin = ambient + 273.15;
+            return heating - (surface * ((5 * (celsius - ambient)) + (0.05 * 5.670374419e-8 * ((kelvin * kelvin * kelvin * kelvin) - (ambientKelvin * ambientKelvin * ambientKelvin * ambientKelvin)))));
+        }
+
+        double low = ambient, high = 1000;
+        for (int i = 0; i < 100; i++)
+        {
+            double mid = 0.5 * (low + high);
+            (low, high) = Balance(mid) > 0 ? (mid, high) : (low, mid);
+        }
+
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Copper", d, 2 * a, contact: "Free"), Fixtures.UniformSine(b, f));
+        Assert.True(low - ambient > 30, "the field heats the ring by " + (low - ambient) + " K");
+        Assert.True(Math.Abs(r.PeakTemperatureCelsius - low) <= 0.01, "settled at " + r.PeakTemperatureCelsius + " °C against the balance's " + low + " °C");
+    }
+
     [Validates("ring current in a ramp against the RL closed form", "RL circuit theory; IEC 60028; Grover", "1e-5")]
     [Fact]
     public void ARampGivesTheRlRiseWithTheRingsLAndR()
