@@ -31,12 +31,14 @@ public sealed record PhysicalRange(string Field, double Minimum, double Maximum,
 
     /// <summary>
     /// A bound or value with its unit: an SI prefix for the base units (but long times in plain seconds, as nobody
-    /// reads "Ms" or "kT"), plain figures for compound units and °C.
+    /// reads "Ms" or "kT", with the hours beside them from an hour to a hundred: "28800 s = 8 h"), plain figures for
+    /// compound units and °C.
     /// </summary>
     private string Show(double value)
     {
         bool prefixed = Unit is "m" or "Hz" or "A" || (Unit is "s" or "T" && Math.Abs(value) < 1000);
-        return prefixed ? SiFormat.Format(value, Unit) : (SiFormat.Plain(value) + " " + Unit).Trim();
+        string shown = prefixed ? SiFormat.Format(value, Unit) : (SiFormat.Plain(value) + " " + Unit).Trim();
+        return Unit == "s" && Math.Abs(value) >= 3600 && Math.Abs(value) < 360_000 ? shown + " = " + SiFormat.Plain(value / 3600) + " h" : shown;
     }
 
     /// <summary>Checks a value and returns it.</summary>
