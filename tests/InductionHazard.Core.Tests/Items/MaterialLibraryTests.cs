@@ -49,6 +49,40 @@ public class MaterialLibraryTests
         }
     }
 
+    [Validates("each pure metal's thermal conductivity against its resistivity: k rho / T near the Sommerfeld Lorenz number (pi^2/3)(kB/e)^2 = 2.443e-8 W ohm/K^2", "Wiedemann-Franz law (textbook closed form, exact SI constants); measured Lorenz numbers at room temperature within about 12 % of it for these metals (Kittel, Introduction to Solid State Physics, table of Lorenz numbers, from memory)", "12 %")]
+    [Theory]
+    [InlineData("Copper")]
+    [InlineData("Silver")]
+    [InlineData("Gold")]
+    [InlineData("Aluminium")]
+    [InlineData("Platinum")]
+    public void APureMetalsConductivitiesAgreeByTheWiedemannFranzLaw(string name)
+    {
+        // Two values of the table from different sources, tied by one law: a slip of a digit in either (a resistivity
+        // ten times off, a conductivity from another alloy) shows as a Lorenz number far from the Sommerfeld value.
+        const double Boltzmann = 1.380649e-23, Charge = 1.602176634e-19;
+        double sommerfeld = System.Math.PI * System.Math.PI / 3 * (Boltzmann / Charge) * (Boltzmann / Charge);
+        ConductorMaterial m = MaterialLibrary.BuiltIn.Find(name);
+        double lorenz = m.ThermalConductivityWattsPerMeterKelvin * m.ResistivityOhmMeters / 293.15;
+        Within.Relative(sommerfeld, lorenz, 0.12, name + "'s Lorenz number k rho / T");
+    }
+
+    [Validates("each latent heat of fusion per kilogram against the molar value over the standard atomic weight: Cu 13.26, Al 10.71, Ag 11.28, Au 12.55, Pt 22.17, Ti 14.15, Fe 13.81 kJ/mol", "CRC Handbook of Chemistry and Physics (molar heats of fusion, from memory); IUPAC standard atomic weights (from memory)", "1e-3")]
+    [Theory]
+    [InlineData("Copper", 13.26, 63.546)]
+    [InlineData("Aluminium", 10.71, 26.9815)]
+    [InlineData("Silver", 11.28, 107.8682)]
+    [InlineData("Gold", 12.55, 196.96657)]
+    [InlineData("Platinum", 22.17, 195.084)]
+    [InlineData("Titanium grade 2", 14.15, 47.867)]
+    [InlineData("Low-carbon steel 1010", 13.81, 55.845)]
+    public void ALatentHeatPerKilogramIsTheMolarOneOverTheAtomicWeight(string name, double kilojoulesPerMole, double gramsPerMole)
+    {
+        // The table gives J/kg; the handbooks give kJ/mol: the pure metal's (for titanium grade 2 pure titanium, for
+        // the steel pure iron, as their sources say).
+        Within.Relative(kilojoulesPerMole * 1e3 / (gramsPerMole * 1e-3), MaterialLibrary.BuiltIn.Find(name).LatentHeatJoulesPerKilogram, 1e-3, name + "'s latent heat");
+    }
+
     [Validates("rho20 1.7241e-8 ohm m, alpha 0.00393 /K", "IEC 60028", "1e-4")]
     [Fact]
     public void CopperIsTheInternationalAnnealedCopperStandard()
