@@ -1,4 +1,5 @@
 using System;
+using System.Linq;
 using InductionHazard.Fields;
 using InductionHazard.Quantities;
 using InductionHazard.Waveforms;
@@ -39,22 +40,37 @@ public class FieldStrengthTests
         Within.Relative(100, near / far, 0.05, "1/r^2 fall-off");
     }
 
-    [Validates("peak field of a flat three-phase set (sequence ABC, B lagging A by 120 degrees) at points between, beside and away from its conductors", "superposition of three lines' fields, mu0 i / (2 pi r) each (Ampere's law), the peak over a cycle as the major semi-axis of the field's ellipse (its 2 x 2 quadratic form's largest eigenvalue)", "at most 1.2e-4 below (the search's 200 samples a period), never above")]
-    [Fact]
-    public void AFlatThreePhaseSetsPeakFieldIsTheMajorAxisOfItsRotatingField()
+    [Validates("peak field of a three-phase set, flat and trefoil (sequence ABC, B lagging A by 120 degrees), at points between, beside and away from its conductors", "superposition of three lines' fields, mu0 i / (2 pi r) each (Ampere's law), the peak over a cycle as the major semi-axis of the field's ellipse (its 2 x 2 quadratic form's largest eigenvalue)", "at most 1.2e-4 below (the search's 200 samples a period), never above")]
+    [Theory]
+    [InlineData("Flat")]
+    [InlineData("Trefoil")]
+    public void AThreePhaseSetsPeakFieldIsTheMajorAxisOfItsRotatingField(string arrangement)
     {
-        // The set's conductors lie in a row along its axis's perpendicular at -s, 0 and +s, carrying I sin(wt + phi_k)
-        // with phi = 0, -120 and +120 degrees. At a point, B(t) = P sin wt + Q cos wt with P and Q the sums of each
-        // line's field times cos phi_k and sin phi_k; |B|^2 peaks at the largest eigenvalue of [[P.P, P.Q], [P.Q, Q.Q]].
+        // The conductors, along z, carry I sin(wt + phi_k) with phi = 0, -120 and +120 degrees: in a row at -s, 0 and +s
+        // (flat), or at the corners of an equilateral triangle of side s about the centre (trefoil). At a point,
+        // B(t) = P sin wt + Q cos wt with P and Q the sums of each line's field times cos phi_k and sin phi_k; |B|^2
+        // peaks at the largest eigenvalue of [[P.P, P.Q], [P.Q, Q.Q]].
         double amplitude = 1000, spacing = 0.1;
         var sine = new SineWaveform(amplitude, 50, drive: DriveKind.Current);
-        var values = new System.Collections.Generic.Dictionary<string, object?> { ["Form"] = "ThreePhase", ["Spacing"] = "100 mm" };
+        var values = new System.Collections.Generic.Dictionary<string, object?> { ["Form"] = "ThreePhase", ["Spacing"] = "100 mm", ["Arrangement"] = arrangement };
         FieldSource set = SourceRecordReader.Read(values, sine, ".");
-        Vector3D across = ((LineConductor)set.Terms[2].Geometry).Axis.Centre - ((LineConductor)set.Terms[0].Geometry).Axis.Centre;
-        Within.Relative(2 * spacing, across.Length, 1e-12, "the row's length");
-        Vector3D u = across.Normalized(), z = Vector3D.UnitZ, v = z.Cross(u);
+        Vector3D[] at = set.Terms.Select(t => ((LineConductor)t.Geometry).Axis.Centre).ToArray();
+        Assert.Equal(3, at.Length);
+        Within.Absolute(0, (at[0] + at[1] + at[2]).Length / 3, 1e-15, "the set's centre");
+        if (arrangement == "Flat")
+        {
+            Within.Absolute(0, at[1].Length, 1e-15, "the middle conductor on the centre");
+            Within.Relative(2 * spacing, (at[2] - at[0]).Length, 1e-12, "the row's length");
+        }
+        else
+        {
+            Within.Relative(spacing, (at[1] - at[0]).Length, 1e-12, "side AB");
+            Within.Relative(spacing, (at[2] - at[1]).Length, 1e-12, "side BC");
+            Within.Relative(spacing, (at[0] - at[2]).Length, 1e-12, "side CA");
+        }
+
+        Vector3D z = Vector3D.UnitZ, u = (at[2] - at[0]).Normalized(), v = z.Cross(u);
         double[] phases = { 0, -2 * Math.PI / 3, 2 * Math.PI / 3 };
-        Vector3D[] at = { new(-spacing, 0, 0), new(0, 0, 0), new(spacing, 0, 0) };
         (double x, double y)[] points = { (0.05, 0), (0, 0.05), (0.05, 0.05), (0.2, 0.1), (-0.15, -0.3), (1, 1) };
         foreach ((double x, double y) in points)
         {
@@ -62,7 +78,7 @@ public class FieldStrengthTests
             Vector3D p = Vector3D.Zero, q = Vector3D.Zero;
             for (int k = 0; k < 3; k++)
             {
-                Vector3D r = point - ((at[k].X * u) + (at[k].Y * v));
+                Vector3D r = point - at[k];
                 Vector3D perUnit = Mu0 / (2 * Math.PI * r.Dot(r)) * z.Cross(r);
                 p += amplitude * Math.Cos(phases[k]) * perUnit;
                 q += amplitude * Math.Sin(phases[k]) * perUnit;
@@ -74,7 +90,7 @@ public class FieldStrengthTests
             double peak = Math.Sqrt(((a + c) / 2) + Math.Sqrt((((a - c) / 2) * ((a - c) / 2)) + (b * b)));
             double found = FieldStrength.At(set, point).PeakFluxDensityTesla;
             Assert.True(found <= peak * (1 + 1e-12), "the sampled peak " + found + " passes the true one " + peak);
-            Assert.True(found >= peak * Math.Cos(Math.PI / 200), "peak |B| at (" + x + ", " + y + ") across and along the row: " + found + " against " + peak);
+            Assert.True(found >= peak * Math.Cos(Math.PI / 200), arrangement + ": peak |B| at (" + x + ", " + y + "): " + found + " against " + peak);
         }
     }
 }
