@@ -16,6 +16,31 @@ Describe 'Test-FieldExposure' {
         ($e.Cautions -join ' ') | Should -Match 'engineering estimates'
     }
 
+    # Validates: a three-phase set's turning field from the cmdlet, judged by its resultant rms | the resultant field (root sum of squares of the components' rms) of three lines' fields, mu0 i / (2 pi r) each (Ampere's law), averaged over a period | 1e-9
+    It 'judges the turning field beside a three-phase set by its resultant rms, not its peak over root 2' {
+        # Three 1 kA (amplitude) conductors 100 mm apart along z, in a row along x (A at -100 mm), A, B, C 120 degrees
+        # apart; 50 mm from the middle one along y. |B|^2 averaged over 64 instants of a period of the three lines' fields.
+        $set = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' | New-FieldSource -ThreePhase -Spacing '100 mm'
+        $e = Test-FieldExposure -Source $set -Position '0, 50 mm, 0'
+        $sum = 0.0
+        foreach ($n in 0..63) {
+            $wt = 2 * [math]::PI * $n / 64
+            $bx = 0.0; $by = 0.0
+            foreach ($k in 0..2) {
+                $x = -0.1 + (0.1 * $k); $phase = (0, (-2 * [math]::PI / 3), (2 * [math]::PI / 3))[$k]
+                $rx = 0 - $x; $ry = 0.05; $r2 = ($rx * $rx) + ($ry * $ry)
+                $i = 1000 * [math]::Sin($wt + $phase) * 2e-7 / $r2
+                $bx += -$ry * $i; $by += $rx * $i
+            }
+            $sum += ($bx * $bx) + ($by * $by)
+        }
+        $resultant = [math]::Sqrt($sum / 64)
+        [math]::Abs($e.ComparedTesla / $resultant - 1) | Should -BeLessThan 1e-9
+        $e.ComparedTesla | Should -BeGreaterThan (1.3 * $e.PeakFluxDensityTesla / [math]::Sqrt(2)) -Because 'the field turns as it alternates'
+        $e.Basis | Should -Be 'sinusoid, resultant rms'
+        $e.Finding | Should -Match 'resultant rms'
+    }
+
     It 'gives one result per point, takes the public limits with -Public, and names a point where the field cannot be given' {
         $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
         $worker = @(Test-FieldExposure -Source $feeder -Position '300 mm, 0, 0', '1 m, 0, 0')
