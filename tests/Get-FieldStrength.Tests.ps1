@@ -17,6 +17,18 @@ Describe 'Get-FieldStrength' {
         $s[0].FrequencyHertz | Should -Be 50
     }
 
+    It 'gives a sinusoid''s resultant rms: a line''s peak over root 2, more than that beside a three-phase set, none for a ramp' {
+        $s = Get-FieldStrength -Source $line -Position '100 mm,0,0'
+        [math]::Abs($s.RmsFluxDensityTesla / ($mu0 * 1000 / (2 * [math]::PI * 0.1) / [math]::Sqrt(2)) - 1) | Should -BeLessThan 1e-12 -Because 'a field of one direction: its peak over root 2, by Ampere''s law'
+        $set = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' | New-FieldSource -ThreePhase -Spacing '100 mm'
+        $turning = Get-FieldStrength -Source $set -Position '0, 50 mm, 0'
+        $turning.RmsFluxDensityTesla | Should -BeGreaterThan (1.3 * $turning.PeakFluxDensityTesla / [math]::Sqrt(2))
+        $turning.RmsFluxDensityTesla | Should -BeLessOrEqual (1.0000001 * $turning.PeakFluxDensityTesla) -Because 'at most root 2 times the peak over root 2'
+        ($turning | Out-String) | Should -Match 'Rms B'
+        $ramp = New-FieldWaveform -Ramp -From 0 -To '1 kA' -Duration '1 s' | New-FieldSource -Conductor -Axis z
+        (Get-FieldStrength -Source $ramp -Position '100 mm,0,0').RmsFluxDensityTesla | Should -BeNullOrEmpty
+    }
+
     It 'reads points from rows with X, Y, Z and sums several sources' {
         $return = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' -PhaseDegrees 180 | New-FieldSource -Conductor -Axis z -Center '20 mm,0,0'
         $one = @{ X = '200 mm'; Y = 0; Z = 0 } | Get-FieldStrength -Source $line

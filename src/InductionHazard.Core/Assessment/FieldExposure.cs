@@ -29,7 +29,7 @@ public sealed record FieldExposure
 
     /// <summary>
     /// The value compared with the limit, T: the peak for a static field; for a sinusoid the resultant rms, the root of
-    /// the sum of the squares of the three components' rms values (see <see cref="ResultantRms"/>).
+    /// the sum of the squares of the three components' rms values (see <see cref="FieldStrength.RmsFluxDensityTesla"/>).
     /// </summary>
     public double ComparedTesla { get; init; }
 
@@ -83,7 +83,7 @@ public sealed record FieldExposure
         else if (source.IsSinusoidal)
         {
             basis = "sinusoid, resultant rms";
-            compared = ResultantRms(source, point);
+            compared = strength.RmsFluxDensityTesla!.Value;
             limit = ExposureLimits.CountsAsStatic(f)
                 ? (publicExposure ? ExposureLimits.StaticPublicTesla : policy.StaticExposureLimitTesla)
                 : publicExposure ? ExposureLimits.PublicTesla(f) : ExposureLimits.OccupationalTesla(f);
@@ -148,31 +148,5 @@ public sealed record FieldExposure
             Standards = standards,
             Cautions = Criteria.Cautions.For(standards),
         };
-    }
-
-    /// <summary>
-    /// The resultant rms of a sinusoidal field at a point, T: the root of the time average of |B|^2 over a period, which
-    /// is the root of the sum of the squares of the components' rms values, as a three-axis meter reports the field
-    /// (IEC 61786-1's resultant, from memory). From the field's phasor B = sum_k b_k A_k e^(j(phi_k - omega S_k)):
-    /// sqrt((|Re B|^2 + |Im B|^2) / 2). A field of one direction gives its peak over sqrt 2; a field that turns as it
-    /// alternates (beside a three-phase set, where the conductors' fields lie in different directions and phases) up to
-    /// sqrt 2 times that, which the peak over sqrt 2 would understate.
-    /// </summary>
-    /// <exception cref="Errors.FieldEvaluationException">The field cannot be evaluated at the point.</exception>
-    public static double ResultantRms(FieldSource source, Vector3D point)
-    {
-        Vector3D[] perDrive = source.FieldPerUnitDrive(point);
-        Vector3D real = Vector3D.Zero, imaginary = Vector3D.Zero;
-        for (int k = 0; k < perDrive.Length; k++)
-        {
-            var sine = (Waveforms.SineWaveform)source.Terms[k].Waveform;
-            double angle = sine.PhaseRadians - (sine.AngularFrequency * sine.StartSeconds);
-            real += sine.Amplitude * Math.Cos(angle) * perDrive[k];
-            imaginary += sine.Amplitude * Math.Sin(angle) * perDrive[k];
-        }
-
-        // The root of the sum, over sqrt 2: a field of one direction and phase gives its peak over sqrt 2 to the last
-        // digit (sqrt(x^2) is x), so a field set exactly at a level lands on it.
-        return Math.Sqrt(real.Dot(real) + imaginary.Dot(imaginary)) / Math.Sqrt(2);
     }
 }
