@@ -119,8 +119,7 @@ internal static class EngineMechanics
         var rates = new Complex[terms.Count];
         for (int k = 0; k < terms.Count; k++)
         {
-            var sine = (SineWaveform)terms[k].Waveform;
-            drives[k] = Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (omega * sine.StartSeconds));
+            drives[k] = ((SineWaveform)terms[k].Waveform).Phasor;
             rates[k] = -Complex.ImaginaryOne * omega * drives[k];
         }
 

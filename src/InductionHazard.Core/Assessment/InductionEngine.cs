@@ -70,8 +70,7 @@ public static class InductionEngine
         Complex flux = Complex.Zero, field = Complex.Zero;
         for (int k = 0; k < terms.Count; k++)
         {
-            var sine = (SineWaveform)terms[k].Waveform;
-            Complex phasor = Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (omega * sine.StartSeconds));
+            Complex phasor = ((SineWaveform)terms[k].Waveform).Phasor;
             flux += c.Coupling[k] * phasor;
             field += c.NormalField[k] * phasor;
         }
@@ -122,9 +121,8 @@ public static class InductionEngine
             Vector3D crossRe = Vector3D.Zero, crossIm = Vector3D.Zero;
             for (int k = 0; k < terms.Count; k++)
             {
-                var sine = (SineWaveform)terms[k].Waveform;
                 // u_k = -d_k' has the phasor -j omega D_k.
-                drives[k] = -Complex.ImaginaryOne * omega * Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (omega * sine.StartSeconds));
+                drives[k] = -Complex.ImaginaryOne * omega * ((SineWaveform)terms[k].Waveform).Phasor;
                 crossRe += drives[k].Real * c.CrossCoupling[k];
                 crossIm += drives[k].Imaginary * c.CrossCoupling[k];
             }

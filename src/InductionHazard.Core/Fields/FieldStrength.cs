@@ -87,10 +87,9 @@ public sealed record FieldStrength(Vector3D Position, double PeakFluxDensityTesl
         Vector3D real = Vector3D.Zero, imaginary = Vector3D.Zero;
         for (int k = 0; k < perDrive.Length; k++)
         {
-            var sine = (SineWaveform)source.Terms[k].Waveform;
-            double angle = sine.PhaseRadians - (sine.AngularFrequency * sine.StartSeconds);
-            real += sine.Amplitude * Math.Cos(angle) * perDrive[k];
-            imaginary += sine.Amplitude * Math.Sin(angle) * perDrive[k];
+            System.Numerics.Complex d = ((SineWaveform)source.Terms[k].Waveform).Phasor;
+            real += d.Real * perDrive[k];
+            imaginary += d.Imaginary * perDrive[k];
         }
 
         return (real, imaginary);
@@ -134,7 +133,7 @@ public sealed record FieldStrength(Vector3D Position, double PeakFluxDensityTesl
         double omega = first.AngularFrequency;
         (Vector3D p, Vector3D q) = Phasor(source, perDrive);
         double a = p.Dot(p), c = q.Dot(q), b = p.Dot(q);
-        double peak = Math.Sqrt(0.5 * ((a + c) + Hypot(a - c, 2 * b)));
+        double peak = Math.Sqrt(0.5 * ((a + c) + Math.Sqrt(((a - c) * (a - c)) + (4 * b * b))));
         double theta = 0.5 * Math.Atan2(2 * b, c - a);
         double halfPeriods = Math.Ceiling(((omega * first.StartSeconds) - theta) / Math.PI);
         double at = (theta + (halfPeriods * Math.PI)) / omega;
@@ -143,18 +142,5 @@ public sealed record FieldStrength(Vector3D Position, double PeakFluxDensityTesl
         {
             RmsFluxDensityTesla = ResultantRms(source, perDrive),
         };
-    }
-
-    /// <summary>sqrt(x^2 + y^2) without overflow or underflow on the way.</summary>
-    private static double Hypot(double x, double y)
-    {
-        double ax = Math.Abs(x), ay = Math.Abs(y), big = Math.Max(ax, ay);
-        if (big == 0 || double.IsInfinity(big))
-        {
-            return big;
-        }
-
-        double ratio = Math.Min(ax, ay) / big;
-        return big * Math.Sqrt(1 + (ratio * ratio));
     }
 }

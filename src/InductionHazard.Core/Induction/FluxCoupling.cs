@@ -61,8 +61,7 @@ public static class FluxCoupling
             Vector3D re = Vector3D.Zero, im = Vector3D.Zero;
             for (int k = 0; k < n; k++)
             {
-                var sine = (SineWaveform)source.Terms[k].Waveform;
-                Complex a = Complex.FromPolarCoordinates(sine.Amplitude, sine.PhaseRadians - (sine.AngularFrequency * sine.StartSeconds));
+                Complex a = ((SineWaveform)source.Terms[k].Waveform).Phasor;
                 re += a.Real * M(k);
                 im += a.Imaginary * M(k);
             }

@@ -54,6 +54,13 @@ public sealed class SineWaveform : FieldWaveform
     /// <summary>The phase at the start, rad.</summary>
     public double PhaseRadians { get; }
 
+    /// <summary>
+    /// The drive's phasor D = A e^(j(phi - omega S)), so that d(t) = Im(D e^(j omega t)) at every time: the one phase
+    /// reference every term of a sinusoidal source shares (the engine's currents, the worst orientation, the field's
+    /// peak and rms).
+    /// </summary>
+    public System.Numerics.Complex Phasor => System.Numerics.Complex.FromPolarCoordinates(Amplitude, PhaseRadians - (AngularFrequency * StartSeconds));
+
     /// <summary>How long the field runs, s; null when it runs indefinitely.</summary>
     public double? DurationSeconds { get; }
 
