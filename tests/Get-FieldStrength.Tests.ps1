@@ -17,6 +17,7 @@ Describe 'Get-FieldStrength' {
         $s[0].FrequencyHertz | Should -Be 50
     }
 
+    # Validates: the cmdlet's resultant rms of a line's 50 Hz field, its peak over root 2 | Ampere's law | 1e-12
     It 'gives a sinusoid''s resultant rms: a line''s peak over root 2, more than that beside a three-phase set, none for a ramp' {
         $s = Get-FieldStrength -Source $line -Position '100 mm,0,0'
         [math]::Abs($s.RmsFluxDensityTesla / ($mu0 * 1000 / (2 * [math]::PI * 0.1) / [math]::Sqrt(2)) - 1) | Should -BeLessThan 1e-12 -Because 'a field of one direction: its peak over root 2, by Ampere''s law'
