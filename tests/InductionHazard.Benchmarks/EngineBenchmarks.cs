@@ -12,7 +12,9 @@ namespace InductionHazard.Benchmarks;
 
 /// <summary>
 /// One ring assessment (a 20 mm copper ring of 2 mm wire, worn) in a uniform field, from scenario to verdict,
-/// against the textbook emf = omega B A (or B A / t) and I = emf / R computed in the same run as the baseline.
+/// against the textbook emf = omega B A (or B A / t) and I = emf / R computed in the same run as the baseline; and one
+/// inventory row as the pipeline meets it: a ring of its own (ten diameters in turn) read from the row's text, its
+/// placement and inventory columns read, then assessed.
 /// </summary>
 [MemoryDiagnoser]
 public class EngineBenchmarks
@@ -21,6 +23,8 @@ public class EngineBenchmarks
     private FieldSource _sine = null!;
     private FieldSource _ramp10ms = null!;
     private FieldSource _ramp1s = null!;
+    private KeyValuePair<string, object?>[][] _rows = null!;
+    private int _next;
 
     /// <summary>Builds the item and sources once.</summary>
     [GlobalSetup]
@@ -30,6 +34,14 @@ public class EngineBenchmarks
         _sine = FieldSource.Uniform("sine", new SineWaveform(0.01, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
         _ramp10ms = FieldSource.Uniform("ramp", new RampWaveform(0, 1, 0.01, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
         _ramp1s = FieldSource.Uniform("ramp", new RampWaveform(0, 1, 1, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        _rows = new KeyValuePair<string, object?>[10][];
+        for (int k = 0; k < _rows.Length; k++)
+        {
+            _rows[k] = new KeyValuePair<string, object?>[]
+            {
+                new("Name", "Ring " + k), new("Material", "Copper"), new("Diameter", (18 + k) + " mm"), new("WireDiameter", "2 mm"), new("Contact", "Skin"),
+            };
+        }
     }
 
     /// <summary>The textbook formula: emf = omega B A, I = emf / R.</summary>
@@ -51,6 +63,18 @@ public class EngineBenchmarks
     /// <summary>A ramp 0 to 1 T in 1 s.</summary>
     [Benchmark]
     public Verdict Ramp1Second() => Assess(_ramp1s);
+
+    /// <summary>An inventory row (rings of ten diameters in turn, as text) read and assessed in a ramp in 10 ms.</summary>
+    [Benchmark]
+    public Verdict InventoryRowRamp10Milliseconds()
+    {
+        KeyValuePair<string, object?>[] row = _rows[_next];
+        _next = (_next + 1) % _rows.Length;
+        ConductiveItem item = ItemRecordReader.Read(row, MaterialLibrary.BuiltIn, _next, null, false);
+        (Vector3D? position, Vector3D? normal) = PlacementRecordReader.Read(row, "row", null);
+        var scenario = new Scenario(item, _ramp10ms, new Placement(position ?? Vector3D.Zero, normal, null)) { Inventory = InventoryFields.Of(row) };
+        return HazardAssessor.Assess(InductionEngine.Respond(scenario), HazardPolicy.Default).Verdict;
+    }
 
     private Verdict Assess(FieldSource source) =>
         HazardAssessor.Assess(InductionEngine.Respond(new Scenario(_ring, source)), HazardPolicy.Default).Verdict;

@@ -55,6 +55,7 @@ public static class Program
             ("sine", () => cases.SineContinuous()),
             ("ramp10ms", () => cases.Ramp10Milliseconds()),
             ("ramp1s", () => cases.Ramp1Second()),
+            ("row", () => cases.InventoryRowRamp10Milliseconds()),
         })
         {
             for (int i = 0; i < 20_000; i++)

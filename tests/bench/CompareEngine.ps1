@@ -1,6 +1,7 @@
 <#
 .SYNOPSIS
-    Times the ring assessments of the engine benchmark (a continuous sine, ramps in 10 ms and in 1 s) at an earlier
+    Times the ring assessments of the engine benchmark (a continuous sine, ramps in 10 ms and in 1 s, and an inventory
+    row: a ring of its own read from text and assessed in the 10 ms ramp) at an earlier
     commit and at the working tree, alternately in one session, and prints the fastest round of each and their ratio:
     this machine is noisy, so only a comparison made side by side in the same run says what a change did.
 .EXAMPLE
@@ -40,7 +41,7 @@ try {
         }
     }
 
-    foreach ($name in 'sine', 'ramp10ms', 'ramp1s') {
+    foreach ($name in 'sine', 'ramp10ms', 'ramp1s', 'row') {
         '{0,-9} {1}: {2,8:F2} us   working tree: {3,8:F2} us   ratio {4:F2}  (fastest of {5} alternate rounds)' -f $name, $Baseline, $best["baseline/$name"], $best["current/$name"], ($best["current/$name"] / $best["baseline/$name"]), $Rounds
     }
 }

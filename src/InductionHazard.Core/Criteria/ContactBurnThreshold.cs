@@ -24,13 +24,26 @@ public sealed class ContactBurnThreshold
         }
 
         _points = new (double, double)[points.Count];
+        _logSeconds = new double[points.Count];
         for (int k = 0; k < points.Count; k++)
         {
+            (double seconds, double celsius) = points[k];
+            if (!(seconds > 0) || double.IsInfinity(seconds) || !Quantities.Finite.Is(celsius) || (k > 0 && !(seconds > points[k - 1].Seconds)))
+            {
+                throw new ArgumentException(
+                    FormattableString.Invariant($"Point {k} of the threshold curve ({seconds} s, {celsius} °C): contact times must be finite, positive and increasing, temperatures finite."),
+                    nameof(points));
+            }
+
             _points[k] = points[k];
+            _logSeconds[k] = Math.Log(seconds);
         }
 
         Source = source;
     }
+
+    /// <summary>The natural logarithm of each point's contact time.</summary>
+    private readonly double[] _logSeconds;
 
     /// <summary>The curve for uncoated metal described above.</summary>
     public static ContactBurnThreshold UncoatedMetal { get; } = new(
@@ -65,6 +78,29 @@ public sealed class ContactBurnThreshold
                 (double t1, double c1) = _points[k];
                 double f = Math.Log(contactSeconds / t0) / Math.Log(t1 / t0);
                 return c0 + (f * (c1 - c0));
+            }
+        }
+
+        return _points[_points.Length - 1].Celsius;
+    }
+
+    /// <summary>
+    /// The threshold for a contact time given by its natural logarithm, °C: <see cref="CelsiusFor"/> with no logarithm
+    /// taken, for a grid of contact times made from their logarithms (it agrees to rounding).
+    /// </summary>
+    public double CelsiusForLogSeconds(double logSeconds)
+    {
+        if (logSeconds <= _logSeconds[0])
+        {
+            return _points[0].Celsius;
+        }
+
+        for (int k = 1; k < _points.Length; k++)
+        {
+            if (logSeconds <= _logSeconds[k])
+            {
+                double f = (logSeconds - _logSeconds[k - 1]) / (_logSeconds[k] - _logSeconds[k - 1]);
+                return _points[k - 1].Celsius + (f * (_points[k].Celsius - _points[k - 1].Celsius));
             }
         }
 

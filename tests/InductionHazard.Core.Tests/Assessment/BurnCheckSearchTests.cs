@@ -166,4 +166,62 @@ public sealed class BurnCheckSearchTests
 
         Assert.True(byDose >= 2 && byContact >= 2, "the cases should include both criteria governing: dose " + byDose + ", contact " + byContact);
     }
+
+    /// <summary>
+    /// The contact times judged: from the curve's shortest to the shorter of its longest and the history's span, 12 a
+    /// decade evenly in the logarithm (first (last / first)^(k / count), written out here), with the curve's own points
+    /// among them at their own temperatures, ascending and distinct, each with the threshold the curve gives it.
+    /// </summary>
+    [Theory]
+    [InlineData(0.5)]
+    [InlineData(0.7)]
+    [InlineData(10)]
+    [InlineData(37.3)]
+    [InlineData(60)]
+    [InlineData(1234.5)]
+    [InlineData(8 * 3600.0)]
+    [InlineData(1e6)]
+    public void TheContactTimesAreTwelveADecadeWithTheCurvesPointsAndTheirThresholds(double span)
+    {
+        ContactBurnThreshold curve = ContactBurnThreshold.UncoatedMetal;
+        (double[] seconds, double[] celsius) = BurnCheck.Durations(curve, span);
+        double first = curve.ShortestSeconds, last = Math.Min(curve.LongestSeconds, span);
+        int count = (int)Math.Ceiling(Math.Log10(last / first) * 12);
+        var expected = Enumerable.Range(0, count + 1).Select(k => first * Math.Pow(last / first, count == 0 ? 0 : (double)k / count))
+            .Concat(curve.Points.Select(p => p.Seconds).Where(t => t <= last)).OrderBy(t => t).ToList();
+        var distinct = new List<double>();
+        foreach (double t in expected)
+        {
+            if (distinct.Count == 0 || Math.Abs(t - distinct[distinct.Count - 1]) > 1e-12 * t)
+            {
+                distinct.Add(t);
+            }
+        }
+
+        Assert.Equal(distinct.Count, seconds.Length);
+        Assert.Equal(first, seconds[0]);
+        Assert.Equal(last, seconds[seconds.Length - 1]);
+        for (int k = 0; k < seconds.Length; k++)
+        {
+            Assert.True(Math.Abs(seconds[k] - distinct[k]) <= 1e-13 * distinct[k], $"time {k}: {seconds[k]} against {distinct[k]}");
+            Assert.True(k == 0 || seconds[k] > seconds[k - 1], $"time {k} not above the one before");
+            Assert.True(Math.Abs(celsius[k] - curve.CelsiusFor(seconds[k])) <= 1e-12, $"threshold {k}: {celsius[k]} against {curve.CelsiusFor(seconds[k])}");
+        }
+
+        foreach ((double t, double c) in curve.Points.Where(p => p.Seconds <= last))
+        {
+            int at = Array.IndexOf(seconds, t);
+            Assert.True(at >= 0, "the curve's point at " + t + " s is among the contact times");
+            Assert.Equal(c, celsius[at]);
+        }
+    }
+
+    [Fact]
+    public void AThresholdCurveWhoseTimesDoNotIncreaseIsRefusedNamingThePoint()
+    {
+        var ex = Assert.Throws<ArgumentException>(() => new ContactBurnThreshold(new[] { (1.0, 60.0), (10.0, 50.0), (10.0, 48.0) }, "test"));
+        Assert.Contains("Point 2", ex.Message, StringComparison.Ordinal);
+        Assert.Throws<ArgumentException>(() => new ContactBurnThreshold(new[] { (0.0, 60.0) }, "test"));
+        Assert.Throws<ArgumentException>(() => new ContactBurnThreshold(new[] { (1.0, double.NaN) }, "test"));
+    }
 }

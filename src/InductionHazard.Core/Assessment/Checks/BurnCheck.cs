@@ -365,15 +365,14 @@ public sealed class BurnCheck : IHazardCheck
             return (known.Seconds, known.Celsius, known.Place);
         }
 
-        var seconds = new List<double>(grid.Seconds.Length);
-        var celsius = new List<double>(grid.Seconds.Length);
+        // Where every threshold lies above the start (the usual case), the grid itself.
+        int above = 0;
         double? place = null;
         for (int k = 0; k < grid.Seconds.Length; k++)
         {
             if (grid.Celsius[k] > start)
             {
-                seconds.Add(grid.Seconds[k]);
-                celsius.Add(grid.Celsius[k]);
+                above++;
             }
             else
             {
@@ -381,7 +380,21 @@ public sealed class BurnCheck : IHazardCheck
             }
         }
 
-        var judged = new JudgedTimes(grid.Seconds, start, seconds.ToArray(), celsius.ToArray(), place);
+        double[] seconds = grid.Seconds, celsius = grid.Celsius;
+        if (above < grid.Seconds.Length)
+        {
+            (seconds, celsius) = (new double[above], new double[above]);
+            for (int k = 0, j = 0; k < grid.Seconds.Length; k++)
+            {
+                if (grid.Celsius[k] > start)
+                {
+                    (seconds[j], celsius[j]) = (grid.Seconds[k], grid.Celsius[k]);
+                    j++;
+                }
+            }
+        }
+
+        var judged = new JudgedTimes(grid.Seconds, start, seconds, celsius, place);
         LastJudged = judged;
         return (judged.Seconds, judged.Celsius, judged.Place);
     }
@@ -396,30 +409,46 @@ public sealed class BurnCheck : IHazardCheck
 
     private sealed record DurationGrid(ContactBurnThreshold Curve, double Last, double[] Seconds, double[] Celsius);
 
+    /// <summary>
+    /// The grid from <paramref name="first"/> to <paramref name="last"/>: count + 1 times spaced evenly in their
+    /// logarithm (12 a decade), each found from its logarithm, which gives its threshold with no logarithm taken; the
+    /// curve's own points merged in where they fall (with their own temperatures), a time met twice kept once.
+    /// </summary>
     private static (double[] Seconds, double[] Celsius) Grid(ContactBurnThreshold curve, double first, double last)
     {
         int count = (int)Math.Ceiling(Math.Log10(last / first) * DurationsPerDecade);
-        var seconds = new List<double>(count + 1 + curve.Points.Count);
-        for (int k = 0; k <= count; k++)
+        IReadOnlyList<(double Seconds, double Celsius)> points = curve.Points;
+        var seconds = new double[count + 1 + points.Count];
+        var celsius = new double[seconds.Length];
+        double logFirst = Math.Log(first), logRatio = Math.Log(last / first);
+        int n = 0, p = 0;
+        void Add(double t, double c)
         {
-            seconds.Add(first * Math.Pow(last / first, count == 0 ? 0 : (double)k / count));
-        }
-
-        foreach ((double t, double _) in curve.Points)
-        {
-            if (t <= last)
+            if (n == 0 || t > seconds[n - 1])
             {
-                seconds.Add(t);
+                seconds[n] = t;
+                celsius[n++] = c;
             }
         }
 
-        double[] result = Waveforms.DriveSampling.SortedDistinct(seconds);
-        var celsius = new double[result.Length];
-        for (int k = 0; k < result.Length; k++)
+        for (int k = 0; k <= count; k++)
         {
-            celsius[k] = curve.CelsiusFor(result[k]);
+            double logT = count == 0 ? logFirst : logFirst + (logRatio * k / count);
+            double t = k == 0 ? first : k == count ? last : Math.Exp(logT);
+            for (; p < points.Count && points[p].Seconds <= t; p++)
+            {
+                Add(points[p].Seconds, points[p].Celsius);
+            }
+
+            Add(t, curve.CelsiusForLogSeconds(logT));
         }
 
-        return (result, celsius);
+        if (n < seconds.Length)
+        {
+            Array.Resize(ref seconds, n);
+            Array.Resize(ref celsius, n);
+        }
+
+        return (seconds, celsius);
     }
 }
