@@ -329,7 +329,8 @@ public sealed class ItemPaths
             }
 
             // A field integrated by quadrature: the discs of one plane share it, so each plane is integrated once,
-            // annulus by annulus, for all the radii its samples need (DiscQuadrature.NestedFluxes).
+            // annulus by annulus, for all the radii its samples need (DiscQuadrature.NestedFluxes); or in closed form
+            // where the geometry has one (a coil's discs on its axis).
             var planes = new Dictionary<double, List<double>>();
             foreach (Filament cell in cells)
             {
@@ -347,7 +348,9 @@ public sealed class ItemPaths
             var flux = new Dictionary<(double Z, double R), double>();
             foreach (KeyValuePair<double, List<double>> plane in planes)
             {
-                double[] values = DiscQuadrature.NestedFluxes(geometry.FieldPerUnitDrive, centre + (plane.Key * normal), normal, plane.Value);
+                Vector3D at = centre + (plane.Key * normal);
+                double[] values = (geometry as IClosedFormDiscFlux)?.ClosedFormFluxes(at, normal, plane.Value)
+                    ?? DiscQuadrature.NestedFluxes(geometry.FieldPerUnitDrive, at, normal, plane.Value);
                 for (int k = 0; k < values.Length; k++)
                 {
                     flux[(plane.Key, plane.Value[k])] = values[k];
@@ -376,8 +379,9 @@ public sealed class ItemPaths
     /// The force on each path per ampere and per unit drive of each term (paths x terms), N/(A drive unit): the line
     /// integral of dl x b_j around the path, which for a rigid circuit equals the gradient of its flux per unit drive,
     /// grad M_ij (F = I grad Phi = I closed-integral dl x B). Around a filament's circle (averaged over its cell's Gauss
-    /// points) by the trapezoid rule at 96 points; around a rectangle by 16-point Gauss-Legendre on each side. Zero
-    /// for a source whose every term is uniform.
+    /// points) by the trapezoid rule at 96 points, or in closed form where the geometry has one (a coil's circles on its
+    /// axis, <see cref="IClosedFormDiscFlux"/>); around a rectangle by 16-point Gauss-Legendre on each side. Zero for a
+    /// source whose every term is uniform.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be evaluated on a path.</exception>
     public Vector3D[,] CouplingGradient(FieldSource source, Vector3D centre, Vector3D normal)
@@ -411,7 +415,8 @@ public sealed class ItemPaths
                     Vector3D sum = Vector3D.Zero;
                     foreach ((double r, double z, double weight) in cells[i].GaussSamples())
                     {
-                        sum += weight * AroundCircle(geometry, centre + (z * normal), u, v, r);
+                        Vector3D at = centre + (z * normal);
+                        sum += weight * ((geometry as IClosedFormDiscFlux)?.ClosedFormRimForce(at, normal, r) ?? AroundCircle(geometry, at, u, v, r));
                     }
 
                     gradient[i, j] = sum;
@@ -421,7 +426,7 @@ public sealed class ItemPaths
             {
                 Vector3D around = Item.Loop is RectangularLoopGeometry rectangle
                     ? AroundRectangle(geometry, centre, normal, rectangle)
-                    : AroundCircle(geometry, centre, u, v, Item.Loop.HalfSpanMeters);
+                    : (geometry as IClosedFormDiscFlux)?.ClosedFormRimForce(centre, normal, Item.Loop.HalfSpanMeters) ?? AroundCircle(geometry, centre, u, v, Item.Loop.HalfSpanMeters);
                 for (int i = 0; i < paths; i++)
                 {
                     gradient[i, j] = around;
