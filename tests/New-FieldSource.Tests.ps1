@@ -37,4 +37,15 @@ Describe 'New-FieldSource' {
         $s = New-FieldWaveform -Ramp -From 0 -To '1 T' -Duration 1 | New-FieldSource -Uniform -Direction '1e200,0,0'
         $s.Terms[0].Geometry.Direction.X | Should -Be 1
     }
+
+    It 'makes a line conductor from a waveform piped to -Conductor alone, and a segment with -Start and -End' {
+        # Two parameter sets share -Conductor; the shell must still choose between them with the waveform piped.
+        $amps = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz'
+        $line = $amps | New-FieldSource -Conductor
+        $line.Terms[0].Geometry.GetType().Name | Should -Be 'LineConductor'
+        $line.Terms[0].Geometry.Axis.Direction.Z | Should -Be 1
+        $segment = $amps | New-FieldSource -Conductor -Start '0, 0, 0' -End '0, 0, 2 m'
+        $segment.Terms[0].Geometry.GetType().Name | Should -Be 'SegmentConductor'
+        $segment.Terms[0].Geometry.End.Z | Should -Be 2
+    }
 }

@@ -84,13 +84,17 @@ public sealed class NewFieldSourceCommand : PSCmdlet
     [Vector(QuantityKind.Length)]
     public Vector3D Center { get; set; }
 
+    // Start and End also take a piped object's Start and End: without that, a waveform piped to -Conductor alone
+    // ($w | New-FieldSource -Conductor) leaves the shell two sets it will not choose between before the pipeline
+    // runs, and it refuses the command; with it, the shell waits, and a waveform (which has neither) makes a line.
+
     /// <summary>Where a conductor segment starts (the current enters), as x,y,z lengths.</summary>
-    [Parameter(Mandatory = true, ParameterSetName = SegmentSet)]
+    [Parameter(Mandatory = true, ParameterSetName = SegmentSet, ValueFromPipelineByPropertyName = true)]
     [Vector(QuantityKind.Length)]
     public Vector3D Start { get; set; }
 
     /// <summary>Where a conductor segment ends (the current leaves), as x,y,z lengths.</summary>
-    [Parameter(Mandatory = true, ParameterSetName = SegmentSet)]
+    [Parameter(Mandatory = true, ParameterSetName = SegmentSet, ValueFromPipelineByPropertyName = true)]
     [Vector(QuantityKind.Length)]
     public Vector3D End { get; set; }
 
