@@ -151,8 +151,9 @@ public sealed class CircularCoil : IFieldGeometry, IClosedFormDiscFlux
     /// The mutual inductance of two coaxial circles, radii a and b, planes d apart, H (Maxwell; Grover, Inductance
     /// Calculations, 1946): M = mu0 sqrt(ab) [(2/k - k) K(k) - (2/k) E(k)], k^2 = 4ab / ((a + b)^2 + d^2). Where k^2
     /// is below 0.05 (circles far apart or of very different size), where the bracket is the small difference of
-    /// large terms, from its series instead: pi sum over j of c_j j / (2j + 2) k^(2j + 1), c_j the squares of
-    /// (2j)! / (4^j j!^2) that K's series has (the j = 1 term, pi k^3 / 16, is the two circles as dipoles).
+    /// large terms, from its series instead, summed until its terms fall below 1e-18 of the sum: pi sum over j of
+    /// c_j j / (2j + 2) k^(2j + 1), c_j the squares of (2j)! / (4^j j!^2) that K's series has (the j = 1 term,
+    /// pi k^3 / 16, is the two circles as dipoles). The filament model's mutual inductances are these too.
     /// </summary>
     public static double CoaxialMutualInductance(double a, double b, double d)
     {
@@ -179,7 +180,8 @@ public sealed class CircularCoil : IFieldGeometry, IClosedFormDiscFlux
         }
         else
         {
-            (double kk, double ee) = EllipticIntegrals.Both(m);
+            // Coincident filaments (a = b, d = 0) have no finite mutual inductance: kept just short of k = 1.
+            (double kk, double ee) = EllipticIntegrals.Both(Math.Min(m, 1 - 1e-16));
             bracket = (((2 / k) - k) * kk) - (2 / k * ee);
         }
 

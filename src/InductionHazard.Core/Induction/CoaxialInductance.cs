@@ -8,27 +8,12 @@ namespace InductionHazard.Induction;
 /// <summary>Inductances of coaxial circular filaments and of the cells of a filament mesh.</summary>
 public static class CoaxialInductance
 {
-    /// <summary>Below this modulus k the series replaces the elliptic form, whose terms cancel there.</summary>
-    private const double SeriesBelowK = 0.05;
-
     /// <summary>
     /// The mutual inductance of two coaxial circular filaments of radii a and b, d apart along the axis (Maxwell;
-    /// Grover 1946): M = mu0 sqrt(ab) [(2/k - k) K(k) - (2/k) E(k)], k^2 = 4ab / ((a + b)^2 + d^2), H. For small k the
-    /// series mu0 sqrt(ab) pi k^3 / 16 (1 + 3k^2/4 + 75k^4/128), which the elliptic form loses to cancellation.
+    /// Grover 1946), H: <see cref="CircularCoil.CoaxialMutualInductance"/>, its closed form or, where the closed form
+    /// cancels (k^2 below 0.05), its series.
     /// </summary>
-    public static double MutualHenries(double a, double b, double d)
-    {
-        double m = 4 * a * b / (((a + b) * (a + b)) + (d * d));
-        double k = Math.Sqrt(m);
-        double scale = PhysicalConstants.VacuumPermeability * Math.Sqrt(a * b);
-        if (k < SeriesBelowK)
-        {
-            return scale * Math.PI * k * m / 16 * (1 + (0.75 * m) + (75.0 / 128 * m * m));
-        }
-
-        (double kk, double ee) = EllipticIntegrals.Both(Math.Min(m, 1 - 1e-16));
-        return scale * ((((2 / k) - k) * kk) - (2 / k * ee));
-    }
+    public static double MutualHenries(double a, double b, double d) => CircularCoil.CoaxialMutualInductance(a, b, d);
 
     /// <summary>
     /// Rectangular cells whose centres lie further from the axis than this many times their longest side take the
