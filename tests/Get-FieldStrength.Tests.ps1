@@ -17,6 +17,19 @@ Describe 'Get-FieldStrength' {
         $s[0].FrequencyHertz | Should -Be 50
     }
 
+    It 'takes points piped as themselves, as Test-FieldExposure does, and names a point it cannot read' {
+        $piped = @('100 mm, 0, 0', '0, 0.4, 0' | Get-FieldStrength -Source $line)
+        $given = @(Get-FieldStrength -Source $line -Position '100 mm,0,0', '0,400 mm,0')
+        $piped.Count | Should -Be 2
+        $piped[0].PeakFluxDensityTesla | Should -Be $given[0].PeakFluxDensityTesla
+        $piped[1].PeakFluxDensityTesla | Should -Be $given[1].PeakFluxDensityTesla
+        $errs = $null
+        $rest = @('1 parsec, 0, 0', '100 mm, 0, 0' | Get-FieldStrength -Source $line -ErrorVariable errs -ErrorAction SilentlyContinue)
+        $rest.Count | Should -Be 1
+        $errs.Count | Should -Be 1
+        "$($errs[0])" | Should -BeLike 'Position:*parsec*'
+    }
+
     # Validates: the cmdlet's resultant rms of a line's 50 Hz field, its peak over root 2 | Ampere's law | 1e-12
     It 'gives a sinusoid''s resultant rms: a line''s peak over root 2, more than that beside a three-phase set, none for a ramp' {
         $s = Get-FieldStrength -Source $line -Position '100 mm,0,0'

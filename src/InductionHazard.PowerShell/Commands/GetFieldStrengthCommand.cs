@@ -27,7 +27,7 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
     [Vector(QuantityKind.Length, Many = true)]
     public Vector3D[] Position { get; set; } = Array.Empty<Vector3D>();
 
-    /// <summary>Rows with X, Y, Z columns (Import-Csv output, hashtables), one result per row.</summary>
+    /// <summary>Rows with X, Y, Z columns (Import-Csv output, hashtables), one result per row; or points themselves, as Test-FieldExposure takes them ('0, 300 mm, 0').</summary>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     public PSObject[] InputObject { get; set; } = null!;
 
@@ -67,7 +67,10 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
             string label = "row " + _row;
             try
             {
-                (Vector3D? position, _) = PlacementRecordReader.Read(Records.From(input), label, ItemInput.UnitsOf(Unit));
+                // A point piped as itself (a string '0, 300 mm, 0' or a vector) rather than as a row of X, Y, Z.
+                (Vector3D? position, _) = input.BaseObject is string or Vector3D
+                    ? (VectorParser.Parse(input.BaseObject, "Position", QuantityKind.Length), null)
+                    : PlacementRecordReader.Read(Records.From(input), label, ItemInput.UnitsOf(Unit));
                 if (position is null)
                 {
                     throw new RecordException(label, new[] { new FieldError("X", "is missing: give the point as X, Y, Z", "InvalidInput") });
