@@ -8,16 +8,15 @@ namespace InductionHazard.Fields;
 /// <summary>
 /// A solenoid of radius a, length l and N turns, as a current sheet: on the axis
 /// Bz = (mu0 N I / 2l) [(z + l/2) / sqrt((z + l/2)^2 + a^2) - (z - l/2) / sqrt((z - l/2)^2 + a^2)] (any
-/// electromagnetism text); off the axis, the filament-loop field (<see cref="CircularCoil.LoopField"/>) integrated
-/// along the length with N / l turns per metre by composite Gauss-Legendre quadrature (8 points on panels no longer
-/// than a quarter of the radius). Drive: the current in amperes.
+/// electromagnetism text); off the axis in closed form by Bulirsch's generalized complete elliptic integral C
+/// (Derby and Olbert, Am. J. Phys. 78, 229, 2010): with B0 = mu0 (N / l) I / pi, z+- = z +- l/2,
+/// alpha+- = a / sqrt(z+-^2 + (rho + a)^2), beta+- = z+- / sqrt(z+-^2 + (rho + a)^2), gamma = (a - rho) / (a + rho) and
+/// k+-^2 = (z+-^2 + (a - rho)^2) / (z+-^2 + (rho + a)^2): Brho = B0 [alpha+ C(k+, 1, 1, -1) - alpha- C(k-, 1, 1, -1)],
+/// Bz = B0 a / (a + rho) [beta+ C(k+, gamma^2, 1, gamma) - beta- C(k-, gamma^2, 1, gamma)]. Drive: the current in
+/// amperes.
 /// </summary>
 public sealed class SolenoidField : IFieldGeometry
 {
-    private const int MinPanels = 32;
-    private const int MaxPanels = 4000;
-    private const int Order = 8;
-
     /// <summary>Creates the solenoid.</summary>
     /// <exception cref="InvalidInputException">A size or the turns are out of range.</exception>
     public SolenoidField(Axis axis, double radiusMeters, double lengthMeters, double turns)
@@ -73,25 +72,75 @@ public sealed class SolenoidField : IFieldGeometry
             throw new FieldEvaluationException("the point " + point + " m is on the solenoid's winding");
         }
 
-        // A loop's field varies along the length over about the radius: panels no longer than a quarter of it.
-        int panels = (int)Math.Min(MaxPanels, Math.Max(MinPanels, Math.Ceiling(4 * LengthMeters / RadiusMeters)));
-        GaussLegendre.Rule rule = GaussLegendre.Of(Order);
-        double panel = LengthMeters / panels, br = 0, bz = 0;
-        for (int p = 0; p < panels; p++)
+        (double br, double bz) = SheetField(RadiusMeters, LengthMeters / 2, rho, z);
+        double b0 = PhysicalConstants.VacuumPermeability * Turns / LengthMeters / Math.PI;
+        return (b0 * bz * Axis.Direction) + (b0 * br / rho * radial);
+    }
+
+    /// <summary>
+    /// Derby and Olbert's brackets for a current sheet of radius a from -h to h along the axis, at (rho, z) off the axis:
+    /// (Brho, Bz) over B0 = mu0 n I / pi.
+    /// </summary>
+    private static (double Radial, double Axial) SheetField(double a, double h, double rho, double z)
+    {
+        double zp = z + h, zm = z - h, sum = (a + rho) * (a + rho), difference = (a - rho) * (a - rho);
+        double alphaPlus = a / Math.Sqrt((zp * zp) + sum), alphaMinus = a / Math.Sqrt((zm * zm) + sum);
+        double kPlus = Math.Sqrt(((zp * zp) + difference) / ((zp * zp) + sum)), kMinus = Math.Sqrt(((zm * zm) + difference) / ((zm * zm) + sum));
+        double gamma = (a - rho) / (a + rho);
+        double radial = (alphaPlus * Cel(kPlus, 1, 1, -1)) - (alphaMinus * Cel(kMinus, 1, 1, -1));
+        double axial = ((zp * alphaPlus * Cel(kPlus, gamma * gamma, 1, gamma)) - (zm * alphaMinus * Cel(kMinus, gamma * gamma, 1, gamma))) / (a + rho);
+        return (radial, axial);
+    }
+
+    /// <summary>
+    /// Bulirsch's generalized complete elliptic integral, C(kc, p, c, s) = integral over 0..pi/2 of
+    /// (c cos^2 t + s sin^2 t) / ((cos^2 t + p sin^2 t) sqrt(cos^2 t + kc^2 sin^2 t)) dt (Bulirsch, Numer. Math. 13, 305,
+    /// 1969), by his iteration, which converges quadratically: stopped where successive means agree to 1e-8, which
+    /// leaves an error of about its square. NaN for kc = 0 (a point on the sheet's edge, which is refused before).
+    /// </summary>
+    public static double Cel(double kc, double p, double c, double s)
+    {
+        if (kc == 0)
         {
-            double mid = (-LengthMeters / 2) + ((p + 0.5) * panel);
-            for (int i = 0; i < Order; i++)
-            {
-                double zp = mid + (0.5 * panel * rule.Nodes[i]);
-                (double r, double a) = CircularCoil.LoopField(RadiusMeters, rho, z - zp);
-                double w = rule.Weights[i] * 0.5 * panel;
-                br += w * r;
-                bz += w * a;
-            }
+            return double.NaN;
         }
 
-        double density = Turns / LengthMeters;
-        return (density * bz * Axis.Direction) + (density * br / rho * radial);
+        double k = Math.Abs(kc), pp = p, cc = c, ss = s, em = 1, f, g;
+        if (p > 0)
+        {
+            pp = Math.Sqrt(p);
+            ss = s / pp;
+        }
+        else
+        {
+            f = kc * kc;
+            double q = 1 - f;
+            g = 1 - pp;
+            f -= pp;
+            q *= ss - (c * pp);
+            pp = Math.Sqrt(f / g);
+            cc = (c - ss) / g;
+            ss = (-q / (g * g * pp)) + (cc * pp);
+        }
+
+        double kk = k;
+        for (int i = 0; ; i++)
+        {
+            f = cc;
+            cc += ss / pp;
+            g = kk / pp;
+            ss = 2 * (ss + (f * g));
+            pp = g + pp;
+            g = em;
+            em = k + em;
+            if (i == 60 || !(Math.Abs(g - k) > g * 1e-8))
+            {
+                return Math.PI / 2 * (ss + (cc * em)) / (em * (em + pp));
+            }
+
+            k = 2 * Math.Sqrt(kk);
+            kk = k * em;
+        }
     }
 
     /// <inheritdoc />
