@@ -55,11 +55,11 @@ public class ConductorFieldTests
         Within.Relative(line, bar.FieldPerUnitDrive(p).Length, tolerance * 10, "at " + distance + " m");
     }
 
-    [Validates("adaptive cubature against 16,000 filaments", "midpoint rule (independent)", "1e-5")]
+    [Validates("bar near field (closed form) against 16,000 filaments", "midpoint rule (independent)", "1e-5")]
     [Fact]
     public void ABusbarsNearFieldMatchesAFineSumOfFilaments()
     {
-        // Independent check of the adaptive cubature: the section as 400 x 40 line currents (midpoint rule).
+        // Independent check of the near field: the section as 400 x 40 line currents (midpoint rule).
         var bar = new BusbarField(AlongZ, 0.1, 0.01);
         var p = new Vector3D(0.07, 0.02, 0.3);
         Vector3D sum = Vector3D.Zero;
@@ -75,6 +75,65 @@ public class ConductorFieldTests
 
         Vector3D expected = (1.0 / (nx * ny)) * sum;
         Within.Relative(expected.Length, bar.FieldPerUnitDrive(p).Length, 1e-5, "near field of the bar");
+    }
+
+    [Validates("bar field near the section in closed form, both components, at faces, corners and beyond", "the section as line currents by MathNet's 2-D Gauss-Legendre rule on 100 x 100 panels (independent)", "1e-8")]
+    [Theory]
+    [InlineData(0.0, 0.006)]
+    [InlineData(0.051, 0.0)]
+    [InlineData(0.0505, 0.0055)]
+    [InlineData(-0.03, -0.008)]
+    [InlineData(0.2, 0.15)]
+    [InlineData(0.0, 0.9)]
+    public void ABusbarsFieldNearItIsTheSumOfItsLineCurrents(double x, double y)
+    {
+        // A 100 mm x 10 mm bar; the points lie 0.5-1 mm from a face or a corner, and out to 18 half-diagonals (the closed
+        // form's reach is 20). Each panel of the section takes 8 x 8 Gauss points of the line current's field.
+        var bar = new BusbarField(AlongZ, 0.1, 0.01);
+        var p = new Vector3D(x, y, 0.2);
+        var rule = new MathNet.Numerics.Integration.GaussLegendreRule(-1, 1, 8);
+        const int Panels = 100;
+        double dx = 0.1 / Panels, dy = 0.01 / Panels;
+        Vector3D sum = Vector3D.Zero;
+        for (int i = 0; i < Panels; i++)
+        {
+            for (int j = 0; j < Panels; j++)
+            {
+                for (int a = 0; a < rule.Order; a++)
+                {
+                    for (int b = 0; b < rule.Order; b++)
+                    {
+                        double fx = -0.05 + ((i + 0.5 + (0.5 * rule.Abscissas[a])) * dx), fy = -0.005 + ((j + 0.5 + (0.5 * rule.Abscissas[b])) * dy);
+                        sum += (rule.Weights[a] * rule.Weights[b] * 0.25) * LineConductor.Field(new Axis(new Vector3D(fx, fy, 0), Vector3D.UnitZ), p);
+                    }
+                }
+            }
+        }
+
+        Vector3D expected = (1.0 / (Panels * Panels)) * sum, got = bar.FieldPerUnitDrive(p);
+        Assert.True((got - expected).Length <= 1e-8 * expected.Length, $"B {got} against the line currents' {expected}");
+    }
+
+    [Validates("a bar's field around it: the line integral of B is mu0 I", "Ampere's law", "1e-12")]
+    [Theory]
+    [InlineData(0.06)]
+    [InlineData(0.3)]
+    [InlineData(5.0)]
+    public void AroundABusbarTheFieldsLineIntegralIsMu0I(double radius)
+    {
+        // A circle about the bar's centre, within and beyond the closed form's reach (1 m for this bar), by the
+        // trapezoid rule (spectral for the periodic integrand once it has enough points).
+        var bar = new BusbarField(AlongZ, 0.1, 0.01);
+        const int Points = 4096;
+        double sum = 0;
+        for (int k = 0; k < Points; k++)
+        {
+            double phi = 2 * Math.PI * k / Points;
+            var tangent = new Vector3D(-Math.Sin(phi), Math.Cos(phi), 0);
+            sum += bar.FieldPerUnitDrive(new Vector3D(radius * Math.Cos(phi), radius * Math.Sin(phi), 0.1)).Dot(tangent);
+        }
+
+        Within.Relative(PhysicalConstants.VacuumPermeability, sum * 2 * Math.PI * radius / Points, 1e-12, "line integral of B at r = " + radius);
     }
 
     [Fact]
