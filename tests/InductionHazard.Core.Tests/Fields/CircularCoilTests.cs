@@ -84,7 +84,7 @@ public class CircularCoilTests
         Within.Relative(maxwell, flux, 1e-6, "mutual inductance per turn");
     }
 
-    [Validates("coaxial circles' mutual inductance, closed form and its small-k series", "Maxwell; Grover (1946), K and E by Simpson's rule", "1e-9")]
+    [Validates("coaxial circles' mutual inductance, closed form and its small-k series", "Maxwell; Grover (1946), its bracket as one integral of K's and E's integrands by Simpson's rule", "1e-9")]
     [Theory]
     [InlineData(0.1, 0.02, 0.0)]
     [InlineData(0.1, 0.02, 0.05)]
