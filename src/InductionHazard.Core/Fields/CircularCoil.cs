@@ -93,9 +93,8 @@ public sealed class CircularCoil : IFieldGeometry, IClosedFormDiscFlux
     /// </summary>
     /// <exception cref="FieldEvaluationException">The quadrature does not converge (the disc is too close to the winding).</exception>
     public double FluxThroughDisc(Vector3D centre, Vector3D normal, double radius) =>
-        Coaxial(centre, normal, out double z, out double sign) && ClearOfWinding(radius, z)
-            ? sign * Turns * CoaxialMutualInductance(RadiusMeters, radius, z)
-            : DiscQuadrature.Flux(FieldPerUnitDrive, centre, normal, radius);
+        (Coaxial(centre, normal, out double z, out double sign) ? CoaxialFlux(radius, z, sign) : null)
+            ?? DiscQuadrature.Flux(FieldPerUnitDrive, centre, normal, radius);
 
     /// <summary>
     /// Through discs whose plane is square to the coil's axis and centred on it (to a part in 1e9 of the radius and
@@ -114,16 +113,22 @@ public sealed class CircularCoil : IFieldGeometry, IClosedFormDiscFlux
         var fluxes = new double[radii.Count];
         for (int k = 0; k < fluxes.Length; k++)
         {
-            if (!ClearOfWinding(radii[k], z))
+            if (CoaxialFlux(radii[k], z, sign) is not { } flux)
             {
                 return null;
             }
 
-            fluxes[k] = radii[k] == 0 ? 0 : sign * Turns * CoaxialMutualInductance(RadiusMeters, radii[k], z);
+            fluxes[k] = flux;
         }
 
         return fluxes;
     }
+
+    /// <summary>The flux through a disc on the axis, z along it, its normal's sign along it; null if the disc is not clear of the winding.</summary>
+    private double? CoaxialFlux(double radius, double z, double sign) =>
+        !ClearOfWinding(radius, z) ? null
+        : radius == 0 ? 0
+        : sign * Turns * CoaxialMutualInductance(RadiusMeters, radius, z);
 
     /// <summary>
     /// Around the rim of a disc that <see cref="ClosedFormFluxes"/> takes, the line integral of dl x b in closed form: by

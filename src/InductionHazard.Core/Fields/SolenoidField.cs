@@ -87,60 +87,9 @@ public sealed class SolenoidField : IFieldGeometry
         double alphaPlus = a / Math.Sqrt((zp * zp) + sum), alphaMinus = a / Math.Sqrt((zm * zm) + sum);
         double kPlus = Math.Sqrt(((zp * zp) + difference) / ((zp * zp) + sum)), kMinus = Math.Sqrt(((zm * zm) + difference) / ((zm * zm) + sum));
         double gamma = (a - rho) / (a + rho);
-        double radial = (alphaPlus * Cel(kPlus, 1, 1, -1)) - (alphaMinus * Cel(kMinus, 1, 1, -1));
-        double axial = ((zp * alphaPlus * Cel(kPlus, gamma * gamma, 1, gamma)) - (zm * alphaMinus * Cel(kMinus, gamma * gamma, 1, gamma))) / (a + rho);
+        double radial = (alphaPlus * EllipticIntegrals.Cel(kPlus, 1, 1, -1)) - (alphaMinus * EllipticIntegrals.Cel(kMinus, 1, 1, -1));
+        double axial = ((zp * alphaPlus * EllipticIntegrals.Cel(kPlus, gamma * gamma, 1, gamma)) - (zm * alphaMinus * EllipticIntegrals.Cel(kMinus, gamma * gamma, 1, gamma))) / (a + rho);
         return (radial, axial);
-    }
-
-    /// <summary>
-    /// Bulirsch's generalized complete elliptic integral, C(kc, p, c, s) = integral over 0..pi/2 of
-    /// (c cos^2 t + s sin^2 t) / ((cos^2 t + p sin^2 t) sqrt(cos^2 t + kc^2 sin^2 t)) dt (Bulirsch, Numer. Math. 13, 305,
-    /// 1969), by his iteration, which converges quadratically: stopped where successive means agree to 1e-8, which
-    /// leaves an error of about its square. NaN for kc = 0 (a point on the sheet's edge, which is refused before).
-    /// </summary>
-    public static double Cel(double kc, double p, double c, double s)
-    {
-        if (kc == 0)
-        {
-            return double.NaN;
-        }
-
-        double k = Math.Abs(kc), pp = p, cc = c, ss = s, em = 1, f, g;
-        if (p > 0)
-        {
-            pp = Math.Sqrt(p);
-            ss = s / pp;
-        }
-        else
-        {
-            f = kc * kc;
-            double q = 1 - f;
-            g = 1 - pp;
-            f -= pp;
-            q *= ss - (c * pp);
-            pp = Math.Sqrt(f / g);
-            cc = (c - ss) / g;
-            ss = (-q / (g * g * pp)) + (cc * pp);
-        }
-
-        double kk = k;
-        for (int i = 0; ; i++)
-        {
-            f = cc;
-            cc += ss / pp;
-            g = kk / pp;
-            ss = 2 * (ss + (f * g));
-            pp = g + pp;
-            g = em;
-            em = k + em;
-            if (i == 60 || !(Math.Abs(g - k) > g * 1e-8))
-            {
-                return Math.PI / 2 * (ss + (cc * em)) / (em * (em + pp));
-            }
-
-            k = 2 * Math.Sqrt(kk);
-            kk = k * em;
-        }
     }
 
     /// <inheritdoc />

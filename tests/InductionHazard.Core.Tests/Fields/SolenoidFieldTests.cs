@@ -106,6 +106,6 @@ public class SolenoidFieldTests
             sum += (i % 2 == 1 ? 4 : 2) * Integrand(i * h);
         }
 
-        Within.Relative(sum * h / 3, SolenoidField.Cel(kc, p, c, s), 1e-12, $"C({kc}, {p}, {c}, {s})");
+        Within.Relative(sum * h / 3, EllipticIntegrals.Cel(kc, p, c, s), 1e-12, $"C({kc}, {p}, {c}, {s})");
     }
 }
