@@ -433,6 +433,66 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
         }
     }
 
+    Context 'rows that repeat an item at a place' {
+        BeforeAll {
+            $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
+            $base = @(Import-Csv $inventoryPath)
+            $stations = @($base.Station | Select-Object -Unique)
+            # Each demo row, then again under another name, tag and holder, then nameless, then at another station (a row
+            # that differs from an earlier one only there must not take its result), the copies in another order.
+            $rows = [System.Collections.Generic.List[object]]::new()
+            foreach ($r in $base) { $rows.Add($r) }
+            foreach ($r in $base[($base.Count - 1)..0]) {
+                $spare = $r.PSObject.Copy(); $spare.Name = $r.Name + ' (spare)'; $spare.AssetTag = $r.AssetTag + '-S'; $spare.Holder = 'Stores'; $rows.Add($spare)
+            }
+            foreach ($r in $base) { $nameless = $r.PSObject.Copy(); $nameless.Name = ''; $rows.Add($nameless) }
+            foreach ($r in $base) {
+                $moved = $r.PSObject.Copy(); $moved.Station = $stations[($stations.IndexOf($r.Station) + 1) % $stations.Count]; $rows.Add($moved)
+            }
+            # What a result is, less when it was made and its row: its verdict, margins, findings, inventory columns and physics.
+            function ConvertTo-ResultText([object] $Assessment) { $Assessment | Select-Object * -ExcludeProperty AssessedUtc, RowNumber | ConvertTo-Json -Depth 8 -Compress }
+            $together = @($rows | Test-InductionHazard -Site $site -WarningAction SilentlyContinue)
+        }
+
+        It 'gives each row what assessing it alone gives, under its own name, row number and inventory columns' {
+            $together.Count | Should -Be $rows.Count
+            for ($n = 1; $n -le $rows.Count; $n++) {
+                $row = $rows[$n - 1].PSObject.Copy()
+                # Alone, a nameless row would be "row 1": it is given the name the inventory gives it, "row N".
+                if (-not $row.Name) { $row.Name = "row $n" }
+                $alone = @($row | Test-InductionHazard -Site $site -WarningAction SilentlyContinue)
+                $together[$n - 1].RowNumber | Should -Be $n
+                $together[$n - 1].ItemName | Should -Be $row.Name
+                ConvertTo-ResultText $together[$n - 1] | Should -Be (ConvertTo-ResultText $alone[0]) -Because "row $n ($($row.Name)) against the same row assessed on its own"
+            }
+
+            @($together | Where-Object ItemName -Like '* (spare)' | Where-Object AssetTag -NotLike '*-S').Count | Should -Be 0
+        }
+
+        It 'gives the same with -ThrottleLimit 2 as a serial run' {
+            $threaded = @($rows | Test-InductionHazard -Site $site -ThrottleLimit 2 -WarningAction SilentlyContinue)
+            $threaded.Count | Should -Be $together.Count
+            for ($k = 0; $k -lt $together.Count; $k++) { ConvertTo-ResultText $threaded[$k] | Should -Be (ConvertTo-ResultText $together[$k]) }
+        }
+
+        It 'gives each repeat of a row that cannot be assessed its own error, naming it' {
+            $bad = foreach ($name in 'First', 'Second', 'Third') { [pscustomobject]@{ Name = $name; Material = 'Unobtainium'; Diameter = '20 mm'; WireDiameter = '2 mm' } }
+            $results = @($bad | Test-InductionHazard -Source $pulse -ThrottleLimit 2 -ErrorAction SilentlyContinue -ErrorVariable failed)
+            $results.Count | Should -Be 0
+            $failed.Exception.Message | ForEach-Object { $_ -replace ':.*' } | Should -Be @("row 1 ('First')", "row 2 ('Second')", "row 3 ('Third')")
+        }
+
+        It 'gives Get-InductionResponse each repeated row under its own name and inventory columns' {
+            $ring = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-1' }
+            $again = [pscustomobject]@{ Name = 'Same ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-2' }
+            $responses = @($ring, $again | Get-InductionResponse -Source $pulse)
+            $responses.ItemName | Should -Be @('Ring', 'Same ring')
+            $responses[1].Scenario.Inventory['AssetTag'] | Should -Be 'R-2'
+            $alone = @($again | Get-InductionResponse -Source $pulse)[0]
+            ($responses[1] | ConvertTo-Json -Depth 8 -Compress) | Should -Be ($alone | ConvertTo-Json -Depth 8 -Compress)
+        }
+    }
+
     Context 'the demo site as a person reads it' {
         It 'shows every margin in the table as a plain figure between 0.001 and 1000, or as a bound' {
             $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')

@@ -6,17 +6,25 @@
     serially (its default) and with -ThrottleLimit 2. A third pipeline gives the floor for any binary cmdlet: the same
     rows through a compiled cmdlet that only binds each row and writes it on (the shell's binding and writing, with no
     work), so that what the textbook pipeline leaves a module for its own work on a row is the difference of the two.
+    The inventory's rings come in ten sizes, as an inventory repeats its items (rings of a size, a box of spanners), so
+    that a row repeating an earlier one takes its result; with -DistinctRows every ring is a size of its own and every
+    row is assessed.
 #>
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
     [int] $Rows = 20000,
-    [int] $Rounds = 3
+    [int] $Rounds = 3,
+    [switch] $DistinctRows
 )
 Import-Module $ModulePath
 $csv = Join-Path ([IO.Path]::GetTempPath()) 'induction-hazard-pipeline.csv'
 $lines = [System.Collections.Generic.List[string]]::new()
 $lines.Add('Name,Material,Diameter,WireDiameter,Contact')
-foreach ($k in 1..$Rows) { $lines.Add("Ring $k,Copper,$(18 + ($k % 10)) mm,2 mm,Skin") }
+# Ten sizes 18-27 mm, or (-DistinctRows) every row its own size from 18 to 28 mm.
+foreach ($k in 1..$Rows) {
+    $diameter = if ($DistinctRows) { (18 + 10.0 * $k / $Rows).ToString('R', [cultureinfo]::InvariantCulture) } else { 18 + ($k % 10) }
+    $lines.Add("Ring $k,Copper,$diameter mm,2 mm,Skin")
+}
 [IO.File]::WriteAllLines($csv, $lines)
 $sources = @{
     'ramp 1 T in 10 ms' = New-FieldWaveform -Ramp -From '0 T' -To '1 T' -Duration '10 ms' | New-FieldSource
@@ -64,6 +72,6 @@ foreach ($name in $sources.Keys) {
         $module = [math]::Min($module, (Measure-Module $csv $sources[$name]).TotalSeconds)
         $threaded = [math]::Min($threaded, (Measure-Module $csv $sources[$name] 2).TotalSeconds)
     }
-    '{0}: {1} rows, textbook {2:F2} s, Test-InductionHazard {3:F2} s (ratio {4:F1}), with -ThrottleLimit 2 {5:F2} s (ratio {6:F1}); a cmdlet that only passes rows on {7:F3} s, leaving a module {8:F1} us a row of its own work to match the textbook (fastest of {9} rounds each, after a warm-up)' -f $name, $Rows, $textbook, $module, ($module / $textbook), $threaded, ($threaded / $textbook), $floor, (($textbook - $floor) / $Rows * 1e6), $Rounds
+    '{0}: {1} rows{10}, textbook {2:F2} s, Test-InductionHazard {3:F2} s (ratio {4:F1}), with -ThrottleLimit 2 {5:F2} s (ratio {6:F1}); a cmdlet that only passes rows on {7:F3} s, leaving a module {8:F1} us a row of its own work to match the textbook (fastest of {9} rounds each, after a warm-up)' -f $name, $Rows, $textbook, $module, ($module / $textbook), $threaded, ($threaded / $textbook), $floor, (($textbook - $floor) / $Rows * 1e6), $Rounds, $(if ($DistinctRows) { ' (every one a ring of its own size)' } else { ' (rings of ten sizes)' })
 }
 Remove-Item $csv, $warm

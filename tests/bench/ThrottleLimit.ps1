@@ -2,8 +2,9 @@
 .SYNOPSIS
     Times items through Test-InductionHazard serially and with -ThrottleLimit 2, in the same process, three
     rounds; prints the speed-up of each round. By default the demo inventory (eight copies, each row at its
-    station); with -Heavy, 40 items of the filament model (thick bands, discs, rods and closed tubes of several
-    sizes) at the induction furnace's 9.6 kHz coil mouth.
+    station; each copy writes its sizes with more zeros after the point, the same sizes in text of its own, so that no
+    row repeats an earlier one and takes its result); with -Heavy, 40 items of the filament model (thick bands, discs,
+    rods and closed tubes of several sizes) at the induction furnace's 9.6 kHz coil mouth.
 #>
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
@@ -22,7 +23,17 @@ if ($Heavy) {
     }
 }
 else {
-    $rows = 1..8 | ForEach-Object { Import-Csv (Join-Path $root 'examples/marrowby-heath-inventory.csv') }
+    $sizes = 'Diameter', 'InnerDiameter', 'WireDiameter', 'Width', 'Thickness', 'Height', 'Length', 'WallThickness', 'Gap'
+    $rows = foreach ($copy in 0..7) {
+        foreach ($row in Import-Csv (Join-Path $root 'examples/marrowby-heath-inventory.csv')) {
+            foreach ($size in $sizes) {
+                if ($copy -gt 0 -and $row.$size -match '^(\d+)(\.\d+)?(\s*\S+)$') {
+                    $row.$size = $Matches[1] + $(if ($Matches[2]) { $Matches[2] } else { '.' }) + ('0' * $copy) + $Matches[3]
+                }
+            }
+            $row
+        }
+    }
 }
 
 $null = $rows | Select-Object -First 8 | Test-InductionHazard -Site $site -WarningAction SilentlyContinue

@@ -180,7 +180,7 @@ public static class HazardAssessor
     }
 
     /// <summary>The time as recorded, to the second; the last one written is kept, as a run writes the same second many times.</summary>
-    private static string Stamp(DateTime utc)
+    internal static string Stamp(DateTime utc)
     {
         long second = utc.Ticks / TimeSpan.TicksPerSecond;
         if (LastStamp is { } last && last.Second == second)

@@ -1,3 +1,4 @@
+using System;
 using InductionHazard.Criteria;
 
 namespace InductionHazard.Assessment;
@@ -9,16 +10,24 @@ namespace InductionHazard.Assessment;
 public sealed class InductionAssessment
 {
     /// <summary>The item's name.</summary>
-    public string ItemName { get; init; } = string.Empty;
+    public string ItemName { get => _itemName; init => _itemName = value; }
+
+    private string _itemName = string.Empty;
 
     /// <summary>The position of the item's record in the input (1-based), when it came from a pipeline or file.</summary>
-    public int? RowNumber { get; init; }
+    public int? RowNumber { get => _rowNumber; init => _rowNumber = value; }
+
+    private int? _rowNumber;
 
     /// <summary>The site station at which the item was assessed; empty when the field came from -Source.</summary>
-    public string StationName { get; init; } = string.Empty;
+    public string StationName { get => _stationName; init => _stationName = value; }
+
+    private string _stationName = string.Empty;
 
     /// <summary>The inventory row's own columns (asset tag, holder, location, notes...): every column that is not an item, placement or station field.</summary>
-    public InventoryFields Inventory { get; init; } = InventoryFields.Empty;
+    public InventoryFields Inventory { get => _inventory; init => _inventory = value; }
+
+    private InventoryFields _inventory = InventoryFields.Empty;
 
     /// <summary>The source's name.</summary>
     public string SourceName { get; init; } = string.Empty;
@@ -135,8 +144,30 @@ public sealed class InductionAssessment
     public string ModuleVersion { get; init; } = string.Empty;
 
     /// <summary>When the assessment was made: ISO 8601 in UTC ("2026-12-02T09:30:00Z"), which sorts as text and reads the same in every culture.</summary>
-    public string AssessedUtc { get; init; } = string.Empty;
+    public string AssessedUtc { get => _assessedUtc; init => _assessedUtc = value; }
+
+    private string _assessedUtc = string.Empty;
 
     /// <summary>The physics behind the verdict. ConvertTo-Json gives its figures, not its time series or inputs (Export-HazardReport -Format Json -IncludeSeries gives those).</summary>
-    public InductionResponse Response { get; init; } = null!;
+    public InductionResponse Response { get => _response; init => _response = value; }
+
+    private InductionResponse _response = null!;
+
+    /// <summary>
+    /// This assessment for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// the same verdict, margins and findings under that row's item name, row number, station and inventory columns,
+    /// stamped now; <paramref name="response"/> is this one's response for that row (<see cref="InductionResponse.For"/>).
+    /// </summary>
+    internal InductionAssessment For(InductionResponse response, int? rowNumber, DateTime? now = null)
+    {
+        var copy = (InductionAssessment)MemberwiseClone();
+        copy._itemName = response.ItemName;
+        copy._rowNumber = rowNumber;
+        copy._stationName = response.Scenario.StationName ?? string.Empty;
+        copy._inventory = response.Scenario.Inventory;
+        copy._assessedUtc = HazardAssessor.Stamp((now ?? DateTime.UtcNow).ToUniversalTime());
+        copy._response = response;
+        copy._inputHash = null;
+        return copy;
+    }
 }

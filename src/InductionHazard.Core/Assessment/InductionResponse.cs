@@ -22,6 +22,13 @@ public sealed record InductionResponse
     /// <summary>The item's name.</summary>
     public string ItemName => Scenario.Item.Name;
 
+    /// <summary>
+    /// This response for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// the same physics, for <paramref name="scenario"/>, this one's scenario under that row's name and inventory columns
+    /// (<see cref="Scenario.For"/>).
+    /// </summary>
+    internal InductionResponse For(Scenario scenario) => this with { Scenario = scenario };
+
     /// <summary>The source's name.</summary>
     public string SourceName => Scenario.Source.Name;
 

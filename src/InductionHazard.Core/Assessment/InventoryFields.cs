@@ -45,6 +45,9 @@ public sealed class InventoryFields : ReadOnlyDictionary<string, string>
         return fields.Count == 0 ? Empty : new InventoryFields(fields);
     }
 
+    /// <summary>Whether a column (by <see cref="RecordFields.FieldKey"/>) is an item, placement or station field rather than the inventory's own.</summary>
+    internal static bool IsItemOrPlacementField(string fieldKey) => ItemAndPlacementNames.Contains(fieldKey);
+
     /// <summary>"AssetTag: MH-J-001; Holder: technician A" (empty columns left out).</summary>
     public override string ToString() =>
         string.Join("; ", this.Where(p => p.Value.Length > 0).Select(p => p.Key + ": " + p.Value));

@@ -90,6 +90,13 @@ public sealed class Scenario
         return TextHash.Sha256(text.ToString());
     }
 
+    /// <summary>
+    /// This scenario for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// the item under that row's name, with that row's inventory columns; everything the physics reads is this one's.
+    /// </summary>
+    internal Scenario For(string itemName, InventoryFields inventory) =>
+        new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, Inventory = inventory };
+
     /// <summary>The site station the scenario stands for, if it came from one.</summary>
     public string? StationName { get; init; }
 

@@ -18,6 +18,10 @@ public sealed class ConductiveItem
         Contact = contact;
     }
 
+    /// <summary>The same item under another name.</summary>
+    internal ConductiveItem Named(string name) =>
+        name == Name ? this : new ConductiveItem(name, Shape, Material, Loop, GapMeters, Contact);
+
     /// <summary>The item's name as given in the inventory.</summary>
     public string Name { get; }
 

@@ -99,7 +99,7 @@ public static class ItemRecordReader
         }
 
         return new ConductiveItem(
-            string.IsNullOrWhiteSpace(name) ? (rowNumber is { } r ? "row " + r.ToString(CultureInfo.InvariantCulture) : "item") : name!,
+            ItemName(name, rowNumber),
             shape,
             material!,
             loop!,
@@ -353,6 +353,10 @@ public static class ItemRecordReader
     /// <summary>The item name a record gives (through the Name column or its aliases), or null.</summary>
     public static string? NameOf(IEnumerable<KeyValuePair<string, object?>> record) =>
         new RecordFields(record).Text("Name", required: false, A("Name"));
+
+    /// <summary>The name of the item a record makes: its Name column, else "row 7" (or "item" outside a pipeline or file).</summary>
+    public static string ItemName(string? name, int? rowNumber) =>
+        string.IsNullOrWhiteSpace(name) ? (rowNumber is { } r ? "row " + r.ToString(CultureInfo.InvariantCulture) : "item") : name!;
 
     /// <summary>How a record is named in messages: "row 7 ('Wedding band')", or "item 'Wedding band'".</summary>
     public static string Label(int? rowNumber, string? name)

@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Assessment;
 
@@ -10,4 +11,8 @@ public sealed class GetInductionResponseCommand : ItemPipelineCommand
 {
     /// <inheritdoc />
     protected override object Compute(InductionResponse response, int row) => response;
+
+    /// <inheritdoc />
+    protected override object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row) =>
+        RepeatedRows.Relabel((InductionResponse)first, name, record, row);
 }

@@ -37,6 +37,12 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private readonly Queue<Pending> _pending = new();
 
     /// <summary>
+    /// The work of the first row of each item at each place, for the rows that repeat it (an inventory's identical
+    /// items): they take its result under their own names. A few hundred distinct rows are kept, and no more.
+    /// </summary>
+    private readonly RepeatedRows<Task<Solved>> _repeated = new(256);
+
+    /// <summary>
     /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
     /// them at once, whatever the machine's core count (the pool alone would run every queued task a core is free for).
     /// </summary>
@@ -198,32 +204,28 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
             PSObject input = given ?? new PSObject(string.Empty);
             IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
+            string? name = record is null ? null : ItemRecordReader.NameOf(record);
             string label = given is null ? ItemRecordReader.Label(row, null)
-                : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, ItemRecordReader.NameOf(record));
+                : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, name);
             ShowProgress(label);
-            Task<(object Result, string? Verbose)> work;
-            try
+
+            // A row that repeats an earlier one's item and place takes that row's work, done or under way.
+            string? key = record is null || given?.BaseObject is null ? null : RepeatedRows.KeyOf(record);
+            if (key is not null && _repeated.TryGet(key, out Task<Solved> first))
             {
-                if (given is null || given.BaseObject is null)
+                _pending.Enqueue(new Pending(first, input, label, row, new Repeat(name, record!)));
+            }
+            else
+            {
+                Task<Solved> work = Start(given, input, record, label, row);
+                if (key is not null)
                 {
-                    throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+                    _repeated.Add(key, work);
                 }
 
-                // The row's fields are read here, on the pipeline thread (the shell's objects are not for other threads);
-                // the item, its placement and its assessment are made from them on a worker when there are several.
-                CancellationToken token = _cancellation.Token;
-                work = _workers is not null
-                    ? _workers.StartNew(() => Solve(ScenarioOf(input, record, label, row), row, label, token), token)
-                    : Task.FromResult(Solve(ScenarioOf(input, record, label, row), row, label, token));
-            }
-            catch (Exception ex) when (ex is not PipelineStoppedException)
-            {
-                var failed = new TaskCompletionSource<(object, string?)>();
-                failed.SetException(ex);
-                work = failed.Task;
+                _pending.Enqueue(new Pending(work, input, label, row, null));
             }
 
-            _pending.Enqueue(new Pending(work, input, label));
             Drain(wait: _pending.Count > 2 * ThrottleLimit);
         }
     }
@@ -239,14 +241,58 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <summary>What the command makes of one item's response (called on any thread: no writing here).</summary>
     protected abstract object Compute(InductionResponse response, int row);
 
+    /// <summary>
+    /// What <see cref="Compute"/> made for the first row of an item at a place, for a later row that repeats it
+    /// (<see cref="RepeatedRows{T}"/>): the same result under that row's name, row number and inventory columns.
+    /// </summary>
+    protected abstract object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row);
+
+    /// <summary>One row's work: the result and the response it was made from.</summary>
+    private readonly struct Solved
+    {
+        public Solved(object result, InductionResponse response)
+        {
+            Result = result;
+            Response = response;
+        }
+
+        public object Result { get; }
+
+        public InductionResponse Response { get; }
+    }
+
+    /// <summary>Starts a row's work: on a worker with -ThrottleLimit above 1, else at once; a failure is the task's.</summary>
+    private Task<Solved> Start(PSObject? given, PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
+    {
+        try
+        {
+            if (given is null || given.BaseObject is null)
+            {
+                throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+            }
+
+            // The row's fields are read here, on the pipeline thread (the shell's objects are not for other threads);
+            // the item, its placement and its assessment are made from them on a worker when there are several.
+            CancellationToken token = _cancellation.Token;
+            return _workers is not null
+                ? _workers.StartNew(() => Solve(ScenarioOf(input, record, label, row), row, token), token)
+                : Task.FromResult(Solve(ScenarioOf(input, record, label, row), row, token));
+        }
+        catch (Exception ex) when (ex is not PipelineStoppedException)
+        {
+            var failed = new TaskCompletionSource<Solved>();
+            failed.SetException(ex);
+            return failed.Task;
+        }
+    }
+
     /// <summary>Writes one result to the pipeline (called on the pipeline thread, in input order).</summary>
     protected virtual void Emit(object result) => WriteObject(result);
 
-    private (object Result, string? Verbose) Solve(Scenario scenario, int row, string label, CancellationToken token)
+    private Solved Solve(Scenario scenario, int row, CancellationToken token)
     {
         InductionResponse response = InductionEngine.Respond(scenario, token);
-        // The model and its notes are written out only when verbose output is wanted (the notes stay on the response).
-        return (Compute(response, row), _verbose ? label + ": " + response.Model + ". " + string.Join("; ", response.ModelNotes) : null);
+        return new Solved(Compute(response, row), response);
     }
 
     private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
@@ -276,13 +322,17 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             wait = false;
             try
             {
-                (object result, string? verbose) = next.Work.GetAwaiter().GetResult();
-                if (verbose is not null)
+                Solved solved = next.Repeats is null ? next.Work.GetAwaiter().GetResult()
+                    // A row that repeats one that failed is assessed on its own, so that its error names it.
+                    : next.Work.IsFaulted ? Start(next.Input, next.Input, next.Repeats.Record, next.Label, next.Row).GetAwaiter().GetResult()
+                    : RelabelSolved(next.Work.GetAwaiter().GetResult(), next.Repeats, next.Row);
+                if (_verbose)
                 {
-                    WriteVerbose(verbose);
+                    // The model and its notes are written out only when verbose output is wanted (the notes stay on the response).
+                    WriteVerbose(next.Label + ": " + solved.Response.Model + ". " + string.Join("; ", solved.Response.ModelNotes));
                 }
 
-                Emit(result);
+                Emit(solved.Result);
             }
             catch (InductionHazardException ex)
             {
@@ -300,21 +350,50 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         }
     }
 
-    /// <summary>One input on its way: its work (done, failed or running) and what names it in errors.</summary>
+    private Solved RelabelSolved(Solved first, Repeat repeat, int row)
+    {
+        object result = Relabel(first.Result, repeat.Name, repeat.Record, row);
+        return new Solved(result, result as InductionResponse ?? ((InductionAssessment)result).Response);
+    }
+
+    /// <summary>
+    /// One input on its way: its work (done, failed or running) and what names it in errors; for a row that repeats an
+    /// earlier one, that row's work and this row's fields, to relabel its result with.
+    /// </summary>
     private sealed class Pending
     {
-        public Pending(Task<(object Result, string? Verbose)> work, PSObject input, string label)
+        public Pending(Task<Solved> work, PSObject input, string label, int row, Repeat? repeats)
         {
             Work = work;
             Input = input;
             Label = label;
+            Row = row;
+            Repeats = repeats;
         }
 
-        public Task<(object Result, string? Verbose)> Work { get; }
+        public Task<Solved> Work { get; }
 
         public PSObject Input { get; }
 
         public string Label { get; }
+
+        public int Row { get; }
+
+        public Repeat? Repeats { get; }
+    }
+
+    /// <summary>A row that repeats an earlier one: its item name as given (or null) and its fields.</summary>
+    private sealed class Repeat
+    {
+        public Repeat(string? name, IReadOnlyList<KeyValuePair<string, object?>> record)
+        {
+            Name = name;
+            Record = record;
+        }
+
+        public string? Name { get; }
+
+        public IReadOnlyList<KeyValuePair<string, object?>> Record { get; }
     }
 
     /// <inheritdoc />

@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
@@ -18,6 +19,10 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
     /// <inheritdoc />
     protected override object Compute(InductionResponse response, int row) =>
         HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.Policy : null) ?? HazardPolicy.Default, row);
+
+    /// <inheritdoc />
+    protected override object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row) =>
+        RepeatedRows.Relabel((InductionAssessment)first, name, record, row);
 
     /// <inheritdoc />
     protected override void Emit(object result)

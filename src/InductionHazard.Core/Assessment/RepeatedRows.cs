@@ -1,0 +1,153 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Text;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// The inventory rows of one run that describe the same item at the same place: a box of identical spanners, a
+/// tray of rings of one size, the same ladder at every bay. The first such row is assessed and the others take its
+/// result under their own name, row number and inventory columns, as assessing them afresh would give it. A row is
+/// known by its item, placement and station fields exactly as written (<see cref="RepeatedRows.KeyOf"/>); every
+/// other input of the run (the source, the policy, the unit table, the times and surroundings) is the same for all
+/// its rows. At most <c>capacity</c> rows are kept; when full it starts again empty, so that an inventory of items
+/// all different holds no more than that.
+/// </summary>
+/// <typeparam name="T">What is kept for the first row (its work, done or under way).</typeparam>
+internal sealed class RepeatedRows<T>
+{
+    private readonly Dictionary<string, T> _first = new(StringComparer.Ordinal);
+    private readonly int _capacity;
+
+    /// <summary>Creates an empty set.</summary>
+    /// <param name="capacity">How many distinct rows are kept at most.</param>
+    public RepeatedRows(int capacity)
+    {
+        if (capacity < 1)
+        {
+            throw new ArgumentOutOfRangeException(nameof(capacity), capacity, "must be at least 1");
+        }
+
+        _capacity = capacity;
+    }
+
+    /// <summary>How many distinct rows are kept.</summary>
+    public int Count => _first.Count;
+
+    /// <summary>What was kept for the first row with this key, if any.</summary>
+    public bool TryGet(string key, out T first) => _first.TryGetValue(key, out first!);
+
+    /// <summary>Keeps what was done for the first row with this key.</summary>
+    public void Add(string key, T first)
+    {
+        if (_first.Count >= _capacity)
+        {
+            _first.Clear();
+        }
+
+        _first[key] = first;
+    }
+}
+
+/// <summary>How the rows of <see cref="RepeatedRows{T}"/> are known and their results relabelled.</summary>
+internal static class RepeatedRows
+{
+    /// <summary>
+    /// What a row's assessment depends on: each item, placement and station field (columns known to
+    /// <see cref="ItemRecordReader"/>, <see cref="PlacementRecordReader"/> or a site's station column) by its column name
+    /// and its value exactly as given; the item's name and the inventory's own columns are left out, as they only label
+    /// the result. Null when a value is of a kind that cannot be written exactly (an object other than text, a number or
+    /// a true/false), and for a row with no field at all: such a row is assessed on its own.
+    /// </summary>
+    /// <param name="record">The row's named values.</param>
+    public static string? KeyOf(IReadOnlyList<KeyValuePair<string, object?>> record)
+    {
+        var key = new StringBuilder(128);
+        foreach (KeyValuePair<string, object?> pair in record)
+        {
+            if (string.IsNullOrWhiteSpace(pair.Key))
+            {
+                continue;
+            }
+
+            string field = RecordFields.FieldKey(pair.Key);
+            if (!InventoryFields.IsItemOrPlacementField(field) || NameFields.Contains(field))
+            {
+                continue;
+            }
+
+            key.Append(pair.Key).Append('\u001f');
+            if (!AppendExactly(key, pair.Value))
+            {
+                return null;
+            }
+
+            key.Append('\u001e');
+        }
+
+        return key.Length == 0 ? null : key.ToString();
+    }
+
+    /// <summary>
+    /// The first row's response for another row with the same key: its scenario under the row's item name (its Name
+    /// column, else "row N", as <see cref="ItemRecordReader"/> names it) and with the row's inventory columns.
+    /// </summary>
+    /// <param name="first">The response of the first row with the key.</param>
+    /// <param name="name">The other row's item name as its record gives it (<see cref="ItemRecordReader.NameOf"/>), or null.</param>
+    /// <param name="record">The other row's named values.</param>
+    /// <param name="rowNumber">The other row's position in the input (1-based).</param>
+    public static InductionResponse Relabel(InductionResponse first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int rowNumber) =>
+        first.For(first.Scenario.For(ItemRecordReader.ItemName(name, rowNumber), InventoryFields.Of(record)));
+
+    /// <summary>The first row's assessment for another row with the same key (<see cref="Relabel(InductionResponse, string, IReadOnlyList{KeyValuePair{string, object}}, int)"/>).</summary>
+    public static InductionAssessment Relabel(InductionAssessment first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int rowNumber) =>
+        first.For(Relabel(first.Response, name, record, rowNumber), rowNumber);
+
+    /// <summary>The Name column and its aliases, normalized: they name the item and do not change what is assessed.</summary>
+    private static readonly HashSet<string> NameFields = NameKeys();
+
+    private static HashSet<string> NameKeys()
+    {
+        var names = new HashSet<string>(StringComparer.Ordinal) { RecordFields.Normalize("Name") };
+        foreach (string alias in ItemRecordReader.Aliases["Name"])
+        {
+            names.Add(RecordFields.Normalize(alias));
+        }
+
+        return names;
+    }
+
+    /// <summary>Writes a value with its kind, exactly (a double by its bits); false for a value that cannot be.</summary>
+    private static bool AppendExactly(StringBuilder key, object? value)
+    {
+        switch (value)
+        {
+            case null:
+                key.Append('0');
+                return true;
+            case string text:
+                key.Append('s').Append(text);
+                return true;
+            case double d:
+                key.Append('d').Append(BitConverter.DoubleToInt64Bits(d).ToString("x16", CultureInfo.InvariantCulture));
+                return true;
+            case float f:
+                key.Append('f').Append(BitConverter.DoubleToInt64Bits(f).ToString("x16", CultureInfo.InvariantCulture));
+                return true;
+            case int or long or short or sbyte or byte or uint or ulong or ushort:
+                key.Append('i').Append(value.GetType().Name).Append(Convert.ToString(value, CultureInfo.InvariantCulture));
+                return true;
+            case decimal m:
+                key.Append('m').Append(m.ToString(CultureInfo.InvariantCulture));
+                return true;
+            case bool b:
+                key.Append(b ? 'T' : 'F');
+                return true;
+            default:
+                return false;
+        }
+    }
+}
