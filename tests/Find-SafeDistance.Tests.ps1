@@ -34,4 +34,33 @@ Describe 'Find-SafeDistance' {
         { Find-SafeDistance -Item $ring -Source $fault -Direction '0, 0, 0' } | Should -Throw -ErrorId 'InvalidInput,*'
         { Find-SafeDistance -Item $ring -Source $fault -Direction x -MaxDistance '0.1 mm' } | Should -Throw '*MaxDistance*'
     }
+
+    It 'gives a row that repeats an earlier row''s item what searching for it alone gives, under its own name, and its own warning and error' {
+        $fields = @{ Material = 'Copper'; Diameter = '60 mm'; WireDiameter = '3 mm'; Contact = 'Loose' }
+        $rows = @(
+            [pscustomobject](@{ Name = 'Ring A'; AssetTag = 'R-1' } + $fields)
+            [pscustomobject]@{ Name = 'Bad'; Material = 'Unobtainium'; Diameter = '60 mm'; WireDiameter = '3 mm' }
+            [pscustomobject](@{ Name = 'Ring B'; AssetTag = 'R-2' } + $fields)
+            [pscustomobject](@{ Name = ''; AssetTag = 'R-3' } + $fields)
+            [pscustomobject]@{ Name = 'Bad again'; Material = 'Unobtainium'; Diameter = '60 mm'; WireDiameter = '3 mm' }
+        )
+        # The result less when its assessment was made.
+        function ConvertTo-ResultText([object] $Result) { ($Result | ConvertTo-Json -Depth 8 -Compress) -replace '"AssessedUtc":"[^"]*"' }
+        $together = @($rows | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m' -ErrorAction SilentlyContinue -ErrorVariable failed)
+        $together.ItemName | Should -Be @('Ring A', 'Ring B', 'row 4')
+        $failed.Exception.Message | ForEach-Object { $_ -replace ':.*' } | Should -Be @("row 2 ('Bad')", "row 5 ('Bad again')")
+        $found = 0
+        foreach ($k in 0, 2, 3) {
+            $row = $rows[$k].PSObject.Copy()
+            if (-not $row.Name) { $row.Name = "row $($k + 1)" }
+            $alone = $row | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m'
+            ConvertTo-ResultText $together[$found] | Should -Be (ConvertTo-ResultText $alone) -Because "row $($k + 1) against the same row searched alone"
+            $found++
+        }
+
+        $short = @($rows[0], $rows[2] | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '20 mm' -WarningVariable warned 3>$null)
+        $short.Found | Should -Be @($false, $false)
+        @($warned | Where-Object { "$_" -match '^row 1 .*not Clear anywhere' }).Count | Should -Be 1
+        @($warned | Where-Object { "$_" -match '^row 2 .*Ring B.*not Clear anywhere' }).Count | Should -Be 1
+    }
 }

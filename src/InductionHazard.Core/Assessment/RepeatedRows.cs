@@ -106,6 +106,18 @@ internal static class RepeatedRows
     public static InductionAssessment Relabel(InductionAssessment first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int rowNumber) =>
         first.For(Relabel(first.Response, name, record, rowNumber), rowNumber);
 
+    /// <summary>
+    /// The first row's safe distance for another row with the same key: the same search under the row's item name (its
+    /// Name column, else "row N"); a search's assessments carry no row number or inventory columns.
+    /// </summary>
+    public static SafeDistanceResult Relabel(SafeDistanceResult first, string? name, int rowNumber)
+    {
+        string itemName = ItemRecordReader.ItemName(name, rowNumber);
+        InductionResponse response = first.Assessment.Response;
+        InductionAssessment there = first.Assessment.For(response.For(response.Scenario.For(itemName, response.Scenario.Inventory)), first.Assessment.RowNumber);
+        return first with { ItemName = itemName, Assessment = there };
+    }
+
     /// <summary>The Name column and its aliases, normalized: they name the item and do not change what is assessed.</summary>
     private static readonly HashSet<string> NameFields = NameKeys();
 

@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Management.Automation;
 using System.Threading;
 using InductionHazard.Assessment;
@@ -19,6 +20,9 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private readonly CancellationTokenSource _cancellation = new();
     private FieldSource _source = null!;
     private int _row;
+
+    /// <summary>The search of the first row of each item, for the rows that repeat it (an inventory's identical items).</summary>
+    private readonly RepeatedRows<SafeDistanceResult> _repeated = new(256);
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
@@ -91,14 +95,30 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             string label = ItemInput.Label(input, _row);
             try
             {
-                ConductiveItem item = ItemInput.ToItem(input, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
-                var progress = new ProgressRecord(2, "Find-SafeDistance", label);
-                SafeDistanceResult result = SafeDistance.Find(
-                    item, _source, From, Direction, MaxDistance, Policy ?? HazardPolicy.Default, Normal, ExposureTime, null,
-                    fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
-                    _cancellation.Token);
-                progress.RecordType = ProgressRecordType.Completed;
-                WriteProgress(progress);
+                // A row whose item fields are written as an earlier row's takes that row's search under its own name.
+                IReadOnlyList<KeyValuePair<string, object?>>? record = ItemInput.RecordOf(input);
+                string? key = record is null ? null : RepeatedRows.KeyOf(record);
+                SafeDistanceResult result;
+                if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
+                {
+                    result = RepeatedRows.Relabel(first, ItemRecordReader.NameOf(record!), _row);
+                }
+                else
+                {
+                    ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
+                    var progress = new ProgressRecord(2, "Find-SafeDistance", label);
+                    result = SafeDistance.Find(
+                        item, _source, From, Direction, MaxDistance, Policy ?? HazardPolicy.Default, Normal, ExposureTime, null,
+                        fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
+                        _cancellation.Token);
+                    progress.RecordType = ProgressRecordType.Completed;
+                    WriteProgress(progress);
+                    if (key is not null)
+                    {
+                        _repeated.Add(key, result);
+                    }
+                }
+
                 if (result.DipsAgain)
                 {
                     WriteWarning(label + ": Clear nearer in, then not Clear again further out; the distance given is beyond the last point that is not Clear.");
