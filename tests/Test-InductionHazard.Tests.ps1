@@ -482,6 +482,15 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $failed.Exception.Message | ForEach-Object { $_ -replace ':.*' } | Should -Be @("row 1 ('First')", "row 2 ('Second')", "row 3 ('Third')")
         }
 
+        It 'refuses a row whose two name columns disagree, even after a row with the same item that it would repeat' {
+            $agreeing = [pscustomobject]@{ Name = 'Spanner'; Description = 'Spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $disagreeing = [pscustomobject]@{ Name = 'Spanner'; Description = '13 mm spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $results = @($agreeing, $disagreeing | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)
+            $results.Count | Should -Be 1
+            $failed.Count | Should -Be 1
+            $failed[0].Exception.Message | Should -Match '^row 2\b.*Name: is given by more than one column'
+        }
+
         It 'gives Get-InductionResponse each repeated row under its own name and inventory columns' {
             $ring = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-1' }
             $again = [pscustomobject]@{ Name = 'Same ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-2' }

@@ -60,12 +60,14 @@ internal static class RepeatedRows
     /// <see cref="ItemRecordReader"/>, <see cref="PlacementRecordReader"/> or a site's station column) by its column name
     /// and its value exactly as given; the item's name and the inventory's own columns are left out, as they only label
     /// the result. Null when a value is of a kind that cannot be written exactly (an object other than text, a number or
-    /// a true/false), and for a row with no field at all: such a row is assessed on its own.
+    /// a true/false), for a row that names its item in more than one column (the reader refuses columns that disagree,
+    /// which the key does not see), and for a row with no field at all: such a row is assessed on its own.
     /// </summary>
     /// <param name="record">The row's named values.</param>
     public static string? KeyOf(IReadOnlyList<KeyValuePair<string, object?>> record)
     {
         var key = new StringBuilder(128);
+        bool named = false;
         foreach (KeyValuePair<string, object?> pair in record)
         {
             if (string.IsNullOrWhiteSpace(pair.Key))
@@ -74,7 +76,18 @@ internal static class RepeatedRows
             }
 
             string field = RecordFields.FieldKey(pair.Key);
-            if (!InventoryFields.IsItemOrPlacementField(field) || NameFields.Contains(field))
+            if (NameFields.Contains(field))
+            {
+                if (named)
+                {
+                    return null;
+                }
+
+                named = true;
+                continue;
+            }
+
+            if (!InventoryFields.IsItemOrPlacementField(field))
             {
                 continue;
             }

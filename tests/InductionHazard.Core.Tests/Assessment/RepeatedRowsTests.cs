@@ -73,6 +73,9 @@ public class RepeatedRowsTests
         // An object whose text may not say all it holds gives no key: the row is assessed on its own.
         Assert.Null(RepeatedRows.KeyOf(Row(("Name", "Odd"), ("Diameter", new object()))));
         Assert.Null(RepeatedRows.KeyOf(Row(("AssetTag", "only inventory columns"))));
+        // Two columns that name the item (which the reader refuses if they disagree) give no key either.
+        Assert.Null(RepeatedRows.KeyOf(Row(("Name", "Spanner"), ("Description", "13 mm spanner"), ("Material", "Copper"), ("Diameter", "20 mm"), ("WireDiameter", "2 mm"))));
+        Assert.Null(RepeatedRows.KeyOf(Row(("Name", "Spanner"), ("name", "Spanner"), ("Material", "Copper"), ("Diameter", "20 mm"), ("WireDiameter", "2 mm"))));
     }
 
     [Fact]
