@@ -482,6 +482,18 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $failed.Exception.Message | ForEach-Object { $_ -replace ':.*' } | Should -Be @("row 1 ('First')", "row 2 ('Second')", "row 3 ('Third')")
         }
 
+        It 'says in its verbose notes which earlier row a row repeats' {
+            $ring = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $other = [pscustomobject]@{ Name = 'Other'; Material = 'Copper'; Diameter = '22 mm'; WireDiameter = '2 mm' }
+            $again = [pscustomobject]@{ Name = 'Ring again'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $notes = @($ring, $other, $again | Test-InductionHazard -Source $pulse -Verbose -WarningAction SilentlyContinue 4>&1 | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] } | ForEach-Object Message)
+            $notes.Count | Should -Be 3
+            $notes[0] | Should -Not -Match 'same item'
+            $notes[1] | Should -Not -Match 'same item'
+            $notes[2] | Should -Match "^row 3 \('Ring again'\): the same item and place as row 1, whose result it takes; "
+            ($notes[2] -replace '^.*whose result it takes; ') | Should -Be ($notes[0] -replace '^row 1 \(''Ring''\): ')
+        }
+
         It 'refuses a row whose two name columns disagree, even after a row with the same item that it would repeat' {
             $agreeing = [pscustomobject]@{ Name = 'Spanner'; Description = 'Spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
             $disagreeing = [pscustomobject]@{ Name = 'Spanner'; Description = '13 mm spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }

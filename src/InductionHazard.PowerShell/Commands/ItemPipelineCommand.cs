@@ -40,7 +40,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// The work of the first row of each item at each place, for the rows that repeat it (an inventory's identical
     /// items): they take its result under their own names. A few hundred distinct rows are kept, and no more.
     /// </summary>
-    private readonly RepeatedRows<Task<Solved>> _repeated = new(256);
+    private readonly RepeatedRows<(Task<Solved> Work, int Row)> _repeated = new(256);
 
     /// <summary>
     /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
@@ -211,16 +211,16 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
             // A row that repeats an earlier one's item and place takes that row's work, done or under way.
             string? key = record is null || given?.BaseObject is null ? null : RepeatedRows.KeyOf(record);
-            if (key is not null && _repeated.TryGet(key, out Task<Solved> first))
+            if (key is not null && _repeated.TryGet(key, out (Task<Solved> Work, int Row) first))
             {
-                _pending.Enqueue(new Pending(first, input, label, row, new Repeat(name, record!)));
+                _pending.Enqueue(new Pending(first.Work, input, label, row, new Repeat(name, record!, first.Row)));
             }
             else
             {
                 Task<Solved> work = Start(given, input, record, label, row);
                 if (key is not null)
                 {
-                    _repeated.Add(key, work);
+                    _repeated.Add(key, (work, row));
                 }
 
                 _pending.Enqueue(new Pending(work, input, label, row, null));
@@ -329,7 +329,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                 if (_verbose)
                 {
                     // The model and its notes are written out only when verbose output is wanted (the notes stay on the response).
-                    WriteVerbose(next.Label + ": " + solved.Response.Model + ". " + string.Join("; ", solved.Response.ModelNotes));
+                    string repeats = next.Repeats is { } repeat && !next.Work.IsFaulted ? "the same item and place as row " + repeat.FirstRow.ToString(System.Globalization.CultureInfo.InvariantCulture) + ", whose result it takes; " : string.Empty;
+                    WriteVerbose(next.Label + ": " + repeats + solved.Response.Model + ". " + string.Join("; ", solved.Response.ModelNotes));
                 }
 
                 Emit(solved.Result);
@@ -382,14 +383,18 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         public Repeat? Repeats { get; }
     }
 
-    /// <summary>A row that repeats an earlier one: its item name as given (or null) and its fields.</summary>
+    /// <summary>A row that repeats an earlier one: its item name as given (or null), its fields, and the earlier row.</summary>
     private sealed class Repeat
     {
-        public Repeat(string? name, IReadOnlyList<KeyValuePair<string, object?>> record)
+        public Repeat(string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int firstRow)
         {
             Name = name;
             Record = record;
+            FirstRow = firstRow;
         }
+
+        /// <summary>The row whose work this one takes.</summary>
+        public int FirstRow { get; }
 
         public string? Name { get; }
 
