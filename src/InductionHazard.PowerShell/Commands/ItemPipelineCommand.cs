@@ -248,18 +248,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     protected abstract object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row);
 
     /// <summary>One row's work: the result and the response it was made from.</summary>
-    private readonly struct Solved
-    {
-        public Solved(object result, InductionResponse response)
-        {
-            Result = result;
-            Response = response;
-        }
-
-        public object Result { get; }
-
-        public InductionResponse Response { get; }
-    }
+    private readonly record struct Solved(object Result, InductionResponse Response);
 
     /// <summary>Starts a row's work: on a worker with -ThrottleLimit above 1, else at once; a failure is the task's.</summary>
     private Task<Solved> Start(PSObject? given, PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
@@ -383,23 +372,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         public Repeat? Repeats { get; }
     }
 
-    /// <summary>A row that repeats an earlier one: its item name as given (or null), its fields, and the earlier row.</summary>
-    private sealed class Repeat
-    {
-        public Repeat(string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int firstRow)
-        {
-            Name = name;
-            Record = record;
-            FirstRow = firstRow;
-        }
-
-        /// <summary>The row whose work this one takes.</summary>
-        public int FirstRow { get; }
-
-        public string? Name { get; }
-
-        public IReadOnlyList<KeyValuePair<string, object?>> Record { get; }
-    }
+    /// <summary>A row that repeats an earlier one: its item name as given (or null), its fields, and the row whose work it takes.</summary>
+    private sealed record Repeat(string? Name, IReadOnlyList<KeyValuePair<string, object?>> Record, int FirstRow);
 
     /// <inheritdoc />
     protected override void EndProcessing()
