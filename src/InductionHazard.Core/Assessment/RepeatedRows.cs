@@ -14,7 +14,7 @@ namespace InductionHazard.Assessment;
 /// known by its item, placement and station fields exactly as written (<see cref="RepeatedRows.KeyOf"/>); every
 /// other input of the run (the source, the policy, the unit table, the times and surroundings) is the same for all
 /// its rows. At most <c>capacity</c> rows are kept; when full it starts again empty, so that an inventory of items
-/// all different holds no more than that.
+/// all different holds no more than that. For one thread: a command's pipeline thread, which alone reads rows.
 /// </summary>
 /// <typeparam name="T">What is kept for the first row (its work, done or under way).</typeparam>
 internal sealed class RepeatedRows<T>
