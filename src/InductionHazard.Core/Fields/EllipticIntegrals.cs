@@ -24,6 +24,12 @@ public static class EllipticIntegrals
     }
 
     /// <summary>K(m) and E(m) together from one AGM sequence: K = pi / (2 AGM(1, sqrt(1 - m))), E = K (1 - sum 2^(n-1) c_n^2).</summary>
+    /// <remarks>
+    /// The sequence stops once c_n, the last step of the means, is below 1e-15 of them: each c is c_(n-1)^2 / (4 a_n),
+    /// so the next step would move the mean by less than 1e-30 and add less than that to the sum. (A bound below the
+    /// precision of a double, as this had, is never met where the two means settle one unit in the last place apart, as
+    /// they do for about a quarter of all m: those ran to the 40-step limit, eight times the work.)
+    /// </remarks>
     public static (double K, double E) Both(double m)
     {
         if (!(m >= 0 && m <= 1))
@@ -38,7 +44,7 @@ public static class EllipticIntegrals
 
         double a = 1, b = Math.Sqrt(1 - m), c = Math.Sqrt(m);
         double sum = 0.5 * c * c, power = 0.5;
-        for (int n = 0; n < 40 && Math.Abs(c) > 1e-17 * a; n++)
+        for (int n = 0; n < 40 && Math.Abs(c) > 1e-15 * a; n++)
         {
             double an = 0.5 * (a + b);
             c = 0.5 * (a - b);
