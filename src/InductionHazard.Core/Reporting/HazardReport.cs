@@ -42,9 +42,10 @@ public sealed class HazardReport
             .Concat(Assessments.SelectMany(a => a.Cautions).Where(c => !c.StartsWith("Limits from:", StringComparison.Ordinal)))
             .Distinct().ToArray();
         Stations = Assessments.Select(a => a.StationName).Distinct().ToArray();
-        Worst = Assessments.Select((a, i) => (a, i))
+        WorstRows = Assessments.Select((a, i) => (a, i))
             .OrderBy(p => Severity(p.a.Verdict)).ThenBy(p => double.IsNaN(p.a.MinimumMargin) ? double.MaxValue : p.a.MinimumMargin).ThenBy(p => p.i)
-            .Select(p => p.a).ToArray();
+            .Select(p => p.i).ToArray();
+        Worst = WorstRows.Select(i => Assessments[i]).ToArray();
         for (int i = 0; i < Assessments.Count; i++)
         {
             if (!_index.ContainsKey(Assessments[i]))
@@ -79,6 +80,9 @@ public sealed class HazardReport
 
     /// <summary>The assessments, the one that needs action first leading: by verdict (Hazard, Indeterminate, Caution, Clear), then smallest margin.</summary>
     public IReadOnlyList<InductionAssessment> Worst { get; }
+
+    /// <summary>The positions in <see cref="Assessments"/> (0-based) in the order of <see cref="Worst"/>.</summary>
+    public IReadOnlyList<int> WorstRows { get; }
 
     /// <summary>The policies applied, each with its safety factor and fingerprint.</summary>
     public IReadOnlyList<PolicyUsed> Policies { get; }

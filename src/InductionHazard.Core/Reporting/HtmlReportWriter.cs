@@ -67,12 +67,10 @@ a { color: inherit; }
         WriteSummary(report, w);
         w.Write("<figure>" + ReportCharts.MarginChart(report, "margins") + "<figcaption>Each item's smallest margin, by input order, on a log scale. Margins beyond 0.001 and 1000 are drawn at the edge; "
             + report.Count(Verdict.Indeterminate).ToString(CultureInfo.InvariantCulture) + " Indeterminate items have no margin and are not drawn.</figcaption></figure>\n");
-        int chartedClear = 0;
+        HashSet<int> charted = Charted(report);
         for (int i = 0; i < report.Assessments.Count; i++)
         {
-            InductionAssessment a = report.Assessments[i];
-            bool charts = a.Verdict != Verdict.Clear || chartedClear++ < ChartedClearItems;
-            WriteItem(a, i, w, charts);
+            WriteItem(report.Assessments[i], i, w, charted.Contains(i));
         }
 
         WriteProvenance(report, w);
@@ -144,10 +142,26 @@ a { color: inherit; }
     }
 
     /// <summary>
-    /// How many Clear items get their own charts (every item that is not Clear gets them): a chart weighs some 20 kB,
-    /// and an inventory of thousands would otherwise make a page no browser opens. Every item keeps its tables.
+    /// How many Clear items get their own charts, the first in input order: a chart weighs some 20 kB, and an inventory
+    /// of thousands would otherwise make a page no browser opens. Every item keeps its tables.
     /// </summary>
     public const int ChartedClearItems = 200;
+
+    /// <summary>
+    /// How many items that are not Clear get their own charts, the most urgent first (the order of the actions table): an
+    /// audit of thousands of items at a place where all are Hazard made a page of hundreds of megabytes. Every item
+    /// keeps its tables.
+    /// </summary>
+    public const int ChartedNotClearItems = 400;
+
+    /// <summary>The positions of the items that get charts: the most urgent that are not Clear, and the first Clear ones.</summary>
+    private static HashSet<int> Charted(HazardReport report)
+    {
+        IReadOnlyList<InductionAssessment> all = report.Assessments;
+        var charted = new HashSet<int>(report.WorstRows.Where(i => all[i].Verdict != Verdict.Clear).Take(ChartedNotClearItems));
+        charted.UnionWith(Enumerable.Range(0, all.Count).Where(i => all[i].Verdict == Verdict.Clear).Take(ChartedClearItems));
+        return charted;
+    }
 
     private static void WriteItem(InductionAssessment a, int index, TextWriter w, bool charts)
     {
@@ -190,8 +204,8 @@ a { color: inherit; }
         w.Write("</tbody></table>\n");
         if (!charts)
         {
-            w.Write("<p class=\"small\">Charts are drawn for every item that is not Clear and for the first " + ChartedClearItems.ToString(CultureInfo.InvariantCulture)
-                + " Clear ones; this item's figures are in the tables above.</p>\n");
+            w.Write("<p class=\"small\">Charts are drawn for the " + ChartedNotClearItems.ToString(CultureInfo.InvariantCulture) + " most urgent items that are not Clear and for the first "
+                + ChartedClearItems.ToString(CultureInfo.InvariantCulture) + " Clear ones; this item's figures are in the tables above.</p>\n");
         }
         else if (ReportCharts.DriveAndCurrent(a, id + "-current") is { } current)
         {

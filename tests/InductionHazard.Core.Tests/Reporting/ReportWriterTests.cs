@@ -71,7 +71,32 @@ public sealed class ReportWriterTests
         Assert.Equal(251, CountOf(html, "<section class=\"item\""));
         Assert.Equal(HtmlReportWriter.ChartedClearItems + 1, CountOf(html, "The item's temperature while in the field"));
         Assert.Contains("id=\"item-250-temperature-", html, StringComparison.Ordinal);
-        Assert.Equal(50, CountOf(html, "Charts are drawn for every item that is not Clear"));
+        Assert.Equal(50, CountOf(html, "Charts are drawn for the"));
+    }
+
+    [Fact]
+    public void AnAuditOfManyItemsThatAreNotClearChartsOnlyTheMostUrgent()
+    {
+        // 400 Hazard items with the larger margin, then five with the smaller: charts for the 400 most urgent, which are
+        // the five last in input order and the first 395 of the others (the actions table's order: margin, then row).
+        InductionAssessment warm = Assess(Named("warm ring"), 0.02, 10000, 4);
+        Assert.Equal(Verdict.Hazard, warm.Verdict);
+        Assert.Equal(Verdict.Hazard, Hot.Verdict);
+        Assert.True(Hot.MinimumMargin < warm.MinimumMargin);
+        InductionAssessment[] many = Enumerable.Range(1, 400).Select(row => warm.For(warm.Response, row))
+            .Concat(Enumerable.Range(401, 5).Select(row => Hot.For(Hot.Response, row))).ToArray();
+        string html = Write(Report(many), HtmlReportWriter.Write);
+        Assert.Equal(405, CountOf(html, "<section class=\"item\""));
+        Assert.Equal(HtmlReportWriter.ChartedNotClearItems, CountOf(html, "The item's temperature while in the field"));
+        Assert.Equal(5, CountOf(html, "Charts are drawn for the"));
+        for (int i = 400; i < 405; i++)
+        {
+            Assert.Contains("id=\"item-" + i.ToString(CultureInfo.InvariantCulture) + "-temperature-", html, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("id=\"item-394-temperature-", html, StringComparison.Ordinal);
+        Assert.DoesNotContain("id=\"item-395-temperature-", html, StringComparison.Ordinal);
+        Assert.DoesNotContain("id=\"item-399-temperature-", html, StringComparison.Ordinal);
     }
 
     [Fact]
