@@ -115,10 +115,6 @@ internal static class RepeatedRows
     public static InductionResponse Relabel(InductionResponse first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int rowNumber) =>
         first.For(first.Scenario.For(ItemRecordReader.ItemName(name, rowNumber), InventoryFields.Of(record)));
 
-    /// <summary>The first row's assessment for another row with the same key (<see cref="Relabel(InductionResponse, string, IReadOnlyList{KeyValuePair{string, object}}, int)"/>).</summary>
-    public static InductionAssessment Relabel(InductionAssessment first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int rowNumber) =>
-        first.For(Relabel(first.Response, name, record, rowNumber), rowNumber);
-
     /// <summary>
     /// The first row's safe distance for another row with the same key: the same search under the row's item name (its
     /// Name column, else "row N"); a search's assessments carry no row number or inventory columns.

@@ -1,4 +1,3 @@
-using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Assessment;
 
@@ -13,6 +12,5 @@ public sealed class GetInductionResponseCommand : ItemPipelineCommand
     protected override object Compute(InductionResponse response, int row) => response;
 
     /// <inheritdoc />
-    protected override object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row) =>
-        RepeatedRows.Relabel((InductionResponse)first, name, record, row);
+    protected override object Relabel(object first, InductionResponse response, int row) => response;
 }

@@ -243,9 +243,10 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     /// <summary>
     /// What <see cref="Compute"/> made for the first row of an item at a place, for a later row that repeats it
-    /// (<see cref="RepeatedRows{T}"/>): the same result under that row's name, row number and inventory columns.
+    /// (<see cref="RepeatedRows{T}"/>): the same result for <paramref name="response"/>, the first row's response under
+    /// that row's name and inventory columns, and for that row's number.
     /// </summary>
-    protected abstract object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row);
+    protected abstract object Relabel(object first, InductionResponse response, int row);
 
     /// <summary>One row's work: the result and the response it was made from.</summary>
     private readonly record struct Solved(object Result, InductionResponse Response);
@@ -342,8 +343,8 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     private Solved RelabelSolved(Solved first, Repeat repeat, int row)
     {
-        object result = Relabel(first.Result, repeat.Name, repeat.Record, row);
-        return new Solved(result, result as InductionResponse ?? ((InductionAssessment)result).Response);
+        InductionResponse response = RepeatedRows.Relabel(first.Response, repeat.Name, repeat.Record, row);
+        return new Solved(Relabel(first.Result, response, row), response);
     }
 
     /// <summary>

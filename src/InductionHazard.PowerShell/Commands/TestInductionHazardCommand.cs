@@ -1,4 +1,3 @@
-using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
@@ -21,8 +20,8 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
         HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.Policy : null) ?? HazardPolicy.Default, row);
 
     /// <inheritdoc />
-    protected override object Relabel(object first, string? name, IReadOnlyList<KeyValuePair<string, object?>> record, int row) =>
-        RepeatedRows.Relabel((InductionAssessment)first, name, record, row);
+    protected override object Relabel(object first, InductionResponse response, int row) =>
+        ((InductionAssessment)first).For(response, row);
 
     /// <inheritdoc />
     protected override void Emit(object result)

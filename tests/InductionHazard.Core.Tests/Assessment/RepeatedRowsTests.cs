@@ -109,7 +109,7 @@ public class RepeatedRowsTests
 
         InductionAssessment assessed = Assess(first, 1);
         string firstHash = assessed.InputHash; // found before the relabelling, which must not keep it
-        InductionAssessment relabelled = RepeatedRows.Relabel(assessed, ItemRecordReader.NameOf(again), again, 7);
+        InductionAssessment relabelled = assessed.For(RepeatedRows.Relabel(assessed.Response, ItemRecordReader.NameOf(again), again, 7), 7);
         InductionAssessment afresh = Assess(again, 7);
         Assert.Equal("row 7", relabelled.ItemName);
         Assert.Equal(afresh.ItemName, relabelled.ItemName);
