@@ -154,7 +154,7 @@ public sealed class InductionAssessment
     private InductionResponse _response = null!;
 
     /// <summary>
-    /// This assessment for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// This assessment for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the same verdict, margins and findings under that row's item name, row number, station and inventory columns,
     /// stamped now; <paramref name="response"/> is this one's response for that row (<see cref="InductionResponse.For"/>).
     /// </summary>

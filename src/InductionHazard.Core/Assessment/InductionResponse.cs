@@ -23,7 +23,7 @@ public sealed record InductionResponse
     public string ItemName => Scenario.Item.Name;
 
     /// <summary>
-    /// This response for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// This response for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the same physics, for <paramref name="scenario"/>, this one's scenario under that row's name and inventory columns
     /// (<see cref="Scenario.For"/>).
     /// </summary>

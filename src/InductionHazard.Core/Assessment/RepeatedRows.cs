@@ -10,49 +10,13 @@ namespace InductionHazard.Assessment;
 /// <summary>
 /// The inventory rows of one run that describe the same item at the same place: a box of identical spanners, a
 /// tray of rings of one size, the same ladder at every bay. The first such row is assessed and the others take its
-/// result under their own name, row number and inventory columns, as assessing them afresh would give it. A row is
-/// known by its item, placement and station fields exactly as written (<see cref="RepeatedRows.KeyOf"/>); every
-/// other input of the run (the source, the policy, the unit table, the times and surroundings) is the same for all
-/// its rows. At most <c>capacity</c> rows are kept; when full it starts again empty, so that an inventory of items
-/// all different holds no more than that. For one thread: a command's pipeline thread, which alone reads rows.
+/// result under their own name, row number and inventory columns
+/// (<see cref="Relabel(InductionResponse, string, IReadOnlyList{KeyValuePair{string, object}}, int)"/>), as assessing
+/// them afresh would give it. A row is known by its item, placement and station fields exactly as written
+/// (<see cref="KeyOf"/>); every other input of the run (the source, the policy, the unit table, the times and
+/// surroundings) is the same for all its rows. The commands keep the first rows' work in a
+/// <see cref="BoundedCache{TKey, TValue}"/> of a few hundred, so that an inventory of items all different holds no more.
 /// </summary>
-/// <typeparam name="T">What is kept for the first row (its work, done or under way).</typeparam>
-internal sealed class RepeatedRows<T>
-{
-    private readonly Dictionary<string, T> _first = new(StringComparer.Ordinal);
-    private readonly int _capacity;
-
-    /// <summary>Creates an empty set.</summary>
-    /// <param name="capacity">How many distinct rows are kept at most.</param>
-    public RepeatedRows(int capacity)
-    {
-        if (capacity < 1)
-        {
-            throw new ArgumentOutOfRangeException(nameof(capacity), capacity, "must be at least 1");
-        }
-
-        _capacity = capacity;
-    }
-
-    /// <summary>How many distinct rows are kept.</summary>
-    public int Count => _first.Count;
-
-    /// <summary>What was kept for the first row with this key, if any.</summary>
-    public bool TryGet(string key, out T first) => _first.TryGetValue(key, out first!);
-
-    /// <summary>Keeps what was done for the first row with this key.</summary>
-    public void Add(string key, T first)
-    {
-        if (_first.Count >= _capacity)
-        {
-            _first.Clear();
-        }
-
-        _first[key] = first;
-    }
-}
-
-/// <summary>How the rows of <see cref="RepeatedRows{T}"/> are known and their results relabelled.</summary>
 internal static class RepeatedRows
 {
     /// <summary>

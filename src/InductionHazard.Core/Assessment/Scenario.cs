@@ -91,7 +91,7 @@ public sealed class Scenario
     }
 
     /// <summary>
-    /// This scenario for another row that describes the same item at the same place (see <see cref="RepeatedRows{T}"/>):
+    /// This scenario for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the item under that row's name, with that row's inventory columns; everything the physics reads is this one's.
     /// </summary>
     internal Scenario For(string itemName, InventoryFields inventory) =>

@@ -22,7 +22,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private int _row;
 
     /// <summary>The search of the first row of each item, for the rows that repeat it (an inventory's identical items).</summary>
-    private readonly RepeatedRows<SafeDistanceResult> _repeated = new(256);
+    private readonly BoundedCache<string, SafeDistanceResult> _repeated = new(256, StringComparer.Ordinal);
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows with the item columns.</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]

@@ -40,7 +40,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// The work of the first row of each item at each place, for the rows that repeat it (an inventory's identical
     /// items): they take its result under their own names. A few hundred distinct rows are kept, and no more.
     /// </summary>
-    private readonly RepeatedRows<(Task<Solved> Work, int Row)> _repeated = new(256);
+    private readonly BoundedCache<string, (Task<Solved> Work, int Row)> _repeated = new(256, StringComparer.Ordinal);
 
     /// <summary>
     /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
@@ -243,7 +243,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
 
     /// <summary>
     /// What <see cref="Compute"/> made for the first row of an item at a place, for a later row that repeats it
-    /// (<see cref="RepeatedRows{T}"/>): the same result for <paramref name="response"/>, the first row's response under
+    /// (<see cref="RepeatedRows"/>): the same result for <paramref name="response"/>, the first row's response under
     /// that row's name and inventory columns, and for that row's number.
     /// </summary>
     protected abstract object Relabel(object first, InductionResponse response, int row);
