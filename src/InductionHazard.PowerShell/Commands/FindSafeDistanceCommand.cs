@@ -92,16 +92,18 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
         foreach (PSObject input in Item)
         {
             _row++;
-            string label = ItemInput.Label(input, _row);
+            // A row's fields are read once: for its name in messages, its key and its item.
+            IReadOnlyList<KeyValuePair<string, object?>>? record = ItemInput.RecordOf(input);
+            string? name = record is null ? null : ItemRecordReader.NameOf(record);
+            string label = record is null ? ItemInput.Label(input, _row) : ItemRecordReader.Label(_row, name);
             try
             {
                 // A row whose item fields are written as an earlier row's takes that row's search under its own name.
-                IReadOnlyList<KeyValuePair<string, object?>>? record = ItemInput.RecordOf(input);
                 string? key = record is null ? null : RepeatedRows.KeyOf(record);
                 SafeDistanceResult result;
                 if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
                 {
-                    result = RepeatedRows.Relabel(first, ItemRecordReader.NameOf(record!), _row);
+                    result = RepeatedRows.Relabel(first, name, _row);
                 }
                 else
                 {
