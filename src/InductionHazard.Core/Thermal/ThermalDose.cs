@@ -108,9 +108,10 @@ public static class ThermalDose
         // 43 degC), so its logarithm G is nearly linear in k: Newton's steps on G from the history as it is (k = 1, or
         // the range's end if nearer), kept inside the bracket [0, inRange] (a bisection step wherever Newton's would
         // leave it, or G or its slope is not finite). The range's end is looked at only when a step would pass it or
-        // the root lies far off: there G below zero means the limit is not reached within the range. Four or five
-        // passes over the history besides the baseline's (which takes no exponential), the first giving the added dose
-        // as it is.
+        // the root lies far off: there G below zero means the limit is not reached within the range. The first step
+        // from k = 1 goes where an exponentially growing dose with G's value and slope there would meet the limit
+        // (ExponentialGuess). Three to five passes over the history besides the baseline's (which takes no
+        // exponential), the first giving the added dose as it is.
         double low = 0, high = inRange;
         double x = Math.Min(1, inRange);
         double gx = G(x, out double gSlope, out double addedAtX);
@@ -152,6 +153,17 @@ public static class ThermalDose
                 x = newton;
                 gx = 0;
                 break;
+            }
+
+            if (i == 0 && x == 1 && Finite.Is(gx) && gSlope > 0 && ExponentialGuess(gx, gSlope) is var guess && guess > low && guess < high)
+            {
+                // The first step from the history as it is: where a dose growing as C (e^(a k) - 1) with G's value and
+                // slope at k = 1 meets the limit. Exact for a plateau, close for most histories (Newton's step on G alone
+                // undershoots where the dose is still nearly linear in k, and creeps up on a far root); Newton's steps
+                // go on from there as before, so the root found is the same.
+                x = guess;
+                gx = G(x, out gSlope, out _);
+                continue;
             }
 
             if (!highKnown && (!inside || newton > 8 * x))
@@ -196,6 +208,42 @@ public static class ThermalDose
         }
 
         return 0.5 * (low + high);
+    }
+
+    /// <summary>
+    /// The factor at which a dose D(k) = C (e^(a k) - 1) meets the limit, given G(1) = ln(D(1) / limit) and G'(1) =
+    /// a e^a / (e^a - 1): a from the slope (by Newton's steps; the slope is at least 1, the linear dose's), then
+    /// k = ln(1 + e^(-G(1)) (e^a - 1)) / a. NaN when the slope gives no such a.
+    /// </summary>
+    private static double ExponentialGuess(double g1, double slope)
+    {
+        if (!(slope > 1 + 1e-9))
+        {
+            // A dose linear in k (a rise far too small for the weight to curve): k = limit / D(1).
+            return Math.Exp(-g1);
+        }
+
+        // h(a) = a / (1 - e^(-a)) = slope: h runs from 1 (a = 0) up, about 1 + a/2 near 0 and a + a e^(-a) far off.
+        double a = slope > 2 ? slope : 2 * (slope - 1);
+        for (int i = 0; i < 30; i++)
+        {
+            double e = Math.Exp(-a), q = 1 - e;
+            double h = a / q, dh = (q - (a * e)) / (q * q);
+            double next = a - ((h - slope) / dh);
+            next = next > 0 ? next : 0.5 * a;
+            if (Math.Abs(next - a) <= 1e-12 * a)
+            {
+                a = next;
+                break;
+            }
+
+            a = next;
+        }
+
+        // ln(1 + y) with y = e^(-G(1)) (e^a - 1), taken in logarithms where y would overflow.
+        double logY = -g1 + Math.Log(Exponential.Minus1(a));
+        double log1PlusY = logY > 36 ? logY : Math.Log(1 + Math.Exp(logY));
+        return log1PlusY / a;
     }
 
     /// <summary>The dose of the history with its rise over the start scaled by k, minutes.</summary>
