@@ -482,35 +482,41 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $failed.Exception.Message | ForEach-Object { $_ -replace ':.*' } | Should -Be @("row 1 ('First')", "row 2 ('Second')", "row 3 ('Third')")
         }
 
-        It 'says in its verbose notes which earlier row a row repeats' {
+        It 'says in its verbose notes which earlier row a row repeats (a row''s work is kept from its second sight on)' {
             $ring = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
             $other = [pscustomobject]@{ Name = 'Other'; Material = 'Copper'; Diameter = '22 mm'; WireDiameter = '2 mm' }
             $again = [pscustomobject]@{ Name = 'Ring again'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
-            $notes = @($ring, $other, $again | Test-InductionHazard -Source $pulse -Verbose -WarningAction SilentlyContinue 4>&1 | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] } | ForEach-Object Message)
-            $notes.Count | Should -Be 3
-            $notes[0] | Should -Not -Match 'same item'
-            $notes[1] | Should -Not -Match 'same item'
-            $notes[2] | Should -Match "^row 3 \('Ring again'\): the same item and place as row 1, whose result it takes; "
-            ($notes[2] -replace '^.*whose result it takes; ') | Should -Be ($notes[0] -replace '^row 1 \(''Ring''\): ')
+            $more = [pscustomobject]@{ Name = 'Ring once more'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+            $notes = @($ring, $other, $again, $more, $more | Test-InductionHazard -Source $pulse -Verbose -WarningAction SilentlyContinue 4>&1 | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] } | ForEach-Object Message)
+            $notes.Count | Should -Be 5
+            $notes[0..2] | Should -Not -Match 'same item'
+            $notes[3] | Should -Match "^row 4 \('Ring once more'\): the same item and place as row 3, whose result it takes; "
+            $notes[4] | Should -Match "^row 5 \('Ring once more'\): the same item and place as row 3, whose result it takes; "
+            ($notes[3] -replace '^.*whose result it takes; ') | Should -Be ($notes[0] -replace '^row 1 \(''Ring''\): ')
         }
 
         It 'refuses a row whose two name columns disagree, even after a row with the same item that it would repeat' {
             $agreeing = [pscustomobject]@{ Name = 'Spanner'; Description = 'Spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
             $disagreeing = [pscustomobject]@{ Name = 'Spanner'; Description = '13 mm spanner'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
-            $results = @($agreeing, $disagreeing | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)
-            $results.Count | Should -Be 1
+            $results = @($agreeing, $agreeing, $disagreeing | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)
+            $results.Count | Should -Be 2
             $failed.Count | Should -Be 1
-            $failed[0].Exception.Message | Should -Match '^row 2\b.*Name: is given by more than one column'
+            $failed[0].Exception.Message | Should -Match '^row 3\b.*Name: is given by more than one column'
         }
 
         It 'gives Get-InductionResponse each repeated row under its own name and inventory columns' {
             $ring = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-1' }
             $again = [pscustomobject]@{ Name = 'Same ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-2' }
-            $responses = @($ring, $again | Get-InductionResponse -Source $pulse)
-            $responses.ItemName | Should -Be @('Ring', 'Same ring')
-            $responses[1].Scenario.Inventory['AssetTag'] | Should -Be 'R-2'
-            $alone = @($again | Get-InductionResponse -Source $pulse)[0]
-            ($responses[1] | ConvertTo-Json -Depth 8 -Compress) | Should -Be ($alone | ConvertTo-Json -Depth 8 -Compress)
+            $third = [pscustomobject]@{ Name = 'Third ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AssetTag = 'R-3' }
+            $all = @($ring, $again, $third | Get-InductionResponse -Source $pulse -Verbose 4>&1)
+            $notes = @($all | Where-Object { $_ -is [System.Management.Automation.VerboseRecord] } | ForEach-Object Message)
+            $notes[1] | Should -Not -Match 'same item'
+            $notes[2] | Should -Match "^row 3 \('Third ring'\): the same item and place as row 2, whose result it takes"
+            $responses = @($all | Where-Object { $_ -isnot [System.Management.Automation.VerboseRecord] })
+            $responses.ItemName | Should -Be @('Ring', 'Same ring', 'Third ring')
+            $responses[2].Scenario.Inventory['AssetTag'] | Should -Be 'R-3'
+            $alone = @($third | Get-InductionResponse -Source $pulse)[0]
+            ($responses[2] | ConvertTo-Json -Depth 8 -Compress) | Should -Be ($alone | ConvertTo-Json -Depth 8 -Compress)
         }
     }
 

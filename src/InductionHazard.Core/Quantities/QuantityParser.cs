@@ -85,7 +85,7 @@ public static class QuantityParser
     private static readonly BoundedCache<(string Text, QuantityKind Kind), double> Parsed = new(ParsedCapacity);
 
     /// <summary>How many read strings are kept before the store is emptied.</summary>
-    private const int ParsedCapacity = 20000;
+    private const int ParsedCapacity = 4096;
 
     /// <summary>Parses a value of the given kind; on failure gives the reason instead of throwing.</summary>
     public static bool TryParse(object? input, QuantityKind kind, out double value, out string? error)
@@ -112,8 +112,10 @@ public static class QuantityParser
                     return false;
                 }
 
-                // Inventories repeat their unit strings; the unit library's parse is slow (tens of microseconds).
-                Parsed.Add((text, kind), value);
+                // Inventories repeat their unit strings; the unit library's parse is slow (tens of microseconds). A text
+                // is kept from its second sight on: an inventory of every size its own would otherwise carry each row's
+                // texts into the runtime's older generation (docs/performance.md).
+                Parsed.AddOnRepeat((text, kind), value);
                 return true;
             default:
                 error = "got a " + input.GetType().Name + " ('" + Display(input) + "'); expected " + Expectation(info);
@@ -162,7 +164,7 @@ public static class QuantityParser
         }
 
         Match m = NumberAndUnit.Match(text);
-        return Bare.Add(text, m.Success && m.Groups["unit"].Value.Length == 0);
+        return Bare.AddOnRepeat(text, m.Success && m.Groups["unit"].Value.Length == 0);
     }
 
     /// <summary>Texts already asked whether they are bare numbers (inventories repeat them).</summary>

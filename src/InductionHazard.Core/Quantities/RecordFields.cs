@@ -25,6 +25,11 @@ public sealed class RecordFields
     private Dictionary<string, string>? _unitByKey;
     private Dictionary<string, string>? _defaultUnits;
 
+    // The quantities read, which a reader's plausibility check reads again: each read once, and its text offered once to
+    // the parser's store, which keeps a text from its second sight on (a row's own size is not a repeat).
+    private (string Field, QuantityKind Kind, double Value)[]? _quantities;
+    private int _quantityCount;
+
     /// <summary>The units a name may carry after an underscore ("Diameter_mm"): a short list, so that "Holder_A" stays a name.</summary>
     private static readonly HashSet<string> UnderscoreUnits = new(StringComparer.Ordinal) { "mm", "cm", "um", "µm", "m", "in", "ms", "us", "s", "min", "degC", "mT", "uT", "kA", "Hz", "kHz" };
 
@@ -75,6 +80,14 @@ public sealed class RecordFields
     /// <summary>Reads a quantity; null when absent (and an error when required).</summary>
     public double? Quantity(string field, QuantityKind kind, bool required, params string[] aliases)
     {
+        for (int i = 0; i < _quantityCount; i++)
+        {
+            if (_quantities![i].Kind == kind && string.Equals(_quantities[i].Field, field, StringComparison.Ordinal))
+            {
+                return _quantities[i].Value;
+            }
+        }
+
         object? raw = Raw(field, required, aliases);
         if (raw is null)
         {
@@ -106,6 +119,12 @@ public sealed class RecordFields
 
         if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
         {
+            if (_quantityCount == (_quantities ??= new (string, QuantityKind, double)[8]).Length)
+            {
+                Array.Resize(ref _quantities, 2 * _quantities.Length);
+            }
+
+            _quantities[_quantityCount++] = (field, kind, value);
             return value;
         }
 

@@ -37,10 +37,14 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private readonly Queue<Pending> _pending = new();
 
     /// <summary>
-    /// The work of the first row of each item at each place, for the rows that repeat it (an inventory's identical
-    /// items): they take its result under their own names. A few hundred distinct rows are kept, and no more.
+    /// The work of the second row of each item at each place, for the rows that repeat it after that (an inventory's
+    /// identical items): they take its result under their own names. A few hundred distinct rows are kept, and no more.
+    /// A row's work is kept only when its key comes a second time (<see cref="BoundedCache{TKey, TValue}.AddOnRepeat"/>):
+    /// in an inventory of items all different, keeping every row's result while some hundreds of rows pass made the
+    /// runtime carry each into its older generation before it was dropped, for no repeat.
     /// </summary>
     private readonly BoundedCache<string, (Task<Solved> Work, int Row)> _repeated = new(256, StringComparer.Ordinal);
+
 
     /// <summary>
     /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
@@ -220,7 +224,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                 Task<Solved> work = Start(given, input, record, label, row);
                 if (key is not null)
                 {
-                    _repeated.Add(key, (work, row));
+                    _repeated.AddOnRepeat(key, (work, row));
                 }
 
                 _pending.Enqueue(new Pending(work, input, label, row, null));

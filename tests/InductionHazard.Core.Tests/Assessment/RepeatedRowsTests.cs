@@ -95,6 +95,60 @@ public class RepeatedRowsTests
         Assert.False(rows.TryGet("row 5", out _));
     }
 
+    /// <summary>Keys "row N" hashed to N, so that which keys share a slot of the table is known (a string's own hash changes from run to run).</summary>
+    private sealed class Numbered : IEqualityComparer<string>
+    {
+        public bool Equals(string? x, string? y) => string.Equals(x, y, System.StringComparison.Ordinal);
+
+        public int GetHashCode(string obj) => int.Parse(System.MemoryExtensions.AsSpan(obj, 4), System.Globalization.NumberStyles.Integer, System.Globalization.CultureInfo.InvariantCulture);
+    }
+
+    [Fact]
+    public void AValueOfferedOnRepeatIsKeptFromItsKeysSecondSightOn()
+    {
+        // A row's work (and a parsed text) is kept only when its key comes again: an inventory of items all different
+        // keeps nothing alive for repeats that never come. 100 keys in 256 slots, none sharing one (even numbers: the
+        // table marks a hash with its lowest bit set).
+        var rows = new BoundedCache<string, int>(256, new Numbered());
+        for (int k = 0; k < 200; k += 2)
+        {
+            Assert.Equal(k, rows.AddOnRepeat("row " + k, k));
+        }
+
+        for (int k = 0; k < 200; k += 2)
+        {
+            Assert.False(rows.TryGet("row " + k, out _));
+        }
+
+        // A key is known by its whole text, not the same string object, and the value kept is the second sight's.
+        Assert.Equal(1000, rows.AddOnRepeat(string.Concat("row ", "14"), 1000));
+        Assert.True(rows.TryGet("row 14", out int kept));
+        Assert.Equal(1000, kept);
+        Assert.False(rows.TryGet("row 16", out _));
+    }
+
+    [Fact]
+    public void AValueOfferedOnRepeatIsFoundOnlyByItsWholeKeyWhateverItsSlot()
+    {
+        // Two keys with one hash ("row 2j" and "row 2j+1": the table marks a hash with its lowest bit set), and a slot
+        // another key took: a key loses a mark, never takes another's value. 64 slots for a capacity of 16.
+        var rows = new BoundedCache<string, int>(16, new Numbered());
+        rows.AddOnRepeat("row 4", 4);
+        Assert.Equal(5, rows.AddOnRepeat("row 5", 5));
+        Assert.True(rows.TryGet("row 5", out int five), "a key whose hash was marked by another is kept");
+        Assert.Equal(5, five);
+        Assert.False(rows.TryGet("row 4", out _), "and the other key takes nothing");
+
+        rows.AddOnRepeat("row 9", 9);
+        rows.AddOnRepeat("row 73", 73);
+        rows.AddOnRepeat("row 9", 90);
+        Assert.False(rows.TryGet("row 9", out _), "row 73's hash took row 9's slot (73 = 9 + 64): row 9's mark is lost");
+        rows.AddOnRepeat("row 9", 900);
+        Assert.True(rows.TryGet("row 9", out int nine));
+        Assert.Equal(900, nine);
+        Assert.False(rows.TryGet("row 73", out _));
+    }
+
     [Fact]
     public void ARepeatedRowTakesTheResultAssessingItAfreshGives()
     {
