@@ -18,9 +18,11 @@ public static class QuantityParser
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
 
-    private static readonly Regex NumberAndUnit = new(
-        @"^\s*(?<number>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$",
-        RegexOptions.CultureInvariant);
+    /// <summary>
+    /// What <see cref="TryNumberAndUnit"/> reads, as a regular expression: a number (digits 0-9, an optional point and
+    /// exponent) and whatever follows it as its unit, spaces around either left out.
+    /// </summary>
+    internal const string NumberAndUnitPattern = @"^\s*(?<number>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$";
 
     private static readonly Regex DecimalComma = new(@"^[+-]?[0-9]+,[0-9]+(\s*[^0-9,].*)?$", RegexOptions.CultureInvariant);
 
@@ -163,8 +165,7 @@ public static class QuantityParser
             return bare;
         }
 
-        Match m = NumberAndUnit.Match(text);
-        return Bare.AddOnRepeat(text, m.Success && m.Groups["unit"].Value.Length == 0);
+        return Bare.AddOnRepeat(text, TryNumberAndUnit(text, out _, out string unit) && unit.Length == 0);
     }
 
     /// <summary>Texts already asked whether they are bare numbers (inventories repeat them).</summary>
@@ -187,14 +188,15 @@ public static class QuantityParser
             return false;
         }
 
-        if (DecimalComma.IsMatch(trimmed))
+        // Neither a decimal comma nor a fraction can match without its comma or its slash.
+        if (trimmed.IndexOf(',') >= 0 && DecimalComma.IsMatch(trimmed))
         {
             error = "'" + trimmed + "' has a decimal comma, which could also be a thousands separator; write a decimal point ('" + trimmed.Replace(',', '.') + "'); expected " + Expectation(info);
             return false;
         }
 
-        Match fraction = Fraction.Match(trimmed);
-        if (fraction.Success)
+        Match? fraction = trimmed.IndexOf('/') >= 0 ? Fraction.Match(trimmed) : null;
+        if (fraction is { Success: true })
         {
             // Fractions as jewellers and fitters write them: '3/4 in', '1 3/4 in', '1-3/4 in'.
             double den = double.Parse(fraction.Groups["den"].Value, CultureInfo.InvariantCulture);
@@ -215,20 +217,18 @@ public static class QuantityParser
             return false;
         }
 
-        Match match = NumberAndUnit.Match(trimmed);
-        if (!match.Success)
+        if (!TryNumberAndUnit(trimmed, out string numberText, out string unitText))
         {
             error = "'" + trimmed + "' is not a number with a unit; expected " + Expectation(info);
             return false;
         }
 
-        if (!double.TryParse(match.Groups["number"].Value, NumberStyles.Float, Invariant, out double number) || !Finite.Is(number))
+        if (!double.TryParse(numberText, NumberStyles.Float, Invariant, out double number) || !Finite.Is(number))
         {
             error = "'" + trimmed + "' is too large to be a finite number; expected " + Expectation(info);
             return false;
         }
 
-        string unitText = match.Groups["unit"].Value;
         if (unitText.Length == 0)
         {
             value = number;
@@ -288,6 +288,95 @@ public static class QuantityParser
             : "'" + unitText + "' is not a unit of " + info.Description.Substring(info.Description.IndexOf(' ') + 1)
                 + "; expected " + Expectation(info);
         return false;
+    }
+
+    /// <summary>
+    /// Splits a text into its number and its unit exactly as <see cref="NumberAndUnitPattern"/> matches it, with no
+    /// regular expression (an inventory's every row has a size of its own to read): spaces (char.IsWhiteSpace, which
+    /// is the pattern's \s), a sign, digits 0-9 with an optional point, an exponent only when digits follow its e, then
+    /// the rest as the unit with the spaces around it left out. False where the pattern fails: no digit where the
+    /// number must be, or a line break inside the unit (the pattern's '.' takes anything but a line feed).
+    /// </summary>
+    internal static bool TryNumberAndUnit(string text, out string number, out string unit)
+    {
+        number = unit = string.Empty;
+        int n = text.Length, i = 0;
+        while (i < n && char.IsWhiteSpace(text[i]))
+        {
+            i++;
+        }
+
+        int start = i;
+        if (i < n && (text[i] == '+' || text[i] == '-'))
+        {
+            i++;
+        }
+
+        int digits = i;
+        i = SkipDigits(text, i);
+        if (i > digits)
+        {
+            if (i < n && text[i] == '.')
+            {
+                i = SkipDigits(text, i + 1);
+            }
+        }
+        else if (i + 1 < n && text[i] == '.' && IsDigit(text[i + 1]))
+        {
+            i = SkipDigits(text, i + 1);
+        }
+        else
+        {
+            return false;
+        }
+
+        if (i < n && (text[i] == 'e' || text[i] == 'E'))
+        {
+            int j = i + 1;
+            if (j < n && (text[j] == '+' || text[j] == '-'))
+            {
+                j++;
+            }
+
+            int exponent = j;
+            j = SkipDigits(text, j);
+            if (j > exponent)
+            {
+                i = j;
+            }
+        }
+
+        int end = i, first = i, last = n;
+        while (first < n && char.IsWhiteSpace(text[first]))
+        {
+            first++;
+        }
+
+        while (last > first && char.IsWhiteSpace(text[last - 1]))
+        {
+            last--;
+        }
+
+        if (text.IndexOf('\n', first, last - first) >= 0)
+        {
+            return false;
+        }
+
+        number = text.Substring(start, end - start);
+        unit = text.Substring(first, last - first);
+        return true;
+    }
+
+    private static bool IsDigit(char c) => c >= '0' && c <= '9';
+
+    private static int SkipDigits(string text, int i)
+    {
+        while (i < text.Length && IsDigit(text[i]))
+        {
+            i++;
+        }
+
+        return i;
     }
 
     /// <summary>True when the text holds a decimal digit outside 0-9 (Arabic-Indic, Devanagari, full-width...), which the module does not read.</summary>
@@ -388,8 +477,7 @@ public static class QuantityParser
     /// <summary>Names the dimension of a unit string when UnitsNet knows the unit, else an empty string.</summary>
     private static string DimensionOf(string unitOrQuantity)
     {
-        Match m = NumberAndUnit.Match(unitOrQuantity);
-        string unitText = m.Success && m.Groups["unit"].Value.Length > 0 ? m.Groups["unit"].Value : unitOrQuantity;
+        string unitText = TryNumberAndUnit(unitOrQuantity, out _, out string unit) && unit.Length > 0 ? unit : unitOrQuantity;
         foreach (QuantityKindInfo other in QuantityKindInfo.All)
         {
             if (TryUnit(unitText, other, out _))

@@ -1,3 +1,5 @@
+using System.Text.RegularExpressions;
+using CsCheck;
 using InductionHazard.Errors;
 using InductionHazard.Quantities;
 using Xunit;
@@ -25,6 +27,29 @@ public class QuantityParserTests
     public void ParsesNumbersWithUnitsIntoCanonicalUnits(string text, QuantityKind kind, double expected)
     {
         Within.Relative(expected, QuantityParser.Parse(text, kind), 1e-12, text);
+    }
+
+    [Fact]
+    public void ANumberAndItsUnitAreSplitExactlyAsTheRegularExpressionSplitsThem()
+    {
+        // The scanner against .NET's own regular expression engine with the pattern it replaces, on random texts of
+        // signs, digits, points, exponents, spaces of several kinds (line breaks, tabs, a no-break space), units and
+        // the characters the parser treats apart (comma, slash): the same success, number and unit.
+        var pattern = new Regex(QuantityParser.NumberAndUnitPattern, RegexOptions.CultureInvariant);
+        string[] handPicked = { "20 mm", " 1.5e-3  T ", ".5", "5.", ".", "+", "-.e5", "1e", "1e+", "1e+5x", "1.2.3", "20\nmm", "20 mm\n", "20\n mm\n\n", "\u00a020\u00a0mm", "-0", "1 3/4 in", "2,5 mm", string.Empty };
+        foreach (string text in handPicked)
+        {
+            Assert.True(Same(text), "'" + text + "'");
+        }
+
+        Gen.String[Gen.Char["0123456789.+-eE mµ\t\n\r\u00a0\u2028,/xT"], 0, 12].Sample(Same, iter: 20000);
+
+        bool Same(string text)
+        {
+            Match m = pattern.Match(text);
+            bool scanned = QuantityParser.TryNumberAndUnit(text, out string number, out string unit);
+            return scanned == m.Success && (!scanned || (number == m.Groups["number"].Value && unit == m.Groups["unit"].Value));
+        }
     }
 
     // The ASCII spellings people type in a shell, which UnitsNet alone rejects.
