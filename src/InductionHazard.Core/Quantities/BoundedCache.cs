@@ -18,8 +18,9 @@ internal sealed class BoundedCache<TKey, TValue>
     private readonly int _capacity;
     private int _added;
 
-    /// <summary>The hashes of keys offered to <see cref="AddOnRepeat"/>, one slot per hash's low bits; made when first needed.</summary>
-    private int[]? _offered;
+    /// <summary>The hashes of the keys offered to <see cref="AddOnRepeat"/>, at most as many as the cache keeps; made when first needed.</summary>
+    private HashSet<int>? _offered;
+    private readonly object _offeredLock = new();
 
     /// <summary>Creates an empty cache.</summary>
     public BoundedCache(int capacity, IEqualityComparer<TKey>? comparer = null)
@@ -48,32 +49,27 @@ internal sealed class BoundedCache<TKey, TValue>
     /// Keeps a value only if its key was offered before, and returns it either way. For values of which most are asked
     /// for once (every row's own size, every item of an inventory of different items): kept from their first sight,
     /// they live while the cache fills and the runtime carries each into its older generation before it is dropped,
-    /// which costs more than finding a value twice. A key is known by its hash, in a table of as many slots as the
-    /// cache keeps entries (a key is remembered while some as many others pass): a slot another key takes, or two keys with one hash, only change whether a value is
-    /// kept, never a value (a value is always found by its whole key). Safe on any thread: a slot is one integer, and a
-    /// race loses at most a mark.
+    /// which costs more than finding a value twice. The keys offered are known by their hashes alone (no key is kept
+    /// alive), as many as the cache keeps entries, then the set starts again: two keys with one hash only make the
+    /// second kept on its first sight, never change a value (a value is always found by its whole key). Safe on any
+    /// thread.
     /// </summary>
     public TValue AddOnRepeat(TKey key, TValue value)
     {
-        int[] offered = _offered ??= new int[SlotsFor(_capacity)];
-        // Never 0, an empty slot's value.
-        int hash = _comparer.GetHashCode(key) | 1;
-        int slot = hash & (offered.Length - 1);
-        bool seen = Volatile.Read(ref offered[slot]) == hash;
-        Volatile.Write(ref offered[slot], hash);
-        return seen ? Add(key, value) : value;
-    }
-
-    /// <summary>The power of two at or above the capacity (at least 64).</summary>
-    private static int SlotsFor(int capacity)
-    {
-        int slots = 64;
-        while (slots < capacity && slots < (1 << 24))
+        int hash = _comparer.GetHashCode(key);
+        bool seen;
+        lock (_offeredLock)
         {
-            slots <<= 1;
+            HashSet<int> offered = _offered ??= new HashSet<int>();
+            seen = !offered.Add(hash);
+            if (!seen && offered.Count > _capacity)
+            {
+                offered.Clear();
+                offered.Add(hash);
+            }
         }
 
-        return slots;
+        return seen ? Add(key, value) : value;
     }
 }
 
