@@ -27,7 +27,7 @@ public sealed class RecordFields
 
     // The quantities read, which a reader's plausibility check reads again: each read once, and its text offered once to
     // the parser's store, which keeps a text from its second sight on (a row's own size is not a repeat).
-    private (string Field, QuantityKind Kind, double Value)[]? _quantities;
+    private (string Field, string[] Aliases, QuantityKind Kind, double Value)[]? _quantities;
     private int _quantityCount;
 
     /// <summary>The units a name may carry after an underscore ("Diameter_mm"): a short list, so that "Holder_A" stays a name.</summary>
@@ -82,7 +82,9 @@ public sealed class RecordFields
     {
         for (int i = 0; i < _quantityCount; i++)
         {
-            if (_quantities![i].Kind == kind && string.Equals(_quantities[i].Field, field, StringComparison.Ordinal))
+            var read = _quantities![i];
+            if (read.Kind == kind && string.Equals(read.Field, field, StringComparison.Ordinal)
+                && (ReferenceEquals(read.Aliases, aliases) || read.Aliases.SequenceEqual(aliases, StringComparer.Ordinal)))
             {
                 return _quantities[i].Value;
             }
@@ -119,12 +121,12 @@ public sealed class RecordFields
 
         if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
         {
-            if (_quantityCount == (_quantities ??= new (string, QuantityKind, double)[8]).Length)
+            if (_quantityCount == (_quantities ??= new (string, string[], QuantityKind, double)[8]).Length)
             {
                 Array.Resize(ref _quantities, 2 * _quantities.Length);
             }
 
-            _quantities[_quantityCount++] = (field, kind, value);
+            _quantities[_quantityCount++] = (field, aliases, kind, value);
             return value;
         }
 

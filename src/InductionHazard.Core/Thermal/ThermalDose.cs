@@ -213,7 +213,7 @@ public static class ThermalDose
     /// <summary>
     /// The factor at which a dose D(k) = C (e^(a k) - 1) meets the limit, given G(1) = ln(D(1) / limit) and G'(1) =
     /// a e^a / (e^a - 1): a from the slope (by Newton's steps; the slope is at least 1, the linear dose's), then
-    /// k = ln(1 + e^(-G(1)) (e^a - 1)) / a. NaN when the slope gives no such a.
+    /// k = ln(1 + e^(-G(1)) (e^a - 1)) / a. Only a first step: the caller takes it only inside the bracket.
     /// </summary>
     private static double ExponentialGuess(double g1, double slope)
     {

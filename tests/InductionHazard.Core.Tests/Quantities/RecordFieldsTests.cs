@@ -24,6 +24,19 @@ public sealed class RecordFieldsTests
     }
 
     [Fact]
+    public void AQuantityReadAgainIsTheSameAndUnderOtherAliasesIsReadAfresh()
+    {
+        // A reader's plausibility check reads its sizes again (each is read once and remembered): the same value for
+        // the same field and aliases, but a field asked for under other aliases is read from the record as asked.
+        var fields = new RecordFields(new[] { new KeyValuePair<string, object?>("Size", "20 mm") });
+        Assert.Equal(0.02, fields.Quantity("Diameter", QuantityKind.Length, required: false, "Size"));
+        Assert.Equal(0.02, fields.Quantity("Diameter", QuantityKind.Length, required: false, new[] { "Size" }));
+        Assert.Null(fields.Quantity("Diameter", QuantityKind.Length, required: false));
+        Assert.Null(fields.Quantity("Diameter", QuantityKind.Length, required: false, "Width"));
+        Assert.Empty(fields.Errors);
+    }
+
+    [Fact]
     public void TwoColumnsForOneFieldMustStillAgree()
     {
         var fields = new RecordFields(new[]
