@@ -14,8 +14,10 @@ namespace InductionHazard.Quantities;
 public sealed class RecordFields
 {
     // Each field's value with its name as given, by its normalized name.
-    private readonly Dictionary<string, (string Name, object? Value)> _values = new(StringComparer.Ordinal);
-    private readonly HashSet<string> _used = new(StringComparer.Ordinal);
+    // Each field's value with its name as given and its place among the fields, by its normalized name; whether a read
+    // has used it, by that place (made once the record is read: a row's reader asks a few of its few columns).
+    private readonly Dictionary<string, (string Name, object? Value, int Index)> _values;
+    private readonly bool[] _used;
 
     // Made when first needed: most records have no errors, no second spelling of a field and no units in their names,
     // and a row is read by several readers (its name, the item, its placement), each with its own fields.
@@ -49,6 +51,8 @@ public sealed class RecordFields
             }
         }
 
+        // Sized for the record's columns where it says how many: a row's reader made its table grow twice.
+        _values = new(record is IReadOnlyCollection<KeyValuePair<string, object?>> sized ? sized.Count : record is ICollection<KeyValuePair<string, object?>> counted ? counted.Count : 0, StringComparer.Ordinal);
         foreach (KeyValuePair<string, object?> given in record)
         {
             (string name, string? unitOfName) = SplitUnit(given.Key);
@@ -61,7 +65,7 @@ public sealed class RecordFields
 
             if (!_values.ContainsKey(key))
             {
-                _values[key] = (pair.Key, pair.Value);
+                _values[key] = (pair.Key, pair.Value, _values.Count);
             }
             else
             {
@@ -69,6 +73,8 @@ public sealed class RecordFields
                 (_shadowed ??= new()).Add(pair);
             }
         }
+
+        _used = new bool[_values.Count];
     }
 
     /// <summary>The problems found so far.</summary>
@@ -121,7 +127,7 @@ public sealed class RecordFields
 
         if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
         {
-            if (_quantityCount == (_quantities ??= new (string, string[], QuantityKind, double)[8]).Length)
+            if (_quantityCount == (_quantities ??= new (string, string[], QuantityKind, double)[4]).Length)
             {
                 Array.Resize(ref _quantities, 2 * _quantities.Length);
             }
@@ -245,8 +251,9 @@ public sealed class RecordFields
             return null;
         }
 
-        _used.Add(key);
-        return _values[key].Value;
+        (string _, object? value, int index) = _values[key];
+        _used[index] = true;
+        return value;
     }
 
     /// <summary>Reads a value of an enumeration by name (case-insensitive); null when absent.</summary>
@@ -321,7 +328,7 @@ public sealed class RecordFields
 
     /// <summary>The record's field names (as given) that no read has used.</summary>
     public IEnumerable<string> UnusedNames() =>
-        _values.Where(p => !_used.Contains(p.Key) && !IsEmpty(p.Value.Value)).Select(p => p.Value.Name);
+        _values.Where(p => !_used[p.Value.Index] && !IsEmpty(p.Value.Value)).Select(p => p.Value.Name);
 
     /// <summary>Lower case, without spaces, hyphens, underscores and dots: "Wire Diameter" and "wire_diameter" match.</summary>
     public static string Normalize(string name)
