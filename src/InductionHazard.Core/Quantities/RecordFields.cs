@@ -13,7 +13,6 @@ namespace InductionHazard.Quantities;
 /// </summary>
 public sealed class RecordFields
 {
-    // Each field's value with its name as given, by its normalized name.
     // Each field's value with its name as given and its place among the fields, by its normalized name; whether a read
     // has used it, by that place (made once the record is read: a row's reader asks a few of its few columns).
     private readonly Dictionary<string, (string Name, object? Value, int Index)> _values;
