@@ -45,7 +45,6 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// </summary>
     private readonly BoundedCache<string, (Task<Solved> Work, int Row)> _repeated = new(256, StringComparer.Ordinal);
 
-
     /// <summary>
     /// Starts the workers' tasks with -ThrottleLimit above 1: on the thread pool, but never more than -ThrottleLimit of
     /// them at once, whatever the machine's core count (the pool alone would run every queued task a core is free for).
