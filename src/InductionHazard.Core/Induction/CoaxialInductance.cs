@@ -21,6 +21,9 @@ public static class CoaxialInductance
     /// </summary>
     private const double GmdFromRadiusOverSide = 1.5;
 
+    /// <summary>How far past a boundary between kinds of pair a figure may lie by rounding alone, as a share of it.</summary>
+    private const double BoundaryRounding = 1e-9;
+
     /// <summary>
     /// The mutual inductance of two cells carrying uniform current densities. Far apart (centres further than six
     /// times the larger side for rectangles off the axis, where the correction below falls under 1e-3 of the log,
@@ -28,7 +31,9 @@ public static class CoaxialInductance
     /// Maxwell formula at the centroids plus the log singularity's correction mu0 sqrt(r_p r_q) ln(d / GMD), with
     /// d the centroids' distance and the GMD of the two rectangles in closed form (<see cref="RectangleGmd"/>): the
     /// ring kernel is mu0 sqrt(ab)(ln(8 sqrt(ab)/d) - 2) plus a part smooth over the cells; otherwise the Maxwell
-    /// formula averaged over near-square sub-filaments of each cell.
+    /// formula averaged over near-square sub-filaments of each cell. A pair on the boundary within rounding counts as
+    /// near: a mesh's evenly spaced cells sit on it (every other cell along a column), and which side of it rounding put
+    /// them on made a cell's term and its mirror image's differ by up to 9 %.
     /// </summary>
     public static double MutualHenries(in Filament p, in Filament q)
     {
@@ -36,7 +41,7 @@ public static class CoaxialInductance
         double side = Math.Max(p.LargestSideMeters, q.LargestSideMeters);
         double distanceSquared = (dr * dr) + (dz * dz);
         bool rectangles = OffAxisRectangle(p, q.LargestSideMeters) && OffAxisRectangle(q, p.LargestSideMeters);
-        if (distanceSquared > (rectangles ? 36 : 4) * side * side)
+        if (distanceSquared > (rectangles ? 36 : 4) * side * side * (1 + BoundaryRounding))
         {
             return MutualHenries(p.RadiusMeters, q.RadiusMeters, dz);
         }
@@ -93,9 +98,9 @@ public static class CoaxialInductance
         return sum / (subs.Length * subs.Length);
     }
 
-    /// <summary>A rectangular (not polar) cell whose centre is further from the axis than 1.5 times its own and its neighbour's longest side.</summary>
+    /// <summary>A rectangular (not polar) cell whose centre is further from the axis than 1.5 times its own and its neighbour's longest side (beyond rounding).</summary>
     private static bool OffAxisRectangle(in Filament f, double neighbourSide) =>
-        f.SectorRadians == 0 && f.AngleRadians == 0 && f.RadiusMeters > GmdFromRadiusOverSide * Math.Max(f.LargestSideMeters, neighbourSide);
+        f.SectorRadians == 0 && f.AngleRadians == 0 && f.RadiusMeters > GmdFromRadiusOverSide * Math.Max(f.LargestSideMeters, neighbourSide) * (1 + BoundaryRounding);
 
     /// <summary>A cell split into near-square sub-cells (two across its shorter side), each at its centre.</summary>
     private static SubCell[] SubCells(in Filament f)

@@ -197,9 +197,14 @@ public sealed class PathSet
 
     /// <summary>
     /// Coaxial filaments: self terms from each cell's section (<see cref="CoaxialInductance.SelfHenries"/>), mutual
-    /// terms by Maxwell's formula (averaged over sub-filaments for neighbouring cells), R_i = rho 2 pi r_i / S_i.
+    /// terms by Maxwell's formula (averaged over sub-filaments for neighbouring cells), R_i = rho 2 pi r_i / S_i. A set
+    /// symmetric about its mid-plane (<see cref="AxialMirror"/>) computes each term once for a pair and its image, and
+    /// gives its image's resistance to each filament.
     /// </summary>
-    public static PathSet Coaxial(IReadOnlyList<Filament> cells, string description)
+    public static PathSet Coaxial(IReadOnlyList<Filament> cells, string description) => Coaxial(cells, description, AxialMirror.Of(cells));
+
+    /// <summary>The same, with the set's mirror symmetry given (null: none used).</summary>
+    internal static PathSet Coaxial(IReadOnlyList<Filament> cells, string description, AxialMirror? mirror)
     {
         int n = cells.Count;
         var l = new double[n, n];
@@ -207,19 +212,43 @@ public sealed class PathSet
         for (int i = 0; i < n; i++)
         {
             Filament p = cells[i];
-            l[i, i] = CoaxialInductance.SelfHenries(p);
-            g[i] = p.PathLengthMeters / p.AreaSquareMeters;
+            int image = mirror?.ImageOf(i) ?? i;
+            if (image < i)
+            {
+                // The image's terms were found with its row.
+                g[i] = g[image];
+                l[i, i] = l[image, image];
+            }
+            else
+            {
+                g[i] = p.PathLengthMeters / p.AreaSquareMeters;
+                l[i, i] = CoaxialInductance.SelfHenries(p);
+            }
+
             for (int j = i + 1; j < n; j++)
             {
-                Filament q = cells[j];
-                double m = CoaxialInductance.MutualHenries(p, q);
+                if (mirror is not null && !mirror.Computes(i, j))
+                {
+                    continue;
+                }
+
+                double m = CoaxialInductance.MutualHenries(p, cells[j]);
                 l[i, j] = m;
                 l[j, i] = m;
+                if (mirror is not null)
+                {
+                    int a = mirror.ImageOf(i), b = mirror.ImageOf(j);
+                    l[a, b] = m;
+                    l[b, a] = m;
+                }
             }
         }
 
-        return new PathSet(l, g, cells, description) { InductanceMethod = "Maxwell mutual inductances" };
+        return new PathSet(l, g, cells, description) { InductanceMethod = "Maxwell mutual inductances", Mirror = mirror };
     }
+
+    /// <summary>The set's symmetry about its mid-plane, when it has one: its modes are found in its even and odd halves.</summary>
+    internal AxialMirror? Mirror { get; private init; }
 
     /// <summary>
     /// The modes of the (L, R) pencil at a reference resistivity: with R0 = rho_ref diag(l/S), the symmetric matrix
@@ -244,6 +273,11 @@ public sealed class PathSet
         {
             double lambda = InductanceHenries[0, 0] * scale[0] * scale[0];
             return lambda > 0 ? new PathModes(new[] { lambda }, new[,] { { scale[0] } }) : null;
+        }
+
+        if (Mirror is not null)
+        {
+            return Mirror.Modes(InductanceHenries, scale);
         }
 
         Matrix<double> a = Matrix<double>.Build.Dense(n, n, (i, j) => scale[i] * InductanceHenries[i, j] * scale[j]);
