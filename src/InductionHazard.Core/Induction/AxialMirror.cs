@@ -183,64 +183,58 @@ internal sealed class AxialMirror
         });
         Matrix<double> oddBlock = Matrix<double>.Build.Dense(p, p, (x, y) => A(pairs[x], pairs[y]) - A(pairs[x], _image[pairs[y]]));
 
-        var lambdas = new double[n];
-        var w = new double[n, n];
-        double half = Math.Sqrt(0.5);
-        int mode = 0;
-        foreach ((Matrix<double> block, bool odd) in new[] { (evenBlock, false), (oddBlock, true) })
+        // Both halves solved first, so that each mode's column is written once, in ascending order of its eigenvalue
+        // (as one problem gives them), rather than written and then sorted.
+        var solved = new (Vector<double> Values, Matrix<double> Vectors)[2];
+        var modes = new List<(double Lambda, int Half, int Column)>(n);
+        for (int half = 0; half < 2; half++)
         {
+            Matrix<double> block = half == 0 ? evenBlock : oddBlock;
             if (block.RowCount == 0)
             {
                 continue;
             }
 
             var evd = block.Evd(Symmetricity.Symmetric);
-            Vector<double> values = evd.EigenValues.Real();
-            Matrix<double> q = evd.EigenVectors;
-            for (int k = 0; k < block.RowCount; k++, mode++)
+            solved[half] = (evd.EigenValues.Real(), evd.EigenVectors);
+            for (int k = 0; k < block.RowCount; k++)
             {
-                lambdas[mode] = values[k];
-                if (!(lambdas[mode] > 0))
+                double lambda = solved[half].Values[k];
+                if (!(lambda > 0))
                 {
                     return null;
                 }
 
-                for (int x = 0; x < p; x++)
-                {
-                    int i = pairs[x], i2 = _image[i];
-                    double v = half * q[x, k];
-                    w[i, mode] = scale[i] * v;
-                    w[i2, mode] = scale[i2] * (odd ? -v : v);
-                }
-
-                if (!odd)
-                {
-                    for (int x = p; x < even; x++)
-                    {
-                        w[plane[x - p], mode] = scale[plane[x - p]] * q[x, k];
-                    }
-                }
+                modes.Add((lambda, half, k));
             }
         }
 
-        // In ascending order, as one problem gives them.
-        var order = new int[n];
-        for (int k = 0; k < n; k++)
+        modes.Sort((x, y) => x.Lambda.CompareTo(y.Lambda));
+        var lambdas = new double[n];
+        var w = new double[n, n];
+        double root = Math.Sqrt(0.5);
+        for (int mode = 0; mode < n; mode++)
         {
-            order[k] = k;
-        }
-
-        var sortedLambdas = (double[])lambdas.Clone();
-        Array.Sort(sortedLambdas, order);
-        var sortedW = new double[n, n];
-        for (int k = 0; k < n; k++)
-        {
-            for (int i = 0; i < n; i++)
+            (double lambda, int half, int k) = modes[mode];
+            lambdas[mode] = lambda;
+            Matrix<double> q = solved[half].Vectors;
+            for (int x = 0; x < p; x++)
             {
-                sortedW[i, k] = w[i, order[k]];
+                int i = pairs[x], i2 = _image[i];
+                double v = root * q[x, k];
+                w[i, mode] = scale[i] * v;
+                w[i2, mode] = scale[i2] * (half == 1 ? -v : v);
+            }
+
+            if (half == 0)
+            {
+                for (int x = p; x < even; x++)
+                {
+                    w[plane[x - p], mode] = scale[plane[x - p]] * q[x, k];
+                }
             }
         }
 
-        return new PathModes(sortedLambdas, sortedW);
+        return new PathModes(lambdas, w);
     }
 }
