@@ -55,6 +55,11 @@ public static class CoaxialInductance
             return MutualHenries(p.RadiusMeters, q.RadiusMeters, dz) + (PhysicalConstants.VacuumPermeability * Math.Sqrt(p.RadiusMeters * q.RadiusMeters) * (Math.Log(d) - logGmd));
         }
 
+        if (AlongOneSpacing(p, q) is { } spacing)
+        {
+            return AveragedAlongRows(p, q, spacing);
+        }
+
         SubCell[] a = SubCells(p), b = SubCells(q);
         double sum = 0;
         for (int i = 0; i < a.Length; i++)
@@ -66,6 +71,73 @@ public static class CoaxialInductance
         }
 
         return sum / (a.Length * b.Length);
+    }
+
+    /// <summary>
+    /// The axial spacing of two rectangular cells' sub-filaments when it is the same for both (to 1e-12 of it): cells of
+    /// one row of a mesh, or of rows of one height; null otherwise.
+    /// </summary>
+    private static double? AlongOneSpacing(in Filament p, in Filament q)
+    {
+        if (p.SectorRadians != 0 || p.AngleRadians != 0 || q.SectorRadians != 0 || q.AngleRadians != 0)
+        {
+            return null;
+        }
+
+        double sp = p.HeightMeters / SubCellCounts(p).Along, sq = q.HeightMeters / SubCellCounts(q).Along;
+        return Math.Abs(sp - sq) <= 1e-12 * Math.Max(sp, sq) ? sp : null;
+    }
+
+    /// <summary>
+    /// The average over two rectangular cells' sub-filaments (<see cref="SubCells"/>) where both are spaced s apart along
+    /// the axis: the axial distances between them are the centres' distance plus (k + (v_q - v_p) / 2) s for
+    /// k = b - d, each taken as many times as pairs (b, d) give it, so that a pair of columns of v_p and v_q sub-filaments
+    /// takes v_p + v_q - 1 terms instead of v_p v_q (the same sum, in another order).
+    /// </summary>
+    private static double AveragedAlongRows(in Filament p, in Filament q, double spacing)
+    {
+        (double[] rp, int vp) = SubCellRadii(p);
+        (double[] rq, int vq) = SubCellRadii(q);
+        double centres = p.AxialMeters - q.AxialMeters, shift = 0.5 * (vq - vp);
+        double sum = 0;
+        for (int k = 1 - vq; k < vp; k++)
+        {
+            int count = Math.Min(vp, vq + k) - Math.Max(0, k);
+            double dz = centres + ((k + shift) * spacing);
+            double row = 0;
+            foreach (double a in rp)
+            {
+                foreach (double b in rq)
+                {
+                    row += MutualHenries(a, b, dz);
+                }
+            }
+
+            sum += count * row;
+        }
+
+        return sum / (rp.Length * vp * rq.Length * vq);
+    }
+
+    /// <summary>The radii of a rectangular cell's sub-filaments across it, as <see cref="SubCells"/> places them, and how many lie along it.</summary>
+    private static (double[] Radii, int Along) SubCellRadii(in Filament f)
+    {
+        (int u, int v) = SubCellCounts(f);
+        double gmd = RectangularBand.GmdFactor * ((f.WidthMeters / u) + (f.HeightMeters / v));
+        var radii = new double[u];
+        for (int i = 0; i < u; i++)
+        {
+            radii[i] = Math.Max(f.RadiusMeters + ((((i + 0.5) / u) - 0.5) * f.WidthMeters), 0.5 * gmd);
+        }
+
+        return (radii, v);
+    }
+
+    /// <summary>How many near-square sub-cells a cell is split into across and along it: two across its shorter side.</summary>
+    private static (int Across, int Along) SubCellCounts(in Filament f)
+    {
+        double shorter = Math.Min(f.WidthMeters, f.HeightMeters);
+        return (Math.Max(2, (int)Math.Round(2 * f.WidthMeters / shorter)), Math.Max(2, (int)Math.Round(2 * f.HeightMeters / shorter)));
     }
 
     /// <summary>
@@ -105,9 +177,7 @@ public static class CoaxialInductance
     /// <summary>A cell split into near-square sub-cells (two across its shorter side), each at its centre.</summary>
     private static SubCell[] SubCells(in Filament f)
     {
-        double shorter = Math.Min(f.WidthMeters, f.HeightMeters);
-        int u = Math.Max(2, (int)Math.Round(2 * f.WidthMeters / shorter));
-        int v = Math.Max(2, (int)Math.Round(2 * f.HeightMeters / shorter));
+        (int u, int v) = SubCellCounts(f);
         double gmd = RectangularBand.GmdFactor * ((f.WidthMeters / u) + (f.HeightMeters / v));
         var subs = new SubCell[u * v];
         for (int i = 0; i < u; i++)
