@@ -349,8 +349,10 @@ public static class InductionEngine
 
         bool single = c.Paths!.IsSingle;
         c.Notes.Add(
-            (run.Steps, modes: c.Modal!.Count, single, c.Ldc, tau),
-            static n => "circuit: " + n.Steps + " exact exponential steps over " + n.modes + (n.single ? " mode" : " modes") + ", L = " + SiFormat.Format(n.Ldc, "H") + ", L/R = " + SiFormat.Format(n.tau, "s") + (n.single ? string.Empty : " (the leading mode's)"));
+            (run.Steps, modes: c.Modal!.Count, undriven: c.Paths.Paths!.Count - c.Modal.Count, single, c.Ldc, tau),
+            static n => "circuit: " + n.Steps + " exact exponential steps over " + n.modes + (n.single ? " mode" : " modes")
+                + (n.undriven > 0 ? " (its other " + n.undriven + ", odd about its mid-plane, are not driven: the field links both halves alike)" : string.Empty)
+                + ", L = " + SiFormat.Format(n.Ldc, "H") + ", L/R = " + SiFormat.Format(n.tau, "s") + (n.single ? string.Empty : " (the leading mode's)"));
         return drive with
         {
             Heating = Heated(c, run.Heating, run.FinalCelsius, run.EnergyJoules),

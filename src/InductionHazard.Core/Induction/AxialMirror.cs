@@ -147,12 +147,43 @@ internal sealed class AxialMirror
     }
 
     /// <summary>
+    /// Whether a drive is the same at every filament and its image, for every term, to 1e-12 of the term's largest:
+    /// then the odd modes, whose coupling is the drive's odd part, are not driven. (A mesh places an image within a few
+    /// units in the last place, and a uniform field's coupling, each filament's own area, differs as little; a drive
+    /// that differs between the halves by more than that is kept whole.)
+    /// </summary>
+    public bool DrivesAlike(double[,] pathCoupling)
+    {
+        int terms = pathCoupling.GetLength(1);
+        for (int j = 0; j < terms; j++)
+        {
+            double largest = 0;
+            for (int i = 0; i < _image.Length; i++)
+            {
+                largest = Math.Max(largest, Math.Abs(pathCoupling[i, j]));
+            }
+
+            for (int i = 0; i < _image.Length; i++)
+            {
+                if (!(Math.Abs(pathCoupling[i, j] - pathCoupling[_image[i], j]) <= Tolerance * largest))
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>
     /// The modes of the symmetric matrix A = S L S (S the diagonal of <paramref name="scale"/>, the same for a path and its
     /// image), from its even and odd blocks: with e_a = (u_a + u_a') / sqrt 2 and o_a = (u_a - u_a') / sqrt 2 for each
     /// image pair and u_c for a filament on the plane, A is block-diagonal; the even block is A_ab + A_ab' over pairs
     /// (sqrt 2 A_ac beside a filament on the plane, A_cd between two), the odd block A_ab - A_ab'. Each block's
-    /// eigenvectors, mapped back, are eigenvectors of A with the same eigenvalues. Returns the eigenvalues ascending with
-    /// W = S Q (paths x modes), or null when one is not positive.
+    /// eigenvectors, mapped back, are eigenvectors of A with the same eigenvalues. The even modes are solved here; the
+    /// odd block is only checked to be positive definite (a Cholesky factor, a small part of an eigenproblem's work),
+    /// and solved when the whole set is first asked for (<see cref="PathModes"/>). Null when either block is not positive
+    /// definite: the mesh cannot represent the section.
     /// </summary>
     public PathModes? Modes(double[,] inductance, double[] scale)
     {
@@ -182,51 +213,56 @@ internal sealed class AxialMirror
                 : A(i, j);
         });
         Matrix<double> oddBlock = Matrix<double>.Build.Dense(p, p, (x, y) => A(pairs[x], pairs[y]) - A(pairs[x], _image[pairs[y]]));
-
-        // Both halves solved first, so that each mode's column is written once, in ascending order of its eigenvalue
-        // (as one problem gives them), rather than written and then sorted.
-        var solved = new (Vector<double> Values, Matrix<double> Vectors)[2];
-        var modes = new List<(double Lambda, int Half, int Column)>(n);
-        for (int half = 0; half < 2; half++)
+        if (Solve(evenBlock) is not { } evenModes || (p > 0 && !PositiveDefinite(oddBlock)))
         {
-            Matrix<double> block = half == 0 ? evenBlock : oddBlock;
-            if (block.RowCount == 0)
-            {
-                continue;
-            }
-
-            var evd = block.Evd(Symmetricity.Symmetric);
-            solved[half] = (evd.EigenValues.Real(), evd.EigenVectors);
-            for (int k = 0; k < block.RowCount; k++)
-            {
-                double lambda = solved[half].Values[k];
-                if (!(lambda > 0))
-                {
-                    return null;
-                }
-
-                modes.Add((lambda, half, k));
-            }
+            return null;
         }
 
-        modes.Sort((x, y) => x.Lambda.CompareTo(y.Lambda));
-        var lambdas = new double[n];
-        var w = new double[n, n];
-        double root = Math.Sqrt(0.5);
-        for (int mode = 0; mode < n; mode++)
+        var evenOnly = new PathModes(evenModes.Values, EvenWeights(evenModes.Vectors, evenModes.Values.Length));
+        return new PathModes(evenOnly, this, () =>
         {
-            (double lambda, int half, int k) = modes[mode];
-            lambdas[mode] = lambda;
-            Matrix<double> q = solved[half].Vectors;
+            (double[] Values, Matrix<double> Vectors) oddModes = p == 0 ? (Array.Empty<double>(), Matrix<double>.Build.Dense(0, 0))
+                : Solve(oddBlock) ?? throw new InvalidOperationException("the odd modes of the filament set are not all positive, though their block's Cholesky factor was found");
+
+            // Both halves in one ascending order of their eigenvalues, as one problem gives them.
+            var modes = new List<(double Lambda, bool Odd, int Column)>(n);
+            for (int k = 0; k < evenModes.Values.Length; k++)
+            {
+                modes.Add((evenModes.Values[k], false, k));
+            }
+
+            for (int k = 0; k < oddModes.Values.Length; k++)
+            {
+                modes.Add((oddModes.Values[k], true, k));
+            }
+
+            modes.Sort((x, y) => x.Lambda.CompareTo(y.Lambda));
+            var lambdas = new double[n];
+            var w = new double[n, n];
+            for (int mode = 0; mode < n; mode++)
+            {
+                (double lambda, bool odd, int k) = modes[mode];
+                lambdas[mode] = lambda;
+                Write(w, mode, odd ? oddModes.Vectors : evenModes.Vectors, k, odd);
+            }
+
+            return (lambdas, w);
+        });
+
+        // W = S Q for the columns of one half: a pair's two paths share v / sqrt 2 (with opposite signs in an odd mode),
+        // a filament on the plane takes its own component (zero in an odd mode).
+        void Write(double[,] w, int mode, Matrix<double> q, int k, bool odd)
+        {
+            double root = Math.Sqrt(0.5);
             for (int x = 0; x < p; x++)
             {
                 int i = pairs[x], i2 = _image[i];
                 double v = root * q[x, k];
                 w[i, mode] = scale[i] * v;
-                w[i2, mode] = scale[i2] * (half == 1 ? -v : v);
+                w[i2, mode] = scale[i2] * (odd ? -v : v);
             }
 
-            if (half == 0)
+            if (!odd)
             {
                 for (int x = p; x < even; x++)
                 {
@@ -235,6 +271,45 @@ internal sealed class AxialMirror
             }
         }
 
-        return new PathModes(lambdas, w);
+        double[,] EvenWeights(Matrix<double> q, int count)
+        {
+            var w = new double[n, count];
+            for (int k = 0; k < count; k++)
+            {
+                Write(w, k, q, k, odd: false);
+            }
+
+            return w;
+        }
+    }
+
+    /// <summary>A block's eigenvalues (ascending) and eigenvectors, or null when one eigenvalue is not positive.</summary>
+    private static (double[] Values, Matrix<double> Vectors)? Solve(Matrix<double> block)
+    {
+        var evd = block.Evd(Symmetricity.Symmetric);
+        double[] values = evd.EigenValues.Real().ToArray();
+        foreach (double value in values)
+        {
+            if (!(value > 0))
+            {
+                return null;
+            }
+        }
+
+        return (values, evd.EigenVectors);
+    }
+
+    /// <summary>Whether a symmetric block is positive definite: its Cholesky factor exists.</summary>
+    private static bool PositiveDefinite(Matrix<double> block)
+    {
+        try
+        {
+            _ = block.Cholesky();
+            return true;
+        }
+        catch (ArgumentException)
+        {
+            return false;
+        }
     }
 }

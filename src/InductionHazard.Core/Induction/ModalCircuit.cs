@@ -24,6 +24,13 @@ public sealed record ModalCircuit(double[] Lambdas, double[,] Coupling, double[]
     /// <summary>a_k: the magnetic moment along the item's normal is sum_k a_k z_k, A m^2; null when not asked for.</summary>
     public double[]? MomentWeights { get; init; }
 
+    /// <summary>
+    /// W, paths x these modes: path i's current is sum_k W_ik z_k. The circuit's own, as it may hold fewer modes than
+    /// its paths' <see cref="PathModes"/> (those a drive leaves undriven are left out); null for a circuit not made
+    /// from paths.
+    /// </summary>
+    public double[,]? PathWeights { get; init; }
+
     /// <summary>One mode for one loop of inductance L and resistance R0 coupled with M to one term (z = sqrt(R0) i).</summary>
     public static ModalCircuit OneLoop(double inductanceHenries, double resistanceOhms, double coupling = 1) =>
         new(new[] { inductanceHenries / resistanceOhms }, new[,] { { coupling / Math.Sqrt(resistanceOhms) } }, new[] { 1 / Math.Sqrt(resistanceOhms) });

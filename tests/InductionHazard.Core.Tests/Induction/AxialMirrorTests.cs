@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Numerics;
 using InductionHazard.Induction;
 using InductionHazard.Items;
 using Xunit;
@@ -158,6 +159,70 @@ public class AxialMirrorTests
                 Within.Absolute(inverseR[i] * whole.InductanceHenries[i, j] * inverseR[j], sum, 1e-10 * reconstructedScale, mesh + ": (W diag(lambda) W^T)[" + i + ", " + j + "]");
                 Within.Absolute(i == j ? 1 : 0, metric, 1e-10, mesh + ": (W^T R0 W)[" + i + ", " + j + "]");
             }
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(Meshes))]
+    public void ADriveAlikeAtBothHalvesLeavesTheOddModesOutAndTheCurrentsAsTheyWere(string mesh)
+    {
+        // A uniform field along the axis links each filament's own area, the same at a filament and its image: the odd
+        // modes are not driven and the circuit holds the even ones alone. Every path's steady current at 1 kHz is that of
+        // the whole problem's modes; a drive that differs between the halves (the field's gradient along the axis) keeps
+        // every mode, with the same currents.
+        IReadOnlyList<Filament> cells = Cells(mesh);
+        int n = cells.Count;
+        PathModes halves = PathSet.Coaxial(cells, mesh).Modes(Rho)!, whole = PathSet.Coaxial(cells, mesh, mirror: null).Modes(Rho)!;
+        var alike = new double[n, 1];
+        var differing = new double[n, 2];
+        for (int i = 0; i < n; i++)
+        {
+            alike[i, 0] = Math.PI * cells[i].RadiusMeters * cells[i].RadiusMeters;
+            differing[i, 0] = alike[i, 0];
+            differing[i, 1] = alike[i, 0] * cells[i].AxialMeters;
+        }
+
+        ModalCircuit even = halves.Drive(alike), all = halves.Drive(differing);
+        Assert.True(even.Count < n && even.Count >= n / 2, mesh + ": " + even.Count + " of " + n + " modes driven by a uniform field");
+        Assert.Equal(n, all.Count);
+        Same(even, whole.Drive(alike), new[] { 1.0 });
+        Same(all, whole.Drive(differing), new[] { 1.0, 30.0 });
+
+        void Same(ModalCircuit circuit, ModalCircuit reference, double[] drives)
+        {
+            Complex[] currents = Currents(circuit, drives), expected = Currents(reference, drives);
+            double largest = 0;
+            foreach (Complex c in expected)
+            {
+                largest = Math.Max(largest, c.Magnitude);
+            }
+
+            for (int i = 0; i < n; i++)
+            {
+                Within.Absolute(0, (currents[i] - expected[i]).Magnitude, 1e-10 * largest, mesh + ": path " + i + "'s current, " + circuit.Count + " modes against " + reference.Count);
+            }
+        }
+
+        Complex[] Currents(ModalCircuit circuit, double[] drives)
+        {
+            double omega = 2 * Math.PI * 1000;
+            var currents = new Complex[n];
+            for (int k = 0; k < circuit.Count; k++)
+            {
+                Complex forcing = Complex.Zero;
+                for (int j = 0; j < drives.Length; j++)
+                {
+                    forcing += circuit.Coupling[k, j] * drives[j];
+                }
+
+                Complex z = -Complex.ImaginaryOne * omega * forcing / new Complex(1, omega * circuit.Lambdas[k]);
+                for (int i = 0; i < n; i++)
+                {
+                    currents[i] += circuit.PathWeights![i, k] * z;
+                }
+            }
+
+            return currents;
         }
     }
 }

@@ -181,7 +181,7 @@ public class FilamentModelTests
             Complex current = Complex.Zero;
             for (int k = 0; k < z.Length; k++)
             {
-                current += paths.Modes.Weights[i, k] * z[k];
+                current += circuit.PathWeights![i, k] * z[k];
             }
 
             middlePower += 0.5 * rho * paths.Paths.LengthOverArea[i] * current.Magnitude * current.Magnitude;
@@ -313,7 +313,7 @@ public class FilamentModelTests
                 double current = 0;
                 for (int k = 0; k < circuit.Count; k++)
                 {
-                    current += paths.Modes.Weights[i, k] * run.FinalModalAmplitudes[k];
+                    current += circuit.PathWeights![i, k] * run.FinalModalAmplitudes[k];
                 }
 
                 double a = cells[i].RadiusMeters, z = cells[i].AxialMeters;

@@ -97,7 +97,7 @@ public class ForceTests
             var current = System.Numerics.Complex.Zero;
             for (int k = 0; k < z.Length; k++)
             {
-                current += paths.Modes.Weights[i, k] * z[k];
+                current += circuit.PathWeights![i, k] * z[k];
             }
 
             // A cell of uniform current density feels -2 pi r B_r averaged over its section (its Gauss points).
