@@ -222,7 +222,7 @@ internal sealed class AxialMirror
         return new PathModes(evenOnly, this, () =>
         {
             (double[] Values, Matrix<double> Vectors) oddModes = p == 0 ? (Array.Empty<double>(), Matrix<double>.Build.Dense(0, 0))
-                : Solve(oddBlock) ?? throw new InvalidOperationException("the odd modes of the filament set are not all positive, though their block's Cholesky factor was found");
+                : Solve(oddBlock) ?? throw new InvalidOperationException("the filament inductance matrix is not positive definite in its modes odd about the mid-plane (the mesh cannot represent this section)");
 
             // Both halves in one ascending order of their eigenvalues, as one problem gives them.
             var modes = new List<(double Lambda, bool Odd, int Column)>(n);

@@ -253,7 +253,8 @@ public sealed class PathSet
     /// <summary>
     /// The modes of the (L, R) pencil at a reference resistivity: with R0 = rho_ref diag(l/S), the symmetric matrix
     /// R0^(-1/2) L R0^(-1/2) = Q diag(lambda) Q^T. Null when L is not positive definite (a mesh too coarse for its
-    /// inductances to be physical), which the caller reports rather than solves.
+    /// inductances to be physical), which the caller reports rather than solves. A set symmetric about its mid-plane
+    /// solves its even and odd halves apart, the odd one only when a drive reaches it (<see cref="AxialMirror.Modes"/>).
     /// </summary>
     public PathModes? Modes(double referenceResistivityOhmMeters)
     {
