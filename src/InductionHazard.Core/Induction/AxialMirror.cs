@@ -213,7 +213,7 @@ internal sealed class AxialMirror
                 : A(i, j);
         });
         Matrix<double> oddBlock = Matrix<double>.Build.Dense(p, p, (x, y) => A(pairs[x], pairs[y]) - A(pairs[x], _image[pairs[y]]));
-        if (Solve(evenBlock) is not { } evenModes || (p > 0 && !PositiveDefinite(oddBlock)))
+        if (PathSet.PositiveEigen(evenBlock) is not { } evenModes || (p > 0 && !PathSet.PositiveDefinite(oddBlock)))
         {
             return null;
         }
@@ -222,7 +222,7 @@ internal sealed class AxialMirror
         return new PathModes(evenOnly, this, () =>
         {
             (double[] Values, Matrix<double> Vectors) oddModes = p == 0 ? (Array.Empty<double>(), Matrix<double>.Build.Dense(0, 0))
-                : Solve(oddBlock) ?? throw new InvalidOperationException("the filament inductance matrix is not positive definite in its modes odd about the mid-plane (the mesh cannot represent this section)");
+                : PathSet.PositiveEigen(oddBlock) ?? throw new InvalidOperationException("the filament inductance matrix is not positive definite in its modes odd about the mid-plane (the mesh cannot represent this section)");
 
             // Both halves in one ascending order of their eigenvalues, as one problem gives them.
             var modes = new List<(double Lambda, bool Odd, int Column)>(n);
@@ -280,36 +280,6 @@ internal sealed class AxialMirror
             }
 
             return w;
-        }
-    }
-
-    /// <summary>A block's eigenvalues (ascending) and eigenvectors, or null when one eigenvalue is not positive.</summary>
-    private static (double[] Values, Matrix<double> Vectors)? Solve(Matrix<double> block)
-    {
-        var evd = block.Evd(Symmetricity.Symmetric);
-        double[] values = evd.EigenValues.Real().ToArray();
-        foreach (double value in values)
-        {
-            if (!(value > 0))
-            {
-                return null;
-            }
-        }
-
-        return (values, evd.EigenVectors);
-    }
-
-    /// <summary>Whether a symmetric block is positive definite: its Cholesky factor exists.</summary>
-    private static bool PositiveDefinite(Matrix<double> block)
-    {
-        try
-        {
-            _ = block.Cholesky();
-            return true;
-        }
-        catch (ArgumentException)
-        {
-            return false;
         }
     }
 }

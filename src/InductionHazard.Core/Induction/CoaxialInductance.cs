@@ -96,8 +96,8 @@ public static class CoaxialInductance
     /// </summary>
     private static double AveragedAlongRows(in Filament p, in Filament q, double spacing)
     {
-        (double[] rp, int vp) = SubCellRadii(p);
-        (double[] rq, int vq) = SubCellRadii(q);
+        (double[] rp, int vp) = RadiiAcross(p);
+        (double[] rq, int vq) = RadiiAcross(q);
         double centres = p.AxialMeters - q.AxialMeters, shift = 0.5 * (vq - vp);
         double sum = 0;
         for (int k = 1 - vq; k < vp; k++)
@@ -119,15 +119,15 @@ public static class CoaxialInductance
         return sum / (rp.Length * vp * rq.Length * vq);
     }
 
-    /// <summary>The radii of a rectangular cell's sub-filaments across it, as <see cref="SubCells"/> places them, and how many lie along it.</summary>
-    private static (double[] Radii, int Along) SubCellRadii(in Filament f)
+    /// <summary>The radii of a rectangular cell's columns of sub-filaments (<see cref="SubCells"/>), and how many lie along each.</summary>
+    private static (double[] Radii, int Along) RadiiAcross(in Filament f)
     {
         (int u, int v) = SubCellCounts(f);
-        double gmd = RectangularBand.GmdFactor * ((f.WidthMeters / u) + (f.HeightMeters / v));
+        SubCell[] subs = SubCells(f);
         var radii = new double[u];
         for (int i = 0; i < u; i++)
         {
-            radii[i] = Math.Max(f.RadiusMeters + ((((i + 0.5) / u) - 0.5) * f.WidthMeters), 0.5 * gmd);
+            radii[i] = subs[i * v].R;
         }
 
         return (radii, v);

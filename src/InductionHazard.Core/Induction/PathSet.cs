@@ -282,26 +282,56 @@ public sealed class PathSet
         }
 
         Matrix<double> a = Matrix<double>.Build.Dense(n, n, (i, j) => scale[i] * InductanceHenries[i, j] * scale[j]);
-        var evd = a.Evd(Symmetricity.Symmetric);
-        Vector<double> values = evd.EigenValues.Real();
-        Matrix<double> q = evd.EigenVectors;
-        var lambdas = new double[n];
+        if (PositiveEigen(a) is not { } solved)
+        {
+            return null;
+        }
+
         var w = new double[n, n];
         for (int k = 0; k < n; k++)
         {
-            lambdas[k] = values[k];
-            if (!(lambdas[k] > 0))
-            {
-                return null;
-            }
-
             for (int i = 0; i < n; i++)
             {
-                w[i, k] = scale[i] * q[i, k];
+                w[i, k] = scale[i] * solved.Vectors[i, k];
             }
         }
 
-        return new PathModes(lambdas, w);
+        return new PathModes(solved.Values, w);
+    }
+
+    /// <summary>
+    /// A symmetric matrix's eigenvalues (ascending) and eigenvectors, or null when one eigenvalue is not positive: the
+    /// pencil of a mesh whose inductances are not physical.
+    /// </summary>
+    internal static (double[] Values, Matrix<double> Vectors)? PositiveEigen(Matrix<double> symmetric)
+    {
+        var evd = symmetric.Evd(Symmetricity.Symmetric);
+        double[] values = evd.EigenValues.Real().ToArray();
+        foreach (double value in values)
+        {
+            if (!(value > 0))
+            {
+                return null;
+            }
+        }
+
+        return (values, evd.EigenVectors);
+    }
+
+    /// <summary>Whether a symmetric matrix is positive definite: its Cholesky factor exists.</summary>
+    internal static bool PositiveDefinite(Matrix<double> symmetric) => CholeskyFactor(symmetric) is not null;
+
+    /// <summary>The Cholesky factor of a symmetric matrix, or null when it is not positive definite.</summary>
+    private static Matrix<double>? CholeskyFactor(Matrix<double> symmetric)
+    {
+        try
+        {
+            return symmetric.Cholesky().Factor;
+        }
+        catch (ArgumentException)
+        {
+            return null;
+        }
     }
 
     /// <summary>
@@ -313,12 +343,7 @@ public sealed class PathSet
         int n = Count;
         Matrix<double> r0 = Matrix<double>.Build.Dense(n, n, (i, j) => rho * shape[i, j]);
         Matrix<double> l = Matrix<double>.Build.DenseOfArray(InductanceHenries);
-        Matrix<double> c;
-        try
-        {
-            c = r0.Cholesky().Factor;
-        }
-        catch (ArgumentException)
+        if (CholeskyFactor(r0) is not { } c)
         {
             return null;
         }
@@ -326,19 +351,11 @@ public sealed class PathSet
         Matrix<double> cInverse = c.Inverse();
         Matrix<double> a = cInverse * l * cInverse.Transpose();
         a = 0.5 * (a + a.Transpose());
-        var evd = a.Evd(Symmetricity.Symmetric);
-        Vector<double> values = evd.EigenValues.Real();
-        Matrix<double> w = cInverse.Transpose() * evd.EigenVectors;
-        var lambdas = new double[n];
-        for (int k = 0; k < n; k++)
+        if (PositiveEigen(a) is not { } solved)
         {
-            lambdas[k] = values[k];
-            if (!(lambdas[k] > 0))
-            {
-                return null;
-            }
+            return null;
         }
 
-        return new PathModes(lambdas, w.ToArray());
+        return new PathModes(solved.Values, (cInverse.Transpose() * solved.Vectors).ToArray());
     }
 }
