@@ -109,4 +109,42 @@ Describe 'A site policy in a verdict' {
         (Test-FieldExposure -Source $magnet -Position '0, 0, 0' -Policy @{ StaticExposureLimit = '8 T' }).Margin | Should -BeGreaterThan 1.14
         { Get-HazardPolicy -Path (New-Item (Join-Path $TestDrive 'nine.psd1') -Value "@{ StaticExposureLimit = '9 T' }") } | Should -Throw '*StaticExposureLimit*'
     }
+
+    It 'judges the public''s exposure where a policy names ExposureGroup = Public, for a visitor''s ring, a place, a safe distance and the policy shown' {
+        # ICNIRP 2010 at 50 Hz: 1 mT rms for workers (table 3), 0.2 mT for the public (table 4). 0.5 mT peak is 0.354 mT rms.
+        $ring = New-ConductiveItem -Name 'Visitor ring' -Material Gold -Diameter '19 mm' -WireDiameter '2 mm' -Contact Worn
+        $mains = New-FieldWaveform -Sine -Amplitude '0.5 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Gallery busbar'
+        $visitors = @{ Name = 'Visitor gallery'; ExposureGroup = 'Public' }
+        $worker = Test-InductionHazard -Item $ring -Source $mains
+        $visitor = Test-InductionHazard -Item $ring -Source $mains -Policy $visitors
+        $worker.Verdict | Should -Be 'Clear'
+        $visitor.Verdict | Should -Be 'Hazard'
+        $visitor.GoverningMechanism | Should -Be 'Exposure'
+        $visitor.ExposureMargin | Should -BeGreaterThan 0.565
+        $visitor.ExposureMargin | Should -BeLessThan 0.566
+        $exposure = $visitor.Mechanisms | Where-Object Mechanism -EQ 'Exposure'
+        $exposure.Sources | Should -Contain "site policy 'Visitor gallery': ExposureGroup = Public"
+        $exposure.Detail | Should -Match "against the general public's limit"
+        $visitor.PolicyHash | Should -Not -Be $worker.PolicyHash
+
+        $place = Test-FieldExposure -Source $mains -Policy $visitors
+        $place.Margin | Should -Be (Test-FieldExposure -Source $mains -Public).Margin
+        $place.Finding | Should -Match 'general public limit'
+
+        # A line carrying 2 kA at 50 Hz: the workers' ring is Clear from 0.57 m (0.5 mT rms), the visitor's from 2.83 m (0.1 mT rms).
+        $line = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Axis z -Name 'Feeder'
+        $workersDistance = Find-SafeDistance -Item $ring -Source $line -From '50 mm, 0, 0' -Direction 'x'
+        $visitorsDistance = Find-SafeDistance -Item $ring -Source $line -From '50 mm, 0, 0' -Direction 'x' -Policy $visitors
+        $visitorsDistance.DistanceMeters + 0.05 | Should -BeGreaterThan (0.999 * 2e-7 * 2000 / ([math]::Sqrt(2) * 1e-4))
+        $visitorsDistance.DistanceMeters + 0.05 | Should -BeLessThan (1.001 * 2e-7 * 2000 / ([math]::Sqrt(2) * 1e-4))
+        ($visitorsDistance.DistanceMeters + 0.05) / ($workersDistance.DistanceMeters + 0.05) | Should -BeGreaterThan 4.99
+
+        $file = Join-Path $TestDrive 'gallery.psd1'
+        Set-Content $file "@{ Name = 'Visitor gallery'; ExposureGroup = 'Public' }"
+        $shown = Get-HazardPolicy $file | Format-List | Out-String
+        $shown | Should -Match "ExposureGroup\s*: Public \(site policy 'Visitor gallery': ExposureGroup = Public\)"
+        (Get-HazardPolicy | Format-List | Out-String) | Should -Match 'ExposureGroup\s*: Occupational \(occupational exposure'
+        Set-Content $file "@{ ExposureGroup = 'Visitors' }"
+        { Get-HazardPolicy $file } | Should -Throw "*ExposureGroup: 'Visitors' is not one of Occupational, Public*"
+    }
 }

@@ -88,7 +88,7 @@ Describe 'Test-InductionHazard' {
             $out = Import-Csv $bare | Test-InductionHazard -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue -WarningAction SilentlyContinue
             $out | Should -BeNullOrEmpty
             $bad.Count | Should -Be 2
-            $bad[0].Exception.Message | Should -BeLike "row 1 ('Band'): InnerDiameter: '18' has no unit*'InnerDiameter (mm)'*-Unit @{ InnerDiameter = 'mm' }*"
+            $bad[0].Exception.Message | Should -BeLike "row 1 ('Band'): InnerDiameter: '18' has no unit; write it with its unit (for example '18 mm')*'InnerDiameter (mm)'*-Unit @{ InnerDiameter = 'mm' }*"
             $bad[0].FullyQualifiedErrorId | Should -BeLike 'MissingUnit,*'
         }
 

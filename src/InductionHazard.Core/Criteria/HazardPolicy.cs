@@ -41,6 +41,13 @@ public sealed class HazardPolicy
     /// </summary>
     public double StaticExposureLimitTesla { get; init; } = ExposureLimits.StaticOccupationalTesla;
 
+    /// <summary>
+    /// Whose exposure the person's own field is judged for: workers (the occupational limits, the default) or the
+    /// general public (ICNIRP 2009's 400 mT static limit and ICNIRP 2010's public reference levels), for a place where
+    /// visitors or untrained people wear or hold items.
+    /// </summary>
+    public ExposureGroup ExposureGroup { get; init; } = ExposureGroup.Occupational;
+
     /// <summary>The contact burn threshold against contact time (ISO 13732-1).</summary>
     public ContactBurnThreshold ContactBurn { get; init; } = ContactBurnThreshold.UncoatedMetal;
 
@@ -58,7 +65,9 @@ public sealed class HazardPolicy
 
     /// <summary>
     /// A SHA-256 fingerprint of every value the policy applies (its name, factor, limits and the burn threshold's
-    /// points), so that a report shows which policy produced it and an auditor can tell two policies apart.
+    /// points, and the exposure group where it is the public's), so that a report shows which policy produced it and an
+    /// auditor can tell two policies apart. The group is added only where it is not the default, so that a policy that
+    /// judges workers keeps the fingerprint it had before policies could name a group.
     /// </summary>
     public string Fingerprint => _fingerprint ??= TextHash.Sha256(string.Join(
         "|",
@@ -73,7 +82,8 @@ public sealed class HazardPolicy
         TextHash.Exact(TouchSeconds),
         TextHash.Exact(LaunchSpeedLimit),
         ContactBurn.Source,
-        string.Join(";", System.Linq.Enumerable.Select(ContactBurn.Points, p => TextHash.Exact(p.Seconds) + "s=" + TextHash.Exact(p.Celsius)))));
+        string.Join(";", System.Linq.Enumerable.Select(ContactBurn.Points, p => TextHash.Exact(p.Seconds) + "s=" + TextHash.Exact(p.Celsius))))
+        + (ExposureGroup == ExposureGroup.Occupational ? string.Empty : "|ExposureGroup=" + ExposureGroup));
 
     /// <summary>The keys a site policy may set, each with its kind, unit and published source.</summary>
     public static System.Collections.Generic.IReadOnlyList<PolicyKey> Keys { get; } = new[]
@@ -107,8 +117,16 @@ public sealed class HazardPolicy
             : "site policy '" + Name + "': " + k.Name + " = " + (k.Unit.Length > 0 ? SiFormat.Format(value, k.Unit) : SiFormat.Plain(value));
     }
 
-    /// <summary>True when any value departs from the published defaults.</summary>
-    public bool IsSitePolicy => System.Linq.Enumerable.Any(Keys, k => !k.Value(this).Equals(k.Value(Default)));
+    /// <summary>True when any value departs from the published defaults, or the policy judges the public's exposure.</summary>
+    public bool IsSitePolicy => ExposureGroup != Default.ExposureGroup || System.Linq.Enumerable.Any(Keys, k => !k.Value(this).Equals(k.Value(Default)));
+
+    /// <summary>
+    /// Where the exposure group comes from: the published occupational limits by default, or the site policy by name
+    /// ("site policy 'Gallery rules': ExposureGroup = Public").
+    /// </summary>
+    public string ExposureGroupSource => ExposureGroup == Default.ExposureGroup
+        ? "occupational exposure (ICNIRP 2009, ICNIRP 2010)"
+        : "site policy '" + Name + "': ExposureGroup = " + ExposureGroup;
 
     /// <summary>The span each value may take: wide enough for any site's rules, narrow enough to catch a wrong unit.</summary>
     private static readonly PhysicalRange[] Ranges =

@@ -8,8 +8,9 @@ using InductionHazard.Quantities;
 namespace InductionHazard.Criteria;
 
 /// <summary>
-/// Builds a site policy from its data (a policy file or a site file's Policy table, read as data): Name and any of
-/// the keys of <see cref="HazardPolicy.Keys"/>, each a number in SI or a string with its unit. What it leaves out
+/// Builds a site policy from its data (a policy file or a site file's Policy table, read as data): Name, ExposureGroup
+/// (Occupational or Public) and any of the keys of <see cref="HazardPolicy.Keys"/>, each a number in SI or a string
+/// with its unit. What it leaves out
 /// keeps the published default. An unknown key, a value of the wrong kind or out of range is an error naming the key.
 /// </summary>
 public static class PolicyReader
@@ -25,6 +26,7 @@ public static class PolicyReader
     {
         var fields = new RecordFields(RecordFields.FromTable(data));
         string name = fields.Text("Name", required: false, "Policy", "PolicyName") ?? System.IO.Path.GetFileNameWithoutExtension(origin);
+        ExposureGroup? group = fields.Choice<ExposureGroup>("ExposureGroup", required: false);
         var values = new Dictionary<string, double>(StringComparer.Ordinal);
         foreach (PolicyKey key in HazardPolicy.Keys)
         {
@@ -35,7 +37,7 @@ public static class PolicyReader
             }
         }
 
-        fields.RejectUnused("is not a policy key (the keys: Name, " + string.Join(", ", HazardPolicy.Keys.Select(k => k.Name)) + ")");
+        fields.RejectUnused("is not a policy key (the keys: Name, ExposureGroup, " + string.Join(", ", HazardPolicy.Keys.Select(k => k.Name)) + ")");
         if (fields.Errors.Count > 0)
         {
             throw new DataFileException(origin, null, string.Join("; ", fields.Errors.Select(e => e.ToString())), ErrorId);
@@ -46,6 +48,7 @@ public static class PolicyReader
         var policy = new HazardPolicy
         {
             Name = string.IsNullOrWhiteSpace(name) ? "site policy" : name,
+            ExposureGroup = group ?? d.ExposureGroup,
             SafetyFactor = Get("SafetyFactor", d.SafetyFactor),
             AlternatingVoltageLimitRms = Get("AlternatingVoltageLimit", d.AlternatingVoltageLimitRms),
             DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),

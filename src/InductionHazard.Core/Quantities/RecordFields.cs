@@ -110,7 +110,7 @@ public sealed class RecordFields
             {
                 (_errors ??= new()).Add(new FieldError(
                     field,
-                    "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + text.Trim() + " " + QuantityKindInfo.Of(kind).CanonicalSymbol + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
+                    "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + text.Trim() + " " + Example(kind) + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
                     "MissingUnit"));
                 return null;
             }

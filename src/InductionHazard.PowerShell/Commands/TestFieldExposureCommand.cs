@@ -25,11 +25,11 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     [Vector(QuantityKind.Length, Many = true)]
     public Vector3D[] Position { get; set; } = { Vector3D.Zero };
 
-    /// <summary>Judge against the general public's limits instead of the occupational ones.</summary>
+    /// <summary>Judge against the general public's limits instead of the occupational ones (as a policy whose ExposureGroup is Public does).</summary>
     [Parameter]
     public SwitchParameter Public { get; set; }
 
-    /// <summary>The safety factor between Clear and Caution: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published one.</summary>
+    /// <summary>The safety factor between Clear and Caution, the static limit for workers and whose limits apply (ExposureGroup): a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published one.</summary>
     [Parameter]
     [Policy]
     public HazardPolicy? Policy { get; set; }
@@ -54,7 +54,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         {
             try
             {
-                FieldExposure exposure = FieldExposure.At(_source, point, Public.IsPresent, Policy ?? HazardPolicy.Default);
+                FieldExposure exposure = FieldExposure.At(_source, point, Public.IsPresent || Policy?.ExposureGroup == ExposureGroup.Public, Policy ?? HazardPolicy.Default);
                 if (exposure.Verdict == Verdict.Indeterminate)
                 {
                     WriteWarning("position " + point + ": " + exposure.Finding);

@@ -60,6 +60,42 @@ public class ExposureCheckTests
         Assert.Throws<Errors.InvalidInputException>(() => new HazardPolicy { StaticExposureLimitTesla = 9 }.Validated());
     }
 
+    [Validates("Exposure of a visitor's ring at 50 Hz: 0.2 mT rms for the general public (1 mT for workers)", "ICNIRP 2010, Health Phys 99:818, tables 3 and 4", "1e-9")]
+    [Fact]
+    public void APolicyForThePublicJudgesAWearersFieldAgainstThePublicsReferenceLevel()
+    {
+        // 0.5 mT peak at 50 Hz, one direction: 0.354 mT rms. Workers: 1 mT rms from 25 to 300 Hz, margin 2.83, Clear.
+        // The public: 0.2 mT rms from 25 to 400 Hz, margin 0.566, Hazard.
+        var visitors = new HazardPolicy { Name = "visitor gallery", ExposureGroup = ExposureGroup.Public }.Validated();
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.5e-3, 50), 1);
+        InductionAssessment workers = HazardAssessor.Assess(r, HazardPolicy.Default), visitor = HazardAssessor.Assess(r, visitors);
+        double rms = 0.5e-3 / Math.Sqrt(2);
+        Within.Relative(1e-3 / rms, workers.ExposureMargin!.Value, 1e-9, "Exposure margin against the occupational 1 mT");
+        Within.Relative(2e-4 / rms, visitor.ExposureMargin!.Value, 1e-9, "Exposure margin against the public's 0.2 mT");
+        Assert.Equal(Verdict.Clear, Exposure(workers).Verdict);
+        Assert.Equal(Verdict.Hazard, Exposure(visitor).Verdict);
+        Assert.Equal(Verdict.Hazard, visitor.Verdict);
+        Assert.Contains("against the general public's limit", Exposure(visitor).Detail, StringComparison.Ordinal);
+        Assert.Contains("against the occupational limit", Exposure(workers).Detail, StringComparison.Ordinal);
+        Assert.Contains(Exposure(visitor).Sources, s => s == "site policy 'visitor gallery': ExposureGroup = Public");
+        Assert.DoesNotContain(Exposure(workers).Sources, s => s.Contains("ExposureGroup", StringComparison.Ordinal));
+        Assert.Equal(FieldExposure.At(Fixtures.UniformSine(0.5e-3, 50), Vector3D.Zero, true, HazardPolicy.Default).Margin, visitor.ExposureMargin!.Value, 12);
+    }
+
+    [Validates("Exposure of a visitor holding an item in a field ramped to 0.6 T: 400 mT static for the general public", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
+    [Fact]
+    public void APolicyForThePublicJudgesAStaticFieldAgainstThePublics400MilliTesla()
+    {
+        var visitors = new HazardPolicy { Name = "visitor gallery", ExposureGroup = ExposureGroup.Public }.Validated();
+        InductionResponse r = Fixtures.Respond(Fixtures.Ring("Titanium", 0.05, 0.004, gap: 0.01, contact: "Held"), Fixtures.UniformRamp(0, 0.6, 600));
+        InductionAssessment workers = HazardAssessor.Assess(r, HazardPolicy.Default), visitor = HazardAssessor.Assess(r, visitors);
+        Within.Relative(2.0 / 0.6, workers.ExposureMargin!.Value, 1e-9, "Exposure margin against the workers' 2 T");
+        Within.Relative(0.4 / 0.6, visitor.ExposureMargin!.Value, 1e-9, "Exposure margin against the public's 400 mT");
+        Assert.Equal(Verdict.Hazard, Exposure(visitor).Verdict);
+        Assert.DoesNotContain("limbs", Exposure(visitor).Detail, StringComparison.Ordinal);
+        Assert.Contains("limbs alone may take 8 T", Exposure(workers).Detail, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void TheMarginIsTheOneTestFieldExposureGivesAtTheSamePlace()
     {

@@ -48,17 +48,34 @@ public sealed class SafeDistanceTests
     [Validates("Find-SafeDistance: a worn ring beside a 50 Hz line is Clear from where the wearer's field falls to the occupational reference level over the safety factor", "ICNIRP 2010, Health Phys 99:818, table 3 (1 mT rms at 25-300 Hz, occupational); field of a long straight conductor, B = mu0 I / (2 pi r) (Ampere's law)", "0.1 %")]
     public void AWornRingBesideAMainsLineIsClearWhereTheWearersFieldMeetsTheReferenceLevel()
     {
-        // A closed copper ring worn at the centre it is placed at: at 50 Hz and these distances its own currents are
-        // far below any limit (some 0.1 mV of emf), so the wearer's exposure governs. Clear when 1 mT rms / B_rms >= 2:
-        // mu0 I / (2 pi r sqrt 2) = 0.5 mT, r = mu0 I / (2 pi sqrt 2 0.5 mT) with I the current's amplitude.
+        // Clear when 1 mT rms / B_rms >= 2: mu0 I / (2 pi r sqrt 2) = 0.5 mT.
+        WornRingBesideALineIsClearWhereTheFieldIs(HazardPolicy.Default, 0.5e-3, 2.0);
+    }
+
+    [Fact]
+    [Validates("Find-SafeDistance for the public: a visitor's worn ring beside a 50 Hz line is Clear from where the field falls to the public's reference level over the safety factor", "ICNIRP 2010, Health Phys 99:818, table 4 (0.2 mT rms at 25-400 Hz, general public); B = mu0 I / (2 pi r) (Ampere's law)", "0.1 %")]
+    public void AVisitorsWornRingBesideAMainsLineIsClearFiveTimesFartherOut()
+    {
+        // Clear when 0.2 mT rms / B_rms >= 2: mu0 I / (2 pi r sqrt 2) = 0.1 mT, five times the workers' distance.
+        WornRingBesideALineIsClearWhereTheFieldIs(new HazardPolicy { Name = "visitor gallery", ExposureGroup = ExposureGroup.Public }.Validated(), 0.1e-3, 5.0);
+    }
+
+    /// <summary>
+    /// A closed copper ring worn at the centre it is placed at, beside a 2 kA, 50 Hz line: at these distances its own
+    /// currents are far below any limit (some 0.1 mV of emf), so the wearer's exposure governs, and the search finds
+    /// where the line's rms field falls to <paramref name="clearRmsTesla"/>: r = mu0 I / (2 pi sqrt 2 B_rms) with I the
+    /// current's amplitude.
+    /// </summary>
+    private static void WornRingBesideALineIsClearWhereTheFieldIs(HazardPolicy policy, double clearRmsTesla, double maxDistanceMeters)
+    {
         double amperes = 2000;
-        double expected = Mu0 * amperes / (2 * Math.PI * Math.Sqrt(2) * 0.5e-3);
+        double expected = Mu0 * amperes / (2 * Math.PI * Math.Sqrt(2) * clearRmsTesla);
         var from = new Vector3D(0.05, 0, 0);
         ConductiveItem ring = ItemRecordReader.Read(
             new Dictionary<string, object?> { ["Name"] = "worn ring", ["Material"] = "Copper", ["Diameter"] = 0.02, ["WireDiameter"] = 0.002, ["Contact"] = "Skin" },
             MaterialLibrary.BuiltIn);
 
-        SafeDistanceResult found = SafeDistance.Find(ring, Line(amperes, 50), from, Vector3D.UnitX, 2.0, HazardPolicy.Default);
+        SafeDistanceResult found = SafeDistance.Find(ring, Line(amperes, 50), from, Vector3D.UnitX, maxDistanceMeters, policy);
 
         Assert.True(found.Found);
         Within.Relative(expected, from.X + found.DistanceMeters, 0.001, "centre distance of the crossing");

@@ -46,6 +46,33 @@ public sealed class PolicyReaderTests
     }
 
     [Fact]
+    public void APolicyMayJudgeThePublicsExposureAndSaysSoInItsSourceAndFingerprint()
+    {
+        HazardPolicy visitors = PolicyReader.Read(new Hashtable { ["Name"] = "Gallery", ["ExposureGroup"] = "public" }, "gallery.psd1");
+        Assert.Equal(ExposureGroup.Public, visitors.ExposureGroup);
+        Assert.True(visitors.IsSitePolicy);
+        Assert.Equal("site policy 'Gallery': ExposureGroup = Public", visitors.ExposureGroupSource);
+        HazardPolicy workers = PolicyReader.Read(new Hashtable { ["Name"] = "Gallery" }, "gallery.psd1");
+        Assert.Equal(ExposureGroup.Occupational, workers.ExposureGroup);
+        Assert.False(workers.IsSitePolicy);
+        Assert.NotEqual(workers.Fingerprint, visitors.Fingerprint);
+
+        // Naming the default group changes nothing, the fingerprint included: a policy that judges workers keeps the one it had.
+        HazardPolicy named = PolicyReader.Read(new Hashtable { ["Name"] = "Gallery", ["ExposureGroup"] = "Occupational" }, "gallery.psd1");
+        Assert.Equal(workers.Fingerprint, named.Fingerprint);
+        Assert.Equal(HazardPolicy.Default.Fingerprint, new HazardPolicy { ExposureGroup = ExposureGroup.Occupational }.Fingerprint);
+        Assert.False(new HazardPolicy { ExposureGroup = ExposureGroup.Occupational }.IsSitePolicy);
+        Assert.True(new HazardPolicy { ExposureGroup = ExposureGroup.Public }.IsSitePolicy);
+
+        foreach (object bad in new object[] { "Visitors", 1, true, "Public, Occupational" })
+        {
+            DataFileException ex = Assert.Throws<DataFileException>(() => PolicyReader.Read(new Hashtable { ["ExposureGroup"] = bad }, "gallery.psd1"));
+            Assert.Contains("ExposureGroup: '", ex.Message, StringComparison.Ordinal);
+            Assert.Contains("is not one of Occupational, Public", ex.Message, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
     public void HostilePolicyTablesGiveAValidPolicyOrAnErrorNamingTheKey()
     {
         // Fixed seed: each table sets some keys to good values, some to hostile ones, and sometimes a key that does not exist.

@@ -13,8 +13,9 @@ namespace InductionHazard.Assessment.Checks;
 
 /// <summary>
 /// Exposure: a worn or held item puts a person where it is, so the person's own field there is judged as
-/// Test-FieldExposure judges it (ICNIRP 2009 static limits, ICNIRP 2010 reference levels, the weighted-peak method),
-/// occupational limits, the head and trunk's for a static field. A loose or fixed item puts no one there by itself.
+/// Test-FieldExposure judges it (ICNIRP 2009 static limits, ICNIRP 2010 reference levels, the weighted-peak method):
+/// the occupational limits (the head and trunk's for a static field), or the general public's where the policy's
+/// <see cref="HazardPolicy.ExposureGroup"/> says so. A loose or fixed item puts no one there by itself.
 /// </summary>
 /// <remarks>
 /// The exposure depends only on the source and the place, so it is found once per source and place and shared by
@@ -68,6 +69,11 @@ public sealed class ExposureCheck : IHazardCheck
             }
         }
 
+        if (policy.ExposureGroup != HazardPolicy.Default.ExposureGroup)
+        {
+            kept.Add(policy.ExposureGroupSource);
+        }
+
         string[] sources = kept.ToArray();
         if (exposure.Verdict == Verdict.Indeterminate || !Finite.Is(exposure.Margin))
         {
@@ -76,18 +82,19 @@ public sealed class ExposureCheck : IHazardCheck
         }
 
         return MechanismResult.Judged(
-            Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, (exposure, response.Item.Contact), static f => Detail(f.exposure, f.Contact));
+            Mechanism, "a person's own field at the item", exposure.ComparedTesla, exposure.LimitTesla, "T", exposure.Margin, policy.SafetyFactor, sources, (exposure, response.Item.Contact, policy.ExposureGroup), static f => Detail(f.exposure, f.Contact, f.ExposureGroup));
     }
 
-    private static string Detail(FieldExposure exposure, ContactKind contact)
+    private static string Detail(FieldExposure exposure, ContactKind contact, ExposureGroup group)
     {
         string who = contact == ContactKind.Skin ? "the wearer" : "the person holding it";
-        return "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + " against the occupational limit "
-            + SiFormat.Format(exposure.LimitTesla, "T") + (exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T; a site policy may set StaticExposureLimit up to 8 T where the environment is controlled)" : string.Empty)
+        bool workers = group == ExposureGroup.Occupational;
+        return "the field " + who + " is in, " + exposure.Basis + ", " + SiFormat.Format(exposure.ComparedTesla, "T") + (workers ? " against the occupational limit " : " against the general public's limit ")
+            + SiFormat.Format(exposure.LimitTesla, "T") + (workers && exposure.Basis.StartsWith("static", StringComparison.Ordinal) ? " for the head and trunk (the limbs alone may take 8 T; a site policy may set StaticExposureLimit up to 8 T where the environment is controlled)" : string.Empty)
             + "; it applies with or without the item";
     }
 
-    /// <summary>The occupational exposure at a place, found once per source, place and policy.</summary>
+    /// <summary>The exposure at a place for the policy's group, found once per source, place and policy.</summary>
     private static FieldExposure At(FieldSource source, Vector3D place, HazardPolicy policy)
     {
         var key = (place, policy.Fingerprint);
@@ -97,7 +104,7 @@ public sealed class ExposureCheck : IHazardCheck
             return known;
         }
 
-        FieldExposure found = FieldExposure.At(source, place, publicExposure: false, policy);
+        FieldExposure found = FieldExposure.At(source, place, publicExposure: policy.ExposureGroup == ExposureGroup.Public, policy);
         if (places.Count >= PlacesPerSource)
         {
             places.Clear();

@@ -1,0 +1,16 @@
+namespace InductionHazard.Criteria;
+
+/// <summary>
+/// Whose exposure to a field a policy judges (ICNIRP 2009 and 2010 set limits for each): workers who know of the field
+/// and are trained for it, or the general public (visitors, contractors without that training, anyone else), whose
+/// limits are lower.
+/// </summary>
+[Newtonsoft.Json.JsonConverter(typeof(Newtonsoft.Json.Converters.StringEnumConverter))]
+public enum ExposureGroup
+{
+    /// <summary>Workers: the occupational limits (the default).</summary>
+    Occupational,
+
+    /// <summary>The general public: the limits for the public, five times lower than the workers' from 25 Hz up.</summary>
+    Public,
+}
