@@ -21,6 +21,23 @@
             Position    = '250 mm, 0, 0'
         }
         @{
+            Name        = 'Switchroom B visitor walkway'
+            Description = 'Visitors on a tour pass 2.5 m from the main busbar while it carries its 3 kA load.'
+            Sources     = @(
+                @{
+                    Form      = 'Busbar'
+                    Name      = 'Busbar B1 load'
+                    Width     = '120 mm'
+                    Thickness = '10 mm'
+                    Axis      = 'z'
+                    Waveform  = @{ Form = 'Sine'; Amplitude = '4.24 kA'; Frequency = '50 Hz' }
+                }
+            )
+            Position    = '2.5 m, 0, 0'
+            # Visitors are members of the public: their own exposure is judged against the public's limits.
+            Policy      = @{ Name = 'Marrowby Heath visitor rules'; ExposureGroup = 'Public' }
+        }
+        @{
             Name        = 'Pulse cell P2 coil'
             Description = 'A hand 60 mm above the pulse coil when the capacitor bank fires.'
             Sources     = @(

@@ -147,4 +147,40 @@ Describe 'A site policy in a verdict' {
         Set-Content $file "@{ ExposureGroup = 'Visitors' }"
         { Get-HazardPolicy $file } | Should -Throw "*ExposureGroup: 'Visitors' is not one of Occupational, Public*"
     }
+
+    It 'applies a station''s own policy over the site''s at that station alone, from a table or a file, unless -Policy is given' {
+        $folder = Join-Path $TestDrive 'gallery-site'
+        New-Item -ItemType Directory $folder | Out-Null
+        Copy-Item $policyFile (Join-Path $folder 'rules.psd1')
+        Set-Content (Join-Path $folder 'gallery.psd1') "@{ Name = 'Gallery rules'; ExposureGroup = 'Public' }"
+        $siteFile = Join-Path $folder 'site.psd1'
+        $mains = "Sources = @( @{ Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = '0.5 mT'; Frequency = '50 Hz' } } )"
+        Set-Content $siteFile @"
+@{
+    Site = 'Test bay'
+    Policy = 'rules.psd1'
+    Stations = @(
+        @{ Name = 'Hall'; $mains }
+        @{ Name = 'Gallery'; $mains; Policy = 'gallery.psd1' }
+        @{ Name = 'Tour stop'; $mains; Policy = @{ ExposureGroup = 'Public' } }
+    )
+}
+"@
+        $site = Import-HazardSite $siteFile
+        $site.PolicyAt('Gallery').Name | Should -Be 'Gallery rules'
+        $site.PolicyAt('Tour stop').Name | Should -Be 'Marrowby Heath site rules 2026 at Tour stop'
+        $site.PolicyAt('Tour stop').AlternatingVoltageLimitRms | Should -Be 25 -Because 'a station''s policy keeps the site''s values it does not set'
+        $rows = @('Hall', 'Gallery', 'Tour stop') | ForEach-Object { [pscustomobject]@{ Name = "Ring at $_"; Material = 'Gold'; Diameter = '19 mm'; WireDiameter = '2 mm'; Station = $_ } }
+
+        $serial = $rows | Test-InductionHazard -Site $site
+        ($serial | ForEach-Object Verdict) -join ',' | Should -Be 'Caution,Hazard,Hazard' -Because 'the site''s safety factor is 3; the public''s limit is a fifth of the workers'''
+        ($serial | ForEach-Object PolicyName) -join ',' | Should -Be 'Marrowby Heath site rules 2026,Gallery rules,Marrowby Heath site rules 2026 at Tour stop'
+        ($serial[2].Mechanisms | Where-Object Mechanism -EQ 'Exposure').Sources | Should -Contain "site policy 'Marrowby Heath site rules 2026 at Tour stop': ExposureGroup = Public"
+        $threads = $rows | Test-InductionHazard -Site $site -ThrottleLimit 2
+        ($threads | ForEach-Object PolicyHash) -join ',' | Should -Be (($serial | ForEach-Object PolicyHash) -join ',')
+        (($rows | Test-InductionHazard -Site $site -Policy (Get-HazardPolicy)) | ForEach-Object Verdict) -join ',' | Should -Be 'Clear,Clear,Clear'
+
+        Remove-Item (Join-Path $folder 'gallery.psd1')
+        { Import-HazardSite $siteFile } | Should -Throw "*station 'Gallery', its Policy file*"
+    }
 }

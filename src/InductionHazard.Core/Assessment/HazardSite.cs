@@ -48,6 +48,13 @@ public sealed class HazardSite
     /// <summary>The site's own policy, from its file; null when the site keeps the published limits.</summary>
     public Criteria.HazardPolicy? Policy { get; init; }
 
+    /// <summary>
+    /// The policy that applies at a station: the station's own (its file's values merged over the site's), else the
+    /// site's; null when neither sets one and the published limits apply.
+    /// </summary>
+    /// <exception cref="InvalidInputException">No station has that name.</exception>
+    public Criteria.HazardPolicy? PolicyAt(string station) => Find(station).Policy ?? Policy;
+
     /// <summary>The file the site was read from.</summary>
     public string Path { get; }
 
@@ -91,6 +98,12 @@ public sealed class HazardSite
 /// <param name="Description">Why the station is assessed, in a sentence.</param>
 public sealed record Station(string Name, FieldSource Source, Placement Placement, double? ExposureSeconds, double? LeaveSeconds, string Description)
 {
+    /// <summary>
+    /// The station's own policy (a visitors' gallery judging the public's exposure, a controlled magnet hall with a
+    /// higher static limit), merged over the site's; null when the site's applies.
+    /// </summary>
+    public Criteria.HazardPolicy? Policy { get; init; }
+
     /// <inheritdoc />
     public override string ToString() => Name;
 }

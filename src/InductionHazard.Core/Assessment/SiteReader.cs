@@ -14,8 +14,9 @@ namespace InductionHazard.Assessment;
 /// <summary>
 /// Builds a site from its data (a PowerShell data file read as data): Site (the name) and Stations, each a table
 /// with Name, Sources (tables of a source's values with a Waveform table), and optionally Position, Normal,
-/// ExposureTime, LeaveTime and Description; and optionally the site's Policy (a table of policy values, read by
-/// <see cref="Criteria.PolicyReader"/>). Every problem names the station and the value.
+/// ExposureTime, LeaveTime, Description and Policy (the station's own policy values, merged over the site's); and
+/// optionally the site's Policy (a table of policy values, read by <see cref="Criteria.PolicyReader"/>). Every problem
+/// names the station and the value.
 /// </summary>
 public static class SiteReader
 {
@@ -46,18 +47,16 @@ public static class SiteReader
                 throw new RecordException("site file", top.Errors);
             }
 
+            Criteria.HazardPolicy? sitePolicy = rawPolicy is IDictionary policy ? Criteria.PolicyReader.Read(policy, path + " (its Policy)") : null;
             var stations = new List<Station>();
             int n = 0;
             foreach (object? entry in List(rawStations))
             {
                 n++;
-                stations.Add(ReadStation(entry, n, directory));
+                stations.Add(ReadStation(entry, n, directory, path, sitePolicy));
             }
 
-            return new HazardSite(name, stations, path)
-            {
-                Policy = rawPolicy is IDictionary policy ? Criteria.PolicyReader.Read(policy, path + " (its Policy)") : null,
-            };
+            return new HazardSite(name, stations, path) { Policy = sitePolicy };
         }
         catch (Exception ex) when (ex is RecordException or InvalidInputException or QuantityFormatException or UnknownMaterialException)
         {
@@ -69,7 +68,7 @@ public static class SiteReader
         }
     }
 
-    private static Station ReadStation(object? entry, int n, string directory)
+    private static Station ReadStation(object? entry, int n, string directory, string path, Criteria.HazardPolicy? sitePolicy)
     {
         if (entry is not IDictionary table)
         {
@@ -91,7 +90,13 @@ public static class SiteReader
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
         double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
         string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
-        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, Description)");
+        object? rawPolicy = fields.Raw("Policy", required: false);
+        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, Description, Policy)");
+        if (rawPolicy is not null and not IDictionary)
+        {
+            fields.AddError("Policy", "must be a table of policy values (@{ ExposureGroup = 'Public' }) or the path of a policy file");
+        }
+
         if (fields.Errors.Count > 0 || name is null || rawSources is null)
         {
             throw new RecordException(label, fields.Errors);
@@ -128,7 +133,11 @@ public static class SiteReader
         Scenario.ValidateExposure(exposure);
         Scenario.ValidateLeave(leave);
         FieldSource source = FieldSource.Combine(sources, sources.Count == 1 ? sources[0].Name : name);
-        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description);
+        // The station's values over the site's (or the published ones), named after both unless it names itself.
+        Criteria.HazardPolicy? own = rawPolicy is IDictionary policyValues
+            ? Criteria.PolicyReader.Read(policyValues, path + " (" + label + ", its Policy)", sitePolicy, (sitePolicy?.Name ?? "published limits") + " at " + name)
+            : null;
+        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description) { Policy = own };
     }
 
     private static Vector3D? Vector(RecordFields fields, string name, QuantityKind? kind, string label)

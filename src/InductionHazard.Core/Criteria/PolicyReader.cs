@@ -21,11 +21,13 @@ public static class PolicyReader
     /// <summary>Reads the policy.</summary>
     /// <param name="data">The table of values.</param>
     /// <param name="origin">Where it came from (a file's path), for messages and as the policy's name when it gives none.</param>
+    /// <param name="basis">The policy whose values it keeps where it sets none (a station's policy over its site's); the published one by default.</param>
+    /// <param name="defaultName">Its name when it gives none; by default the file's name.</param>
     /// <exception cref="DataFileException">A key is unknown, or a value is malformed or out of range; the message names the key.</exception>
-    public static HazardPolicy Read(IDictionary data, string origin)
+    public static HazardPolicy Read(IDictionary data, string origin, HazardPolicy? basis = null, string? defaultName = null)
     {
         var fields = new RecordFields(RecordFields.FromTable(data));
-        string name = fields.Text("Name", required: false, "Policy", "PolicyName") ?? System.IO.Path.GetFileNameWithoutExtension(origin);
+        string name = fields.Text("Name", required: false, "Policy", "PolicyName") ?? defaultName ?? System.IO.Path.GetFileNameWithoutExtension(origin);
         ExposureGroup? group = fields.Choice<ExposureGroup>("ExposureGroup", required: false);
         var values = new Dictionary<string, double>(StringComparer.Ordinal);
         foreach (PolicyKey key in HazardPolicy.Keys)
@@ -43,12 +45,13 @@ public static class PolicyReader
             throw new DataFileException(origin, null, string.Join("; ", fields.Errors.Select(e => e.ToString())), ErrorId);
         }
 
-        HazardPolicy d = HazardPolicy.Default;
+        HazardPolicy d = basis ?? HazardPolicy.Default;
         double Get(string key, double fallback) => values.TryGetValue(key, out double v) ? v : fallback;
         var policy = new HazardPolicy
         {
             Name = string.IsNullOrWhiteSpace(name) ? "site policy" : name,
             ExposureGroup = group ?? d.ExposureGroup,
+            ContactBurn = d.ContactBurn,
             SafetyFactor = Get("SafetyFactor", d.SafetyFactor),
             AlternatingVoltageLimitRms = Get("AlternatingVoltageLimit", d.AlternatingVoltageLimitRms),
             DirectVoltageLimit = Get("DirectVoltageLimit", d.DirectVoltageLimit),

@@ -11,7 +11,7 @@ namespace InductionHazard.PowerShell.Commands;
 [OutputType(typeof(HazardSite))]
 public sealed class ImportHazardSiteCommand : PSCmdlet
 {
-    /// <summary>The site file (.psd1): Site, Stations with Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description, and optionally Policy (a table, or a policy file's path).</summary>
+    /// <summary>The site file (.psd1): Site, Stations with Name, Sources, Position, Normal, ExposureTime, LeaveTime, Description and Policy (the station's own, over the site's), and optionally Policy (a table, or a policy file's path).</summary>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipelineByPropertyName = true)]
     [Alias("FullName")]
     public string Path { get; set; } = string.Empty;
@@ -23,18 +23,13 @@ public sealed class ImportHazardSiteCommand : PSCmdlet
         try
         {
             System.Collections.IDictionary data = DataFile.Read(file, SiteReader.ErrorId);
-            if (data["Policy"] is string policyPath)
+            ReadPolicyFile(data, file, "its Policy file");
+            object? stations = data["Stations"];
+            foreach (object? station in stations is System.Collections.IList list ? list : new[] { stations })
             {
-                // A policy file named by the site file, relative to the site file's folder.
-                string folder = System.IO.Path.GetDirectoryName(file) ?? ".";
-                string policyFile = System.IO.Path.Combine(folder, policyPath);
-                try
+                if (station is System.Collections.IDictionary table)
                 {
-                    data["Policy"] = DataFile.Read(policyFile, PolicyReader.ErrorId);
-                }
-                catch (DataFileException ex)
-                {
-                    throw new DataFileException(file, null, "its Policy file: " + ex.Message, SiteReader.ErrorId);
+                    ReadPolicyFile(table, file, "station '" + table["Name"] + "', its Policy file");
                 }
             }
 
@@ -43,6 +38,24 @@ public sealed class ImportHazardSiteCommand : PSCmdlet
         catch (InductionHazardException ex)
         {
             ThrowTerminatingError(ErrorRecords.From(ex, Path));
+        }
+    }
+
+    /// <summary>Replaces a table's Policy that names a policy file (relative to the site file's folder) with the file's values.</summary>
+    private static void ReadPolicyFile(System.Collections.IDictionary table, string siteFile, string what)
+    {
+        if (table["Policy"] is string policyPath)
+        {
+            string folder = System.IO.Path.GetDirectoryName(siteFile) ?? ".";
+            string policyFile = System.IO.Path.Combine(folder, policyPath);
+            try
+            {
+                table["Policy"] = DataFile.Read(policyFile, PolicyReader.ErrorId);
+            }
+            catch (DataFileException ex)
+            {
+                throw new DataFileException(siteFile, null, what + ": " + ex.Message, SiteReader.ErrorId);
+            }
         }
     }
 }

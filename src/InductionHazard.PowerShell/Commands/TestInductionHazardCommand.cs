@@ -10,14 +10,14 @@ namespace InductionHazard.PowerShell.Commands;
 [OutputType(typeof(InductionAssessment))]
 public sealed class TestInductionHazardCommand : ItemPipelineCommand
 {
-    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the site's policy (with -Site), else the published limits.</summary>
+    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default, with -Site, the policy of the row's station (its own over the site's), else the published limits.</summary>
     [Parameter]
     [Policy]
     public HazardPolicy? Policy { get; set; }
 
     /// <inheritdoc />
     protected override object Compute(InductionResponse response, int row) =>
-        HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.Policy : null) ?? HazardPolicy.Default, row);
+        HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.PolicyAt(response.Scenario.StationName!) : null) ?? HazardPolicy.Default, row);
 
     /// <inheritdoc />
     protected override object Relabel(object first, InductionResponse response, int row) =>

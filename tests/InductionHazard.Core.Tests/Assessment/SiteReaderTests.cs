@@ -1,5 +1,6 @@
 using System.Collections;
 using InductionHazard.Assessment;
+using InductionHazard.Criteria;
 using InductionHazard.Errors;
 using Xunit;
 
@@ -39,6 +40,62 @@ public class SiteReaderTests
         var ex = Assert.Throws<DataFileException>(() => SiteReader.Read(Site(station), "site.psd1"));
         Assert.Contains("station 'Bench' source 1 waveform", ex.Message, System.StringComparison.Ordinal);
         Assert.Contains(named, ex.Message, System.StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void AStationsOwnPolicyIsMergedOverTheSitesAndAppliesThereAlone()
+    {
+        static Hashtable Mains(string name, object? policy = null)
+        {
+            var station = new Hashtable { ["Name"] = name, ["Sources"] = new Hashtable { ["Form"] = "Uniform", ["Waveform"] = new Hashtable { ["Form"] = "Sine", ["Amplitude"] = "0.5 mT", ["Frequency"] = "50 Hz" } } };
+            if (policy is not null)
+            {
+                station["Policy"] = policy;
+            }
+
+            return station;
+        }
+
+        var data = new Hashtable
+        {
+            ["Site"] = "Test site",
+            ["Policy"] = new Hashtable { ["Name"] = "Site rules", ["SafetyFactor"] = 3, ["TouchTime"] = "2 s" },
+            ["Stations"] = new object[]
+            {
+                Mains("Switchroom"),
+                Mains("Gallery", new Hashtable { ["ExposureGroup"] = "Public", ["SafetyFactor"] = 4 }),
+                Mains("Tour stop", new Hashtable { ["Name"] = "Tour rules", ["ExposureGroup"] = "Public" }),
+            },
+        };
+        HazardSite site = SiteReader.Read(data, "site.psd1");
+
+        Assert.Null(site.Find("Switchroom").Policy);
+        Assert.Same(site.Policy, site.PolicyAt("switchroom"));
+        HazardPolicy gallery = site.PolicyAt("Gallery")!;
+        Assert.Equal("Site rules at Gallery", gallery.Name);
+        Assert.Equal(ExposureGroup.Public, gallery.ExposureGroup);
+        Assert.Equal(4, gallery.SafetyFactor);
+        Assert.Equal(2, gallery.TouchSeconds);
+        Assert.Equal(ExposureGroup.Occupational, site.Policy!.ExposureGroup);
+        Assert.Equal("Tour rules", site.PolicyAt("Tour stop")!.Name);
+        Assert.Equal(3, site.PolicyAt("Tour stop")!.SafetyFactor);
+        Assert.NotEqual(site.Policy.Fingerprint, gallery.Fingerprint);
+
+        // Without a site policy a station's merges over the published limits.
+        data.Remove("Policy");
+        HazardPolicy alone = SiteReader.Read(data, "site.psd1").PolicyAt("Gallery")!;
+        Assert.Equal("published limits at Gallery", alone.Name);
+        Assert.Equal(HazardPolicy.Default.TouchSeconds, alone.TouchSeconds);
+        Assert.Null(SiteReader.Read(data, "site.psd1").PolicyAt("Switchroom"));
+
+        // A bad value names the station and the key; a Policy that is neither a table nor a file is refused.
+        data["Stations"] = new object[] { Mains("Gallery", new Hashtable { ["ExposureGroup"] = "Visitors" }) };
+        var ex = Assert.Throws<DataFileException>(() => SiteReader.Read(data, "site.psd1"));
+        Assert.Contains("station 'Gallery', its Policy", ex.Message, System.StringComparison.Ordinal);
+        Assert.Contains("ExposureGroup: 'Visitors' is not one of Occupational, Public", ex.Message, System.StringComparison.Ordinal);
+        data["Stations"] = new object[] { Mains("Gallery", 3) };
+        ex = Assert.Throws<DataFileException>(() => SiteReader.Read(data, "site.psd1"));
+        Assert.Contains("Policy: must be a table of policy values", ex.Message, System.StringComparison.Ordinal);
     }
 
     [Fact]
