@@ -178,7 +178,12 @@ Describe 'A site policy in a verdict' {
         ($serial[2].Mechanisms | Where-Object Mechanism -EQ 'Exposure').Sources | Should -Contain "site policy 'Marrowby Heath site rules 2026 at Tour stop': ExposureGroup = Public"
         $threads = $rows | Test-InductionHazard -Site $site -ThrottleLimit 2
         ($threads | ForEach-Object PolicyHash) -join ',' | Should -Be (($serial | ForEach-Object PolicyHash) -join ',')
-        (($rows | Test-InductionHazard -Site $site -Policy (Get-HazardPolicy)) | ForEach-Object Verdict) -join ',' | Should -Be 'Clear,Clear,Clear'
+        $replaced = $rows | Test-InductionHazard -Site $site -Policy (Get-HazardPolicy) -WarningVariable warned -WarningAction SilentlyContinue
+        ($replaced | ForEach-Object Verdict) -join ',' | Should -Be 'Clear,Clear,Clear'
+        $warned.Count | Should -Be 2 -Because 'two stations have policies of their own, which -Policy replaces'
+        "$($warned[0])" | Should -BeLike "-Policy replaces the own policy of station 'Gallery' ('Gallery rules', which judges the public's exposure): its rows are judged by 'default (published limits)' alone."
+        $null = $rows[0] | Test-InductionHazard -Site $site -Station Hall -Policy (Get-HazardPolicy) -WarningVariable none -WarningAction SilentlyContinue
+        $none.Count | Should -Be 0 -Because 'the station named by -Station has no policy of its own'
 
         Remove-Item (Join-Path $folder 'gallery.psd1')
         { Import-HazardSite $siteFile } | Should -Throw "*station 'Gallery', its Policy file*"

@@ -16,6 +16,24 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
     public HazardPolicy? Policy { get; set; }
 
     /// <inheritdoc />
+    protected override void BeginProcessing()
+    {
+        base.BeginProcessing();
+        if (Policy is not null && AtSite)
+        {
+            // -Policy replaces a station's own policy too: a visitors' station would otherwise lose its public limits unseen.
+            foreach (Station station in Site.Stations)
+            {
+                if (station.Policy is { } own && (Station is null || Site.Find(Station) == station))
+                {
+                    WriteWarning("-Policy replaces the own policy of station '" + station.Name + "' ('" + own.Name + "'" + (own.ExposureGroup == ExposureGroup.Public ? ", which judges the public's exposure" : string.Empty)
+                        + "): its rows are judged by '" + Policy.Name + "' alone.");
+                }
+            }
+        }
+    }
+
+    /// <inheritdoc />
     protected override object Compute(InductionResponse response, int row) =>
         HazardAssessor.Assess(response, Policy ?? (AtSite ? Site.PolicyAt(response.Scenario.StationName!) : null) ?? HazardPolicy.Default, row);
 
