@@ -71,4 +71,38 @@ Describe 'Test-FieldExposure' {
         [double]::IsNaN($e.Margin) | Should -BeTrue
         ($warned -join ' ') | Should -Match 'weighted-peak method cannot be applied'
     }
+
+    It 'judges a site''s stations each at its position by its own policy, and -Policy in their place' {
+        # A site of two stations at one 50 Hz busbar: a worker's bench and a visitors' walkway (its own policy: the
+        # public). The walkway's own result equals the point judged with -Public, the bench's the point judged for workers.
+        $folder = Join-Path $TestDrive 'exposure-site'
+        New-Item -ItemType Directory $folder | Out-Null
+        $bar = "Sources = @( @{ Form = 'Busbar'; Width = '120 mm'; Thickness = '10 mm'; Axis = 'z'; Waveform = @{ Form = 'Sine'; Amplitude = '4 kA'; Frequency = '50 Hz' } } )"
+        Set-Content (Join-Path $folder 'site.psd1') @"
+@{
+    Site = 'Exposure bay'
+    Stations = @(
+        @{ Name = 'Bench'; $bar; Position = '1 m, 0, 0' }
+        @{ Name = 'Walkway'; $bar; Position = '2 m, 0, 0'; Policy = @{ Name = 'Tour rules'; ExposureGroup = 'Public' } }
+    )
 }
+"@
+        $site = Import-HazardSite (Join-Path $folder 'site.psd1')
+        $source = $site.Find('Bench').Source
+        $all = @(Test-FieldExposure -Site $site)
+        ($all | ForEach-Object Station) -join ',' | Should -Be 'Bench,Walkway'
+        $all[0].Margin | Should -Be (Test-FieldExposure -Source $source -Position '1 m, 0, 0').Margin
+        $all[1].Margin | Should -Be (Test-FieldExposure -Source $source -Position '2 m, 0, 0' -Public).Margin
+        $all[1].Finding | Should -Match 'general public limit'
+        $all[0].Finding | Should -Match 'occupational limit'
+        (Test-FieldExposure -Source $source -Position '2 m, 0, 0').Margin / $all[1].Margin | Should -BeGreaterThan 4.999 -Because 'the public''s 0.2 mT is a fifth of the workers'' 1 mT at 50 Hz (ICNIRP 2010 tables 3 and 4)'
+
+        $walkway = @(Test-FieldExposure -Site $site -Station walkway -Policy (Get-HazardPolicy))
+        $walkway.Count | Should -Be 1
+        $walkway[0].Station | Should -Be 'Walkway'
+        $walkway[0].Finding | Should -Match 'occupational limit' -Because '-Policy takes the station''s place'
+        $null -eq (Test-FieldExposure -Source $source -Position '1 m, 0, 0').Station | Should -BeTrue
+        { Test-FieldExposure -Site $site -Station Office -ErrorAction Stop } | Should -Throw "*'Office' is not a station of Exposure bay (its stations: Bench, Walkway)*"
+    }
+}
+

@@ -18,6 +18,9 @@ public sealed record FieldExposure
     /// <summary>The source's name.</summary>
     public string SourceName { get; init; } = string.Empty;
 
+    /// <summary>The site's station judged (Test-FieldExposure -Site); null for a point given by its position.</summary>
+    public string? Station { get; init; }
+
     /// <summary>The largest |B| over the drive, T.</summary>
     public double PeakFluxDensityTesla { get; init; }
 

@@ -61,7 +61,7 @@ public sealed class BusbarField : IFieldGeometry
         double x = radial.Dot(WidthDirection), y = radial.Dot(ThicknessDirection);
         if (Math.Abs(x) <= WidthMeters / 2 && Math.Abs(y) <= ThicknessMeters / 2)
         {
-            throw new FieldEvaluationException("the point " + point + " m is inside the bar " + Describe());
+            throw new FieldEvaluationException("the point " + point + " m is inside the " + Describe());
         }
 
         double halfDiagonal = 0.5 * Math.Sqrt((WidthMeters * WidthMeters) + (ThicknessMeters * ThicknessMeters));

@@ -9,27 +9,39 @@ using InductionHazard.Quantities;
 
 namespace InductionHazard.PowerShell.Commands;
 
-/// <summary>Test-FieldExposure: a person's own exposure to a source's field at points, against the ICNIRP limits.</summary>
-[Cmdlet(VerbsDiagnostic.Test, "FieldExposure")]
+/// <summary>Test-FieldExposure: a person's own exposure to a source's field at points, or at a site's stations, against the ICNIRP limits.</summary>
+[Cmdlet(VerbsDiagnostic.Test, "FieldExposure", DefaultParameterSetName = SourceSet)]
 [OutputType(typeof(FieldExposure))]
 public sealed class TestFieldExposureCommand : PSCmdlet
 {
+    private const string SourceSet = "Source";
+    private const string SiteSet = "Site";
+
     private FieldSource _source = null!;
 
     /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
-    [Parameter(Mandatory = true, Position = 0)]
+    [Parameter(Mandatory = true, Position = 0, ParameterSetName = SourceSet)]
     public FieldSource[] Source { get; set; } = null!;
 
     /// <summary>The points where a person stands or reaches, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres); the origin by default.</summary>
-    [Parameter(Position = 1, ValueFromPipeline = true)]
+    [Parameter(Position = 1, ValueFromPipeline = true, ParameterSetName = SourceSet)]
     [Vector(QuantityKind.Length, Many = true)]
     public Vector3D[] Position { get; set; } = { Vector3D.Zero };
+
+    /// <summary>A site, from Import-HazardSite: a person's exposure at each station's position, by the station's policy (its own, else the site's).</summary>
+    [Parameter(Mandatory = true, ParameterSetName = SiteSet)]
+    public HazardSite Site { get; set; } = null!;
+
+    /// <summary>The stations of -Site to judge, by name; all of them by default.</summary>
+    [Parameter(Position = 0, ParameterSetName = SiteSet)]
+    [ArgumentCompleter(typeof(StationCompleter))]
+    public string[]? Station { get; set; }
 
     /// <summary>Judge against the general public's limits instead of the occupational ones (as a policy whose ExposureGroup is Public does).</summary>
     [Parameter]
     public SwitchParameter Public { get; set; }
 
-    /// <summary>The safety factor between Clear and Caution, the static limit for workers and whose limits apply (ExposureGroup): a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published one.</summary>
+    /// <summary>The safety factor between Clear and Caution, the static limit for workers and whose limits apply (ExposureGroup): a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published one, or with -Site each station's.</summary>
     [Parameter]
     [Policy]
     public HazardPolicy? Policy { get; set; }
@@ -39,7 +51,17 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     {
         try
         {
-            _source = FieldSource.Combine(Source);
+            if (ParameterSetName == SourceSet)
+            {
+                _source = FieldSource.Combine(Source);
+            }
+            else
+            {
+                foreach (string name in Station ?? Array.Empty<string>())
+                {
+                    _ = Site.Find(name);
+                }
+            }
         }
         catch (InductionHazardException ex)
         {
@@ -50,22 +72,48 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     /// <inheritdoc />
     protected override void ProcessRecord()
     {
+        if (ParameterSetName == SiteSet)
+        {
+            return;
+        }
+
         foreach (Vector3D point in Position)
         {
-            try
-            {
-                FieldExposure exposure = FieldExposure.At(_source, point, Public.IsPresent || Policy?.ExposureGroup == ExposureGroup.Public, Policy ?? HazardPolicy.Default);
-                if (exposure.Verdict == Verdict.Indeterminate)
-                {
-                    WriteWarning("position " + point + ": " + exposure.Finding);
-                }
+            Judge(_source, point, Policy ?? HazardPolicy.Default, null);
+        }
+    }
 
-                WriteObject(exposure);
-            }
-            catch (FieldEvaluationException ex)
+    /// <inheritdoc />
+    protected override void EndProcessing()
+    {
+        if (ParameterSetName != SiteSet)
+        {
+            return;
+        }
+
+        // Each station at its own position, by -Policy or else its own policy over the site's.
+        foreach (Station station in Station is null ? Site.Stations : Array.ConvertAll(Station, Site.Find))
+        {
+            Judge(station.Source, station.Placement.Centre, Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default, station.Name);
+        }
+    }
+
+    private void Judge(FieldSource source, Vector3D point, HazardPolicy policy, string? station)
+    {
+        string where = station is null ? "position " + point : "station '" + station + "'";
+        try
+        {
+            FieldExposure exposure = FieldExposure.At(source, point, Public.IsPresent || policy.ExposureGroup == ExposureGroup.Public, policy) with { Station = station };
+            if (exposure.Verdict == Verdict.Indeterminate)
             {
-                WriteError(ErrorRecords.From(new InvalidInputException("Position", ex.Message), point, "position " + point));
+                WriteWarning(where + ": " + exposure.Finding);
             }
+
+            WriteObject(exposure);
+        }
+        catch (FieldEvaluationException ex)
+        {
+            WriteError(ErrorRecords.From(new InvalidInputException(station is null ? "Position" : "Station", ex.Message), point, where));
         }
     }
 }
