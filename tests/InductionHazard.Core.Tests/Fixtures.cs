@@ -90,4 +90,36 @@ internal static class Fixtures
 
         public string Describe() => "a geometry that yields NaN";
     }
+
+    /// <summary>
+    /// A flat three-phase set of 100 mm spacing (1 kA amplitude by default, 50 Hz), the point 50 mm across its row from
+    /// the middle line, where the three fields point different ways and their sum traces a fat ellipse over a cycle, and
+    /// there the resultant rms and the peak |B|, from |B(t)| at 64 instants of a period of the three lines' fields,
+    /// mu0 i / (2 pi r) each (Ampere's law; the average of |B|^2 over them is exact for a sum of sinusoids of one frequency).
+    /// </summary>
+    public static (FieldSource Set, Vector3D Point, double Resultant, double Peak) ThreePhaseAtFiftyMillimetres(double amplitude = 1000, double hertz = 50)
+    {
+        var values = new Dictionary<string, object?> { ["Form"] = "ThreePhase", ["Spacing"] = "100 mm", ["Name"] = hertz + " Hz set" };
+        FieldSource set = SourceRecordReader.Read(values, new SineWaveform(amplitude, hertz, drive: DriveKind.Current), ".");
+        Vector3D[] at = System.Linq.Enumerable.ToArray(System.Linq.Enumerable.Select(set.Terms, t => ((LineConductor)t.Geometry).Axis.Centre));
+        Vector3D z = Vector3D.UnitZ, point = 0.05 * z.Cross((at[2] - at[0]).Normalized());
+        double[] phases = { 0, -2 * System.Math.PI / 3, 2 * System.Math.PI / 3 };
+        double sum = 0, peak = 0;
+        const int Instants = 64;
+        for (int n = 0; n < Instants; n++)
+        {
+            double wt = 2 * System.Math.PI * n / Instants;
+            Vector3D b = Vector3D.Zero;
+            for (int k = 0; k < 3; k++)
+            {
+                Vector3D r = point - at[k];
+                b += amplitude * System.Math.Sin(wt + phases[k]) * (4e-7 * System.Math.PI / (2 * System.Math.PI * r.Dot(r))) * z.Cross(r);
+            }
+
+            sum += b.Dot(b);
+            peak = System.Math.Max(peak, b.Length);
+        }
+
+        return (set, point, System.Math.Sqrt(sum / Instants), peak);
+    }
 }

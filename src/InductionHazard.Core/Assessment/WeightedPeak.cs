@@ -13,9 +13,10 @@ namespace InductionHazard.Assessment;
 /// and its guidance on pulsed and complex fields, ICNIRP 2003, Health Phys 84:383): each spectral component of the
 /// field is divided by the reference level at its frequency (as a peak value, the rms level times the square root of
 /// 2) and shifted by the phase of the weighting (0 where the levels are flat, 90 degrees where they fall as 1/f, 180
-/// where they fall as 1/f^2), the components are summed back in time, and the largest magnitude of the weighted
-/// field vector is the exposure index: at most 1 complies. Components below 1 Hz (the static part) are left to the
-/// static limit.
+/// where they fall as 1/f^2), the components are summed back in time, and each axis's largest weighted value is
+/// combined with the others' as the root of the sum of their squares: the exposure index, at most 1 complies (for a
+/// sinusoid of any polarization, its resultant rms over the reference level). Components below 1 Hz (the static part)
+/// are left to the static limit.
 /// </summary>
 /// <remarks>
 /// Computed from the field's rate of change, which returns to zero before and after the event, so that the discrete
@@ -110,14 +111,39 @@ public static class WeightedPeak
             Fourier.Inverse(c, FourierOptions.Matlab);
         }
 
-        double index = 0;
+        // Each axis's weighted peak, combined as the root of the sum of their squares: for a sinusoid of any polarization
+        // exactly its resultant rms over the reference level, as a field of one frequency is judged, where the largest
+        // magnitude of the weighted vector would fall up to sqrt 2 lower for a field that turns (beside a three-phase set),
+        // so that a trace of a harmonic would have judged such a field more leniently than the pure sinusoid. For a field
+        // of one direction it is that largest magnitude; for any other, at least it.
+        double peakX = AxisPeak(x), peakY = AxisPeak(y), peakZ = AxisPeak(z);
+        double index = Math.Sqrt((peakX * peakX) + (peakY * peakY) + (peakZ * peakZ));
+        return Finite.Is(index) ? (index, null) : (double.NaN, "the weighted field is not a finite number");
+    }
+
+    /// <summary>
+    /// The largest magnitude of one axis's weighted record, raised to the vertex of the parabola through the largest
+    /// sample and its two neighbours (the record is periodic) where they bend down to it: the samples of a sinusoid at
+    /// 64 a period fall up to 0.12 % short of its crest, the vertex some 1e-5. The rise is at most an eighth of the
+    /// samples' second difference, and never lowers the largest sample.
+    /// </summary>
+    private static double AxisPeak(Complex[] record)
+    {
+        int n = record.Length, at = 0;
+        double largest = 0;
         for (int i = 0; i < n; i++)
         {
-            double magnitude = Math.Sqrt((x[i].Real * x[i].Real) + (y[i].Real * y[i].Real) + (z[i].Real * z[i].Real));
-            index = Math.Max(index, magnitude);
+            double magnitude = Math.Abs(record[i].Real);
+            if (magnitude > largest)
+            {
+                (largest, at) = (magnitude, i);
+            }
         }
 
-        return Finite.Is(index) ? (index, null) : (double.NaN, "the weighted field is not a finite number");
+        double sign = Math.Sign(record[at].Real);
+        double before = sign * record[(at + n - 1) % n].Real, after = sign * record[(at + 1) % n].Real;
+        double bend = (2 * largest) - before - after;
+        return bend > 0 ? largest + ((before - after) * (before - after) / (8 * bend)) : largest;
     }
 
     /// <summary>

@@ -98,29 +98,7 @@ public class ExposureLimitsTests
         // the middle one, across the row, where the three fields point different ways and their sum traces a fat
         // ellipse over a cycle: its resultant rms is 1.32 times its peak over sqrt 2, which understated it by a quarter.
         // The reference averages |B|^2 over 64 instants of a period (exact for a sum of sinusoids of one frequency).
-        double amplitude = 1000, hertz = 50;
-        var values = new System.Collections.Generic.Dictionary<string, object?> { ["Form"] = "ThreePhase", ["Spacing"] = "100 mm" };
-        FieldSource set = SourceRecordReader.Read(values, new SineWaveform(amplitude, hertz, drive: DriveKind.Current), ".");
-        Vector3D[] at = set.Terms.Select(t => ((LineConductor)t.Geometry).Axis.Centre).ToArray();
-        Vector3D z = Vector3D.UnitZ, u = (at[2] - at[0]).Normalized(), point = 0.05 * z.Cross(u);
-        double[] phases = { 0, -2 * Math.PI / 3, 2 * Math.PI / 3 };
-        double sum = 0, peak = 0;
-        const int Instants = 64;
-        for (int n = 0; n < Instants; n++)
-        {
-            double wt = 2 * Math.PI * n / Instants;
-            Vector3D b = Vector3D.Zero;
-            for (int k = 0; k < 3; k++)
-            {
-                Vector3D r = point - at[k];
-                b += amplitude * Math.Sin(wt + phases[k]) * (4e-7 * Math.PI / (2 * Math.PI * r.Dot(r))) * z.Cross(r);
-            }
-
-            sum += b.Dot(b);
-            peak = Math.Max(peak, b.Length);
-        }
-
-        double resultant = Math.Sqrt(sum / Instants);
+        (FieldSource set, Vector3D point, double resultant, double peak) = Fixtures.ThreePhaseAtFiftyMillimetres();
         FieldExposure e = FieldExposure.At(set, point, publicExposure: false, HazardPolicy.Default);
         Within.Relative(resultant, e.ComparedTesla, 1e-9, "the resultant rms");
         Assert.True(e.ComparedTesla > 1.3 * peak / Math.Sqrt(2), "the field turns here: its resultant rms " + e.ComparedTesla + " exceeds its peak over sqrt 2, " + (peak / Math.Sqrt(2)));
