@@ -30,6 +30,22 @@ Describe 'Export-HazardReport' {
         $html | Should -Not -Match '<script'
     }
 
+    It 'lists every policy the demo applied, the visitors'' walkway''s as judging the public''s exposure, in every format' {
+        $walkway = $assessments | Where-Object StationName -EQ 'Switchroom B visitor walkway' | Select-Object -First 1
+        $walkway.ExposureGroup | Should -Be 'Public'
+        ($assessments | Where-Object StationName -NE 'Switchroom B visitor walkway' | ForEach-Object { [string]$_.ExposureGroup } | Sort-Object -Unique) | Should -Be 'Occupational'
+        $assessments | Export-HazardReport -Path (Join-Path $TestDrive 'policies.md') -Site $site
+        $assessments | Export-HazardReport -Path (Join-Path $TestDrive 'policies.html') -Site $site
+        $assessments | Export-HazardReport -Path (Join-Path $TestDrive 'policies.json') -Site $site
+        $md = Get-Content (Join-Path $TestDrive 'policies.md') -Raw
+        $md | Should -Match ([regex]::Escape("- Policy: Marrowby Heath visitor rules, safety factor 2, for the general public's exposure, SHA-256 ``$($walkway.PolicyHash)``."))
+        $md | Should -Match ([regex]::Escape("- Policy: default (published limits), safety factor 2, SHA-256"))
+        (Get-Content (Join-Path $TestDrive 'policies.html') -Raw) | Should -Match ([regex]::Escape('Marrowby Heath visitor rules, safety factor 2, for the general public&#39;s exposure<br>'))
+        $json = Get-Content (Join-Path $TestDrive 'policies.json') -Raw | ConvertFrom-Json
+        ($json.report.policies | Where-Object name -EQ 'Marrowby Heath visitor rules').exposureGroup | Should -Be 'Public'
+        ($json.report.policies | Where-Object name -EQ 'default (published limits)').exposureGroup | Should -Be 'Occupational'
+    }
+
     It 'escapes a hostile item name in HTML and Markdown' {
         $a = New-Assessment '<script>alert(1)</script>'
         $a | Export-HazardReport -Path (Join-Path $TestDrive 'x.html')

@@ -128,6 +128,7 @@ public static class HazardAssessor
             PolicyName = policy.Name,
             PolicyHash = policy.Fingerprint,
             SafetyFactor = policy.SafetyFactor,
+            ExposureGroup = policy.ExposureGroup,
             ModuleVersion = ModuleVersion,
             AssessedUtc = Stamp((now ?? DateTime.UtcNow).ToUniversalTime()),
             StationName = response.Scenario.StationName ?? string.Empty,

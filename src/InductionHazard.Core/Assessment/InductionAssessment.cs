@@ -137,6 +137,9 @@ public sealed class InductionAssessment
         init => _inputHash = value;
     }
 
+    /// <summary>Whose exposure the policy judged the person's own field for: workers or the general public.</summary>
+    public Criteria.ExposureGroup ExposureGroup { get; init; }
+
     /// <summary>The safety factor applied between Clear and Caution.</summary>
     public double SafetyFactor { get; init; }
 

@@ -35,7 +35,7 @@ public sealed class HazardReport
         GeneratedUtc = generatedUtc.ToUniversalTime().ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", CultureInfo.InvariantCulture);
         ModuleVersion = HazardAssessor.ModuleVersion;
         ModuleVersions = Assessments.Select(a => a.ModuleVersion).Distinct().ToArray();
-        Policies = Assessments.Select(a => new PolicyUsed(a.PolicyName, a.SafetyFactor, a.PolicyHash)).Distinct().ToArray();
+        Policies = Assessments.Select(a => new PolicyUsed(a.PolicyName, a.SafetyFactor, a.PolicyHash, a.ExposureGroup)).Distinct().ToArray();
         InputsHash = TextHash.Sha256(string.Join("\n", Assessments.Select(a => a.InputHash)));
         Standards = Assessments.SelectMany(a => a.Standards).Distinct().ToArray();
         Cautions = new[] { Criteria.Cautions.EngineeringEstimate, Criteria.Cautions.Governance, Criteria.Cautions.Indeterminate }
@@ -135,4 +135,9 @@ public sealed class HazardReport
 /// <param name="Name">The policy's name.</param>
 /// <param name="SafetyFactor">Its safety factor.</param>
 /// <param name="Fingerprint">Its SHA-256 fingerprint.</param>
-public sealed record PolicyUsed(string Name, double SafetyFactor, string Fingerprint);
+/// <param name="ExposureGroup">Whose exposure it judges: workers or the general public.</param>
+public sealed record PolicyUsed(string Name, double SafetyFactor, string Fingerprint, Criteria.ExposureGroup ExposureGroup = Criteria.ExposureGroup.Occupational)
+{
+    /// <summary>", for the general public's exposure" where it judges the public, else nothing: words for a policy's line.</summary>
+    public string GroupWords => ExposureGroup == Criteria.ExposureGroup.Public ? ", for the general public's exposure" : string.Empty;
+}

@@ -227,7 +227,7 @@ a { color: inherit; }
         w.Write("<tr><th>Assessments made by</th><td>InductionHazard " + E(string.Join(", ", report.ModuleVersions)) + "</td></tr>\n");
         foreach (PolicyUsed p in report.Policies)
         {
-            w.Write("<tr><th>Policy</th><td>" + E(p.Name) + ", safety factor " + E(SiFormat.Plain(p.SafetyFactor)) + "<br><span class=\"hash\">SHA-256 " + E(p.Fingerprint) + "</span></td></tr>\n");
+            w.Write("<tr><th>Policy</th><td>" + E(p.Name) + ", safety factor " + E(SiFormat.Plain(p.SafetyFactor)) + E(p.GroupWords) + "<br><span class=\"hash\">SHA-256 " + E(p.Fingerprint) + "</span></td></tr>\n");
         }
 
         w.Write("<tr><th>Inputs</th><td><span class=\"hash\">SHA-256 " + E(report.InputsHash) + "</span><br><span class=\"small\">over every item's inputs in order; the same inventory, site and policy give the same value</span></td></tr>\n");

@@ -43,6 +43,7 @@ public static class JsonReportWriter
             Text(j, "name", p.Name);
             Number(j, "safetyFactor", p.SafetyFactor);
             Text(j, "sha256", p.Fingerprint);
+            Text(j, "exposureGroup", p.ExposureGroup.ToString());
             j.WriteEndObject();
         }
 

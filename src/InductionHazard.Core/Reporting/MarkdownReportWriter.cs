@@ -81,7 +81,7 @@ public static class MarkdownReportWriter
         w.Write("- Report made " + M(report.GeneratedUtc) + " by InductionHazard " + M(report.ModuleVersion) + "; assessments made by InductionHazard " + M(string.Join(", ", report.ModuleVersions)) + ".\n");
         foreach (PolicyUsed p in report.Policies)
         {
-            w.Write("- Policy: " + M(p.Name) + ", safety factor " + SiFormat.Plain(p.SafetyFactor) + ", SHA-256 `" + p.Fingerprint + "`.\n");
+            w.Write("- Policy: " + M(p.Name) + ", safety factor " + SiFormat.Plain(p.SafetyFactor) + p.GroupWords + ", SHA-256 `" + p.Fingerprint + "`.\n");
         }
 
         w.Write("- Inputs: SHA-256 `" + report.InputsHash + "` over every item's inputs in order.\n- Limits from:\n");
