@@ -73,8 +73,11 @@ internal static class Fixtures
         FieldSource.Uniform("ramp", new RampWaveform(from, to, duration, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
 
     /// <summary>A sine source whose geometry yields NaN: stands for a defect inside a field model.</summary>
-    public static FieldSource BrokenGeometrySine(double frequency) =>
-        new("broken", new[] { new SourceTerm(new NaNGeometry(), new SineWaveform(1, frequency, drive: DriveKind.FluxDensity)) });
+    public static FieldSource BrokenGeometrySine(double frequency) => BrokenGeometry(new SineWaveform(1, frequency, drive: DriveKind.FluxDensity));
+
+    /// <summary>A source whose geometry yields NaN, under any waveform.</summary>
+    public static FieldSource BrokenGeometry(FieldWaveform waveform) =>
+        new("broken", new[] { new SourceTerm(new NaNGeometry(), waveform) });
 
     public static InductionResponse Respond(ConductiveItem item, FieldSource source, double? exposure = null, Vector3D? normal = null) =>
         InductionEngine.Respond(new Scenario(item, source, new Placement(Vector3D.Zero, normal), exposure));

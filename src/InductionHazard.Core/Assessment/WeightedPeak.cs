@@ -125,7 +125,7 @@ public static class WeightedPeak
     /// The largest magnitude of one axis's weighted record, raised to the vertex of the parabola through the largest
     /// sample and its two neighbours (the record is periodic) where they bend down to it: the samples of a sinusoid at
     /// 64 a period fall up to 0.12 % short of its crest, the vertex some 1e-5. The rise is at most an eighth of the
-    /// samples' second difference, and never lowers the largest sample.
+    /// samples' second difference, and never lowers the largest sample. NaN when any sample is.
     /// </summary>
     private static double AxisPeak(Complex[] record)
     {
@@ -134,6 +134,12 @@ public static class WeightedPeak
         for (int i = 0; i < n; i++)
         {
             double magnitude = Math.Abs(record[i].Real);
+            if (double.IsNaN(magnitude))
+            {
+                // Not a number anywhere is not a number for the axis, and so for the index: never a sample passed over.
+                return double.NaN;
+            }
+
             if (magnitude > largest)
             {
                 (largest, at) = (magnitude, i);

@@ -10,8 +10,8 @@ namespace InductionHazard.Criteria;
 /// <summary>
 /// Builds a site policy from its data (a policy file or a site file's Policy table, read as data): Name, ExposureGroup
 /// (Occupational or Public) and any of the keys of <see cref="HazardPolicy.Keys"/>, each a number in SI or a string
-/// with its unit. What it leaves out
-/// keeps the published default. An unknown key, a value of the wrong kind or out of range is an error naming the key.
+/// with its unit. What it leaves out keeps the published default, or a station's the value of its site's policy. An
+/// unknown key, a value of the wrong kind or out of range is an error naming the key.
 /// </summary>
 public static class PolicyReader
 {

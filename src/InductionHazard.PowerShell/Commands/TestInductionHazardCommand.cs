@@ -24,7 +24,7 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
             // -Policy replaces a station's own policy too: a visitors' station would otherwise lose its public limits unseen.
             foreach (Station station in Site.Stations)
             {
-                if (station.Policy is { } own && (Station is null || Site.Find(Station) == station))
+                if (station.Policy is { } own && (Station is null || ReferenceEquals(Site.Find(Station), station)))
                 {
                     WriteWarning("-Policy replaces the own policy of station '" + station.Name + "' ('" + own.Name + "'" + (own.ExposureGroup == ExposureGroup.Public ? ", which judges the public's exposure" : string.Empty)
                         + "): its rows are judged by '" + Policy.Name + "' alone.");

@@ -115,4 +115,16 @@ public sealed class WeightedPeakTests
         double withHarmonic = WeightedPeak.At(both, point, publicExposure: false).Index;
         Assert.True(Math.Abs((withHarmonic / index) - 1) < 0.02, "a 1 % fifth harmonic moves the index by " + ((withHarmonic / index) - 1).ToString("P1", System.Globalization.CultureInfo.InvariantCulture));
     }
+
+    [Fact]
+    public void AFieldThatIsNotANumberGivesNoIndexNeverAPassingOne()
+    {
+        // A geometry that yields NaN (a defect inside a field model) under a pulse: the index is NaN with its reason,
+        // not the largest of the samples that are numbers (which would be 0 here, and pass).
+        FieldSource broken = Fixtures.BrokenGeometry(new RampWaveform(0, 1, 0.01, drive: DriveKind.FluxDensity));
+        (double index, string? problem) = WeightedPeak.At(broken, Vector3D.Zero, publicExposure: false);
+        Assert.True(double.IsNaN(index), "index " + index);
+        Assert.Equal("the weighted field is not a finite number", problem);
+    }
 }
+
