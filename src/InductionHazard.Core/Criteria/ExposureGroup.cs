@@ -11,6 +11,6 @@ public enum ExposureGroup
     /// <summary>Workers: the occupational limits (the default).</summary>
     Occupational,
 
-    /// <summary>The general public: the limits for the public, five times lower than the workers' from 25 Hz up.</summary>
+    /// <summary>The general public: the limits for the public, five times below the workers' up to 300 Hz and about 3.7 times above 400 Hz.</summary>
     Public,
 }
