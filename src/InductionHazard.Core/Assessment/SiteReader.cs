@@ -53,7 +53,7 @@ public static class SiteReader
             foreach (object? entry in List(rawStations))
             {
                 n++;
-                stations.Add(ReadStation(entry, n, directory, path, sitePolicy));
+                stations.Add(ReadStation(entry, n, directory, sitePolicy));
             }
 
             return new HazardSite(name, stations, path) { Policy = sitePolicy };
@@ -68,7 +68,7 @@ public static class SiteReader
         }
     }
 
-    private static Station ReadStation(object? entry, int n, string directory, string path, Criteria.HazardPolicy? sitePolicy)
+    private static Station ReadStation(object? entry, int n, string directory, Criteria.HazardPolicy? sitePolicy)
     {
         if (entry is not IDictionary table)
         {
@@ -135,7 +135,7 @@ public static class SiteReader
         FieldSource source = FieldSource.Combine(sources, sources.Count == 1 ? sources[0].Name : name);
         // The station's values over the site's (or the published ones), named after both unless it names itself.
         Criteria.HazardPolicy? own = rawPolicy is IDictionary policyValues
-            ? Criteria.PolicyReader.Read(policyValues, path + " (" + label + ", its Policy)", sitePolicy, (sitePolicy?.Name ?? "published limits") + " at " + name)
+            ? Criteria.PolicyReader.Read(policyValues, label + ", its Policy", sitePolicy, (sitePolicy?.Name ?? "published limits") + " at " + name)
             : null;
         return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description) { Policy = own };
     }
