@@ -63,4 +63,33 @@ Describe 'Find-SafeDistance' {
         @($warned | Where-Object { "$_" -match '^row 1 .*not Clear anywhere' }).Count | Should -Be 1
         @($warned | Where-Object { "$_" -match '^row 2 .*Ring B.*not Clear anywhere' }).Count | Should -Be 1
     }
+
+    It 'searches from a site''s station in its field, by its own policy, unless -From or -Policy is given' {
+        # A 2 kA (amplitude) 50 Hz line; a visitors' walkway 1 m from it whose own policy judges the public. A visitor's
+        # worn ring is Clear where the rms field is 0.1 mT (half the public's 0.2 mT at 50 Hz, ICNIRP 2010 table 4):
+        # r = mu0 I / (2 pi sqrt 2 0.1 mT) = 2.83 m (Ampere's law); a worker's where it is 0.5 mT, 0.57 m, inside the walkway.
+        $siteFile = Join-Path $TestDrive 'walkway-site.psd1'
+        Set-Content $siteFile @"
+@{
+    Site = 'Line bay'
+    Stations = @(
+        @{ Name = 'Walkway'; Sources = @( @{ Form = 'Conductor'; Axis = 'z'; Waveform = @{ Form = 'Sine'; Amplitude = '2 kA'; Frequency = '50 Hz' } } ); Position = '1 m, 0, 0'; Policy = @{ Name = 'Tour rules'; ExposureGroup = 'Public' } }
+    )
 }
+"@
+        $site = Import-HazardSite $siteFile
+        $ring = New-ConductiveItem -Name 'Visitor ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
+        $expected = 4e-7 * 2000 / (2 * [math]::Sqrt(2) * 1e-4)
+        $visitor = Find-SafeDistance -Item $ring -Site $site -Station walkway -Direction x
+        $visitor.From.X | Should -Be 1 -Because 'the search starts at the station''s position'
+        [math]::Abs($visitor.Position.X / $expected - 1) | Should -BeLessThan 0.001
+        $visitor.Assessment.PolicyName | Should -Be 'Tour rules'
+        $visitor.GoverningMechanism | Should -Be 'Exposure'
+        (Find-SafeDistance -Item $ring -Site $site -Station walkway -Direction x -Policy (Get-HazardPolicy)).DistanceMeters | Should -Be 0 -Because 'a worker is Clear at the walkway itself'
+        $from = Find-SafeDistance -Item $ring -Site $site -Station walkway -Direction x -From '2 m, 0, 0'
+        [math]::Abs($from.Position.X / $expected - 1) | Should -BeLessThan 0.001
+        $from.From.X | Should -Be 2
+        { Find-SafeDistance -Item $ring -Site $site -Station Office -Direction x } | Should -Throw "*'Office' is not a station of Line bay*"
+    }
+}
+

@@ -13,12 +13,19 @@ using InductionHazard.Quantities;
 namespace InductionHazard.PowerShell.Commands;
 
 /// <summary>Find-SafeDistance: the nearest distance along a ray from which an item is Clear, with the mechanism that governs there.</summary>
-[Cmdlet(VerbsCommon.Find, "SafeDistance")]
+[Cmdlet(VerbsCommon.Find, "SafeDistance", DefaultParameterSetName = SourceSet)]
 [OutputType(typeof(SafeDistanceResult))]
 public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
 {
+    private const string SourceSet = "Source";
+    private const string SiteSet = "Site";
+
     private readonly CancellationTokenSource _cancellation = new();
     private FieldSource _source = null!;
+    private Vector3D _from;
+    private Vector3D? _normal;
+    private double? _exposure;
+    private HazardPolicy _policy = HazardPolicy.Default;
     private int _row;
 
     /// <summary>The search of the first row of each item, for the rows that repeat it (an inventory's identical items).</summary>
@@ -29,10 +36,19 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     public PSObject[] Item { get; set; } = null!;
 
     /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
-    [Parameter(Mandatory = true, Position = 1)]
+    [Parameter(Mandatory = true, Position = 1, ParameterSetName = SourceSet)]
     public FieldSource[] Source { get; set; } = null!;
 
-    /// <summary>Where the ray starts, as x,y,z lengths ('0, 0, 500 mm'; bare numbers in metres); the origin by default.</summary>
+    /// <summary>A site, from Import-HazardSite: the search runs in the field of its -Station, from the station's position, with its normal, exposure time and policy unless given.</summary>
+    [Parameter(Mandatory = true, ParameterSetName = SiteSet)]
+    public HazardSite Site { get; set; } = null!;
+
+    /// <summary>The station of -Site whose field, place and policy the search takes.</summary>
+    [Parameter(Mandatory = true, ParameterSetName = SiteSet)]
+    [ArgumentCompleter(typeof(StationCompleter))]
+    public string Station { get; set; } = null!;
+
+    /// <summary>Where the ray starts, as x,y,z lengths ('0, 0, 500 mm'; bare numbers in metres); the origin by default, or the station's position with -Site.</summary>
     [Parameter]
     [Vector(QuantityKind.Length)]
     public Vector3D From { get; set; } = Vector3D.Zero;
@@ -47,17 +63,17 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     [Quantity(QuantityKind.Length)]
     public double MaxDistance { get; set; } = 10.0;
 
-    /// <summary>The normal of the item's loop as x,y,z or an axis; by default, at each point, the orientation that links the largest flux change.</summary>
+    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the station's with -Site where it gives one, else, at each point, the orientation that links the largest flux change.</summary>
     [Parameter]
     [Vector]
     public Vector3D? Normal { get; set; }
 
-    /// <summary>How long the item stays in the field ('10 min'); by default while the drive changes, or 8 h for a field that runs on.</summary>
+    /// <summary>How long the item stays in the field ('10 min'); by default the station's with -Site where it gives one, else while the drive changes, or 8 h for a field that runs on.</summary>
     [Parameter]
     [Quantity(QuantityKind.Time)]
     public double? ExposureTime { get; set; }
 
-    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published limits.</summary>
+    /// <summary>The limits and safety factor: a policy from Get-HazardPolicy, a policy file's path, or a table of policy values; by default the published limits, or the station's policy with -Site.</summary>
     [Parameter]
     [Policy]
     public HazardPolicy? Policy { get; set; }
@@ -71,7 +87,22 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     {
         try
         {
-            _source = FieldSource.Combine(Source);
+            (_from, _normal, _exposure, _policy) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default);
+            if (ParameterSetName == SiteSet)
+            {
+                // The station's field, and its place, normal, exposure time and policy where the command does not give them.
+                Station station = Site.Find(Station);
+                _source = station.Source;
+                _from = MyInvocation.BoundParameters.ContainsKey(nameof(From)) ? From : station.Placement.Centre;
+                _normal = Normal ?? station.Placement.Normal;
+                _exposure = ExposureTime ?? station.ExposureSeconds;
+                _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
+            }
+            else
+            {
+                _source = FieldSource.Combine(Source);
+            }
+
             Require.Direction("Direction", Direction);
             PhysicalRanges.Distance.For("MaxDistance").Check(MaxDistance);
             Scenario.ValidateExposure(ExposureTime);
@@ -110,7 +141,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, From, Direction, MaxDistance, Policy ?? HazardPolicy.Default, Normal, ExposureTime, null,
+                        item, _source, _from, Direction, MaxDistance, _policy, _normal, _exposure, null,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;
