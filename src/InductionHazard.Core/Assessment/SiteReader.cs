@@ -47,7 +47,7 @@ public static class SiteReader
                 throw new RecordException("site file", top.Errors);
             }
 
-            Criteria.HazardPolicy? sitePolicy = rawPolicy is IDictionary policy ? Criteria.PolicyReader.Read(policy, path + " (its Policy)") : null;
+            Criteria.HazardPolicy? sitePolicy = rawPolicy is IDictionary policy ? Criteria.PolicyReader.Read(policy, "its Policy", defaultName: System.IO.Path.GetFileNameWithoutExtension(path)) : null;
             var stations = new List<Station>();
             int n = 0;
             foreach (object? entry in List(rawStations))
