@@ -181,7 +181,7 @@ Describe 'A site policy in a verdict' {
         $replaced = $rows | Test-InductionHazard -Site $site -Policy (Get-HazardPolicy) -WarningVariable warned -WarningAction SilentlyContinue
         ($replaced | ForEach-Object Verdict) -join ',' | Should -Be 'Clear,Clear,Clear'
         $warned.Count | Should -Be 2 -Because 'two stations have policies of their own, which -Policy replaces'
-        "$($warned[0])" | Should -BeLike "-Policy replaces the own policy of station 'Gallery' ('Gallery rules', which judges the public's exposure): its rows are judged by 'default (published limits)' alone."
+        "$($warned[0])" | Should -BeLike "-Policy replaces the own policy of station 'Gallery' ('Gallery rules', which judges the public's exposure): it is judged by 'default (published limits)' alone."
         $null = $rows[0] | Test-InductionHazard -Site $site -Station Hall -Policy (Get-HazardPolicy) -WarningVariable none -WarningAction SilentlyContinue
         $none.Count | Should -Be 0 -Because 'the station named by -Station has no policy of its own'
 

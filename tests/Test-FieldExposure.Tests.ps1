@@ -97,8 +97,9 @@ Describe 'Test-FieldExposure' {
         $all[0].Finding | Should -Match 'occupational limit'
         (Test-FieldExposure -Source $source -Position '2 m, 0, 0').Margin / $all[1].Margin | Should -BeGreaterThan 4.999 -Because 'the public''s 0.2 mT is a fifth of the workers'' 1 mT at 50 Hz (ICNIRP 2010 tables 3 and 4)'
 
-        $walkway = @(Test-FieldExposure -Site $site -Station walkway -Policy (Get-HazardPolicy))
+        $walkway = @(Test-FieldExposure -Site $site -Station walkway -Policy (Get-HazardPolicy) -WarningVariable replaced -WarningAction SilentlyContinue)
         $walkway.Count | Should -Be 1
+        "$replaced" | Should -Be "-Policy replaces the own policy of station 'Walkway' ('Tour rules', which judges the public's exposure): it is judged by 'default (published limits)' alone."
         $walkway[0].Station | Should -Be 'Walkway'
         $walkway[0].Finding | Should -Match 'occupational limit' -Because '-Policy takes the station''s place'
         $null -eq (Test-FieldExposure -Source $source -Position '1 m, 0, 0').Station | Should -BeTrue

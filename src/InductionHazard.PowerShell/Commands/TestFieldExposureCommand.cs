@@ -94,6 +94,11 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         // Each station at its own position, by -Policy or else its own policy over the site's.
         foreach (Station station in Station is null ? Site.Stations : Array.ConvertAll(Station, Site.Find))
         {
+            if (Policy is not null && HazardSite.OwnPolicyReplaced(station, Policy) is { } replaced)
+            {
+                WriteWarning(replaced);
+            }
+
             Judge(station.Source, station.Placement.Centre, Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default, station.Name);
         }
     }

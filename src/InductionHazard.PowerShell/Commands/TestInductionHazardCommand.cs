@@ -24,10 +24,9 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
             // -Policy replaces a station's own policy too: a visitors' station would otherwise lose its public limits unseen.
             foreach (Station station in Site.Stations)
             {
-                if (station.Policy is { } own && (Station is null || ReferenceEquals(Site.Find(Station), station)))
+                if ((Station is null || ReferenceEquals(Site.Find(Station), station)) && HazardSite.OwnPolicyReplaced(station, Policy) is { } replaced)
                 {
-                    WriteWarning("-Policy replaces the own policy of station '" + station.Name + "' ('" + own.Name + "'" + (own.ExposureGroup == ExposureGroup.Public ? ", which judges the public's exposure" : string.Empty)
-                        + "): its rows are judged by '" + Policy.Name + "' alone.");
+                    WriteWarning(replaced);
                 }
             }
         }
