@@ -64,6 +64,7 @@ Describe 'Find-SafeDistance' {
         @($warned | Where-Object { "$_" -match '^row 2 .*Ring B.*not Clear anywhere' }).Count | Should -Be 1
     }
 
+    # Validates: Find-SafeDistance from a site's visitors' station, by its own policy, beside a 2 kA 50 Hz line: Clear where the rms field is half the public's reference level | ICNIRP 2010 table 4 (0.2 mT rms at 25-400 Hz, general public); B = mu0 I / (2 pi r) (Ampere's law) | 0.1 %
     It 'searches from a site''s station in its field, by its own policy, unless -From or -Policy is given' {
         # A 2 kA (amplitude) 50 Hz line; a visitors' walkway 1 m from it whose own policy judges the public. A visitor's
         # worn ring is Clear where the rms field is 0.1 mT (half the public's 0.2 mT at 50 Hz, ICNIRP 2010 table 4):

@@ -110,6 +110,7 @@ Describe 'A site policy in a verdict' {
         { Get-HazardPolicy -Path (New-Item (Join-Path $TestDrive 'nine.psd1') -Value "@{ StaticExposureLimit = '9 T' }") } | Should -Throw '*StaticExposureLimit*'
     }
 
+    # Validates: a visitor's worn ring at 50 Hz judged through Test-InductionHazard under a Public policy, margin 0.2 mT over 0.354 mT rms, and its safe distance beside a 2 kA line through Find-SafeDistance | ICNIRP 2010 table 4 (0.2 mT rms at 25-400 Hz, general public); B = mu0 I / (2 pi r) (Ampere's law) | 0.2 %, 0.1 %
     It 'judges the public''s exposure where a policy names ExposureGroup = Public, for a visitor''s ring, a place, a safe distance and the policy shown' {
         # ICNIRP 2010 at 50 Hz: 1 mT rms for workers (table 3), 0.2 mT for the public (table 4). 0.5 mT peak is 0.354 mT rms.
         $ring = New-ConductiveItem -Name 'Visitor ring' -Material Gold -Diameter '19 mm' -WireDiameter '2 mm' -Contact Worn

@@ -55,18 +55,6 @@ public sealed class HazardSite
     /// <exception cref="InvalidInputException">No station has that name.</exception>
     public Criteria.HazardPolicy? PolicyAt(string station) => Find(station).Policy ?? Policy;
 
-    /// <summary>
-    /// What a command's own policy does to a station's: the warning that it replaces the station's own policy (which a
-    /// visitors' station would otherwise lose unseen), or null when the station has none.
-    /// </summary>
-    /// <param name="station">The station.</param>
-    /// <param name="replacement">The policy given in its place.</param>
-    public static string? OwnPolicyReplaced(Station station, Criteria.HazardPolicy replacement) =>
-        station.Policy is not { } own ? null
-        : "-Policy replaces the own policy of station '" + station.Name + "' ('" + own.Name + "'"
-            + (own.ExposureGroup == Criteria.ExposureGroup.Public ? ", which judges the public's exposure" : string.Empty)
-            + "): it is judged by '" + replacement.Name + "' alone.";
-
     /// <summary>The file the site was read from.</summary>
     public string Path { get; }
 

@@ -97,7 +97,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 _normal = Normal ?? station.Placement.Normal;
                 _exposure = ExposureTime ?? station.ExposureSeconds;
                 _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
-                if (Policy is not null && HazardSite.OwnPolicyReplaced(station, Policy) is { } replaced)
+                if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {
                     WriteWarning(replaced);
                 }

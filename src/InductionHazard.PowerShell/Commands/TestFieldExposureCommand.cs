@@ -94,7 +94,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         // Each station at its own position, by -Policy or else its own policy over the site's.
         foreach (Station station in Station is null ? Site.Stations : Array.ConvertAll(Station, Site.Find))
         {
-            if (Policy is not null && HazardSite.OwnPolicyReplaced(station, Policy) is { } replaced)
+            if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
             {
                 WriteWarning(replaced);
             }

@@ -24,7 +24,7 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
             // -Policy replaces a station's own policy too: a visitors' station would otherwise lose its public limits unseen.
             foreach (Station station in Site.Stations)
             {
-                if ((Station is null || ReferenceEquals(Site.Find(Station), station)) && HazardSite.OwnPolicyReplaced(station, Policy) is { } replaced)
+                if ((Station is null || ReferenceEquals(Site.Find(Station), station)) && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {
                     WriteWarning(replaced);
                 }
