@@ -50,13 +50,16 @@ public sealed class Scenario
     {
         var text = new System.Text.StringBuilder(256);
         text.Append(ItemHash(Item)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
-            .Append('|').Append(Placement.Centre).Append('|').Append(Placement.Normal?.ToString() ?? "facing the field").Append('|').Append(Placement.Velocity?.ToString() ?? "still")
+            .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n ? Exact(n) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
             .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         return TextHash.Sha256(text.ToString());
     }
 
     private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<FieldSource, string> SourceHashes = new();
+
+    /// <summary>A vector's components to the last bit (its display rounds them to four figures).</summary>
+    private static string Exact(Vector3D v) => TextHash.Exact(v.X) + "," + TextHash.Exact(v.Y) + "," + TextHash.Exact(v.Z);
 
     /// <summary>The item as the engine sees it: shape, dimensions, contact and every material constant.</summary>
     private static string ItemHash(ConductiveItem item)

@@ -114,12 +114,24 @@ public readonly struct Vector3D : IEquatable<Vector3D>
         }
     }
 
-    /// <summary>"(x, y, z)" with invariant formatting.</summary>
-    public override string ToString() => "(" + Component(X) + ", " + Component(Y) + ", " + Component(Z) + ")";
+    /// <summary>
+    /// "(x, y, z)" with invariant formatting, each component to four figures; a component below 1e-12 of the largest is
+    /// rounding noise (a normal turned by 90 degrees has cos 90 = 6.1e-17, not 0) and is written as 0.
+    /// </summary>
+    public override string ToString()
+    {
+        double noise = 1e-12 * Math.Max(Math.Abs(X), Math.Max(Math.Abs(Y), Math.Abs(Z)));
+        return "(" + Component(X, noise) + ", " + Component(Y, noise) + ", " + Component(Z, noise) + ")";
+    }
 
     /// <summary>One component as "G4" writes it; the values every axis and origin is made of are written without the formatter.</summary>
-    private static string Component(double value)
+    private static string Component(double value, double noise)
     {
+        if (Math.Abs(value) < noise)
+        {
+            return "0";
+        }
+
         long bits = BitConverter.DoubleToInt64Bits(value);
         return bits == 0 ? "0" : value == 1 ? "1" : value == -1 ? "-1" : value.ToString("G4", CultureInfo.InvariantCulture);
     }

@@ -26,7 +26,24 @@ public class ScenarioFingerprintTests
         Assert.NotEqual(first, new Scenario(Ring(), Sine(0.01 * (1 + 1e-12))).Fingerprint());
         Assert.NotEqual(first, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0, 0, 1e-9))).Fingerprint());
         Assert.NotEqual(first, new Scenario(Ring(), Sine(), exposureSeconds: 60).Fingerprint());
+
+        // Beyond the four figures a placement is displayed with: every bit of the centre, normal and velocity counts.
+        string placed = new Scenario(Ring(), Sine(), new Placement(new Vector3D(0.25, 0, 0), Vector3D.UnitY)).Fingerprint();
+        Assert.NotEqual(placed, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0.25 * (1 + 1e-9), 0, 0), Vector3D.UnitY)).Fingerprint());
+        Assert.NotEqual(placed, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0.25, 0, 0), new Vector3D(1e-9, 1, 0).Normalized())).Fingerprint());
         Assert.NotEqual(first, new Scenario(Ring(), Sine()) { StationName = "Bay 2" }.Fingerprint());
+    }
+
+    [Fact]
+    public void AVectorIsDisplayedWithoutItsRoundingNoise()
+    {
+        // A normal turned from +x by 90 degrees about z carries cos 90 = 6.1e-17 in x: it is displayed as the axis it is.
+        double quarter = System.Math.PI / 2;
+        Assert.Equal("(0, 1, 0)", new Vector3D(System.Math.Cos(quarter), System.Math.Sin(quarter), 0).ToString());
+        Assert.Equal("(0.6, 0, -0.8)", new Vector3D(0.6, -4e-17, -0.8).ToString());
+        // A small vector keeps its own small components: the noise is relative to its largest.
+        Assert.Equal("(1E-09, 2E-09, 0)", new Vector3D(1e-9, 2e-9, 0).ToString());
+        Assert.Equal("(1E-09, 1, 0)", new Vector3D(1e-9, 1, 0).ToString());
     }
 
     [Validates("SHA-256 of \"abc\" and of the empty text", "FIPS 180-2, appendix B.1 (\"abc\"); the empty text's digest from memory", "exact")]
