@@ -72,6 +72,23 @@ Describe 'Test-InductionHazard' {
             $again = @($items | Test-InductionHazard -Source $pulse -WarningAction SilentlyContinue)
             $again.Verdict | Should -Be @($result | Where-Object { -not $rows[$_.RowNumber - 1].NormalX }).Verdict
         }
+
+        It 'takes several items given at once to -Item as it takes them piped: each in turn, numbered, a $null its own error' {
+            $a = New-ConductiveItem -Name 'A' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
+            $b = New-ConductiveItem -Name 'B' -Material Copper -Diameter '25 mm' -WireDiameter '2 mm'
+            (Test-InductionHazard -Item $a, $b -Source $pulse -WarningAction SilentlyContinue).ItemName | Should -Be @('A', 'B')
+            (Test-InductionHazard $a, $b $pulse -WarningAction SilentlyContinue).RowNumber | Should -Be @(1, 2)
+            $list = [System.Collections.Generic.List[object]]::new(); $list.Add($b); $list.Add(@{ Name = 'H'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' })
+            (Test-InductionHazard -Item $list -Source $pulse -WarningAction SilentlyContinue).ItemName | Should -Be @('B', 'H')
+            (Test-InductionHazard -Item @{ Name = 'H'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' } -Source $pulse -WarningAction SilentlyContinue).ItemName | Should -Be 'H' -Because 'a hashtable is one row, not a collection of its entries'
+            @(Test-InductionHazard -Item @() -Source $pulse).Count | Should -Be 0
+            $out = @(Test-InductionHazard -Item $a, $null, $b -Source $pulse -ErrorVariable bad -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
+            $out.ItemName | Should -Be @('A', 'B')
+            $out.RowNumber | Should -Be @(1, 3)
+            @($bad).Count | Should -Be 1
+            "$($bad[0])" | Should -Match '^row 2: InputObject: is \$null'
+            (Get-InductionResponse -Item $a, $b -Source $pulse -WarningAction SilentlyContinue).ItemName | Should -Be @('A', 'B')
+        }
     }
 
     Context 'bare numbers in a spreadsheet' {

@@ -351,8 +351,38 @@ public static class ItemRecordReader
     }
 
     /// <summary>The item name a record gives (through the Name column or its aliases), or null.</summary>
-    public static string? NameOf(IEnumerable<KeyValuePair<string, object?>> record) =>
-        new RecordFields(record).Text("Name", required: false, A("Name"));
+    /// <remarks>
+    /// As <see cref="RecordFields"/> reads it (the first column of each spelling, the first non-empty of Name and its
+    /// aliases in that order, trimmed), without making a reader of the whole record: every row of a pipeline is named
+    /// first, a row that repeats an earlier one by nothing else.
+    /// </remarks>
+    public static string? NameOf(IEnumerable<KeyValuePair<string, object?>> record)
+    {
+        object? best = null;
+        int bestRank = int.MaxValue;
+        int seen = 0;
+        foreach (KeyValuePair<string, object?> pair in record)
+        {
+            int rank = pair.Key is null ? -1 : Array.IndexOf(NameKeys, RecordFields.FieldKey(pair.Key));
+            if (rank < 0 || (seen & (1 << rank)) != 0)
+            {
+                continue;
+            }
+
+            seen |= 1 << rank;
+            object? value = pair.Value;
+            bool empty = value is null || value is DBNull || (value is string text && text.Trim().Length == 0);
+            if (!empty && rank < bestRank)
+            {
+                (best, bestRank) = (value, rank);
+            }
+        }
+
+        return best is null ? null : Convert.ToString(best, CultureInfo.InvariantCulture)?.Trim();
+    }
+
+    /// <summary>The Name column and its aliases, normalized, in the order a reader takes them.</summary>
+    private static readonly string[] NameKeys = new[] { "Name" }.Concat(A("Name")).Select(RecordFields.Normalize).ToArray();
 
     /// <summary>The name of the item a record makes: its Name column, else "row 7" (or "item" outside a pipeline or file).</summary>
     public static string ItemName(string? name, int? rowNumber) =>

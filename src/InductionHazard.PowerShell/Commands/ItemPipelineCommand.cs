@@ -53,11 +53,16 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private IReadOnlyDictionary<string, string>? _units;
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
+    /// <remarks>
+    /// One object as the shell binds it from the pipeline, row by row; several given at once (-Item $band, $ring) arrive
+    /// as one collection and are taken in turn, as the shell would enumerate them. (An array-typed parameter made the
+    /// shell wrap every piped row in an array of one, some 0.8 us a row.)
+    /// </remarks>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [Alias("Item")]
     [AllowNull]
     [AllowEmptyCollection]
-    public PSObject?[]? InputObject { get; set; }
+    public PSObject? InputObject { get; set; }
 
     /// <summary>The parameter set that takes the field from -Source.</summary>
     protected const string SourceSet = "Source";
@@ -191,46 +196,61 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <inheritdoc />
     protected override void ProcessRecord()
     {
-        foreach (PSObject? given in InputObject ?? new PSObject?[] { null })
+        // A collection given to -Item is its items (a hashtable or a text is one item, as the shell takes them).
+        object? bound = InputObject?.BaseObject;
+        if (bound is not null && bound is not string && bound is not System.Collections.IDictionary && LanguagePrimitives.GetEnumerable(bound) is { } several)
         {
-            _row++;
-            int row = _row;
-            if (row % RowsPerHeapTrim == 0)
+            foreach (object? one in several)
             {
-                // A long audit's rows are released as they pass (what stays alive is a few megabytes), but the runtime
-                // lets its old generation fill with them and keeps the freed space: a compacting full collection every
-                // 50,000 rows (some milliseconds against seconds of work) keeps a million rows in about the memory of
-                // ten thousand (docs/performance.md).
-                GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
+                ProcessOne(one is null ? null : PSObject.AsPSObject(one));
             }
-
-            // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
-            PSObject input = given ?? new PSObject(string.Empty);
-            IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
-            string? name = record is null ? null : ItemRecordReader.NameOf(record);
-            string label = given is null ? ItemRecordReader.Label(row, null)
-                : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, name);
-            ShowProgress(label);
-
-            // A row that repeats an earlier one's item and place takes that row's work, done or under way.
-            string? key = record is null || given?.BaseObject is null ? null : RepeatedRows.KeyOf(record);
-            if (key is not null && _repeated.TryGet(key, out (Task<Solved> Work, int Row) first))
-            {
-                _pending.Enqueue(new Pending(first.Work, input, label, row, new Repeat(name, record!, first.Row)));
-            }
-            else
-            {
-                Task<Solved> work = Start(given, input, record, label, row);
-                if (key is not null)
-                {
-                    _repeated.AddOnRepeat(key, (work, row));
-                }
-
-                _pending.Enqueue(new Pending(work, input, label, row, null));
-            }
-
-            Drain(wait: _pending.Count > 2 * ThrottleLimit);
         }
+        else
+        {
+            ProcessOne(InputObject);
+        }
+    }
+
+    /// <summary>One item or row: its assessment started (or a repeat's taken), and the finished results at the queue's head written.</summary>
+    private void ProcessOne(PSObject? given)
+    {
+        _row++;
+        int row = _row;
+        if (row % RowsPerHeapTrim == 0)
+        {
+            // A long audit's rows are released as they pass (what stays alive is a few megabytes), but the runtime
+            // lets its old generation fill with them and keeps the freed space: a compacting full collection every
+            // 50,000 rows (some milliseconds against seconds of work) keeps a million rows in about the memory of
+            // ten thousand (docs/performance.md).
+            GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
+        }
+
+        // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
+        PSObject input = given ?? new PSObject(string.Empty);
+        IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
+        string? name = record is null ? null : ItemRecordReader.NameOf(record);
+        string label = given is null ? ItemRecordReader.Label(row, null)
+            : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, name);
+        ShowProgress(label);
+
+        // A row that repeats an earlier one's item and place takes that row's work, done or under way.
+        string? key = record is null || given?.BaseObject is null ? null : RepeatedRows.KeyOf(record);
+        if (key is not null && _repeated.TryGet(key, out (Task<Solved> Work, int Row) first))
+        {
+            _pending.Enqueue(new Pending(first.Work, input, label, row, new Repeat(name, record!, first.Row)));
+        }
+        else
+        {
+            Task<Solved> work = Start(given, input, record, label, row);
+            if (key is not null)
+            {
+                _repeated.AddOnRepeat(key, (work, row));
+            }
+
+            _pending.Enqueue(new Pending(work, input, label, row, null));
+        }
+
+        Drain(wait: _pending.Count > 2 * ThrottleLimit);
     }
 
     /// <summary>Items assessed at once on as many threads; results still come out in input order, as a serial run gives them.</summary>

@@ -76,6 +76,27 @@ public class ItemRecordReaderTests
     }
 
     [Fact]
+    public void ARowsNameIsTheOneTheRecordReaderTakes()
+    {
+        // Against the record reader that reads the item itself, on 5,000 random rows: spellings of Name and its aliases
+        // (a unit in the header, case, spaces), a spelling given twice, empty and blank cells, numbers and other columns.
+        string[] columns = { "Name", "name", "NAME", "Item", "Item Name", "item_name", "ItemName", "Description", "Name (mm)", "Material", "Diameter", "Holder" };
+        object?[] values = { null, string.Empty, "   ", "Ring", " Band ", "Ring", 42, 2.5, System.DBNull.Value, "Description" };
+        var random = new System.Random(20261203);
+        for (int n = 0; n < 5000; n++)
+        {
+            var row = new List<KeyValuePair<string, object?>>();
+            for (int c = random.Next(0, 6); c > 0; c--)
+            {
+                row.Add(new KeyValuePair<string, object?>(columns[random.Next(columns.Length)], values[random.Next(values.Length)]));
+            }
+
+            string? expected = new InductionHazard.Quantities.RecordFields(row).Text("Name", required: false, ItemRecordReader.Aliases["Name"]);
+            Assert.Equal(expected, ItemRecordReader.NameOf(row));
+        }
+    }
+
+    [Fact]
     public void EveryProblemInARowIsReportedAtOnce()
     {
         var error = Assert.Throws<RecordException>(() => Read(new() { ["Material"] = "Kryptonite", ["Width"] = "5 mm" }, 3));
