@@ -4,11 +4,13 @@
     rounds; prints the speed-up of each round. By default the demo inventory (eight copies, each row at its
     station; each copy writes its sizes with more zeros after the point, the same sizes in text of its own, so that no
     row repeats an earlier one and takes its result); with -Heavy, 40 items of the filament model (thick bands, discs,
-    rods and closed tubes of several sizes) at the induction furnace's 9.6 kHz coil mouth.
+    rods and closed tubes of several sizes) at the induction furnace's 9.6 kHz coil mouth. -Rounds sets how many
+    rounds (each a serial run and a -ThrottleLimit 2 run, alternately); the median speed-up is printed last.
 #>
 param(
     [string] $ModulePath = (Join-Path $PSScriptRoot '../../out/InductionHazard/InductionHazard.psd1'),
-    [switch] $Heavy
+    [switch] $Heavy,
+    [int] $Rounds = 3
 )
 $root = Join-Path $PSScriptRoot '../..'
 Import-Module $ModulePath
@@ -37,8 +39,11 @@ else {
 }
 
 $null = $rows | Select-Object -First 8 | Test-InductionHazard -Site $site -WarningAction SilentlyContinue
-foreach ($round in 1..3) {
+$speedUps = foreach ($round in 1..$Rounds) {
     $s = Measure-Command { $null = $rows | Test-InductionHazard -Site $site -WarningAction SilentlyContinue }
     $p = Measure-Command { $null = $rows | Test-InductionHazard -Site $site -ThrottleLimit 2 -WarningAction SilentlyContinue }
-    '{0} rows: serial {1:F2} s, -ThrottleLimit 2 {2:F2} s, speed-up {3:F2}' -f @($rows).Count, $s.TotalSeconds, $p.TotalSeconds, ($s.TotalSeconds / $p.TotalSeconds)
+    '{0} rows: serial {1:F2} s, -ThrottleLimit 2 {2:F2} s, speed-up {3:F2}' -f @($rows).Count, $s.TotalSeconds, $p.TotalSeconds, ($s.TotalSeconds / $p.TotalSeconds) | Out-Host
+    $s.TotalSeconds / $p.TotalSeconds
 }
+$sorted = @($speedUps | Sort-Object)
+'median speed-up of {0} rounds: {1:F2}' -f $Rounds, $(if ($sorted.Count % 2) { $sorted[($sorted.Count - 1) / 2] } else { ($sorted[$sorted.Count / 2 - 1] + $sorted[$sorted.Count / 2]) / 2 })
