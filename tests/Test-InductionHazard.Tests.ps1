@@ -537,6 +537,67 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
         }
     }
 
+    Context 'a visitor among workers, named by the row' {
+        BeforeAll {
+            # 3 kA rms in a long line: 240 uT rms at 2.5 m (Ampere's law), between the public's 0.2 mT and the workers' 1 mT.
+            $line = New-FieldWaveform -Sine -Amplitude ([math]::Sqrt(2) * 3000) -Frequency '50 Hz' | New-FieldSource -Conductor -Name 'Line'
+            $visitors = @'
+Name,Material,Diameter,WireDiameter,Contact,ExposureGroup,Holder
+Worker ring,Copper,20 mm,2 mm,Skin,,tech A
+Visitor ring,Copper,20 mm,2 mm,Skin,Public,guest B
+Second visitor,Copper,20 mm,2 mm,Skin,Public,guest C
+Third visitor,Copper,20 mm,2 mm,Skin,Public,guest D
+Named worker,Copper,20 mm,2 mm,Skin,Occupational,tech E
+Loose loop,Copper,20 mm,2 mm,Free,Public,stores
+'@ | ConvertFrom-Csv
+        }
+
+        # Validates: a visitor named by the row among workers, 240 uT rms at 50 Hz, margins 0.2 mT / 240 uT and 1 mT / 240 uT through Test-InductionHazard | ICNIRP 2010, Health Phys 99:818, tables 3 and 4; Ampere's law | 1e-6
+        It 'judges a row''s visitor at the public''s level and its workers at theirs, serially and on two threads alike' {
+            foreach ($threads in 1, 2) {
+                $out = @($visitors | Test-InductionHazard -Source $line -Position '2.5 m, 0, 0' -ThrottleLimit $threads -WarningAction SilentlyContinue)
+                $out.ExposureGroup | Should -Be @('Occupational', 'Public', 'Public', 'Public', 'Occupational', 'Public')
+                [math]::Abs($out[0].ExposureMargin / (1e-3 / 240e-6) - 1) | Should -BeLessThan 1e-6
+                [math]::Abs($out[1].ExposureMargin / (2e-4 / 240e-6) - 1) | Should -BeLessThan 1e-6
+                # The third visitor's row repeats the second's (the first's result is kept from its second sight) and takes it.
+                $out[3].ExposureMargin | Should -Be $out[1].ExposureMargin
+                $out[3].InputHash | Should -Be (@($visitors[3] | Test-InductionHazard -Source $line -Position '2.5 m, 0, 0')[0].InputHash) -Because 'the result taken carries the visitor''s inputs, as one assessed alone'
+                $out.Verdict | Should -Be @('Clear', 'Hazard', 'Hazard', 'Hazard', 'Clear', 'Clear')
+                $out[1].Inventory.Keys | Should -Be @('Holder') -Because 'the group is a field of the row, not one of the inventory''s own columns'
+                (($out[1].Mechanisms | Where-Object Mechanism -EQ 'Exposure').Sources -join '; ') | Should -Match "inventory row: ExposureGroup = Public"
+                $out[5].ExposureMargin | Should -BeNullOrEmpty -Because 'a loose loop puts no one at its place, visitor or not'
+            }
+        }
+
+        It 'warns, and judges the public''s level all the same, where a row names a worker under a policy that judges the public' {
+            $out = @($visitors[4] | Test-InductionHazard -Source $line -Position '2.5 m, 0, 0' -Policy @{ Name = 'Gallery'; ExposureGroup = 'Public' } -WarningVariable warned -WarningAction SilentlyContinue)
+            $out[0].ExposureGroup | Should -Be 'Public'
+            $out[0].Verdict | Should -Be 'Hazard'
+            @($warned).Count | Should -Be 1
+            "$($warned[0])" | Should -Match "^Named worker: ExposureGroup 'Occupational' is not applied: the policy 'Gallery' judges the public's exposure"
+        }
+
+        It 'refuses a group it does not know, naming the row, the field and the groups, and goes on' {
+            $bad = $visitors[1].PSObject.Copy(); $bad.ExposureGroup = 'Visitor'
+            $out = @($visitors[0], $bad, $visitors[1] | Test-InductionHazard -Source $line -Position '2.5 m, 0, 0' -ErrorVariable failed -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
+            $out.ItemName | Should -Be @('Worker ring', 'Visitor ring')
+            @($failed).Count | Should -Be 1
+            "$($failed[0])" | Should -Match "^row 2 \('Visitor ring'\): ExposureGroup: 'Visitor' is not one of Occupational, Public"
+        }
+
+        # Validates: a visitor's safe distance from a line named by the row, five times a worker's | ICNIRP 2010, Health Phys 99:818, tables 3 and 4 (0.2 mT against 1 mT at 50 Hz); Ampere's law (B proportional to 1/r) | 1e-2
+        It 'finds a visitor''s safe distance from the row''s group: five times a worker''s from the line, as 1/r and the two levels give' {
+            $worker = @($visitors[0] | Find-SafeDistance -Source $line -From '0.2 m, 0, 0' -Direction x -MaxDistance '30 m')[0]
+            $visitor = @($visitors[1] | Find-SafeDistance -Source $line -From '0.2 m, 0, 0' -Direction x -MaxDistance '30 m')[0]
+            $visitor.Assessment.ExposureGroup | Should -Be 'Public'
+            $worker.GoverningMechanism | Should -Be 'Exposure'
+            $visitor.GoverningMechanism | Should -Be 'Exposure'
+            # From the line's axis: 1.2 m for a worker (240 uT x 2.5 m / (1 mT / 2)), 6 m for a visitor (/ (0.2 mT / 2)).
+            [math]::Abs(($visitor.Position.X) / ($worker.Position.X) - 5) | Should -BeLessThan 5e-2
+            [math]::Abs($visitor.Position.X - 6.0) | Should -BeLessThan 1e-2
+        }
+    }
+
     Context 'the demo site as a person reads it' {
         It 'shows every margin in the table as a plain figure between 0.001 and 1000, or as a bound' {
             $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')

@@ -26,6 +26,8 @@ public static class HazardAssessor
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
     {
         policy.Validated();
+        // A visitor named by the inventory row is judged at the public's limits whatever the policy's group.
+        policy = policy.For(response.Scenario.WearerGroup);
         // Loops rather than queries: an assessment is made hundreds of thousands of times in an audit.
         var results = new MechanismResult[Checks.Length];
         var applicableList = new List<MechanismResult>(Checks.Length);

@@ -53,6 +53,12 @@ public sealed class Scenario
             .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n ? Exact(n) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
             .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
+        if (WearerGroup is { } group)
+        {
+            // Added only where a row names a group, so that the fingerprints of scenarios without one stay as they were.
+            text.Append("|wearer=").Append(group);
+        }
+
         return TextHash.Sha256(text.ToString());
     }
 
@@ -98,10 +104,17 @@ public sealed class Scenario
     /// the item under that row's name, with that row's inventory columns; everything the physics reads is this one's.
     /// </summary>
     internal Scenario For(string itemName, InventoryFields inventory) =>
-        new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, Inventory = inventory };
+        new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = inventory };
 
     /// <summary>The site station the scenario stands for, if it came from one.</summary>
     public string? StationName { get; init; }
+
+    /// <summary>
+    /// Whose exposure the wearer or holder is judged for, where the inventory row names it (its ExposureGroup column):
+    /// null gives the policy's group; Public judges the person as one of the public under any policy
+    /// (<see cref="Criteria.HazardPolicy.For"/>).
+    /// </summary>
+    public Criteria.ExposureGroup? WearerGroup { get; init; }
 
     /// <summary>The inventory row's own columns (asset tag, holder, notes...), which travel with the assessment.</summary>
     public InventoryFields Inventory { get; init; } = InventoryFields.Empty;

@@ -10,6 +10,10 @@ namespace InductionHazard.Criteria;
 public sealed class HazardPolicy
 {
     private string? _fingerprint;
+    private HazardPolicy? _forPublic;
+
+    // Set on the copy that judges a row's wearer as one of the public under a policy that judges workers (see For).
+    private string? _groupSetBy;
 
     /// <summary>The default policy: published limits and a safety factor of 2.</summary>
     public static HazardPolicy Default { get; } = new();
@@ -124,9 +128,42 @@ public sealed class HazardPolicy
     /// Where the exposure group comes from: the published occupational limits by default, or the site policy by name
     /// ("site policy 'Gallery rules': ExposureGroup = Public").
     /// </summary>
-    public string ExposureGroupSource => ExposureGroup == Default.ExposureGroup
+    public string ExposureGroupSource => _groupSetBy ?? (ExposureGroup == Default.ExposureGroup
         ? "occupational exposure (ICNIRP 2009, ICNIRP 2010)"
-        : "site policy '" + Name + "': ExposureGroup = " + ExposureGroup;
+        : "site policy '" + Name + "': ExposureGroup = " + ExposureGroup);
+
+    /// <summary>
+    /// The policy for a wearer or holder whose group an inventory row names (its ExposureGroup column): a visitor's
+    /// item among workers' is judged at the public's limits, by a copy of this policy that differs from it in the group
+    /// alone and says where that came from (its fingerprint differs too, so a report lists it as a policy of its own). A
+    /// row can only make the judgement stricter: a worker named under a policy that judges the public, or no group, gives
+    /// this policy unchanged.
+    /// </summary>
+    /// <param name="wearer">The group the row names, or null.</param>
+    public HazardPolicy For(ExposureGroup? wearer)
+    {
+        if (wearer != ExposureGroup.Public || ExposureGroup == ExposureGroup.Public)
+        {
+            return this;
+        }
+
+        return _forPublic ??= new HazardPolicy
+        {
+            Name = Name,
+            SafetyFactor = SafetyFactor,
+            AlternatingVoltageLimitRms = AlternatingVoltageLimitRms,
+            DirectVoltageLimit = DirectVoltageLimit,
+            ImpulseChargeLimit = ImpulseChargeLimit,
+            BodyResistanceOhms = BodyResistanceOhms,
+            StaticExposureLimitTesla = StaticExposureLimitTesla,
+            ExposureGroup = ExposureGroup.Public,
+            ContactBurn = ContactBurn,
+            ThermalDoseLimitMinutes = ThermalDoseLimitMinutes,
+            LaunchSpeedLimit = LaunchSpeedLimit,
+            TouchSeconds = TouchSeconds,
+            _groupSetBy = "inventory row: ExposureGroup = Public (the policy '" + Name + "' judges workers)",
+        };
+    }
 
     /// <summary>The span each value may take: wide enough for any site's rules, narrow enough to catch a wrong unit.</summary>
     private static readonly PhysicalRange[] Ranges =

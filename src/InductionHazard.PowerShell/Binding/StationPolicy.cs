@@ -17,4 +17,18 @@ internal static class StationPolicy
         : "-Policy replaces the own policy of station '" + station.Name + "' ('" + own.Name + "'"
             + (own.ExposureGroup == ExposureGroup.Public ? ", which judges the public's exposure" : string.Empty)
             + "): it is judged by '" + replacement.Name + "' alone.";
+
+    /// <summary>
+    /// The warning that a row's ExposureGroup 'Occupational' is not applied under a policy that judges the public (a row
+    /// can only make the judgement stricter), or null when it is applied or the row names no group.
+    /// </summary>
+    /// <param name="itemName">The row's item name.</param>
+    /// <param name="wearer">The group the row names.</param>
+    /// <param name="judged">The group the row was judged for.</param>
+    /// <param name="policyName">The policy the row was judged by.</param>
+    public static string? WearerNotApplied(string itemName, ExposureGroup? wearer, ExposureGroup judged, string policyName) =>
+        wearer == ExposureGroup.Occupational && judged == ExposureGroup.Public
+            ? itemName + ": ExposureGroup 'Occupational' is not applied: the policy '" + policyName
+                + "' judges the public's exposure, and a row can only make the judgement stricter (judge workers' items in a run of their own with -Policy)."
+            : null;
 }

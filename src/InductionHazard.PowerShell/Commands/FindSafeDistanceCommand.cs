@@ -135,6 +135,12 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             {
                 // A row whose item fields are written as an earlier row's takes that row's search under its own name.
                 string? key = record is null ? null : RepeatedRows.KeyOf(record);
+                ExposureGroup? wearer = record is null ? null : WearerGroupReader.Read(record, label);
+                if (StationPolicy.WearerNotApplied(label, wearer, _policy.ExposureGroup, _policy.Name) is { } notApplied)
+                {
+                    WriteWarning(notApplied);
+                }
+
                 SafeDistanceResult result;
                 if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
                 {
@@ -143,9 +149,12 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 else
                 {
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
+                    // A visitor the row names is judged at the public's limits along the whole ray.
+                    HazardPolicy policy = _policy.For(wearer);
+
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, _policy, _normal, _exposure, null,
+                        item, _source, _from, Direction, MaxDistance, policy, _normal, _exposure, null,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;

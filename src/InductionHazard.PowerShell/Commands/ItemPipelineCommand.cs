@@ -322,6 +322,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds)
         {
             StationName = station?.Name,
+            WearerGroup = record is null ? null : WearerGroupReader.Read(record, label),
             Inventory = record is null ? InventoryFields.Empty : InventoryFields.Of(record),
         };
     }

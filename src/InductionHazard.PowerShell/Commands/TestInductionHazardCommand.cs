@@ -49,6 +49,11 @@ public sealed class TestInductionHazardCommand : ItemPipelineCommand
             WriteWarning(assessment.ItemName + ": Indeterminate: " + string.Join("; ", assessment.Reasons));
         }
 
+        if (StationPolicy.WearerNotApplied(assessment.ItemName, assessment.Response.Scenario.WearerGroup, assessment.ExposureGroup, assessment.PolicyName) is { } notApplied)
+        {
+            WriteWarning(notApplied);
+        }
+
         // The inventory's own columns also as properties of the output, so that Select-Object AssetTag and Export-Csv see them;
         // a column named like one of the assessment's own properties stays in Inventory only.
         var output = PSObject.AsPSObject(assessment);

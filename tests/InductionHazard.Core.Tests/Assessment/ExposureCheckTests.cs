@@ -82,6 +82,62 @@ public class ExposureCheckTests
         Assert.Equal(FieldExposure.At(Fixtures.UniformSine(0.5e-3, 50), Vector3D.Zero, true, HazardPolicy.Default).Margin, visitor.ExposureMargin!.Value, 12);
     }
 
+    [Validates("Exposure of a visitor named by an inventory row among workers, 2.5 m from a 3 kA rms line at 50 Hz: 240 uT rms against the public's 0.2 mT (the workers' 1 mT)", "ICNIRP 2010, Health Phys 99:818, tables 3 and 4; Ampere's law for the field (B = mu0 I / 2 pi r)", "1e-6")]
+    [Fact]
+    public void ARowThatNamesItsWearerAVisitorIsJudgedAtThePublicsLevelUnderAWorkersPolicy()
+    {
+        // A long straight conductor: B = mu0 I / (2 pi r) = 2e-7 * 3000 A rms / 2.5 m = 240 uT rms (Ampere's law).
+        FieldSource line = new("line", new[] { new SourceTerm(new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ)), new SineWaveform(3000 * Math.Sqrt(2), 50, drive: DriveKind.Current)) });
+        var place = new Placement(new Vector3D(2.5, 0, 0));
+        var worker = new Scenario(Fixtures.Ring(), line, place, 60);
+        var visitor = new Scenario(Fixtures.Ring(), line, place, 60) { WearerGroup = ExposureGroup.Public };
+        var named = new Scenario(Fixtures.Ring(), line, place, 60) { WearerGroup = ExposureGroup.Occupational };
+        InductionAssessment w = HazardAssessor.Assess(InductionEngine.Respond(worker), HazardPolicy.Default);
+        InductionAssessment v = HazardAssessor.Assess(InductionEngine.Respond(visitor), HazardPolicy.Default);
+        InductionAssessment n = HazardAssessor.Assess(InductionEngine.Respond(named), HazardPolicy.Default);
+        Within.Relative(1e-3 / 240e-6, w.ExposureMargin!.Value, 1e-6, "a worker's exposure margin against 1 mT");
+        Within.Relative(2e-4 / 240e-6, v.ExposureMargin!.Value, 1e-6, "a visitor's exposure margin against 0.2 mT");
+        Assert.Equal(w.ExposureMargin, n.ExposureMargin);
+        Assert.Equal(Verdict.Hazard, Exposure(v).Verdict);
+        Assert.Equal(ExposureGroup.Public, v.ExposureGroup);
+        Assert.Equal(ExposureGroup.Occupational, w.ExposureGroup);
+        Assert.Contains(Exposure(v).Sources, s => s == "inventory row: ExposureGroup = Public (the policy 'default (published limits)' judges workers)");
+        Assert.Contains("against the general public's limit", Exposure(v).Detail, StringComparison.Ordinal);
+
+        // The visitor's policy is the workers' in every value but the group, and is told apart by its fingerprint.
+        Assert.Equal(w.PolicyName, v.PolicyName);
+        Assert.NotEqual(w.PolicyHash, v.PolicyHash);
+        Assert.Equal(new HazardPolicy { Name = HazardPolicy.Default.Name, ExposureGroup = ExposureGroup.Public }.Fingerprint, v.PolicyHash);
+
+        // Under a policy that judges the public, a row that names a worker is judged as one of the public all the same.
+        var gallery = new HazardPolicy { Name = "gallery", ExposureGroup = ExposureGroup.Public }.Validated();
+        Assert.Equal(v.ExposureMargin, HazardAssessor.Assess(InductionEngine.Respond(named), gallery).ExposureMargin);
+    }
+
+    [Fact]
+    public void APolicyForAVisitorDiffersFromItsPolicyInTheGroupAlone()
+    {
+        var site = new HazardPolicy { Name = "bay rules", SafetyFactor = 3, AlternatingVoltageLimitRms = 25, TouchSeconds = 2, LaunchSpeedLimit = 1.5, StaticExposureLimitTesla = 4 }.Validated();
+        HazardPolicy forVisitor = site.For(ExposureGroup.Public);
+        Assert.Equal(ExposureGroup.Public, forVisitor.ExposureGroup);
+        Assert.Same(forVisitor, site.For(ExposureGroup.Public));
+        Assert.Same(site, site.For(ExposureGroup.Occupational));
+        Assert.Same(site, site.For(null));
+        Assert.Same(forVisitor, forVisitor.For(ExposureGroup.Public));
+        foreach (System.Reflection.PropertyInfo p in typeof(HazardPolicy).GetProperties().Where(p => p.GetIndexParameters().Length == 0 && !p.GetMethod!.IsStatic))
+        {
+            if (p.Name is nameof(HazardPolicy.ExposureGroup) or nameof(HazardPolicy.Fingerprint) or nameof(HazardPolicy.ExposureGroupSource) or nameof(HazardPolicy.Limits))
+            {
+                continue;
+            }
+
+            Assert.True(Equals(p.GetValue(site), p.GetValue(forVisitor)), p.Name + " differs");
+        }
+
+        Assert.Equal(site.Limits, forVisitor.Limits);
+        Assert.Equal("inventory row: ExposureGroup = Public (the policy 'bay rules' judges workers)", forVisitor.ExposureGroupSource);
+    }
+
     [Validates("Exposure of a visitor holding an item in a field ramped to 0.6 T: 400 mT static for the general public", "ICNIRP 2009, Health Phys 96:504", "1e-9")]
     [Fact]
     public void APolicyForThePublicJudgesAStaticFieldAgainstThePublics400MilliTesla()

@@ -32,6 +32,8 @@ public class ScenarioFingerprintTests
         Assert.NotEqual(placed, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0.25 * (1 + 1e-9), 0, 0), Vector3D.UnitY)).Fingerprint());
         Assert.NotEqual(placed, new Scenario(Ring(), Sine(), new Placement(new Vector3D(0.25, 0, 0), new Vector3D(1e-9, 1, 0).Normalized())).Fingerprint());
         Assert.NotEqual(first, new Scenario(Ring(), Sine()) { StationName = "Bay 2" }.Fingerprint());
+        Assert.NotEqual(first, new Scenario(Ring(), Sine()) { WearerGroup = InductionHazard.Criteria.ExposureGroup.Public }.Fingerprint());
+        Assert.NotEqual(new Scenario(Ring(), Sine()) { WearerGroup = InductionHazard.Criteria.ExposureGroup.Occupational }.Fingerprint(), new Scenario(Ring(), Sine()) { WearerGroup = InductionHazard.Criteria.ExposureGroup.Public }.Fingerprint());
     }
 
     [Fact]
