@@ -93,5 +93,34 @@ Describe 'Find-SafeDistance' {
         $from.From.X | Should -Be 2
         { Find-SafeDistance -Item $ring -Site $site -Station Office -Direction x } | Should -Throw "*'Office' is not a station of Line bay*"
     }
-}
 
+    It 'judges an item moved at -Velocity, or at its station''s velocity, at every point: a closed loop braked by its eddy current is Clear further out' {
+        $magnet = New-FieldWaveform -Ramp -From 0 -To '500 A' -Duration '10 min' | New-FieldSource -Solenoid -Radius '300 mm' -Length '1.2 m' -Turns 4000 -Name 'Magnet M2'
+        $loop = New-ConductiveItem -Name 'Loose loop' -Material Copper -Diameter '200 mm' -WireDiameter '4 mm' -Contact Free
+        $still = Find-SafeDistance -Item $loop -Source $magnet -From '0, 0, 700 mm' -Direction z -Normal z -MaxDistance '10 m'
+        $moving = Find-SafeDistance -Item $loop -Source $magnet -From '0, 0, 700 mm' -Direction z -Normal z -MaxDistance '10 m' -Velocity '0, 0, -1.5 m/s'
+        $moving.Found | Should -BeTrue
+        $moving.DistanceMeters | Should -BeGreaterThan ($still.DistanceMeters * 1.2) -Because 'carried toward the bore, the loop is braked by its eddy current as well as pulled'
+        $moving.Assessment.Response.BrakingForceNewtons | Should -BeGreaterThan 0
+        $still.Assessment.Response.BrakingForceNewtons | Should -BeNullOrEmpty
+        # The verdict at the distance found is the one Test-InductionHazard gives an item moved there at that speed.
+        $there = Test-InductionHazard -Item $loop -Source $magnet -Position $moving.Position -Normal z -Velocity '0, 0, -1.5 m/s'
+        $there.Verdict | Should -Be 'Clear'
+        $there.MinimumMargin | Should -Be $moving.MinimumMargin
+
+        $siteFile = Join-Path $TestDrive 'magnet-site.psd1'
+        Set-Content $siteFile @"
+@{
+    Site = 'Magnet hall'
+    Stations = @(
+        @{ Name = 'Bore approach'; Sources = @( @{ Form = 'Solenoid'; Radius = '300 mm'; Length = '1.2 m'; Turns = 4000; Waveform = @{ Form = 'Ramp'; From = '0 A'; To = '500 A'; Duration = '10 min' } } ); Position = '0, 0, 700 mm'; Normal = 'z'; Velocity = '0, 0, -1.5 m/s' }
+    )
+}
+"@
+        $site = Import-HazardSite $siteFile
+        $atStation = Find-SafeDistance -Item $loop -Site $site -Station 'Bore approach' -Direction z -MaxDistance '10 m'
+        $atStation.DistanceMeters | Should -Be $moving.DistanceMeters -Because 'the station''s velocity is taken where -Velocity is not given'
+        (Find-SafeDistance -Item $loop -Site $site -Station 'Bore approach' -Direction z -MaxDistance '10 m' -Velocity '0, 0, 0').DistanceMeters | Should -Be $still.DistanceMeters
+        { Find-SafeDistance -Item $loop -Source $magnet -Direction z -Velocity '0, 0, 300 m/s' -ErrorAction Stop } | Should -Throw '*Velocity*'
+    }
+}

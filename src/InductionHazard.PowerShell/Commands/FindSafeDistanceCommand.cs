@@ -26,6 +26,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private Vector3D? _normal;
     private double? _exposure;
     private HazardPolicy _policy = HazardPolicy.Default;
+    private Vector3D? _velocity;
     private int _row;
 
     /// <summary>The search of the first row of each item, for the rows that repeat it (an inventory's identical items).</summary>
@@ -82,12 +83,17 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     [Parameter]
     public SwitchParameter AcceptUnusualSize { get; set; }
 
+    /// <summary>The velocity at which the item is moved through the field at every point of the ray, as x,y,z speeds ('0, 0, 1.5 m/s'); by default the station's with -Site where it gives one, else none (placed, not moved).</summary>
+    [Parameter]
+    [Vector(QuantityKind.Speed)]
+    public Vector3D? Velocity { get; set; }
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
         try
         {
-            (_from, _normal, _exposure, _policy) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default);
+            (_from, _normal, _exposure, _policy, _velocity) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default, Velocity);
             if (ParameterSetName == SiteSet)
             {
                 // The station's field, and its place, normal, exposure time and policy where the command does not give them.
@@ -96,6 +102,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 _from = MyInvocation.BoundParameters.ContainsKey(nameof(From)) ? From : station.Placement.Centre;
                 _normal = Normal ?? station.Placement.Normal;
                 _exposure = ExposureTime ?? station.ExposureSeconds;
+                _velocity = Velocity ?? station.Placement.Velocity;
                 _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
                 if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {
@@ -113,6 +120,12 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             if (Normal is { } n)
             {
                 Require.Direction("Normal", n);
+            }
+
+            if (_velocity is { } moving)
+            {
+                // Checked as a placement checks it: a finite speed a person or a dropped item can have.
+                _ = new Placement(Vector3D.Zero, null, moving);
             }
         }
         catch (InductionHazardException ex)
@@ -154,7 +167,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
 
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, _normal, _exposure, null,
+                        item, _source, _from, Direction, MaxDistance, policy, _normal, _exposure, null, _velocity,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;
