@@ -3,7 +3,10 @@ using InductionHazard.Criteria;
 
 namespace InductionHazard.PowerShell.Binding;
 
-/// <summary>What a command's -Policy does to a site's station that has a policy of its own.</summary>
+/// <summary>
+/// The warnings about which policy judges a row: -Policy over a site's station that has a policy of its own, and a row's
+/// ExposureGroup that a policy for the public does not let it loosen.
+/// </summary>
 internal static class StationPolicy
 {
     /// <summary>

@@ -96,7 +96,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             (_from, _normal, _exposure, _policy, _velocity) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default, Velocity);
             if (ParameterSetName == SiteSet)
             {
-                // The station's field, and its place, normal, exposure time and policy where the command does not give them.
+                // The station's field, and its place, normal, exposure time, velocity and policy where the command does not give them.
                 Station station = Site.Find(Station);
                 _source = station.Source;
                 _from = MyInvocation.BoundParameters.ContainsKey(nameof(From)) ? From : station.Placement.Centre;
