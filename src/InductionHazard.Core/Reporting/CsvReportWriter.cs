@@ -42,7 +42,7 @@ public static class CsvReportWriter
 
     private static readonly string[] VerdictHeaders = { "Verdict", "GoverningMechanism" };
 
-    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Model", "PathCount", "Policy", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256", "Cautions" };
+    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Model", "PathCount", "Policy", "ExposureGroup", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256", "Cautions" };
 
     /// <summary>Writes the rows.</summary>
     public static void Write(HazardReport report, TextWriter w)
@@ -87,6 +87,7 @@ public static class CsvReportWriter
             csv.WriteField(Text(a.Response.Model));
             csv.WriteField(a.Response.PathCount.ToString(CultureInfo.InvariantCulture));
             csv.WriteField(Text(a.PolicyName));
+            csv.WriteField(a.ExposureGroup.ToString());
             csv.WriteField(a.PolicyHash);
             csv.WriteField(a.InputHash);
             csv.WriteField(Text(a.ModuleVersion));

@@ -126,6 +126,10 @@ public sealed class HazardReport
         _ => 3,
     };
 
+    /// <summary>" (judged at the general public's limits)" for an assessment that judged its person as one of the public; else nothing.</summary>
+    public static string GroupNote(InductionAssessment a) =>
+        a.ExposureGroup == Criteria.ExposureGroup.Public ? " (judged at the general public's limits)" : string.Empty;
+
     /// <summary>The text a reader sees for where an assessment came from: "row 7".</summary>
     public static string RowText(InductionAssessment a) =>
         a.RowNumber is { } r ? r.ToString(CultureInfo.InvariantCulture) : string.Empty;

@@ -217,7 +217,7 @@ a { color: inherit; }
             w.Write("<figure>" + temperature + "<figcaption>The item's temperature while in the field and after, against the limit it is judged by.</figcaption></figure>\n");
         }
 
-        w.Write("<p class=\"small\">Assessed " + E(a.AssessedUtc) + " · policy " + E(a.PolicyName) + " · inputs SHA-256 <span class=\"hash\">" + E(a.InputHash) + "</span></p>\n</section>\n");
+        w.Write("<p class=\"small\">Assessed " + E(a.AssessedUtc) + " · policy " + E(a.PolicyName + HazardReport.GroupNote(a)) + " · inputs SHA-256 <span class=\"hash\">" + E(a.InputHash) + "</span></p>\n</section>\n");
     }
 
     private static void WriteProvenance(HazardReport report, TextWriter w)

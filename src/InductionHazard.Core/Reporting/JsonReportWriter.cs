@@ -146,6 +146,7 @@ public static class JsonReportWriter
         j.WriteValue(r.PathCount);
         Texts(j, "modelNotes", r.ModelNotes);
         Text(j, "policy", a.PolicyName);
+        Text(j, "exposureGroup", a.ExposureGroup.ToString());
         Text(j, "policySha256", a.PolicyHash);
         Text(j, "inputSha256", a.InputHash);
         Text(j, "moduleVersion", a.ModuleVersion);

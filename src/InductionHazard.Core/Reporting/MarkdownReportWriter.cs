@@ -146,6 +146,6 @@ public static class MarkdownReportWriter
         }
 
         w.Write("\n| Figure | Value |\n|---|---:|\n" + string.Concat(ReportLines.Figures(a).Select(l => "| " + M(l.Label) + " | " + M(l.Text) + " |\n")) + "\n");
-        w.Write("Assessed " + M(a.AssessedUtc) + ", policy " + M(a.PolicyName) + ", inputs SHA-256 `" + a.InputHash + "`.\n\n");
+        w.Write("Assessed " + M(a.AssessedUtc) + ", policy " + M(a.PolicyName) + HazardReport.GroupNote(a) + ", inputs SHA-256 `" + a.InputHash + "`.\n\n");
     }
 }

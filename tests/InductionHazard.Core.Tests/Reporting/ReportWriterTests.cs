@@ -181,6 +181,30 @@ public sealed class ReportWriterTests
     }
 
     [Fact]
+    public void EveryFormatSaysWhichItemsWereJudgedAtThePublicsLimits()
+    {
+        // A visitor named by the row beside a worker with the same item: the report says whose limits judged each.
+        InductionAssessment visitor = HazardAssessor.Assess(
+            InductionEngine.Respond(new Scenario(Named("visitor's ring"), Fixtures.UniformSine(0.4e-3, 50), null, 60) { WearerGroup = ExposureGroup.Public }),
+            HazardPolicy.Default,
+            4);
+        HazardReport report = Report(Clear, visitor);
+        using var reader = new CsvHelper.CsvReader(new StringReader(Write(report, CsvReportWriter.Write)), CultureInfo.InvariantCulture);
+        List<IDictionary<string, object>> rows = reader.GetRecords<dynamic>().Cast<IDictionary<string, object>>().ToList();
+        Assert.Equal(new[] { "Occupational", "Public", string.Empty }, rows.Select(r => (string)r["ExposureGroup"]));
+        Assert.Equal(rows[0]["Policy"], rows[1]["Policy"]);
+
+        using JsonDocument doc = JsonDocument.Parse(Write(report, (r, w) => JsonReportWriter.Write(r, w, includeSeries: false)));
+        Assert.Equal(new[] { "Occupational", "Public" }, doc.RootElement.GetProperty("assessments").EnumerateArray().Select(i => i.GetProperty("exposureGroup").GetString()));
+        Assert.Equal(2, doc.RootElement.GetProperty("report").GetProperty("policies").GetArrayLength());
+
+        foreach (string text in new[] { Write(report, MarkdownReportWriter.Write), Write(report, (r, w) => HtmlReportWriter.Write(r, w)) })
+        {
+            Assert.Equal(1, CountOf(text, "(judged at the general public"));
+        }
+    }
+
+    [Fact]
     public void EveryFormatCarriesTheCautionsAndTheProvenance()
     {
         HazardReport report = Report(Clear, Hot);
