@@ -15,6 +15,18 @@ public sealed class HazardPolicy
     // Set on the copy that judges a row's wearer as one of the public under a policy that judges workers (see For).
     private string? _groupSetBy;
 
+    /// <summary>
+    /// The policy this one was merged over (a station's own over its site's), whose source a value this one does not set
+    /// itself keeps; null for a policy read on its own.
+    /// </summary>
+    internal HazardPolicy? Basis { get; init; }
+
+    /// <summary>The keys (and "ExposureGroup") this policy's own table sets, where it was merged over <see cref="Basis"/>.</summary>
+    internal System.Collections.Generic.IReadOnlyCollection<string>? OwnKeys { get; init; }
+
+    /// <summary>Whether a value comes from <see cref="Basis"/>: this policy's table does not set it.</summary>
+    private bool Inherits(string key) => Basis is not null && OwnKeys is not null && !System.Linq.Enumerable.Contains(OwnKeys, key);
+
     /// <summary>The default policy: published limits and a safety factor of 2.</summary>
     public static HazardPolicy Default { get; } = new();
 
@@ -118,6 +130,7 @@ public sealed class HazardPolicy
         double value = k.Value(this);
         return value.Equals(k.Value(Default))
             ? k.Published
+            : Inherits(k.Name) ? Basis!.SourceOf(key)
             : "site policy '" + Name + "': " + k.Name + " = " + (k.Unit.Length > 0 ? SiFormat.Format(value, k.Unit) : SiFormat.Plain(value));
     }
 
@@ -130,6 +143,7 @@ public sealed class HazardPolicy
     /// </summary>
     public string ExposureGroupSource => _groupSetBy ?? (ExposureGroup == Default.ExposureGroup
         ? "occupational exposure (ICNIRP 2009, ICNIRP 2010)"
+        : Inherits(nameof(ExposureGroup)) ? Basis!.ExposureGroupSource
         : "site policy '" + Name + "': ExposureGroup = " + ExposureGroup);
 
     /// <summary>
@@ -161,6 +175,8 @@ public sealed class HazardPolicy
             ThermalDoseLimitMinutes = ThermalDoseLimitMinutes,
             LaunchSpeedLimit = LaunchSpeedLimit,
             TouchSeconds = TouchSeconds,
+            Basis = Basis,
+            OwnKeys = OwnKeys,
             _groupSetBy = "inventory row: ExposureGroup = Public (the policy '" + Name + "' judges workers)",
         };
     }

@@ -61,6 +61,10 @@ public static class PolicyReader
             ThermalDoseLimitMinutes = Get("ThermalDoseLimit", d.ThermalDoseLimitMinutes),
             TouchSeconds = Get("TouchTime", d.TouchSeconds),
             LaunchSpeedLimit = Get("LaunchSpeedLimit", d.LaunchSpeedLimit),
+
+            // A value it takes from the policy it is merged over cites that policy, not this one.
+            Basis = basis,
+            OwnKeys = basis is null ? null : values.Keys.Concat(group is null ? Array.Empty<string>() : new[] { nameof(HazardPolicy.ExposureGroup) }).ToArray(),
         };
         try
         {

@@ -81,6 +81,15 @@ public class SiteReaderTests
         Assert.Equal(3, site.PolicyAt("Tour stop")!.SafetyFactor);
         Assert.NotEqual(site.Policy.Fingerprint, gallery.Fingerprint);
 
+        // Each value cites the policy that set it: the station's own, or the site's that it keeps.
+        Assert.Equal("site policy 'Site rules at Gallery': SafetyFactor = 4", gallery.SourceOf("SafetyFactor"));
+        Assert.Equal("site policy 'Site rules': TouchTime = 2 s", gallery.SourceOf("TouchTime"));
+        Assert.Equal("site policy 'Site rules at Gallery': ExposureGroup = Public", gallery.ExposureGroupSource);
+        Assert.Equal("site policy 'Tour rules': ExposureGroup = Public", site.PolicyAt("Tour stop")!.ExposureGroupSource);
+        Assert.Equal("site policy 'Site rules': SafetyFactor = 3", site.PolicyAt("Tour stop")!.SourceOf("SafetyFactor"));
+        Assert.Equal(HazardPolicy.Default.SourceOf("AlternatingVoltageLimit"), gallery.SourceOf("AlternatingVoltageLimit"));
+        Assert.Equal("site policy 'Site rules': TouchTime = 2 s", gallery.For(ExposureGroup.Public).SourceOf("TouchTime"));
+
         // Without a site policy a station's merges over the published limits.
         data.Remove("Policy");
         HazardPolicy alone = SiteReader.Read(data, "site.psd1").PolicyAt("Gallery")!;
