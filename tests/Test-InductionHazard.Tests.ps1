@@ -598,6 +598,43 @@ Loose loop,Copper,20 mm,2 mm,Free,Public,stores
         }
     }
 
+    Context 'a row''s own exposure time, and columns a row does not give' {
+        BeforeAll {
+            $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform -Name 'Heater coil'
+            $timed = @'
+Name,Material,Diameter,WireDiameter,Contact,ExposureTime,LeaveTime,Position,Holder
+Brief ring,Copper,20 mm,2 mm,Skin,10 s,2 s,"0.5 m, 0, 0",cleaner
+All-day ring,Copper,20 mm,2 mm,Skin,,,"0.5 m, 0, 0",technician
+'@ | ConvertFrom-Csv
+        }
+
+        It 'assesses a row for its own ExposureTime and LeaveTime, as -ExposureTime and -LeaveTime would, and the others for the run''s' {
+            $out = @($timed | Test-InductionHazard -Source $heater -ExposureTime '1 h' -WarningAction SilentlyContinue)
+            $brief = Test-InductionHazard -Item (New-ConductiveItem -Name 'Brief ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm') -Source $heater -ExposureTime '10 s' -LeaveTime '2 s'
+            $long = Test-InductionHazard -Item (New-ConductiveItem -Name 'All-day ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm') -Source $heater -ExposureTime '1 h'
+            $out[0].BurnMargin | Should -Be $brief.BurnMargin
+            $out[0].Response.Scenario.LeaveSeconds | Should -Be 2
+            $out[1].BurnMargin | Should -Be $long.BurnMargin
+            $out[0].BurnMargin | Should -BeGreaterThan $out[1].BurnMargin -Because '10 s in the field heats the skin less than an hour'
+            $out[0].Inventory.Keys | Should -Be @('Position', 'Holder') -Because 'the times are the row''s fields; Position is not read per row'
+        }
+
+        It 'warns once a run that a column named like a parameter it does not read per row is kept as the inventory''s own' {
+            $null = $timed | Test-InductionHazard -Source $heater -WarningVariable warned -WarningAction SilentlyContinue
+            @($warned).Count | Should -Be 1
+            "$($warned[0])" | Should -BeLike "The column 'Position' is not read per row: it is kept as one of the inventory's own columns, and every row is placed at -Position*give a row's own as X, Y, Z."
+        }
+
+        It 'refuses a row''s time without its unit or out of range, naming the row and the field, and goes on' {
+            $bad = $timed[0].PSObject.Copy(); $bad.ExposureTime = '30'
+            $far = $timed[0].PSObject.Copy(); $far.ExposureTime = '9 h'
+            $out = @($bad, $far, $timed[1] | Test-InductionHazard -Source $heater -ErrorVariable failed -ErrorAction SilentlyContinue -WarningAction SilentlyContinue)
+            $out.ItemName | Should -Be @('All-day ring')
+            "$($failed[0])" | Should -Match "^row 1 \('Brief ring'\): ExposureTime: '30' has no unit"
+            "$($failed[1])" | Should -Match "^row 2 \('Brief ring'\): ExposureTime: must be between 100 ms and 28800 s = 8 h"
+        }
+    }
+
     Context 'the demo site as a person reads it' {
         It 'shows every margin in the table as a plain figure between 0.001 and 1000, or as a bound' {
             $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')

@@ -79,6 +79,18 @@ internal static class Fixtures
     public static FieldSource BrokenGeometry(FieldWaveform waveform) =>
         new("broken", new[] { new SourceTerm(new NaNGeometry(), waveform) });
 
+    /// <summary>An inventory row of a copper ring with a Holder column, and any further columns given.</summary>
+    public static List<KeyValuePair<string, object?>> InventoryRow(params (string Key, object? Value)[] extra)
+    {
+        var row = new List<KeyValuePair<string, object?>> { new("Name", "Ring"), new("Material", "Copper"), new("Diameter", "20 mm"), new("WireDiameter", "2 mm"), new("Holder", "holder A") };
+        foreach ((string key, object? value) in extra)
+        {
+            row.Add(new KeyValuePair<string, object?>(key, value));
+        }
+
+        return row;
+    }
+
     public static InductionResponse Respond(ConductiveItem item, FieldSource source, double? exposure = null, Vector3D? normal = null) =>
         InductionEngine.Respond(new Scenario(item, source, new Placement(Vector3D.Zero, normal), exposure));
 

@@ -10,7 +10,7 @@ namespace InductionHazard.Assessment;
 
 /// <summary>
 /// An inventory row's own columns (asset tag, holder, location, notes...): every column of the row that is not an
-/// item, placement, station or exposure-group field, with its text, in the row's order. They travel with the assessment into every
+/// item, placement, station, exposure-group or exposure-time field, with its text, in the row's order. They travel with the assessment into every
 /// report, so that results never have to be joined back to the inventory by row number. Names match without regard
 /// to case. Shown as "AssetTag: MH-J-001; Holder: technician A" wherever text is wanted (Export-Csv, a table).
 /// </summary>
@@ -57,7 +57,8 @@ public sealed class InventoryFields : ReadOnlyDictionary<string, string>
         IEnumerable<string> names = ItemRecordReader.Aliases.SelectMany(p => p.Value.Append(p.Key))
             .Concat(PlacementRecordReader.Aliases.SelectMany(p => p.Value.Append(p.Key)))
             .Concat(HazardSite.StationAliases.Append("Station"))
-            .Concat(WearerGroupReader.Aliases.Append(WearerGroupReader.Field));
+            .Concat(WearerGroupReader.Aliases.Append(WearerGroupReader.Field))
+            .Concat(ExposureRecordReader.Fields);
         return new HashSet<string>(names.Select(RecordFields.Normalize), StringComparer.Ordinal);
     }
 }

@@ -164,10 +164,11 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
                     // A visitor the row names is judged at the public's limits along the whole ray.
                     HazardPolicy policy = _policy.For(wearer);
+                    (double? rowExposure, double? rowLeave) = record is null ? (null, null) : ExposureRecordReader.Read(record, label);
 
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, _normal, _exposure, null, _velocity,
+                        item, _source, _from, Direction, MaxDistance, policy, _normal, rowExposure ?? _exposure, null, _velocity, rowLeave,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;

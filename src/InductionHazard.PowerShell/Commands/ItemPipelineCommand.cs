@@ -51,6 +51,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// </summary>
     private TaskFactory? _workers;
     private IReadOnlyDictionary<string, string>? _units;
+    private readonly UnreadColumns _unreadColumns = new();
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     /// <remarks>
@@ -228,6 +229,14 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
         PSObject input = given ?? new PSObject(string.Empty);
         IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
+        if (record is not null)
+        {
+            foreach (string unread in _unreadColumns.NewIn(record))
+            {
+                WriteWarning(unread);
+            }
+        }
+
         string? name = record is null ? null : ItemRecordReader.NameOf(record);
         string label = given is null ? ItemRecordReader.Label(row, null)
             : record is null ? ItemInput.Label(input, row) : ItemRecordReader.Label(row, name);
@@ -312,6 +321,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     {
         ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, _acceptUnusualSize);
         (Vector3D? rowPosition, Vector3D? rowNormal) = record is null ? (null, null) : PlacementRecordReader.Read(record, label, _units);
+        (double? rowExposure, double? rowLeave) = record is null ? (null, null) : ExposureRecordReader.Read(record, label, _units);
         Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
             : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
@@ -319,7 +329,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal,
             Velocity ?? station?.Placement.Velocity);
-        return new Scenario(item, station?.Source ?? _source, placement, ExposureTime ?? station?.ExposureSeconds, _environment, LeaveTime ?? station?.LeaveSeconds)
+        return new Scenario(item, station?.Source ?? _source, placement, rowExposure ?? ExposureTime ?? station?.ExposureSeconds, _environment, rowLeave ?? LeaveTime ?? station?.LeaveSeconds)
         {
             StationName = station?.Name,
             WearerGroup = record is null ? null : WearerGroupReader.Read(record, label),

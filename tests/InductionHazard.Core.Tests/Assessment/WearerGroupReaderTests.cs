@@ -9,16 +9,7 @@ namespace InductionHazard.Tests.Assessment;
 /// <summary>An inventory row's ExposureGroup column: the group of the person who wears or holds the row's item.</summary>
 public class WearerGroupReaderTests
 {
-    private static List<KeyValuePair<string, object?>> Row(params (string Key, object? Value)[] extra)
-    {
-        var row = new List<KeyValuePair<string, object?>> { new("Name", "Badge"), new("Material", "Copper"), new("Diameter", "20 mm"), new("WireDiameter", "2 mm"), new("Holder", "guest B") };
-        foreach ((string key, object? value) in extra)
-        {
-            row.Add(new KeyValuePair<string, object?>(key, value));
-        }
-
-        return row;
-    }
+    private static List<KeyValuePair<string, object?>> Row(params (string Key, object? Value)[] extra) => Fixtures.InventoryRow(extra);
 
     [Theory]
     [InlineData("ExposureGroup", "Public", ExposureGroup.Public)]

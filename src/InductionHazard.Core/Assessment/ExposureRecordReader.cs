@@ -1,0 +1,65 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Errors;
+using InductionHazard.Quantities;
+
+namespace InductionHazard.Assessment;
+
+/// <summary>
+/// The times an inventory row gives for its own item, over the run's: ExposureTime, how long the item stays in the
+/// field (a cleaner's ring for 5 min beside a technician's for 8 h), and LeaveTime, how long carrying it out takes.
+/// Each a time with its unit, as every spreadsheet value is ("10 min"; a bare number takes the unit its column or the
+/// -Unit table names, or is refused), from 0.1 s to 8 h.
+/// </summary>
+public static class ExposureRecordReader
+{
+    /// <summary>The columns, each by its name (and no other).</summary>
+    public static IReadOnlyList<string> Fields { get; } = new[] { "ExposureTime", "LeaveTime" };
+
+    private static readonly string[] NoAliases = Array.Empty<string>();
+    private static readonly string[] Keys = { RecordFields.Normalize("ExposureTime"), RecordFields.Normalize("LeaveTime") };
+
+    /// <summary>The exposure and leave times the record gives, s, each null where it gives none.</summary>
+    /// <param name="record">The row's named values.</param>
+    /// <param name="label">How the row is named in messages.</param>
+    /// <param name="units">The unit of each field's bare numbers where the column names do not say (a -Unit table).</param>
+    /// <exception cref="RecordException">A time is malformed, has no unit, or is outside 0.1 s to 8 h.</exception>
+    public static (double? ExposureSeconds, double? LeaveSeconds) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
+    {
+        // Most rows have neither column: a reader of the whole record is made only for one that has one.
+        bool present = false;
+        foreach (KeyValuePair<string, object?> pair in record)
+        {
+            if (pair.Key is not null && Array.IndexOf(Keys, RecordFields.FieldKey(pair.Key)) >= 0)
+            {
+                present = true;
+                break;
+            }
+        }
+
+        if (!present)
+        {
+            return (null, null);
+        }
+
+        var fields = new RecordFields(record, units);
+        double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false, NoAliases);
+        double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false, NoAliases);
+        if (exposure is { } e && PhysicalRanges.ExposureTime.Problem(e) is { } exposureProblem)
+        {
+            fields.AddError("ExposureTime", exposureProblem);
+        }
+
+        if (leave is { } l && PhysicalRanges.ExposureTime.For("LeaveTime").Problem(l) is { } leaveProblem)
+        {
+            fields.AddError("LeaveTime", leaveProblem);
+        }
+
+        if (fields.Errors.Count > 0)
+        {
+            throw new RecordException(label, fields.Errors);
+        }
+
+        return (exposure, leave);
+    }
+}
