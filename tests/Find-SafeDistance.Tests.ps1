@@ -123,4 +123,15 @@ Describe 'Find-SafeDistance' {
         (Find-SafeDistance -Item $loop -Site $site -Station 'Bore approach' -Direction z -MaxDistance '10 m' -Velocity '0, 0, 0').DistanceMeters | Should -Be $still.DistanceMeters
         { Find-SafeDistance -Item $loop -Source $magnet -Direction z -Velocity '0, 0, 300 m/s' -ErrorAction Stop } | Should -Throw '*Velocity*'
     }
+
+    It 'searches for a row''s own ExposureTime as -ExposureTime would' {
+        $heater = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '12 kHz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater coil'
+        $row = 'Name,Material,Diameter,WireDiameter,Contact,ExposureTime', 'Loose ring,Copper,20 mm,2 mm,Free,10 s' | ConvertFrom-Csv
+        $item = New-ConductiveItem -Name 'Loose ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Contact Free
+        $fromRow = $row | Find-SafeDistance -Source $heater -From '0, 0, 50 mm' -Direction z -MaxDistance '3 m'
+        $given = $item | Find-SafeDistance -Source $heater -From '0, 0, 50 mm' -Direction z -MaxDistance '3 m' -ExposureTime '10 s'
+        $default = $item | Find-SafeDistance -Source $heater -From '0, 0, 50 mm' -Direction z -MaxDistance '3 m'
+        $fromRow.DistanceMeters | Should -Be $given.DistanceMeters
+        $fromRow.DistanceMeters | Should -BeLessThan $default.DistanceMeters -Because 'ten seconds in the field heat the ring less than a continuous field does'
+    }
 }
