@@ -229,11 +229,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         // A $null in the pipeline (an empty line, a missing object) is that row's error, not the shell's binding error.
         PSObject input = given ?? new PSObject(string.Empty);
         IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
-        if (record is not null)
+        if (record is not null && _unreadColumns.NewIn(record) is { } unread)
         {
-            foreach (string unread in _unreadColumns.NewIn(record))
+            foreach (string warning in unread)
             {
-                WriteWarning(unread);
+                WriteWarning(warning);
             }
         }
 
