@@ -623,6 +623,11 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,"0.5 m, 0, 0",technician
             $null = $timed | Test-InductionHazard -Source $heater -WarningVariable warned -WarningAction SilentlyContinue
             @($warned).Count | Should -Be 1
             "$($warned[0])" | Should -BeLike "The column 'Position' is not read per row: it is kept as one of the inventory's own columns, and every row is placed at -Position*give a row's own as X, Y, Z."
+            # A later row with columns of its own is looked at afresh: its new column is named once, the old one not again.
+            $moving = @{ Name = 'Moved ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; Position = '1 m, 0, 0'; Velocity = '1 m/s, 0, 0' }
+            $null = @($timed[0], $moving, $timed[1], $moving) | Test-InductionHazard -Source $heater -WarningVariable again -WarningAction SilentlyContinue
+            @($again).Count | Should -Be 2
+            "$($again[1])" | Should -BeLike "The column 'Velocity' is not read per row*"
         }
 
         It 'refuses a row''s time without its unit or out of range, naming the row and the field, and goes on' {
