@@ -10,9 +10,9 @@ namespace InductionHazard.Assessment;
 
 /// <summary>
 /// An inventory row's own columns (asset tag, holder, location, notes...): every column of the row that is not an
-/// item, placement, station, exposure-group or exposure-time field, with its text, in the row's order. They travel with the assessment into every
-/// report, so that results never have to be joined back to the inventory by row number. Names match without regard
-/// to case. Shown as "AssetTag: MH-J-001; Holder: technician A" wherever text is wanted (Export-Csv, a table).
+/// item, placement, station, exposure-group or exposure-time field, with its text, in the row's order. They travel
+/// with the assessment into every report, so that results never have to be joined back to the inventory by row
+/// number. Names match without regard to case. Shown as "AssetTag: MH-J-001; Holder: technician A" wherever text is wanted (Export-Csv, a table).
 /// </summary>
 public sealed class InventoryFields : ReadOnlyDictionary<string, string>
 {
