@@ -27,17 +27,7 @@ public static class ExposureRecordReader
     public static (double? ExposureSeconds, double? LeaveSeconds) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
     {
         // Most rows have neither column: a reader of the whole record is made only for one that has one.
-        bool present = false;
-        foreach (KeyValuePair<string, object?> pair in record)
-        {
-            if (pair.Key is not null && Array.IndexOf(Keys, RecordFields.FieldKey(pair.Key)) >= 0)
-            {
-                present = true;
-                break;
-            }
-        }
-
-        if (!present)
+        if (!RecordFields.HasColumn(record, Keys))
         {
             return (null, null);
         }

@@ -1,4 +1,3 @@
-using System;
 using System.Collections.Generic;
 using InductionHazard.Criteria;
 using InductionHazard.Errors;
@@ -28,17 +27,7 @@ public static class WearerGroupReader
     public static ExposureGroup? Read(IEnumerable<KeyValuePair<string, object?>> record, string label)
     {
         // Most rows have no such column: a reader of the whole record is made only for one that has it.
-        bool present = false;
-        foreach (KeyValuePair<string, object?> pair in record)
-        {
-            if (pair.Key is not null && IsField(RecordFields.FieldKey(pair.Key)))
-            {
-                present = true;
-                break;
-            }
-        }
-
-        if (!present)
+        if (!RecordFields.HasColumn(record, Keys))
         {
             return null;
         }
@@ -53,9 +42,5 @@ public static class WearerGroupReader
         return group;
     }
 
-    private static bool IsField(string key) =>
-        string.Equals(key, FieldKey, StringComparison.Ordinal) || string.Equals(key, AliasKey, StringComparison.Ordinal);
-
-    private static readonly string FieldKey = RecordFields.Normalize(Field);
-    private static readonly string AliasKey = RecordFields.Normalize(AliasArray[0]);
+    private static readonly string[] Keys = { RecordFields.Normalize(Field), RecordFields.Normalize(AliasArray[0]) };
 }

@@ -177,6 +177,25 @@ public sealed class RecordFields
     public static IEnumerable<KeyValuePair<string, object?>> FromTable(System.Collections.IDictionary table) =>
         table.Keys.Cast<object>().Select(k => new KeyValuePair<string, object?>(Convert.ToString(k, CultureInfo.InvariantCulture) ?? string.Empty, table[k]));
 
+    /// <summary>
+    /// Whether a record has a column for any of the fields (by <see cref="FieldKey"/>), found without making a reader of
+    /// the whole record: a reader of a field most rows lack looks first.
+    /// </summary>
+    /// <param name="record">The named values.</param>
+    /// <param name="fieldKeys">The fields' keys, normalized.</param>
+    public static bool HasColumn(IEnumerable<KeyValuePair<string, object?>> record, string[] fieldKeys)
+    {
+        foreach (KeyValuePair<string, object?> pair in record)
+        {
+            if (pair.Key is not null && Array.IndexOf(fieldKeys, FieldKey(pair.Key)) >= 0)
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
     /// <summary>The key a column name matches fields by: normalized, without a unit ("Diameter (mm)" gives "diameter").</summary>
     public static string FieldKey(string column) => Normalize(SplitUnit(column).Name);
 
