@@ -124,6 +124,22 @@ Describe 'Find-SafeDistance' {
         { Find-SafeDistance -Item $loop -Source $magnet -Direction z -Velocity '0, 0, 300 m/s' -ErrorAction Stop } | Should -Throw '*Velocity*'
     }
 
+    It 'takes a row''s own velocity and normal along the whole ray as -Velocity and -Normal would, and says once that a row''s position is not read' {
+        $magnet = New-FieldWaveform -Ramp -From 0 -To '500 A' -Duration '10 min' | New-FieldSource -Solenoid -Radius '300 mm' -Length '1.2 m' -Turns 4000 -Name 'Magnet M2'
+        $loop = New-ConductiveItem -Name 'Loose loop' -Material Copper -Diameter '200 mm' -WireDiameter '4 mm' -Contact Free
+        $moving = Find-SafeDistance -Item $loop -Source $magnet -From '0, 0, 700 mm' -Direction z -Normal z -MaxDistance '10 m' -Velocity '0, 0, -1.5 m/s'
+        $still = Find-SafeDistance -Item $loop -Source $magnet -From '0, 0, 700 mm' -Direction z -Normal z -MaxDistance '10 m'
+        $rows = @(
+            [pscustomobject]@{ Name = 'Carried loop'; Material = 'Copper'; Diameter = '200 mm'; WireDiameter = '4 mm'; Contact = 'Free'; Normal = 'z'; Velocity = '0, 0, -1.5 m/s'; X = '5 m'; Y = '0'; Z = '0' }
+            [pscustomobject]@{ Name = 'Parked loop'; Material = 'Copper'; Diameter = '200 mm'; WireDiameter = '4 mm'; Contact = 'Free'; Normal = 'z'; Velocity = '0, 0, 0'; X = '6 m'; Y = '0'; Z = '0' }
+        )
+        $out = @($rows | Find-SafeDistance -Source $magnet -From '0, 0, 700 mm' -Direction z -Normal x -MaxDistance '10 m' -WarningVariable warned -WarningAction SilentlyContinue)
+        $out[0].DistanceMeters | Should -Be $moving.DistanceMeters -Because 'the row''s velocity and normal hold at every point, over -Normal x'
+        $out[1].DistanceMeters | Should -Be $still.DistanceMeters -Because 'a row''s zero velocity places the item'
+        @($warned).Count | Should -Be 1
+        "$($warned[0])" | Should -BeLike "row 1 ('Carried loop') gives a position (X, Y, Z or Position), which the search does not read: every row is searched along the ray from -From*"
+    }
+
     It 'searches for a row''s own ExposureTime as -ExposureTime would' {
         $heater = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '12 kHz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater coil'
         $row = 'Name,Material,Diameter,WireDiameter,Contact,ExposureTime', 'Loose ring,Copper,20 mm,2 mm,Free,10 s' | ConvertFrom-Csv

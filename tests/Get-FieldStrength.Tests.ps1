@@ -48,6 +48,8 @@ Describe 'Get-FieldStrength' {
         $one = @{ X = '200 mm'; Y = 0; Z = 0 } | Get-FieldStrength -Source $line
         $pair = @{ X = '200 mm'; Y = 0; Z = 0 } | Get-FieldStrength -Source $line, $return
         $pair.PeakFluxDensityTesla | Should -BeLessThan (0.2 * $one.PeakFluxDensityTesla) -Because 'a go-and-return pair cancels far away'
+        (@{ Position = '200 mm, 0, 0' } | Get-FieldStrength -Source $line).PeakFluxDensityTesla | Should -Be $one.PeakFluxDensityTesla -Because 'one Position column is the same point as X, Y, Z'
+        (@{ 'Position (mm)' = '200, 0, 0' } | Get-FieldStrength -Source $line).PeakFluxDensityTesla | Should -Be $one.PeakFluxDensityTesla
     }
 
     It 'writes an error naming the point on a conductor, and goes on' {

@@ -443,6 +443,41 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             $open.GapVoltageVolts | Should -Be $open.MotionalEmfVolts -Because 'the ramp is slow: the motion gives the larger emf'
         }
 
+        It 'moves a row''s item at its own velocity, over -Velocity, as -Velocity would; a row''s zero velocity places it; a row''s Position and Normal place it as X, Y, Z and NormalX, NormalY, NormalZ do' {
+            $coil = New-FieldWaveform -Ramp -From 0 -To '2 kA' -Duration '1 s' | New-FieldSource -Coil -Radius '50 mm' -Turns 10
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '1 mm' -Contact Held
+            $byParameter = Test-InductionHazard -Item $ring -Source $coil -Position '0, 0, 30 mm' -Normal z -Velocity '0, 0, 1.5 m/s'
+            $placed = Test-InductionHazard -Item $ring -Source $coil -Position '0, 0, 30 mm' -Normal z
+            $rows = @'
+Name,Material,Diameter,WireDiameter,Contact,Position,Normal,Velocity,VelocityX,VelocityY,VelocityZ
+Ring,Copper,20 mm,1 mm,Held,"0, 0, 30 mm",z,"0, 0, 1.5 m/s",,,
+Ring,Copper,20 mm,1 mm,Held,"0, 0, 30 mm","0, 0, 1",,0,0,1.5 m/s
+Ring,Copper,20 mm,1 mm,Held,"0, 0, 30 mm",z,"0, 0, 0",,,
+Ring,Copper,20 mm,1 mm,Held,"0, 0, 30 mm",z,,,,
+'@ | ConvertFrom-Csv
+            $out = @($rows | Test-InductionHazard -Source $coil -Velocity '0, 0, 0.5 m/s' -WarningVariable warned -WarningAction SilentlyContinue)
+            @($warned).Count | Should -Be 0 -Because 'the rows'' Position, Normal and Velocity columns are read'
+            $out[0].Response.BrakingForceNewtons | Should -Be $byParameter.Response.BrakingForceNewtons
+            $out[0].MinimumMargin | Should -Be $byParameter.MinimumMargin
+            $out[1].Response.BrakingForceNewtons | Should -Be $byParameter.Response.BrakingForceNewtons -Because 'VelocityX, VelocityY, VelocityZ give the same velocity'
+            $out[2].Response.BrakingForceNewtons | Should -BeNullOrEmpty -Because 'a row''s zero velocity stands over -Velocity: the item is placed'
+            $out[2].MinimumMargin | Should -Be $placed.MinimumMargin
+            $out[3].Response.Scenario.Placement.Velocity.Z | Should -Be 0.5 -Because 'a row without a velocity is moved at -Velocity'
+            $out[3].Response.BrakingForceNewtons | Should -BeLessThan $out[0].Response.BrakingForceNewtons
+            foreach ($r in $out) { $r.Response.Scenario.Placement.Centre.Z | Should -Be 0.03; $r.Inventory.Count | Should -Be 0 }
+        }
+
+        It 'refuses a row''s speed no person moves an item at, naming the row and its column, and goes on' {
+            $coil = New-FieldWaveform -Ramp -From 0 -To '2 kA' -Duration '1 s' | New-FieldSource -Coil -Radius '50 mm' -Turns 10
+            $rows = @(
+                [pscustomobject]@{ Name = 'Thrown ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '1 mm'; Velocity = '0, 0, 300 m/s' }
+                [pscustomobject]@{ Name = 'Carried ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '1 mm'; Velocity = '0, 0, 1 m/s' }
+            )
+            $out = @($rows | Test-InductionHazard -Source $coil -Position '0, 0, 30 mm' -ErrorVariable failed -ErrorAction SilentlyContinue)
+            $out.ItemName | Should -Be @('Carried ring')
+            "$($failed[0])" | Should -Match "^row 1 \('Thrown ring'\): Velocity: the speed must be between 0 m/s and 30 m/s"
+        }
+
         It 'refuses a speed no person moves an item at, naming -Velocity' {
             $coil = New-FieldWaveform -Ramp -From 0 -To '2 kA' -Duration '1 s' | New-FieldSource -Coil -Radius '50 mm' -Turns 10
             { New-ConductiveItem -Material Copper -Diameter '20 mm' -WireDiameter '1 mm' | Test-InductionHazard -Source $coil -Velocity '0, 0, 300 m/s' } |
@@ -602,9 +637,9 @@ Loose loop,Copper,20 mm,2 mm,Free,Public,stores
         BeforeAll {
             $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform -Name 'Heater coil'
             $timed = @'
-Name,Material,Diameter,WireDiameter,Contact,ExposureTime,LeaveTime,Position,Holder
-Brief ring,Copper,20 mm,2 mm,Skin,10 s,2 s,"0.5 m, 0, 0",cleaner
-All-day ring,Copper,20 mm,2 mm,Skin,,,"0.5 m, 0, 0",technician
+Name,Material,Diameter,WireDiameter,Contact,ExposureTime,LeaveTime,AmbientTemperature,Holder
+Brief ring,Copper,20 mm,2 mm,Skin,10 s,2 s,25 degC,cleaner
+All-day ring,Copper,20 mm,2 mm,Skin,,,25 degC,technician
 '@ | ConvertFrom-Csv
         }
 
@@ -616,18 +651,18 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,"0.5 m, 0, 0",technician
             $out[0].Response.Scenario.LeaveSeconds | Should -Be 2
             $out[1].BurnMargin | Should -Be $long.BurnMargin
             $out[0].BurnMargin | Should -BeGreaterThan $out[1].BurnMargin -Because '10 s in the field heats the skin less than an hour'
-            $out[0].Inventory.Keys | Should -Be @('Position', 'Holder') -Because 'the times are the row''s fields; Position is not read per row'
+            $out[0].Inventory.Keys | Should -Be @('AmbientTemperature', 'Holder') -Because 'the times are the row''s fields; AmbientTemperature is not read per row'
         }
 
         It 'warns once a run that a column named like a parameter it does not read per row is kept as the inventory''s own' {
             $null = $timed | Test-InductionHazard -Source $heater -WarningVariable warned -WarningAction SilentlyContinue
             @($warned).Count | Should -Be 1
-            "$($warned[0])" | Should -BeLike "The column 'Position' is not read per row: it is kept as one of the inventory's own columns, and every row is placed at -Position*give a row's own as X, Y, Z."
+            "$($warned[0])" | Should -BeLike "The column 'AmbientTemperature' is not read per row: it is kept as one of the inventory's own columns, and every row is assessed at -AmbientTemperature; rows in other surroundings need a run of their own."
             # A later row with columns of its own is looked at afresh: its new column is named once, the old one not again.
-            $moving = @{ Name = 'Moved ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; Position = '1 m, 0, 0'; Velocity = '1 m/s, 0, 0' }
+            $moving = @{ Name = 'Judged ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AmbientTemperature = '25 degC'; Policy = 'site rules' }
             $null = @($timed[0], $moving, $timed[1], $moving) | Test-InductionHazard -Source $heater -WarningVariable again -WarningAction SilentlyContinue
             @($again).Count | Should -Be 2
-            "$($again[1])" | Should -BeLike "The column 'Velocity' is not read per row*"
+            "$($again[1])" | Should -BeLike "The column 'Policy' is not read per row*"
         }
 
         It 'refuses a row''s time without its unit or out of range, naming the row and the field, and goes on' {

@@ -71,7 +71,7 @@ public class EngineBenchmarks
         KeyValuePair<string, object?>[] row = _rows[_next];
         _next = (_next + 1) % _rows.Length;
         ConductiveItem item = ItemRecordReader.Read(row, MaterialLibrary.BuiltIn, _next, null, false);
-        (Vector3D? position, Vector3D? normal) = PlacementRecordReader.Read(row, "row", null);
+        (Vector3D? position, Vector3D? normal, _) = PlacementRecordReader.Read(row, "row", null);
         var scenario = new Scenario(item, _ramp10ms, new Placement(position ?? Vector3D.Zero, normal, null)) { Inventory = InventoryFields.Of(row) };
         return HazardAssessor.Assess(InductionEngine.Respond(scenario), HazardPolicy.Default).Verdict;
     }

@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using InductionHazard.Errors;
 using InductionHazard.Quantities;
@@ -5,15 +6,18 @@ using InductionHazard.Quantities;
 namespace InductionHazard.Items;
 
 /// <summary>
-/// Reads where an item sits from a data record: X, Y, Z (lengths such as '300 mm'; a bare number in a text cell
-/// needs the unit in its column's name or the -Unit table, as for the item's sizes)
-/// and NormalX, NormalY, NormalZ (a direction). A record that gives none leaves the placement to the command's
-/// parameters.
+/// Reads where an item sits and how it is moved from a data record: its position as X, Y, Z or one Position column
+/// ('0.3 m, 0, 1.2 m'), lengths; its normal as NormalX, NormalY, NormalZ or one Normal column ('0, 0, 1', 'z'), a
+/// direction; its velocity as VelocityX, VelocityY, VelocityZ or one Velocity column ('0, 0, -1.5 m/s'), speeds. A bare
+/// number in a text cell needs the unit in its column's name or the -Unit table, as for the item's sizes. A record
+/// that gives none of a vector leaves it to the command's parameters; a velocity of zero says the item is placed,
+/// not moved.
 /// </summary>
 public static class PlacementRecordReader
 {
     private static readonly string[] Position = { "X", "Y", "Z" };
     private static readonly string[] Normal = { "NormalX", "NormalY", "NormalZ" };
+    private static readonly string[] Velocity = { "VelocityX", "VelocityY", "VelocityZ" };
 
     /// <summary>The aliases each field accepts.</summary>
     public static IReadOnlyDictionary<string, string[]> Aliases { get; } = new Dictionary<string, string[]>
@@ -21,21 +25,33 @@ public static class PlacementRecordReader
         ["X"] = new[] { "PositionX", "PosX" },
         ["Y"] = new[] { "PositionY", "PosY" },
         ["Z"] = new[] { "PositionZ", "PosZ" },
+        ["Position"] = Array.Empty<string>(),
         ["NormalX"] = new[] { "NX" },
         ["NormalY"] = new[] { "NY" },
         ["NormalZ"] = new[] { "NZ" },
+        ["Normal"] = Array.Empty<string>(),
+        ["VelocityX"] = new[] { "VelX" },
+        ["VelocityY"] = new[] { "VelY" },
+        ["VelocityZ"] = new[] { "VelZ" },
+        ["Velocity"] = Array.Empty<string>(),
     };
 
-    /// <summary>The position and normal a record gives, each null when the record gives none of its components.</summary>
-    /// <exception cref="RecordException">Some but not all components are given, or one is malformed.</exception>
-    public static (Vector3D? Position, Vector3D? Normal) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
+    /// <summary>The position, normal and velocity a record gives, each null when the record gives none of it.</summary>
+    /// <exception cref="RecordException">Some but not all components are given, a vector is given both ways, one is malformed, the normal is zero or the speed is beyond what a person moves an item at.</exception>
+    public static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
     {
         var fields = new RecordFields(record, units);
-        Vector3D? position = Vector(fields, Position, QuantityKind.Length);
-        Vector3D? normal = Vector(fields, Normal, null);
+        Vector3D? position = Vector(fields, "Position", Position, QuantityKind.Length);
+        Vector3D? normal = Vector(fields, "Normal", Normal, null);
+        Vector3D? velocity = Vector(fields, "Velocity", Velocity, QuantityKind.Speed);
         if (normal is { } n && (n.X == 0 && n.Y == 0 && n.Z == 0))
         {
-            fields.AddError("NormalX", "the normal NormalX, NormalY, NormalZ must not be zero");
+            fields.AddError(fields.Has("Normal") ? "Normal" : "NormalX", "the normal must not be zero");
+        }
+
+        if (velocity is { } v && PhysicalRanges.Speed.Problem(v.Length) is { } tooFast)
+        {
+            fields.AddError(fields.Has("Velocity") ? "Velocity" : "VelocityX", "the speed " + tooFast);
         }
 
         if (fields.Errors.Count > 0)
@@ -43,10 +59,10 @@ public static class PlacementRecordReader
             throw new RecordException(label, fields.Errors);
         }
 
-        return (position, normal);
+        return (position, normal, velocity);
     }
 
-    private static Vector3D? Vector(RecordFields fields, string[] names, QuantityKind? kind)
+    private static Vector3D? Vector(RecordFields fields, string whole, string[] names, QuantityKind? kind)
     {
         bool any = false, all = true;
         foreach (string name in names)
@@ -54,6 +70,17 @@ public static class PlacementRecordReader
             bool has = fields.Has(name, Aliases[name]);
             any |= has;
             all &= has;
+        }
+
+        if (fields.Has(whole))
+        {
+            if (any)
+            {
+                fields.AddError(whole, "give " + whole + " or " + string.Join(", ", names) + ", not both");
+                return null;
+            }
+
+            return fields.Vector(whole, kind);
         }
 
         if (!any)

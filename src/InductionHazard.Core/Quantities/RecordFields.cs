@@ -101,27 +101,10 @@ public sealed class RecordFields
             return null;
         }
 
-        if (raw is string text && QuantityParser.IsBareNumber(text) && !IsZero(text))
+        raw = WithColumnUnit(raw, field, kind, aliases, null);
+        if (raw is null)
         {
-            // A spreadsheet's bare number is never taken to be SI: it takes the unit its column names, or the
-            // -Unit table's, or it is refused with both fixes.
-            string? unit = UnitOf(field, aliases);
-            if (unit is null)
-            {
-                (_errors ??= new()).Add(new FieldError(
-                    field,
-                    "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + text.Trim() + " " + Example(kind) + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
-                    "MissingUnit"));
-                return null;
-            }
-
-            if (!QuantityParser.IsUnitOf(unit, kind))
-            {
-                (_errors ??= new()).Add(new FieldError(field, "the unit '" + unit + "' named for this column is not a unit of " + QuantityKindInfo.Of(kind).Description.Substring(QuantityKindInfo.Of(kind).Description.IndexOf(' ') + 1), "InvalidQuantity"));
-                return null;
-            }
-
-            raw = text.Trim() + " " + unit;
+            return null;
         }
 
         if (QuantityParser.TryParse(raw, kind, out double value, out string? error))
@@ -137,6 +120,104 @@ public sealed class RecordFields
 
         (_errors ??= new()).Add(new FieldError(field, error!, "InvalidQuantity"));
         return null;
+    }
+
+    /// <summary>
+    /// A text that is a bare number with the unit its column names, or the -Unit table's, added: a spreadsheet's bare
+    /// number is never taken to be SI. Null, with the error recorded (both fixes named), where neither names one or the
+    /// unit named is not one of the kind. Anything else is returned as it is.
+    /// </summary>
+    /// <param name="raw">The value as given.</param>
+    /// <param name="field">The field, for the unit's lookup and the message.</param>
+    /// <param name="kind">The quantity the value must be.</param>
+    /// <param name="aliases">The field's aliases.</param>
+    /// <param name="example">How the whole field would be written with its unit, where the value is one part of it (a vector's component); null for the value itself.</param>
+    private object? WithColumnUnit(object raw, string field, QuantityKind kind, string[] aliases, string? example)
+    {
+        if (raw is not string text || !QuantityParser.IsBareNumber(text) || IsZero(text))
+        {
+            return raw;
+        }
+
+        string? unit = UnitOf(field, aliases);
+        if (unit is null)
+        {
+            (_errors ??= new()).Add(new FieldError(
+                field,
+                "'" + text.Trim() + "' has no unit; write it with its unit (for example '" + (example ?? text.Trim() + " " + Example(kind)) + "'), name the unit in the column header ('" + field + " (" + Example(kind) + ")'), or give -Unit @{ " + field + " = '" + Example(kind) + "' }",
+                "MissingUnit"));
+            return null;
+        }
+
+        if (!QuantityParser.IsUnitOf(unit, kind))
+        {
+            (_errors ??= new()).Add(new FieldError(field, "the unit '" + unit + "' named for this column is not a unit of " + QuantityKindInfo.Of(kind).Description.Substring(QuantityKindInfo.Of(kind).Description.IndexOf(' ') + 1), "InvalidQuantity"));
+            return null;
+        }
+
+        return text.Trim() + " " + unit;
+    }
+
+    /// <summary>
+    /// Reads a vector given whole in one field: a text of three components ("0.3 m, 0, 1.2 m"; separated by
+    /// semicolons instead where they hold decimal commas), three values, or a <see cref="Vector3D"/>; for a direction
+    /// (<paramref name="kind"/> null) also an axis name ('z', '-x') or three numbers separated by spaces. Each
+    /// component of a quantity follows the field's rules: a bare number in a text takes the unit the column names or
+    /// the -Unit table's (a zero needs none), a number that is not text is in SI units. Null when absent or malformed
+    /// (with the error recorded).
+    /// </summary>
+    /// <param name="field">The field.</param>
+    /// <param name="kind">The quantity of each component, or null for plain numbers (a direction).</param>
+    /// <param name="aliases">The field's aliases.</param>
+    public Vector3D? Vector(string field, QuantityKind? kind, params string[] aliases)
+    {
+        object? raw = Raw(field, false, aliases);
+        if (raw is null)
+        {
+            return null;
+        }
+
+        if (raw is not string text || kind is not { } k)
+        {
+            // A vector object or three values as they are; a direction's text by the parameter's own rules.
+            try
+            {
+                return VectorParser.Parse(raw, field, kind);
+            }
+            catch (InvalidInputException ex)
+            {
+                AddError(field, ex.Reason, "InvalidQuantity");
+                return null;
+            }
+        }
+
+        // Semicolons, where the text has them, leave commas to decimal commas ("0,3 m; 0; 1,2 m").
+        string inner = text.Trim().Trim('(', ')', '[', ']');
+        string[] parts = inner.IndexOf(';') >= 0 ? inner.Split(';') : inner.Split(',');
+        string example = k == QuantityKind.Length ? "0, 300 mm, 0" : "0, 0, 1.5 " + Example(k);
+        if (parts.Length != 3)
+        {
+            AddError(field, "'" + text.Trim() + "' is not three components x, y, z separated by commas (for example '" + example + "')", "InvalidQuantity");
+            return null;
+        }
+
+        var components = new double[3];
+        for (int i = 0; i < 3; i++)
+        {
+            object? part = WithColumnUnit(parts[i].Trim(), field, k, aliases, example);
+            if (part is null)
+            {
+                return null;
+            }
+
+            if (!QuantityParser.TryParse(part, k, out components[i], out string? error))
+            {
+                AddError(field, "component " + (i + 1) + " of '" + text.Trim() + "': " + error, "InvalidQuantity");
+                return null;
+            }
+        }
+
+        return new Vector3D(components[0], components[1], components[2]);
     }
 
     /// <summary>The unit the record's names or the -Unit table give a field's bare numbers, or null.</summary>

@@ -28,6 +28,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private HazardPolicy _policy = HazardPolicy.Default;
     private Vector3D? _velocity;
     private int _row;
+    private bool _positionsWarned;
 
     /// <summary>The search of the first row of each item, for the rows that repeat it (an inventory's identical items).</summary>
     private readonly BoundedCache<string, SafeDistanceResult> _repeated = new(256, StringComparer.Ordinal);
@@ -154,6 +155,14 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                     WriteWarning(notApplied);
                 }
 
+                // A row's own normal and velocity hold along the whole ray; its position does not move the ray's start.
+                (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity) = record is null ? (null, null, null) : PlacementRecordReader.Read(record, label);
+                if (rowPosition is not null && !_positionsWarned)
+                {
+                    _positionsWarned = true;
+                    WriteWarning(label + " gives a position (X, Y, Z or Position), which the search does not read: every row is searched along the ray from -From or its station's position; a row's own normal and velocity are read.");
+                }
+
                 SafeDistanceResult result;
                 if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
                 {
@@ -168,7 +177,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
 
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, _normal, rowExposure ?? _exposure, null, _velocity, rowLeave,
+                        item, _source, _from, Direction, MaxDistance, policy, rowNormal ?? _normal, rowExposure ?? _exposure, null, rowVelocity ?? _velocity, rowLeave,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;

@@ -84,17 +84,17 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [ArgumentCompleter(typeof(StationCompleter))]
     public string? Station { get; set; }
 
-    /// <summary>Where the item's loop is centred, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres); the origin by default. Rows may give X, Y, Z instead.</summary>
+    /// <summary>Where the item's loop is centred, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres); the origin by default. Rows may give X, Y, Z or a Position column instead.</summary>
     [Parameter]
     [Vector(QuantityKind.Length)]
     public Vector3D? Position { get; set; }
 
-    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the orientation that links the largest flux change. Rows may give NormalX, NormalY, NormalZ instead.</summary>
+    /// <summary>The normal of the item's loop as x,y,z or an axis; by default the orientation that links the largest flux change. Rows may give NormalX, NormalY, NormalZ or a Normal column instead.</summary>
     [Parameter]
     [Vector]
     public Vector3D? Normal { get; set; }
 
-    /// <summary>The velocity at which the item is moved through the field, as x,y,z speeds ('1.5 m/s, 0, 0'; bare numbers in m/s): the motional emf around it and, for a closed item, the braking force, with the field at its peak.</summary>
+    /// <summary>The velocity at which the item is moved through the field, as x,y,z speeds ('1.5 m/s, 0, 0'; bare numbers in m/s): the motional emf around it and, for a closed item, the braking force, with the field at its peak. Rows may give their own as VelocityX, VelocityY, VelocityZ or a Velocity column (zero: placed).</summary>
     [Parameter]
     [Vector(QuantityKind.Speed)]
     public Vector3D? Velocity { get; set; }
@@ -320,7 +320,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
     {
         ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, _acceptUnusualSize);
-        (Vector3D? rowPosition, Vector3D? rowNormal) = record is null ? (null, null) : PlacementRecordReader.Read(record, label, _units);
+        (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity) = record is null ? (null, null, null) : PlacementRecordReader.Read(record, label, _units);
         (double? rowExposure, double? rowLeave) = record is null ? (null, null) : ExposureRecordReader.Read(record, label, _units);
         Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
@@ -328,7 +328,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal,
-            Velocity ?? station?.Placement.Velocity);
+            rowVelocity ?? Velocity ?? station?.Placement.Velocity);
         return new Scenario(item, station?.Source ?? _source, placement, rowExposure ?? ExposureTime ?? station?.ExposureSeconds, _environment, rowLeave ?? LeaveTime ?? station?.LeaveSeconds)
         {
             StationName = station?.Name,
