@@ -12,7 +12,7 @@ BeforeAll {
 
 Describe 'Default values in help' {
     It 'shows -<Parameter> of <Command> with the default value <Expected>' -TestCases @(
-        @{ Command = 'Test-InductionHazard'; Parameter = 'AmbientTemperature'; Expected = '20 °C' }
+        @{ Command = 'Test-InductionHazard'; Parameter = 'AmbientTemperature'; Expected = '20 °C, or the row''s or station''s' }
         @{ Command = 'Test-InductionHazard'; Parameter = 'ThrottleLimit'; Expected = '1' }
         @{ Command = 'New-FieldWaveform'; Parameter = 'ClearingTime'; Expected = '1 s' }
         @{ Command = 'Test-InductionHazard'; Parameter = 'Site'; Expected = 'None' }

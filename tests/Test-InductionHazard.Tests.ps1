@@ -633,13 +633,69 @@ Loose loop,Copper,20 mm,2 mm,Free,Public,stores
         }
     }
 
+    Context 'the air around a station or a row' {
+        BeforeAll {
+            $siteFile = Join-Path $TestDrive 'furnace-site.psd1'
+            Set-Content $siteFile @"
+@{
+    Site = 'Furnace hall'
+    Stations = @(
+        @{ Name = 'Coil mouth'; Sources = @( @{ Form = 'Uniform'; Name = 'Coil'; Waveform = @{ Form = 'Sine'; Amplitude = '1.5 mT'; Frequency = '9.6 kHz' } } ); ExposureTime = '2 min'; AmbientTemperature = '38 degC' }
+        @{ Name = 'Hall door'; Sources = @( @{ Form = 'Uniform'; Name = 'Coil'; Waveform = @{ Form = 'Sine'; Amplitude = '1.5 mT'; Frequency = '9.6 kHz' } } ); ExposureTime = '2 min' }
+    )
+}
+"@
+            $site = Import-HazardSite $siteFile
+            $rows = @'
+Name,Material,Diameter,WireDiameter,Contact,Station,AmbientTemperature
+Band at the coil,Silver,20 mm,2 mm,Skin,Coil mouth,
+Band at the door,Silver,20 mm,2 mm,Skin,Hall door,
+Band at the coil in a cool draught,Silver,20 mm,2 mm,Skin,Coil mouth,25 degC
+'@ | ConvertFrom-Csv
+            $band = New-ConductiveItem -Name 'Band' -Material Silver -Diameter '20 mm' -WireDiameter '2 mm' -Contact Skin
+            $coil = New-FieldWaveform -Sine -Amplitude '1.5 mT' -Frequency '9.6 kHz' | New-FieldSource -Uniform -Name 'Coil'
+        }
+
+        It 'assesses a station''s rows in its own air, a row in its own, and the rest at 20 degC, as -AmbientTemperature would' {
+            foreach ($threads in 1, 2) {
+                $out = @($rows | Test-InductionHazard -Site $site -ThrottleLimit $threads -WarningVariable warned -WarningAction SilentlyContinue)
+                @($warned).Count | Should -Be 0 -Because 'the AmbientTemperature column is read'
+                $out.Response.Scenario.Environment.AmbientCelsius | Should -Be @(38, 20, 25)
+                foreach ($k in 0..2) {
+                    $alone = Test-InductionHazard -Item $band -Source $coil -ExposureTime '2 min' -AmbientTemperature "$($out[$k].Response.Scenario.Environment.AmbientCelsius) degC"
+                    $out[$k].BurnMargin | Should -Be $alone.BurnMargin
+                    $out[$k].PeakTemperatureCelsius | Should -Be $alone.PeakTemperatureCelsius
+                }
+
+                $out[0].BurnMargin | Should -BeLessThan $out[1].BurnMargin -Because 'skin already warm in the furnace''s air has less rise to spare'
+                $out[0].Inventory.Count | Should -Be 0
+            }
+        }
+
+        It 'takes -AmbientTemperature over the station''s air, and a row''s own over both' {
+            $out = @($rows | Test-InductionHazard -Site $site -AmbientTemperature '30 degC')
+            $out.Response.Scenario.Environment.AmbientCelsius | Should -Be @(30, 30, 25)
+        }
+
+        It 'searches a safe distance in a row''s or the station''s air, as -AmbientTemperature would' {
+            $lead = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '9.6 kHz' | New-FieldSource -Conductor -Name 'Coil lead'
+            $byParameter = Find-SafeDistance -Item $band -Source $lead -From '30 mm, 0, 0' -Direction x -ExposureTime '2 min' -AmbientTemperature '38 degC'
+            $byParameter.Found | Should -BeTrue
+            (Find-SafeDistance -Item $band -Site $site -Station 'Coil mouth' -Direction x -MaxDistance '1 m').Assessment.Response.Scenario.Environment.AmbientCelsius | Should -Be 38
+            $row = [pscustomobject]@{ Name = 'Band'; Material = 'Silver'; Diameter = '20 mm'; WireDiameter = '2 mm'; Contact = 'Skin'; AmbientTemperature = '38 degC' }
+            $found = $row | Find-SafeDistance -Source $lead -From '30 mm, 0, 0' -Direction x -ExposureTime '2 min'
+            $found.DistanceMeters | Should -Be $byParameter.DistanceMeters
+            $found.Assessment.Response.Scenario.Environment.AmbientCelsius | Should -Be 38
+        }
+    }
+
     Context 'a row''s own exposure time, and columns a row does not give' {
         BeforeAll {
             $heater = New-FieldWaveform -Sine -Amplitude '4 mT' -Frequency '12 kHz' | New-FieldSource -Uniform -Name 'Heater coil'
             $timed = @'
-Name,Material,Diameter,WireDiameter,Contact,ExposureTime,LeaveTime,AmbientTemperature,Holder
-Brief ring,Copper,20 mm,2 mm,Skin,10 s,2 s,25 degC,cleaner
-All-day ring,Copper,20 mm,2 mm,Skin,,,25 degC,technician
+Name,Material,Diameter,WireDiameter,Contact,ExposureTime,LeaveTime,Policy,Holder
+Brief ring,Copper,20 mm,2 mm,Skin,10 s,2 s,site rules,cleaner
+All-day ring,Copper,20 mm,2 mm,Skin,,,site rules,technician
 '@ | ConvertFrom-Csv
         }
 
@@ -651,18 +707,18 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,25 degC,technician
             $out[0].Response.Scenario.LeaveSeconds | Should -Be 2
             $out[1].BurnMargin | Should -Be $long.BurnMargin
             $out[0].BurnMargin | Should -BeGreaterThan $out[1].BurnMargin -Because '10 s in the field heats the skin less than an hour'
-            $out[0].Inventory.Keys | Should -Be @('AmbientTemperature', 'Holder') -Because 'the times are the row''s fields; AmbientTemperature is not read per row'
+            $out[0].Inventory.Keys | Should -Be @('Policy', 'Holder') -Because 'the times are the row''s fields; Policy is not read per row'
         }
 
         It 'warns once a run that a column named like a parameter it does not read per row is kept as the inventory''s own' {
             $null = $timed | Test-InductionHazard -Source $heater -WarningVariable warned -WarningAction SilentlyContinue
             @($warned).Count | Should -Be 1
-            "$($warned[0])" | Should -BeLike "The column 'AmbientTemperature' is not read per row: it is kept as one of the inventory's own columns, and every row is assessed at -AmbientTemperature; rows in other surroundings need a run of their own."
+            "$($warned[0])" | Should -BeLike "The column 'Policy' is not read per row: it is kept as one of the inventory's own columns, and every row is judged by -Policy or its station's; an ExposureGroup column names a visitor among workers."
             # A later row with columns of its own is looked at afresh: its new column is named once, the old one not again.
-            $moving = @{ Name = 'Judged ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; AmbientTemperature = '25 degC'; Policy = 'site rules' }
+            $moving = @{ Name = 'Sourced ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; Policy = 'site rules'; Source = 'Heater coil' }
             $null = @($timed[0], $moving, $timed[1], $moving) | Test-InductionHazard -Source $heater -WarningVariable again -WarningAction SilentlyContinue
             @($again).Count | Should -Be 2
-            "$($again[1])" | Should -BeLike "The column 'Policy' is not read per row*"
+            "$($again[1])" | Should -BeLike "The column 'Source' is not read per row*"
         }
 
         It 'refuses a row''s time without its unit or out of range, naming the row and the field, and goes on' {

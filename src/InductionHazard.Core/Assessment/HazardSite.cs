@@ -104,6 +104,12 @@ public sealed record Station(string Name, FieldSource Source, Placement Placemen
     /// </summary>
     public Criteria.HazardPolicy? Policy { get; init; }
 
+    /// <summary>
+    /// The temperature of the air around the station, °C (the warm air at a furnace's mouth), for the items assessed
+    /// there; null for the run's.
+    /// </summary>
+    public double? AmbientCelsius { get; init; }
+
     /// <inheritdoc />
     public override string ToString() => Name;
 }

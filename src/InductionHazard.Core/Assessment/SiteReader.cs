@@ -89,9 +89,15 @@ public static class SiteReader
         Vector3D? velocity = Vector(fields, "Velocity", QuantityKind.Speed, label);
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
         double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
+        double? ambient = fields.Quantity("AmbientTemperature", QuantityKind.Temperature, required: false, "Ambient");
+        if (ambient is { } air && PhysicalRanges.Ambient.Problem(air) is { } airProblem)
+        {
+            fields.AddError("AmbientTemperature", airProblem);
+        }
+
         string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
         object? rawPolicy = fields.Raw("Policy", required: false);
-        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, Description, Policy)");
+        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, AmbientTemperature, Description, Policy)");
         if (rawPolicy is not null and not IDictionary)
         {
             fields.AddError("Policy", "must be a table of policy values (@{ ExposureGroup = 'Public' }) or the path of a policy file");
@@ -137,7 +143,7 @@ public static class SiteReader
         Criteria.HazardPolicy? own = rawPolicy is IDictionary policyValues
             ? Criteria.PolicyReader.Read(policyValues, label + ", its Policy", sitePolicy, (sitePolicy?.Name ?? "published limits") + " at " + name)
             : null;
-        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description) { Policy = own };
+        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description) { Policy = own, AmbientCelsius = ambient };
     }
 
     private static Vector3D? Vector(RecordFields fields, string name, QuantityKind? kind, string label)

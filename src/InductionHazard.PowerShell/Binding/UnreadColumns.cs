@@ -4,15 +4,13 @@ using InductionHazard.Quantities;
 namespace InductionHazard.PowerShell.Binding;
 
 /// <summary>
-/// Columns named like a parameter that a row does not give per row (AmbientTemperature, Policy, Source): such a
-/// column is kept as one of the inventory's own, and would read in a report as if it had been applied. Each is named
+/// Columns named like a parameter that a row does not give per row (Policy, Source): such a column is kept as one of the inventory's own, and would read in a report as if it had been applied. Each is named
 /// in a warning once a run, with what the rows are assessed by instead.
 /// </summary>
 internal sealed class UnreadColumns
 {
     private static readonly Dictionary<string, string> Hints = new()
     {
-        [RecordFields.Normalize("AmbientTemperature")] = "every row is assessed at -AmbientTemperature; rows in other surroundings need a run of their own",
         [RecordFields.Normalize("Policy")] = "every row is judged by -Policy or its station's; an ExposureGroup column names a visitor among workers",
         [RecordFields.Normalize("Source")] = "every row is in -Source or its station's field; with -Site a Station column names the row's station",
     };

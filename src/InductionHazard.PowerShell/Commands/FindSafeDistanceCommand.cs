@@ -9,6 +9,7 @@ using InductionHazard.Fields;
 using InductionHazard.Items;
 using InductionHazard.PowerShell.Binding;
 using InductionHazard.Quantities;
+using InductionHazard.Thermal;
 
 namespace InductionHazard.PowerShell.Commands;
 
@@ -27,6 +28,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private double? _exposure;
     private HazardPolicy _policy = HazardPolicy.Default;
     private Vector3D? _velocity;
+    private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
     private int _row;
     private bool _positionsWarned;
 
@@ -89,12 +91,18 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     [Vector(QuantityKind.Speed)]
     public Vector3D? Velocity { get; set; }
 
+    /// <summary>The temperature of the surrounding air ('20 degC' by default, or the station's with -Site where it gives one). Rows may give their own AmbientTemperature.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Temperature)]
+    public double AmbientTemperature { get; set; } = 20.0;
+
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
         try
         {
             (_from, _normal, _exposure, _policy, _velocity) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default, Velocity);
+            _environment = new ThermalEnvironment(AmbientTemperature);
             if (ParameterSetName == SiteSet)
             {
                 // The station's field, and its place, normal, exposure time, velocity and policy where the command does not give them.
@@ -104,6 +112,10 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 _normal = Normal ?? station.Placement.Normal;
                 _exposure = ExposureTime ?? station.ExposureSeconds;
                 _velocity = Velocity ?? station.Placement.Velocity;
+                if (!MyInvocation.BoundParameters.ContainsKey(nameof(AmbientTemperature)) && station.AmbientCelsius is { } stationAir)
+                {
+                    _environment = new ThermalEnvironment(stationAir);
+                }
                 _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
                 if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {
@@ -173,11 +185,11 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
                     // A visitor the row names is judged at the public's limits along the whole ray.
                     HazardPolicy policy = _policy.For(wearer);
-                    (double? rowExposure, double? rowLeave) = record is null ? (null, null) : ExposureRecordReader.Read(record, label);
+                    (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label);
 
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, rowNormal ?? _normal, rowExposure ?? _exposure, null, rowVelocity ?? _velocity, rowLeave,
+                        item, _source, _from, Direction, MaxDistance, policy, rowNormal ?? _normal, rowExposure ?? _exposure, rowAmbient is { } air ? new ThermalEnvironment(air) : _environment, rowVelocity ?? _velocity, rowLeave,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;

@@ -25,6 +25,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private readonly Stopwatch _sinceProgress = new();
     private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
     private ThermalEnvironment _environment = ThermalEnvironment.StillAir;
+    private bool _ambientGiven;
     private int _row;
     private bool _verbose = true;
 
@@ -109,7 +110,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Quantity(QuantityKind.Time)]
     public double? ExposureTime { get; set; }
 
-    /// <summary>The temperature of the surrounding air ('20 degC' by default).</summary>
+    /// <summary>The temperature of the surrounding air ('20 degC' by default, or the station's with -Site where it gives one). Rows may give their own AmbientTemperature.</summary>
     [Parameter]
     [Quantity(QuantityKind.Temperature)]
     public double AmbientTemperature { get; set; } = 20.0;
@@ -133,6 +134,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         try
         {
             _environment = new ThermalEnvironment(AmbientTemperature);
+            _ambientGiven = MyInvocation.BoundParameters.ContainsKey(nameof(AmbientTemperature));
             _units = ItemInput.UnitsOf(Unit);
             if (ParameterSetName == SourceSet)
             {
@@ -321,7 +323,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     {
         ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, _acceptUnusualSize);
         (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity) = record is null ? (null, null, null) : PlacementRecordReader.Read(record, label, _units);
-        (double? rowExposure, double? rowLeave) = record is null ? (null, null) : ExposureRecordReader.Read(record, label, _units);
+        (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label, _units);
         Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
             : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
@@ -329,7 +331,10 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             rowNormal ?? Normal ?? station?.Placement.Normal,
             rowVelocity ?? Velocity ?? station?.Placement.Velocity);
-        return new Scenario(item, station?.Source ?? _source, placement, rowExposure ?? ExposureTime ?? station?.ExposureSeconds, _environment, rowLeave ?? LeaveTime ?? station?.LeaveSeconds)
+        // The air: the row's own, else -AmbientTemperature where given, else the station's, else 20 degC.
+        double? ambient = rowAmbient ?? (_ambientGiven ? null : station?.AmbientCelsius);
+        ThermalEnvironment environment = ambient is { } air && air != _environment.AmbientCelsius ? new ThermalEnvironment(air) : _environment;
+        return new Scenario(item, station?.Source ?? _source, placement, rowExposure ?? ExposureTime ?? station?.ExposureSeconds, environment, rowLeave ?? LeaveTime ?? station?.LeaveSeconds)
         {
             StationName = station?.Name,
             WearerGroup = record is null ? null : WearerGroupReader.Read(record, label),

@@ -29,6 +29,27 @@ public class SiteReaderTests
         Assert.Equal(120, s.ExposureSeconds);
     }
 
+    [Fact]
+    public void AStationMayGiveTheAirAroundItAndAnUnlikelyOneIsRefused()
+    {
+        static Hashtable Station(object? air)
+        {
+            var station = new Hashtable { ["Name"] = "Furnace mouth", ["Sources"] = new Hashtable { ["Form"] = "Uniform", ["Waveform"] = new Hashtable { ["Form"] = "Sine", ["Amplitude"] = "1.5 mT", ["Frequency"] = "9.6 kHz" } } };
+            if (air is not null)
+            {
+                station["AmbientTemperature"] = air;
+            }
+
+            return station;
+        }
+
+        Assert.Equal(38.0, SiteReader.Read(Site(Station("38 degC")), "site.psd1").Find("Furnace mouth").AmbientCelsius);
+        Assert.Null(SiteReader.Read(Site(Station(null)), "site.psd1").Find("Furnace mouth").AmbientCelsius);
+        var ex = Assert.Throws<DataFileException>(() => SiteReader.Read(Site(Station("90 degC")), "site.psd1"));
+        Assert.Contains("station 'Furnace mouth'", ex.Message, System.StringComparison.Ordinal);
+        Assert.Contains("AmbientTemperature: must be between -50 °C and 60 °C", ex.Message, System.StringComparison.Ordinal);
+    }
+
     [Theory]
     [InlineData("Frequency", "50 T", "Frequency")]
     [InlineData("Amplitud", "2 kA", "Amplitud")]
