@@ -68,11 +68,12 @@
         }
         @{
             Name         = 'Induction furnace F1 coil mouth'
-            Description  = 'A hand at the coil mouth for two minutes while a billet is loaded.'
+            Description  = 'A hand at the coil mouth, in the hall''s warm air, for two minutes while a billet is loaded.'
             Sources      = @(
                 @{ Form = 'Uniform'; Name = 'F1 coil mouth'; Waveform = @{ Form = 'Sine'; Amplitude = '1.5 mT'; Frequency = '9.6 kHz' } }
             )
             ExposureTime = '2 min'
+            AmbientTemperature = '35 degC'
         }
     )
 }
