@@ -159,8 +159,8 @@ public sealed class RecordFields
     }
 
     /// <summary>
-    /// Reads a vector given whole in one field: a text of three components ("0.3 m, 0, 1.2 m"; separated by
-    /// semicolons instead where they hold decimal commas), three values, or a <see cref="Vector3D"/>; for a direction
+    /// Reads a vector given whole in one field: a text of three components separated by commas or semicolons
+    /// ("0.3 m, 0, 1.2 m"), three values, or a <see cref="Vector3D"/>; for a direction
     /// (<paramref name="kind"/> null) also an axis name ('z', '-x') or three numbers separated by spaces. Each
     /// component of a quantity follows the field's rules: a bare number in a text takes the unit the column names or
     /// the -Unit table's (a zero needs none), a number that is not text is in SI units. Null when absent or malformed
@@ -191,7 +191,8 @@ public sealed class RecordFields
             }
         }
 
-        // Semicolons, where the text has them, leave commas to decimal commas ("0,3 m; 0; 1,2 m").
+        // Semicolons, where the text has them, separate the components alone: a decimal comma in one ("0,3 m; 0; 0") is
+        // then refused as the quantity's reader refuses it, naming it, rather than splitting the component in two.
         string inner = text.Trim().Trim('(', ')', '[', ']');
         string[] parts = inner.IndexOf(';') >= 0 ? inner.Split(';') : inner.Split(',');
         string example = k == QuantityKind.Length ? "0, 300 mm, 0" : "0, 0, 1.5 " + Example(k);

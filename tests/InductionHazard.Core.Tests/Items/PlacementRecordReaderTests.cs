@@ -67,6 +67,7 @@ public class PlacementRecordReaderTests
     [Theory]
     [InlineData("Position", "1 m, 2 m", "is not three components")]
     [InlineData("Position", "1 m, 2 T, 0", "component 2")]
+    [InlineData("Position", "0,5 m; 0; 0", "decimal comma")]
     [InlineData("Position", "1 m, NaN m, 0", "component 2")]
     [InlineData("Normal", "0, 0, 0", "the normal must not be zero")]
     [InlineData("Normal", "up", "expected three numbers")]
