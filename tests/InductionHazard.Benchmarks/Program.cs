@@ -56,6 +56,7 @@ public static class Program
             ("ramp10ms", () => cases.Ramp10Milliseconds()),
             ("ramp1s", () => cases.Ramp1Second()),
             ("row", () => cases.InventoryRowRamp10Milliseconds()),
+            ("readrow", () => cases.ReadDistinctRow()),
         })
         {
             for (int i = 0; i < 20_000; i++)

@@ -1,7 +1,8 @@
 <#
 .SYNOPSIS
     Times the ring assessments of the engine benchmark (a continuous sine, ramps in 10 ms and in 1 s, and an inventory
-    row: a ring of its own read from text and assessed in the 10 ms ramp) at an earlier
+    row: a ring of its own read from text and assessed in the 10 ms ramp), and the reading alone of a row whose ring is
+    a size of its own ("readrow": its item, placement and inventory columns), at an earlier
     commit and at the working tree, alternately in one session, and prints the fastest round of each and their ratio:
     this machine is noisy, so only a comparison made side by side in the same run says what a change did.
 .EXAMPLE
@@ -41,7 +42,7 @@ try {
         }
     }
 
-    foreach ($name in 'sine', 'ramp10ms', 'ramp1s', 'row') {
+    foreach ($name in 'sine', 'ramp10ms', 'ramp1s', 'row', 'readrow') {
         '{0,-9} {1}: {2,8:F2} us   working tree: {3,8:F2} us   ratio {4:F2}  (fastest of {5} alternate rounds)' -f $name, $Baseline, $best["baseline/$name"], $best["current/$name"], ($best["current/$name"] / $best["baseline/$name"]), $Rounds
     }
 }

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
 using InductionHazard.Errors;
 using InductionHazard.Quantities;
 
@@ -36,10 +37,19 @@ public static class PlacementRecordReader
         ["Velocity"] = Array.Empty<string>(),
     };
 
+    /// <summary>Every field's key and its aliases', normalized: most rows give none of them, and are not read further.</summary>
+    private static readonly HashSet<string> Keys = new(Aliases.SelectMany(p => p.Value.Append(p.Key)).Select(RecordFields.Normalize), StringComparer.Ordinal);
+
     /// <summary>The position, normal and velocity a record gives, each null when the record gives none of it.</summary>
     /// <exception cref="RecordException">Some but not all components are given, a vector is given both ways, one is malformed, the normal is zero or the speed is beyond what a person moves an item at.</exception>
     public static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
     {
+        // A row without a placement column (most of an inventory read at a station or one -Position) makes no reader.
+        if (!RecordFields.HasColumn(record, Keys))
+        {
+            return (null, null, null);
+        }
+
         var fields = new RecordFields(record, units);
         Vector3D? position = Vector(fields, "Position", Position, QuantityKind.Length);
         Vector3D? normal = Vector(fields, "Normal", Normal, null);

@@ -264,12 +264,12 @@ public sealed class RecordFields
     /// the whole record: a reader of a field most rows lack looks first.
     /// </summary>
     /// <param name="record">The named values.</param>
-    /// <param name="fieldKeys">The fields' keys, normalized.</param>
-    public static bool HasColumn(IEnumerable<KeyValuePair<string, object?>> record, string[] fieldKeys)
+    /// <param name="fieldKeys">The fields' keys, normalized (a few in an array; a reader of many fields and aliases, a set).</param>
+    public static bool HasColumn(IEnumerable<KeyValuePair<string, object?>> record, ICollection<string> fieldKeys)
     {
         foreach (KeyValuePair<string, object?> pair in record)
         {
-            if (pair.Key is not null && Array.IndexOf(fieldKeys, FieldKey(pair.Key)) >= 0)
+            if (pair.Key is not null && fieldKeys.Contains(FieldKey(pair.Key)))
             {
                 return true;
             }

@@ -1,4 +1,5 @@
 using System.Collections.Generic;
+using System.Linq;
 using InductionHazard.Assessment;
 using InductionHazard.Errors;
 using InductionHazard.Items;
@@ -31,6 +32,31 @@ public class PlacementRecordReaderTests
         Assert.Equal(new Vector3D(0, 0, -1.5), Read(Row(("VelocityX", "0"), ("VelocityY", "0"), ("VelocityZ", "-1.5 m/s"))).Velocity);
         Assert.Equal(new Vector3D(0, 0, -1.5), Read(Row(("Velocity", "0, 0, -1.5 m/s"))).Velocity);
         Near(new Vector3D(0.5, 0, 0), Read(Row(("Velocity", "1.8 km/h, 0, 0"))).Velocity);
+    }
+
+    [Fact]
+    public void EveryFieldAndAliasIsLookedAtAlone()
+    {
+        // A row is read further only when it has a placement column: each name, alone, must be seen (a component alone is
+        // refused as a part of its vector, a whole vector is read).
+        foreach (KeyValuePair<string, string[]> field in PlacementRecordReader.Aliases)
+        {
+            foreach (string name in new[] { field.Key }.Concat(field.Value))
+            {
+                bool whole = field.Key is "Position" or "Normal" or "Velocity";
+                string value = field.Key.StartsWith("Normal", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1" : "1") : field.Key.StartsWith("Velocity", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1 m/s" : "1 m/s") : (whole ? "0, 0, 1 m" : "1 m");
+                if (whole)
+                {
+                    var read = Read(Row((name, value)));
+                    Assert.True(read.Position is not null || read.Normal is not null || read.Velocity is not null, name + " was not read");
+                }
+                else
+                {
+                    var error = Assert.Throws<RecordException>(() => Read(Row((name, value))));
+                    Assert.Contains("give all of", error.Message, System.StringComparison.Ordinal);
+                }
+            }
+        }
     }
 
     [Fact]
