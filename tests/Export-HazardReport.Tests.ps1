@@ -112,6 +112,25 @@ Describe 'Export-HazardReport' {
         $json.report.cautions -join ' ' | Should -Match 'engineering estimates'
     }
 
+    It 'says in CSV and JSON where each item was, how it moved, how long it stayed and in what air, as its row gave them' {
+        $carried = New-Assessment 'Carried ring' @{ Position = '0, 250 mm, 0'; Velocity = '0, 0, 1.5 m/s'; ExposureTime = '10 min'; AmbientTemperature = '35 degC' }
+        $placed = New-Assessment 'Placed ring'
+        @($carried, $placed) | Export-HazardReport -Path (Join-Path $TestDrive 'conditions.csv')
+        $rows = @(Import-Csv (Join-Path $TestDrive 'conditions.csv'))
+        $rows[0].Placement | Should -BeLike 'centred at (0 m, 250 mm, 0 m);*; moving at (0 m/s, 0 m/s, 1.5 m/s)'
+        $rows[1].Placement | Should -Not -BeLike '*moving*'
+        [double]$rows[0].'TimeInField (s)' | Should -Be 601 -Because 'ten minutes in place and the 1 s of carrying it out, as the Markdown report''s "Time in the field" says'
+        [double]$rows[0].'AmbientTemperature (°C)' | Should -Be 35
+        [double]$rows[1].'AmbientTemperature (°C)' | Should -Be 20
+        @($carried, $placed) | Export-HazardReport -Path (Join-Path $TestDrive 'conditions.json')
+        $json = Get-Content (Join-Path $TestDrive 'conditions.json') -Raw | ConvertFrom-Json
+        $json.assessments[0].inputs.velocityMetersPerSecond | Should -Be '(0, 0, 1.5)'
+        $json.assessments[1].inputs.velocityMetersPerSecond | Should -BeNullOrEmpty
+        $json.assessments.inputs.ambientCelsius | Should -Be @(35, 20)
+        # The row's own conditions are inputs, not the inventory's columns.
+        $rows[0].PSObject.Properties.Name | Should -Not -Contain 'Velocity'
+    }
+
     It 'lists the rows that could not be assessed, so none is lost from the report' {
         $rows = @($inventory[0], [pscustomobject]@{ Name = 'Broken row'; Material = 'Copper'; Station = $inventory[0].Station })
         $done = @($rows | Test-InductionHazard -Site $site -WarningAction SilentlyContinue -ErrorAction SilentlyContinue -ErrorVariable failed)

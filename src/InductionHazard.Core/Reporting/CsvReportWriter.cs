@@ -12,7 +12,8 @@ namespace InductionHazard.Reporting;
 
 /// <summary>
 /// Writes a report as CSV: one row per item, the inventory's own columns beside the results, numbers in SI with the
-/// unit in the header, and the report's provenance and cautions in the last columns. A text cell that a spreadsheet would take
+/// unit in the header, what each item was assessed under (its source, placement, time in the field and air), and the
+/// report's provenance and cautions in the last columns. A text cell that a spreadsheet would take
 /// for a formula (it starts with =, +, -, @, a tab or a carriage return) is neutralised with a leading apostrophe;
 /// numbers are written as numbers. A figure the engine does not trust is an empty cell (the Reasons column says why).
 /// </summary>
@@ -42,7 +43,7 @@ public static class CsvReportWriter
 
     private static readonly string[] VerdictHeaders = { "Verdict", "GoverningMechanism" };
 
-    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Model", "PathCount", "Policy", "ExposureGroup", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256", "Cautions" };
+    private static readonly string[] TextHeaders = { "Action", "Summary", "Reasons", "Shape", "Material", "Contact", "Source", "Placement", "TimeInField (s)", "AmbientTemperature (°C)", "Model", "PathCount", "Policy", "ExposureGroup", "PolicySha256", "InputSha256", "ModuleVersion", "AssessedUtc", "ReportInputsSha256", "Cautions" };
 
     /// <summary>Writes the rows.</summary>
     public static void Write(HazardReport report, TextWriter w)
@@ -84,6 +85,9 @@ public static class CsvReportWriter
             csv.WriteField(Text(a.Response.Item.Material.Name));
             csv.WriteField(a.Response.Item.Contact.ToString());
             csv.WriteField(Text(a.Response.Scenario.Source.Describe()));
+            csv.WriteField(Text(ReportLines.Placement(a)));
+            csv.WriteField(Number(a.Response.ExposureSeconds));
+            csv.WriteField(Number(a.Response.Scenario.Environment.AmbientCelsius));
             csv.WriteField(Text(a.Response.Model));
             csv.WriteField(a.Response.PathCount.ToString(CultureInfo.InvariantCulture));
             csv.WriteField(Text(a.PolicyName));

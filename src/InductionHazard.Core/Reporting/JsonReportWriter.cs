@@ -138,6 +138,7 @@ public static class JsonReportWriter
         Text(j, "source", r.Scenario.Source.Describe());
         Text(j, "placement", r.Scenario.Placement.Centre.ToString());
         Text(j, "orientation", a.Orientation);
+        Text(j, "velocityMetersPerSecond", r.Scenario.Placement.Velocity?.ToString());
         Number(j, "exposureSeconds", r.ExposureSeconds);
         Number(j, "ambientCelsius", r.Scenario.Environment.AmbientCelsius);
         j.WriteEndObject();

@@ -37,11 +37,18 @@ public static class ReportLines
         }
 
         lines.Add(("Source", s.Source.Describe()));
-        lines.Add(("Placement", "centred at " + Vector(s.Placement.Centre, "m") + "; " + (a.Orientation.Length > 0 ? a.Orientation : "oriented as given")
-            + (s.Placement.Velocity is { } v ? "; moving at " + Vector(v, "m/s") : string.Empty)));
+        lines.Add(("Placement", Placement(a)));
         lines.Add(("Time in the field", SiFormat.Format(r.ExposureSeconds, "s") + " (assessed over " + SiFormat.Format(r.AssessedSeconds, "s") + ", with the cooling after it)"));
         lines.Add(("Surroundings", SiFormat.Celsius(s.Environment.AmbientCelsius) + " air"));
         return lines;
+    }
+
+    /// <summary>Where the item was and how it faced and moved: "centred at (0 m, 250 mm, 0 m); normal ...; moving at (...)".</summary>
+    public static string Placement(InductionAssessment a)
+    {
+        Placement p = a.Response.Scenario.Placement;
+        return "centred at " + Vector(p.Centre, "m") + "; " + (a.Orientation.Length > 0 ? a.Orientation : "oriented as given")
+            + (p.Velocity is { } v ? "; moving at " + Vector(v, "m/s") : string.Empty);
     }
 
     /// <summary>The model that ran and why, with its notes, one line each, each starting with a capital.</summary>
