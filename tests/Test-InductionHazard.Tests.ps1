@@ -672,9 +672,15 @@ Band at the coil in a cool draught,Silver,20 mm,2 mm,Skin,Coil mouth,25 degC
             }
         }
 
-        It 'takes -AmbientTemperature over the station''s air, and a row''s own over both' {
-            $out = @($rows | Test-InductionHazard -Site $site -AmbientTemperature '30 degC')
+        It 'takes -AmbientTemperature over the station''s air, saying so, and a row''s own over both' {
+            $out = @($rows | Test-InductionHazard -Site $site -AmbientTemperature '30 degC' -WarningVariable warned -WarningAction SilentlyContinue)
             $out.Response.Scenario.Environment.AmbientCelsius | Should -Be @(30, 30, 25)
+            @($warned).Count | Should -Be 1 -Because 'one station gives air of its own'
+            "$($warned[0])" | Should -Be "-AmbientTemperature replaces the air of station 'Coil mouth' (38.0 °C): its items are assessed in air at 30.0 °C, unless a row gives its own."
+            $null = Find-SafeDistance -Item $band -Site $site -Station 'Coil mouth' -Direction x -MaxDistance '100 mm' -AmbientTemperature '30 degC' -WarningVariable searched -WarningAction SilentlyContinue
+            @($searched) -like '-AmbientTemperature replaces the air of station*' | Should -HaveCount 1
+            $null = @($rows[1]) | Test-InductionHazard -Site $site -Station 'Hall door' -AmbientTemperature '30 degC' -WarningVariable none -WarningAction SilentlyContinue
+            @($none).Count | Should -Be 0 -Because 'the door gives no air of its own'
         }
 
         It 'searches a safe distance in a row''s or the station''s air, as -AmbientTemperature would' {

@@ -116,6 +116,10 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 {
                     _environment = new ThermalEnvironment(stationAir);
                 }
+                else if (StationAir.Replaced(station, AmbientTemperature) is { } airReplaced)
+                {
+                    WriteWarning(airReplaced);
+                }
                 _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
                 if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {

@@ -145,6 +145,17 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
                 _ = Site.Find(Station);
             }
 
+            if (ParameterSetName == SiteSet && _ambientGiven)
+            {
+                foreach (Station station in Station is null ? Site.Stations : new[] { Site.Find(Station) })
+                {
+                    if (StationAir.Replaced(station, AmbientTemperature) is { } replaced)
+                    {
+                        WriteWarning(replaced);
+                    }
+                }
+            }
+
             Scenario.ValidateExposure(ExposureTime);
             Scenario.ValidateLeave(LeaveTime);
             if (Normal is { } n)
