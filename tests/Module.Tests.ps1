@@ -55,7 +55,7 @@ Describe 'The laid-out module' {
             assessments = @($assessment); mechanisms = $assessment.Mechanisms; responses = @(Get-InductionResponse -Item $item -Source $source); items = @($item)
             materials = @(Get-ConductorMaterial); waveforms = @($waveform); sources = @($source); strengths = @(Get-FieldStrength -Source $source -Position '0,0,0')
             sites = @($site); stations = $site.Stations; limits = (Get-HazardPolicy).Limits; exposures = @(Test-FieldExposure -Source $source)
-            distances = @(Find-SafeDistance -Item $item -Source $source -Direction x -MaxDistance '10 cm')
+            distances = @(Find-SafeDistance -Item $item -Source $source -Direction x -MaxDistance '10 cm' -WarningAction SilentlyContinue)
         }
         foreach ($name in $views.Keys) {
             foreach ($width in 80, 100, 120) {
