@@ -51,6 +51,32 @@ Describe 'Test-FieldExposure' {
         { Test-FieldExposure -Source $feeder -Position '0, 0, 0' -ErrorAction Stop } | Should -Throw -ExpectedMessage '*Position*'
     }
 
+    It 'takes points piped in, as text or as rows with X, Y, Z or one Position column, the same as -Position; a row without a point is an error naming it, and the rest go on' {
+        $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
+        $given = @(Test-FieldExposure -Source $feeder -Position '300 mm, 0, 0', '1 m, 0, 0')
+        $texts = @('300 mm, 0, 0', '1 m, 0, 0' | Test-FieldExposure -Source $feeder)
+        $rows = @(@'
+Point,X,Y,Z,Position
+Panel front,300 mm,0,0,
+Desk,,,,"1 m, 0, 0"
+Nowhere,,,,
+Bare,300,0,0,
+'@ | ConvertFrom-Csv | Test-FieldExposure -Source $feeder -ErrorVariable failed -ErrorAction SilentlyContinue)
+        $texts.Margin | Should -Be $given.Margin
+        $rows.Margin | Should -Be $given.Margin
+        $failed.Count | Should -Be 2
+        "$($failed[0])" | Should -BeLike "row 3: X: is missing: give the point as X, Y, Z or as one Position column*"
+        "$($failed[1])" | Should -BeLike "row 4: X: '300' has no unit*"
+        (@{ X = '300'; Y = '0'; Z = '0' } | Test-FieldExposure -Source $feeder -Unit @{ X = 'mm'; Y = 'mm'; Z = 'mm' }).Margin | Should -Be $given[0].Margin
+    }
+
+    It 'shows its table with the figures in SI prefixes and the verdict beside the margin' {
+        $feeder = New-FieldWaveform -Sine -Amplitude '4.24 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
+        $table = Test-FieldExposure -Source $feeder -Position '2.5 m, 0, 0' | Out-String -Width 100
+        $table | Should -Match 'Where\s+Verdict\s+Margin\s+Field\s+Limit'
+        $table | Should -Match '\(2\.5, 0, 0\) m\s+Clear\s+4\.17\s+240 µT\s+1 mT\s+50 Hz'
+    }
+
     It 'judges a pulse by the weighted-peak method, and a faster one as worse' {
         $pulse = New-FieldWaveform -Ramp -From 0 -To '1 mT' -Duration '1 ms' | New-FieldSource -Uniform
         $faster = New-FieldWaveform -Ramp -From 0 -To '1 mT' -Duration '100 us' | New-FieldSource -Uniform

@@ -67,16 +67,7 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
             string label = "row " + _row;
             try
             {
-                // A point piped as itself (a string '0, 300 mm, 0' or a vector) rather than as a row of X, Y, Z.
-                Vector3D? position = input.BaseObject is string or Vector3D
-                    ? VectorParser.Parse(input.BaseObject, "Position", QuantityKind.Length)
-                    : PlacementRecordReader.Read(Records.From(input), label, ItemInput.UnitsOf(Unit)).Position;
-                if (position is null)
-                {
-                    throw new RecordException(label, new[] { new FieldError("X", "is missing: give the point as X, Y, Z or as one Position column", "InvalidInput") });
-                }
-
-                Write(position.Value, input, label);
+                Write(PointInput.Of(input, label, Unit), input, label);
             }
             catch (InductionHazardException ex)
             {

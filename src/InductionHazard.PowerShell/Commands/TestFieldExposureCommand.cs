@@ -16,17 +16,28 @@ public sealed class TestFieldExposureCommand : PSCmdlet
 {
     private const string SourceSet = "Source";
     private const string SiteSet = "Site";
+    private const string InputObjectSet = "InputObject";
 
     private FieldSource _source = null!;
+    private int _row;
 
     /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
     [Parameter(Mandatory = true, Position = 0, ParameterSetName = SourceSet)]
+    [Parameter(Mandatory = true, Position = 0, ParameterSetName = InputObjectSet)]
     public FieldSource[] Source { get; set; } = null!;
 
     /// <summary>The points where a person stands or reaches, as x,y,z lengths ('0, 300 mm, 0'; bare numbers in metres); the origin by default.</summary>
-    [Parameter(Position = 1, ValueFromPipeline = true, ParameterSetName = SourceSet)]
+    [Parameter(Position = 1, ParameterSetName = SourceSet)]
     [Vector(QuantityKind.Length, Many = true)]
     public Vector3D[] Position { get; set; } = { Vector3D.Zero };
+
+    /// <summary>Points piped in: the points themselves ('0, 300 mm, 0', as -Position takes them), or rows with X, Y, Z columns or one Position column (Import-Csv output, hashtables), one result per row.</summary>
+    [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
+    public PSObject[] InputObject { get; set; } = null!;
+
+    /// <summary>The unit of bare numbers in the rows' X, Y, Z or Position where the headers do not name it: @{ X = 'mm'; Y = 'mm'; Z = 'mm' }.</summary>
+    [Parameter(ParameterSetName = InputObjectSet)]
+    public System.Collections.Hashtable? Unit { get; set; }
 
     /// <summary>A site, from Import-HazardSite: a person's exposure at each station's position, by the station's policy (its own, else the site's).</summary>
     [Parameter(Mandatory = true, ParameterSetName = SiteSet)]
@@ -51,7 +62,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     {
         try
         {
-            if (ParameterSetName == SourceSet)
+            if (ParameterSetName != SiteSet)
             {
                 _source = FieldSource.Combine(Source);
             }
@@ -74,6 +85,25 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     {
         if (ParameterSetName == SiteSet)
         {
+            return;
+        }
+
+        if (ParameterSetName == InputObjectSet)
+        {
+            foreach (PSObject input in InputObject)
+            {
+                _row++;
+                string label = "row " + _row;
+                try
+                {
+                    Judge(_source, PointInput.Of(input, label, Unit), Policy ?? HazardPolicy.Default, null);
+                }
+                catch (InductionHazardException ex)
+                {
+                    WriteError(ErrorRecords.From(ex, input, label));
+                }
+            }
+
             return;
         }
 
