@@ -4,8 +4,9 @@ using InductionHazard.Quantities;
 namespace InductionHazard.PowerShell.Binding;
 
 /// <summary>
-/// Columns named like a parameter that a row does not give per row (Policy, Source): such a column is kept as one of the inventory's own, and would read in a report as if it had been applied. Each is named
-/// in a warning once a run, with what the rows are assessed by instead.
+/// Columns named like a parameter that a row does not give per row (Policy, Source): such a column is kept as one of
+/// the inventory's own, and would read in a report as if it had been applied. Each is named in a warning once a run,
+/// with what the rows are assessed by instead.
 /// </summary>
 internal sealed class UnreadColumns
 {

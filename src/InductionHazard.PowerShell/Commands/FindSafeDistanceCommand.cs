@@ -105,7 +105,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
             _environment = new ThermalEnvironment(AmbientTemperature);
             if (ParameterSetName == SiteSet)
             {
-                // The station's field, and its place, normal, exposure time, velocity and policy where the command does not give them.
+                // The station's field, and its place, normal, exposure time, velocity, air and policy where the command does not give them.
                 Station station = Site.Find(Station);
                 _source = station.Source;
                 _from = MyInvocation.BoundParameters.ContainsKey(nameof(From)) ? From : station.Placement.Centre;
@@ -120,6 +120,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 {
                     WriteWarning(airReplaced);
                 }
+
                 _policy = Policy ?? Site.PolicyAt(station.Name) ?? HazardPolicy.Default;
                 if (Policy is not null && StationPolicy.Replaced(station, Policy) is { } replaced)
                 {
