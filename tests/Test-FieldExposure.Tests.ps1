@@ -64,6 +64,9 @@ Bare,300,0,0,
 '@ | ConvertFrom-Csv | Test-FieldExposure -Source $feeder -ErrorVariable failed -ErrorAction SilentlyContinue)
         $texts.Margin | Should -Be $given.Margin
         $rows.Margin | Should -Be $given.Margin
+        $rows.PointName | Should -Be @('Panel front', 'Desk') -Because 'a survey''s row names its point'
+        @($texts.PointName | Where-Object { $_ }).Count | Should -Be 0 -Because 'a point given as text has no name'
+        ($rows | Out-String -Width 100) | Should -Match 'Panel front\s+Caution'
         $failed.Count | Should -Be 2
         "$($failed[0])" | Should -BeLike "row 3: X: is missing: give the point as X, Y, Z or as one Position column*"
         "$($failed[1])" | Should -BeLike "row 4: X: '300' has no unit*"

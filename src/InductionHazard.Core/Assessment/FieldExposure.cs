@@ -21,6 +21,9 @@ public sealed record FieldExposure
     /// <summary>The site's station judged (Test-FieldExposure -Site); null for a point given by its position.</summary>
     public string? Station { get; init; }
 
+    /// <summary>The point's name as a survey's row gives it (its Name, Point or Location column); null for a point given by its position alone.</summary>
+    public string? PointName { get; init; }
+
     /// <summary>The largest |B| over the drive, T.</summary>
     public double PeakFluxDensityTesla { get; init; }
 

@@ -12,6 +12,14 @@ namespace InductionHazard.PowerShell.Binding;
 /// </summary>
 internal static class PointInput
 {
+    private static readonly string[] NameAliases = { "Point", "Location" };
+
+    /// <summary>The name a survey's row gives its point (a Name, Point or Location column), or null.</summary>
+    /// <param name="input">The piped object.</param>
+    public static string? NameOf(PSObject input) =>
+        input.BaseObject is string or Vector3D ? null
+        : new RecordFields(Records.From(input)).Text("Name", false, NameAliases) is { Length: > 0 } name ? name : null;
+
     /// <summary>The point, in metres.</summary>
     /// <param name="input">The piped object.</param>
     /// <param name="label">How the row is named in messages ("row 3").</param>

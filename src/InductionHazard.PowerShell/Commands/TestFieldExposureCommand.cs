@@ -96,7 +96,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
                 string label = "row " + _row;
                 try
                 {
-                    Judge(_source, PointInput.Of(input, label, Unit), Policy ?? HazardPolicy.Default, null);
+                    Judge(_source, PointInput.Of(input, label, Unit), Policy ?? HazardPolicy.Default, null, PointInput.NameOf(input));
                 }
                 catch (InductionHazardException ex)
                 {
@@ -133,12 +133,12 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         }
     }
 
-    private void Judge(FieldSource source, Vector3D point, HazardPolicy policy, string? station)
+    private void Judge(FieldSource source, Vector3D point, HazardPolicy policy, string? station, string? pointName = null)
     {
-        string where = station is null ? "position " + point : "station '" + station + "'";
+        string where = station is not null ? "station '" + station + "'" : pointName is not null ? "point '" + pointName + "' at " + point : "position " + point;
         try
         {
-            FieldExposure exposure = FieldExposure.At(source, point, Public.IsPresent || policy.ExposureGroup == ExposureGroup.Public, policy) with { Station = station };
+            FieldExposure exposure = FieldExposure.At(source, point, Public.IsPresent || policy.ExposureGroup == ExposureGroup.Public, policy) with { Station = station, PointName = pointName };
             if (exposure.Verdict == Verdict.Indeterminate)
             {
                 WriteWarning(where + ": " + exposure.Finding);
