@@ -30,7 +30,7 @@ Describe 'Find-SafeDistance' {
 
     It 'takes inventory rows from the pipeline and refuses a zero direction, naming it' {
         $rows = @([pscustomobject]@{ Name = 'Row ring'; Material = 'Copper'; Diameter = '60 mm'; WireDiameter = '3 mm'; Contact = 'Worn' })
-        ($rows | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m').ItemName | Should -Be 'Row ring'
+        ($rows | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m' -WarningAction SilentlyContinue).ItemName | Should -Be 'Row ring'
         { Find-SafeDistance -Item $ring -Source $fault -Direction '0, 0, 0' } | Should -Throw -ErrorId 'InvalidInput,*'
         { Find-SafeDistance -Item $ring -Source $fault -Direction x -MaxDistance '0.1 mm' } | Should -Throw '*MaxDistance*'
     }
