@@ -73,6 +73,24 @@ Bare,300,0,0,
         (@{ X = '300'; Y = '0'; Z = '0' } | Test-FieldExposure -Source $feeder -Unit @{ X = 'mm'; Y = 'mm'; Z = 'mm' }).Margin | Should -Be $given[0].Margin
     }
 
+    # Validates: a survey row's visitor point at 50 Hz judged at the public's level, a fifth of the workers', through Test-FieldExposure | ICNIRP 2010, Health Phys 99:818, tables 3 and 4 (1 mT and 0.2 mT, 25 to 300 Hz) | 1e-9
+    It 'judges a survey row that names the public (ExposureGroup) at the public''s limits, and says when a row cannot loosen a policy for the public' {
+        $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
+        $points = @'
+Point,Position,ExposureGroup
+Workbench,"2 m, 0, 0",
+Gallery rail,"2 m, 0, 0",Public
+'@ | ConvertFrom-Csv
+        $out = @($points | Test-FieldExposure -Source $feeder)
+        $out.ExposureGroup | Should -Be @('Occupational', 'Public')
+        [math]::Abs($out[0].Margin / $out[1].Margin - 5) | Should -BeLessThan 5e-9
+        $out[1].Finding | Should -Match 'general public'
+        $worker = [pscustomobject]@{ Point = 'Workbench'; Position = '2 m, 0, 0'; ExposureGroup = 'Occupational' }
+        $judged = $worker | Test-FieldExposure -Source $feeder -Policy @{ Name = 'Gallery rules'; ExposureGroup = 'Public' } -WarningVariable warned -WarningAction SilentlyContinue
+        $judged.ExposureGroup | Should -Be 'Public'
+        "$($warned[0])" | Should -BeLike "Workbench: ExposureGroup 'Occupational' is not applied: the policy 'Gallery rules' judges the public's exposure*"
+    }
+
     It 'shows its table with the figures in SI prefixes and the verdict beside the margin' {
         $feeder = New-FieldWaveform -Sine -Amplitude '4.24 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
         $table = Test-FieldExposure -Source $feeder -Position '2.5 m, 0, 0' | Out-String -Width 100

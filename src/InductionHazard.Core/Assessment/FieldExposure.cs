@@ -21,6 +21,9 @@ public sealed record FieldExposure
     /// <summary>The site's station judged (Test-FieldExposure -Site); null for a point given by its position.</summary>
     public string? Station { get; init; }
 
+    /// <summary>Whose limits judged the point: workers' (Occupational) or the general public's (Public).</summary>
+    public ExposureGroup ExposureGroup { get; init; }
+
     /// <summary>The point's name as a survey's row gives it (its Name, Point or Location column); null for a point given by its position alone.</summary>
     public string? PointName { get; init; }
 
@@ -148,6 +151,7 @@ public sealed record FieldExposure
             LimitTesla = limit,
             Margin = margin,
             Verdict = verdict,
+            ExposureGroup = publicExposure ? ExposureGroup.Public : ExposureGroup.Occupational,
             ImplantLineExceeded = implant,
             ProjectileLineExceeded = projectile,
             Finding = finding,

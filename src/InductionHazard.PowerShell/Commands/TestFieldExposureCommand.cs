@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Management.Automation;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
@@ -96,7 +97,19 @@ public sealed class TestFieldExposureCommand : PSCmdlet
                 string label = "row " + _row;
                 try
                 {
-                    Judge(_source, PointInput.Of(input, label, Unit), Policy ?? HazardPolicy.Default, null, PointInput.NameOf(input));
+                    IReadOnlyList<KeyValuePair<string, object?>>? record = PointInput.RecordOf(input);
+                    string? name = PointInput.NameOf(record);
+                    Vector3D point = PointInput.Of(input, record, label, Unit);
+
+                    // A row may name a visitors' point (ExposureGroup = Public); it cannot loosen a judgement of the public.
+                    HazardPolicy policy = Policy ?? HazardPolicy.Default;
+                    ExposureGroup? group = record is null ? null : WearerGroupReader.Read(record, label);
+                    if (StationPolicy.WearerNotApplied(name ?? label, group, policy.ExposureGroup, policy.Name) is { } notApplied)
+                    {
+                        WriteWarning(notApplied);
+                    }
+
+                    Judge(_source, point, policy.For(group), null, name);
                 }
                 catch (InductionHazardException ex)
                 {
