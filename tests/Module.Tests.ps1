@@ -89,7 +89,7 @@ Describe 'The laid-out module' {
 
     It 'has about topics for the site file and the policy file that name every key' {
         $site = Get-Help about_InductionHazard_SiteFile | Out-String
-        foreach ($key in 'Site', 'Stations', 'Policy', 'Sources', 'Waveform', 'Position', 'Normal', 'Velocity', 'ExposureTime', 'LeaveTime', 'Description') { $site | Should -Match "\b$key\b" }
+        foreach ($key in @('Site', 'Stations', 'Policy', 'Waveform') + [InductionHazard.Assessment.SiteReader]::StationKeys) { $site | Should -Match "\b$key\b" }
         $policy = Get-Help about_InductionHazard_PolicyFile | Out-String
         foreach ($key in [InductionHazard.Criteria.HazardPolicy]::Keys.Name) { $policy | Should -Match "\b$key\b" }
     }

@@ -23,6 +23,9 @@ public static class SiteReader
     /// <summary>The error id of a site file that cannot be used.</summary>
     public const string ErrorId = "InvalidSiteFile";
 
+    /// <summary>The values a station table may give, each by its name (the about topic of the site file names every one).</summary>
+    public static IReadOnlyList<string> StationKeys { get; } = new[] { "Name", "Sources", "Position", "Normal", "Velocity", "ExposureTime", "LeaveTime", "AmbientTemperature", "Description", "Policy" };
+
     /// <summary>Reads the site.</summary>
     /// <param name="data">The file's top-level table.</param>
     /// <param name="path">The file, for messages and to resolve relative capture and map paths.</param>
@@ -97,7 +100,7 @@ public static class SiteReader
 
         string description = fields.Text("Description", required: false, "Why") ?? string.Empty;
         object? rawPolicy = fields.Raw("Policy", required: false);
-        fields.RejectUnused("is not a value of " + label + " (a station has Name, Sources, Position, Normal, Velocity, ExposureTime, LeaveTime, AmbientTemperature, Description, Policy)");
+        fields.RejectUnused("is not a value of " + label + " (a station has " + string.Join(", ", StationKeys) + ")");
         if (rawPolicy is not null and not IDictionary)
         {
             fields.AddError("Policy", "must be a table of policy values (@{ ExposureGroup = 'Public' }) or the path of a policy file");
