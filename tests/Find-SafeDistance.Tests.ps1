@@ -140,6 +140,19 @@ Describe 'Find-SafeDistance' {
         "$($warned[0])" | Should -BeLike "row 1 ('Carried loop') gives a position (X, Y, Z or Position), which the search does not read: every row is searched along the ray from -From*"
     }
 
+    It 'takes -Tilt, or a row''s own Tilt, at every point of the ray: a loop turned from the worst orientation is Clear nearer in' {
+        # A split cable loop beside a line at 10 kHz: its gap voltage falls as the cosine of the tilt, and with it the distance.
+        $line = New-FieldWaveform -Sine -Amplitude '50 kA' -Frequency '10 kHz' | New-FieldSource -Conductor -Name 'Feeder'
+        $loop = New-ConductiveItem -Name 'Cable loop' -Material Copper -Diameter '300 mm' -WireDiameter '4 mm' -Gap '5 mm' -Contact Free
+        $facing = Find-SafeDistance -Item $loop -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m'
+        $tilted = Find-SafeDistance -Item $loop -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m' -Tilt '60 deg'
+        $facing.DistanceMeters | Should -BeGreaterThan 0.5
+        $tilted.DistanceMeters | Should -BeGreaterThan 0
+        $tilted.DistanceMeters | Should -BeLessThan (0.6 * $facing.DistanceMeters) -Because 'a loop turned 60 degrees links about half the flux'
+        $row = [pscustomobject]@{ Name = 'Cable loop'; Material = 'Copper'; Diameter = '300 mm'; WireDiameter = '4 mm'; Gap = '5 mm'; Contact = 'Free'; Tilt = '60 deg' }
+        ($row | Find-SafeDistance -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m').DistanceMeters | Should -Be $tilted.DistanceMeters
+    }
+
     It 'searches for a row''s own ExposureTime as -ExposureTime would' {
         $heater = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '12 kHz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater coil'
         $row = 'Name,Material,Diameter,WireDiameter,Contact,ExposureTime', 'Loose ring,Copper,20 mm,2 mm,Free,10 s' | ConvertFrom-Csv

@@ -34,7 +34,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             # Three rows in four are items people keep (a wire ring, a band, a frame) with the odd hostile cell; the
             # fourth is any mix of columns at all.
             $kind = $random.Next(4)
-            $row = [ordered]@{ Name = "fuzz $k"; Shape = 'Ring'; Material = Pick $materials; Diameter = ''; WireDiameter = ''; Width = ''; Thickness = ''; Height = ''; Length = ''; WallThickness = ''; ClosedEnds = ''; Gap = ''; Contact = Pick $contacts; X = ''; Y = ''; Z = ''; Velocity = ''; AmbientTemperature = '' }
+            $row = [ordered]@{ Name = "fuzz $k"; Shape = 'Ring'; Material = Pick $materials; Diameter = ''; WireDiameter = ''; Width = ''; Thickness = ''; Height = ''; Length = ''; WallThickness = ''; ClosedEnds = ''; Gap = ''; Contact = Pick $contacts; X = ''; Y = ''; Z = ''; Velocity = ''; AmbientTemperature = ''; Tilt = '' }
             # One row in twenty is a solid body with its own fields (and the odd hostile one).
             if ($random.Next(20) -eq 0) { $kind = 4 }
             switch ($kind) {
@@ -59,6 +59,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             if ($random.Next(2) -eq 0) { $row.X = Pick '0', '300 mm', '0.5 m', '200 mm', 'NaN', '1e400 mm'; $row.Y = Pick '0', '0', '10 mm', '100 mm', ''; $row.Z = '0' }
             # A row's own motion and air, now read per row, with the odd hostile cell.
             if ($random.Next(4) -eq 0) { $row.Velocity = Pick '0, 0, 1.5 m/s', '0, 0, 0', '1.5, 0, 0', 'NaN m/s, 0, 0', '0, 0, 300 m/s', 'z', '1e400 m/s, 0, 0', '0; 0; 1 m/s' }
+            if ($random.Next(8) -eq 0) { $row.Tilt = Pick '30 deg', '90 deg', '0', '120 deg', '30', 'NaN deg', '1 rad' }
             if ($random.Next(4) -eq 0) { $row.AmbientTemperature = Pick '25 degC', '35 degC', '35', '-300 degC', 'NaN degC', '60 degC', '3 T', '95 degF' }
             [pscustomobject]$row
         }

@@ -633,6 +633,38 @@ Loose loop,Copper,20 mm,2 mm,Free,Public,stores
         }
     }
 
+    Context 'a loop turned from the worst orientation' {
+        It 'takes -Tilt, or a row''s Tilt, in place of a normal: in a uniform field the emf falls as the cosine of the tilt' {
+            $coil = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Coil'
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Contact Skin
+            $facing = Test-InductionHazard -Item $ring -Source $coil
+            $tilted = Test-InductionHazard -Item $ring -Source $coil -Tilt '60 deg'
+            [math]::Abs($tilted.PeakEmfVolts / $facing.PeakEmfVolts - 0.5) | Should -BeLessThan 1e-9
+            $tilted.Response.Orientation | Should -BeLike 'tilted 60 degrees from the largest flux change*'
+            $rows = @'
+Name,Material,Diameter,WireDiameter,Contact,Tilt,Normal
+Ring,Copper,20 mm,2 mm,Skin,60 deg,
+Ring,Copper,20 mm,2 mm,Skin,,x
+Ring,Copper,20 mm,2 mm,Skin,,
+'@ | ConvertFrom-Csv
+            $out = @($rows | Test-InductionHazard -Source $coil -Tilt '30 deg')
+            $out[0].PeakEmfVolts | Should -Be $tilted.PeakEmfVolts -Because 'the row''s own tilt stands over -Tilt'
+            $out[1].PeakEmfVolts | Should -BeLessThan (1e-9 * $facing.PeakEmfVolts) -Because 'the row''s own normal, edge-on to the field, stands over -Tilt'
+            [math]::Abs($out[2].PeakEmfVolts / $facing.PeakEmfVolts - [math]::Cos([math]::PI / 6)) | Should -BeLessThan 1e-9
+            $out[0].InputHash | Should -Not -Be $out[2].InputHash
+        }
+
+        It 'refuses a tilt with a normal, or beyond a quarter turn, naming it' {
+            $coil = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Coil'
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
+            { Test-InductionHazard -Item $ring -Source $coil -Tilt '30 deg' -Normal z } | Should -Throw -ExpectedMessage '*Tilt*not both*'
+            { Test-InductionHazard -Item $ring -Source $coil -Tilt '100 deg' } | Should -Throw -ExpectedMessage '*Tilt*must be between 0 degrees and 90 degrees*'
+            $row = [pscustomobject]@{ Name = 'Ring'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm'; Tilt = '30 deg'; NormalX = '0'; NormalY = '0'; NormalZ = '1' }
+            $null = $row | Test-InductionHazard -Source $coil -ErrorVariable failed -ErrorAction SilentlyContinue
+            "$($failed[0])" | Should -BeLike "row 1 ('Ring'): Tilt: give a normal*or a tilt from the worst orientation, not both*"
+        }
+    }
+
     Context 'the air around a station or a row' {
         BeforeAll {
             $siteFile = Join-Path $TestDrive 'furnace-site.psd1'

@@ -41,13 +41,14 @@ public static class SafeDistance
     /// <param name="environment">The surroundings.</param>
     /// <param name="velocity">The velocity at which the item is moved through the field at every point, m/s; null when it is placed, not moved.</param>
     /// <param name="leaveSeconds">How long carrying the item out of the field takes, s; null for the default.</param>
+    /// <param name="tiltDegrees">Without a normal, how far the item is turned from the worst orientation at each point, degrees; null for the worst.</param>
     /// <param name="progress">Told the fraction of the scan done.</param>
     /// <param name="cancellation">Stops the search.</param>
     /// <exception cref="InvalidInputException">The direction is zero or not finite, or the distance out of range.</exception>
     public static SafeDistanceResult Find(
         ConductiveItem item, FieldSource source, Vector3D from, Vector3D direction, double maxDistanceMeters, HazardPolicy policy,
-        Vector3D? normal = null, double? exposureSeconds = null, ThermalEnvironment? environment = null, Vector3D? velocity = null, double? leaveSeconds = null, Action<double>? progress = null,
-        CancellationToken cancellation = default)
+        Vector3D? normal = null, double? exposureSeconds = null, ThermalEnvironment? environment = null, Vector3D? velocity = null, double? leaveSeconds = null, double? tiltDegrees = null,
+        Action<double>? progress = null, CancellationToken cancellation = default)
     {
         Require.Direction("Direction", direction);
         PhysicalRanges.Distance.For("MaxDistance").Check(maxDistanceMeters);
@@ -58,7 +59,7 @@ public static class SafeDistance
             cancellation.ThrowIfCancellationRequested();
             if (!assessed.TryGetValue(s, out InductionAssessment? a))
             {
-                var scenario = new Scenario(item, source, new Placement(from + (s * unit), normal, velocity), exposureSeconds, environment, leaveSeconds);
+                var scenario = new Scenario(item, source, new Placement(from + (s * unit), normal, velocity, tiltDegrees), exposureSeconds, environment, leaveSeconds);
                 a = HazardAssessor.Assess(InductionEngine.Respond(scenario, cancellation), policy);
                 assessed[s] = a;
             }

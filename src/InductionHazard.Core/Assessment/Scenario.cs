@@ -50,7 +50,7 @@ public sealed class Scenario
     {
         var text = new System.Text.StringBuilder(256);
         text.Append(ItemHash(Item)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
-            .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n ? Exact(n) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
+            .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n ? Exact(n) : Placement.TiltDegrees is { } tilt ? "tilted " + TextHash.Exact(tilt) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
             .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         if (WearerGroup is { } group)

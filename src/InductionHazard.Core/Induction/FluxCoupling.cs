@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Linq;
 using System.Numerics;
 using InductionHazard.Fields;
@@ -109,6 +110,105 @@ public static class FluxCoupling
         Vector3D unit = best.Normalized();
         Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
         return b.Dot(unit) < 0 ? -unit : unit;
+    }
+
+    /// <summary>
+    /// The normal turned by a tilt from the worst one, <paramref name="worst"/>, toward the side that keeps the most
+    /// flux change: n = cos(tilt) worst + sin(tilt) u, with u the one of 24 directions across the worst normal, 7.5
+    /// degrees apart, for which the loop's peak flux per the three axes' couplings (a sinusoid's phasor magnitude, or
+    /// a transient's largest change or held flux over the drive's times) is largest. For a field of one direction
+    /// over the loop every u gives the same flux, cos(tilt) of the worst; for a field that turns as it alternates, the
+    /// side the field turns toward keeps more, and that side is taken.
+    /// </summary>
+    /// <param name="source">The field source.</param>
+    /// <param name="centre">The loop's centre, m.</param>
+    /// <param name="loop">The loop.</param>
+    /// <param name="worst">The worst normal (<see cref="WorstNormal"/>).</param>
+    /// <param name="tiltDegrees">The tilt, degrees.</param>
+    public static Vector3D TiltedNormal(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D worst, double tiltDegrees)
+    {
+        double tilt = tiltDegrees * Math.PI / 180;
+        if (tilt == 0)
+        {
+            return worst;
+        }
+
+        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
+        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
+        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, loop);
+        int n = mx.Length;
+        var m = new Vector3D[n];
+        for (int k = 0; k < n; k++)
+        {
+            m[k] = new Vector3D(mx[k], my[k], mz[k]);
+        }
+
+        // The flux vectors whose projection on a normal is the loop's flux: a sinusoid's phasor as two vectors, a
+        // transient's flux at each of its drive times.
+        var vectors = new List<Vector3D>();
+        if (source.IsSinusoidal)
+        {
+            Vector3D re = Vector3D.Zero, im = Vector3D.Zero;
+            for (int k = 0; k < n; k++)
+            {
+                Complex a = ((SineWaveform)source.Terms[k].Waveform).Phasor;
+                re += a.Real * m[k];
+                im += a.Imaginary * m[k];
+            }
+
+            vectors.Add(re);
+            vectors.Add(im);
+        }
+        else
+        {
+            foreach (double t in source.DriveTimes)
+            {
+                Vector3D sum = Vector3D.Zero;
+                for (int k = 0; k < n; k++)
+                {
+                    sum += source.Terms[k].Waveform.Value(t) * m[k];
+                }
+
+                vectors.Add(sum);
+            }
+        }
+
+        double Peak(Vector3D normal)
+        {
+            if (source.IsSinusoidal)
+            {
+                return Math.Sqrt(Math.Pow(normal.Dot(vectors[0]), 2) + Math.Pow(normal.Dot(vectors[1]), 2));
+            }
+
+            double first = normal.Dot(vectors[0]), largest = 0;
+            foreach (Vector3D v in vectors)
+            {
+                double phi = normal.Dot(v);
+                largest = Math.Max(largest, Math.Max(Math.Abs(phi - first), Math.Abs(phi)));
+            }
+
+            return largest;
+        }
+
+        // Two directions across the worst normal, and the 24 between them on a half turn (u and -u give the same peak).
+        Vector3D across = Math.Abs(worst.X) < 0.9 ? Vector3D.UnitX : Vector3D.UnitY;
+        Vector3D e1 = (across - (across.Dot(worst) * worst)).Normalized();
+        Vector3D e2 = worst.Cross(e1).Normalized();
+        Vector3D best = worst;
+        double bestPeak = double.NegativeInfinity;
+        for (int i = 0; i < 24; i++)
+        {
+            double alpha = i * Math.PI / 24;
+            Vector3D u = (Math.Cos(alpha) * e1) + (Math.Sin(alpha) * e2);
+            Vector3D candidate = ((Math.Cos(tilt) * worst) + (Math.Sin(tilt) * u)).Normalized();
+            double peak = Peak(candidate);
+            if (peak > bestPeak)
+            {
+                (best, bestPeak) = (candidate, peak);
+            }
+        }
+
+        return best;
     }
 
     /// <summary>The unit eigenvector of the largest eigenvalue of a a^T + b b^T (power iteration from the larger of a and b).</summary>

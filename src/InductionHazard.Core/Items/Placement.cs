@@ -13,6 +13,17 @@ public sealed class Placement
     /// <exception cref="InvalidInputException">The normal is zero or not finite, or the centre is not finite.</exception>
     /// <exception cref="InvalidInputException">The velocity is not finite or beyond what a person moves an item at.</exception>
     public Placement(Vector3D centre, Vector3D? normal = null, Vector3D? velocity = null)
+        : this(centre, normal, velocity, null)
+    {
+    }
+
+    /// <summary>Creates a placement whose loop is turned by a tilt from the orientation that links the largest flux change.</summary>
+    /// <param name="centre">The loop's centre, m.</param>
+    /// <param name="normal">The loop's normal, or null for the worst orientation (turned by <paramref name="tiltDegrees"/> when given).</param>
+    /// <param name="velocity">The velocity the item is moved at, m/s, or null.</param>
+    /// <param name="tiltDegrees">How far the loop is turned from the worst orientation, 0 to 90 degrees; only without a normal.</param>
+    /// <exception cref="InvalidInputException">A value is out of range, or both a normal and a tilt are given.</exception>
+    public Placement(Vector3D centre, Vector3D? normal, Vector3D? velocity, double? tiltDegrees)
     {
         if (!centre.IsFinite)
         {
@@ -27,7 +38,20 @@ public sealed class Placement
         }
 
         Velocity = velocity is { } w && w.Length > 0 ? w : null;
+        if (tiltDegrees is { } tilt)
+        {
+            PhysicalRanges.Tilt.Check(tilt);
+            if (normal is not null)
+            {
+                throw new InvalidInputException("Tilt", "give a normal or a tilt from the worst orientation, not both");
+            }
+
+            TiltDegrees = tilt;
+        }
     }
+
+    /// <summary>How far the loop is turned from the orientation that links the largest flux change, degrees; null when it faces it (or a normal is given).</summary>
+    public double? TiltDegrees { get; }
 
     /// <summary>The loop at the origin facing the field.</summary>
     public static Placement FacingField { get; } = new(Vector3D.Zero);
@@ -43,5 +67,5 @@ public sealed class Placement
 
     /// <summary>"centred at (0, 0, 0.06), normal (0, 0, 1)" or "facing the field".</summary>
     public override string ToString() =>
-        "centred at " + Centre + (Normal is { } n ? ", normal " + n : ", facing the largest flux change") + (Velocity is { } v ? ", moving at " + v + " m/s" : string.Empty);
+        "centred at " + Centre + (Normal is { } n ? ", normal " + n : TiltDegrees is { } t ? ", tilted " + SiFormat.Plain(t) + " degrees from the largest flux change" : ", facing the largest flux change") + (Velocity is { } v ? ", moving at " + v + " m/s" : string.Empty);
 }

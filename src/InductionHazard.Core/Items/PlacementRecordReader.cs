@@ -9,7 +9,8 @@ namespace InductionHazard.Items;
 /// <summary>
 /// Reads where an item sits and how it is moved from a data record: its position as X, Y, Z or one Position column
 /// ('0.3 m, 0, 1.2 m'), lengths; its normal as NormalX, NormalY, NormalZ or one Normal column ('0, 0, 1', 'z'), a
-/// direction; its velocity as VelocityX, VelocityY, VelocityZ or one Velocity column ('0, 0, -1.5 m/s'), speeds. A bare
+/// direction, or instead a Tilt ('30 deg') from the orientation that links the largest flux change; its velocity as
+/// VelocityX, VelocityY, VelocityZ or one Velocity column ('0, 0, -1.5 m/s'), speeds. A bare
 /// number in a text cell needs the unit in its column's name or the -Unit table, as for the item's sizes. A record
 /// that gives none of a vector leaves it to the command's parameters; a velocity of zero says the item is placed,
 /// not moved.
@@ -35,25 +36,38 @@ public static class PlacementRecordReader
         ["VelocityY"] = new[] { "VelY" },
         ["VelocityZ"] = new[] { "VelZ" },
         ["Velocity"] = Array.Empty<string>(),
+        ["Tilt"] = Array.Empty<string>(),
     };
 
     /// <summary>Every field's key and its aliases', normalized: most rows give none of them, and are not read further.</summary>
     private static readonly HashSet<string> Keys = new(Aliases.SelectMany(p => p.Value.Append(p.Key)).Select(RecordFields.Normalize), StringComparer.Ordinal);
 
-    /// <summary>The position, normal and velocity a record gives, each null when the record gives none of it.</summary>
-    /// <exception cref="RecordException">Some but not all components are given, a vector is given both ways, one is malformed, the normal is zero or the speed is beyond what a person moves an item at.</exception>
-    public static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
+    /// <summary>The position, normal, velocity and tilt a record gives, each null when the record gives none of it.</summary>
+    /// <exception cref="RecordException">Some but not all components are given, a vector is given both ways, one is malformed, the normal is zero, the speed is beyond what a person moves an item at, or a tilt is given with a normal or outside 0 to 90 degrees.</exception>
+    public static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity, double? TiltDegrees) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
     {
         // A row without a placement column (most of an inventory read at a station or one -Position) makes no reader.
         if (!RecordFields.HasColumn(record, Keys))
         {
-            return (null, null, null);
+            return (null, null, null, null);
         }
 
         var fields = new RecordFields(record, units);
         Vector3D? position = Vector(fields, "Position", Position, QuantityKind.Length);
         Vector3D? normal = Vector(fields, "Normal", Normal, null);
         Vector3D? velocity = Vector(fields, "Velocity", Velocity, QuantityKind.Speed);
+        double? tilt = fields.Quantity("Tilt", QuantityKind.Angle, required: false, NoAliases);
+        if (tilt is { } t)
+        {
+            if (PhysicalRanges.Tilt.Problem(t) is { } tiltProblem)
+            {
+                fields.AddError("Tilt", tiltProblem);
+            }
+            else if (normal is not null || fields.Has("Normal") || fields.Has("NormalX", Aliases["NormalX"]))
+            {
+                fields.AddError("Tilt", "give a normal (Normal or NormalX, NormalY, NormalZ) or a tilt from the worst orientation, not both");
+            }
+        }
         if (normal is { } n && (n.X == 0 && n.Y == 0 && n.Z == 0))
         {
             fields.AddError(fields.Has("Normal") ? "Normal" : "NormalX", "the normal must not be zero");
@@ -69,8 +83,10 @@ public static class PlacementRecordReader
             throw new RecordException(label, fields.Errors);
         }
 
-        return (position, normal, velocity);
+        return (position, normal, velocity, tilt);
     }
+
+    private static readonly string[] NoAliases = Array.Empty<string>();
 
     private static Vector3D? Vector(RecordFields fields, string whole, string[] names, QuantityKind? kind)
     {

@@ -53,6 +53,10 @@ public static class PhysicalRanges
     public static PhysicalRange Speed { get; } = new(
         "Velocity", 0.0, 30.0, "m/s", "a person walks at about 1.5 m/s and a dropped or thrown item moves at under 10 m/s");
 
+    /// <summary>How far an item's loop is turned from the orientation that links the largest flux change, degrees.</summary>
+    public static PhysicalRange Tilt { get; } = new(
+        "Tilt", 0.0, 90.0, "degrees", "0 faces the largest flux change, 90 is edge-on to it");
+
     /// <summary>The temperature of the surrounding air, °C.</summary>
     public static PhysicalRange Ambient { get; } = new(
         "AmbientTemperature", -50.0, 60.0, "°C", "outdoor and plant-room air; the heating and burn models are for room conditions");

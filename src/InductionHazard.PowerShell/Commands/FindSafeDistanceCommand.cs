@@ -91,6 +91,11 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     [Vector(QuantityKind.Speed)]
     public Vector3D? Velocity { get; set; }
 
+    /// <summary>Instead of -Normal, how far the item's loop is turned from the orientation that links the largest flux change at each point ('30 deg'; 0 to 90 degrees). Rows may give their own Tilt.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Angle)]
+    public double? Tilt { get; set; }
+
     /// <summary>The temperature of the surrounding air ('20 degC' by default, or the station's with -Site where it gives one). Rows may give their own AmbientTemperature.</summary>
     [Parameter]
     [Quantity(QuantityKind.Temperature)]
@@ -140,6 +145,11 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 Require.Direction("Normal", n);
             }
 
+            if (Tilt is { } tilt)
+            {
+                _ = new Placement(Vector3D.Zero, Normal, null, tilt);
+            }
+
             if (_velocity is { } moving)
             {
                 // Checked as a placement checks it: a finite speed a person or a dropped item can have.
@@ -173,7 +183,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 }
 
                 // A row's own normal and velocity hold along the whole ray; its position does not move the ray's start.
-                (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity) = record is null ? (null, null, null) : PlacementRecordReader.Read(record, label);
+                (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity, double? rowTilt) = record is null ? (null, null, null, null) : PlacementRecordReader.Read(record, label);
                 if (rowPosition is not null && !_positionsWarned)
                 {
                     _positionsWarned = true;
@@ -188,13 +198,18 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 else
                 {
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
+                    // The orientation: the row's normal or tilt, else -Normal or -Tilt, else the station's normal, else the worst at each point.
+                    (Vector3D? normal, double? tilt) = rowNormal is not null || rowTilt is not null ? (rowNormal, rowTilt)
+                        : Normal is not null || Tilt is not null ? (Normal, Tilt)
+                        : (_normal, null);
+
                     // A visitor the row names is judged at the public's limits along the whole ray.
                     HazardPolicy policy = _policy.For(wearer);
                     (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label);
 
                     var progress = new ProgressRecord(2, "Find-SafeDistance", label);
                     result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, rowNormal ?? _normal, rowExposure ?? _exposure, rowAmbient is { } air ? new ThermalEnvironment(air) : _environment, rowVelocity ?? _velocity, rowLeave,
+                        item, _source, _from, Direction, MaxDistance, policy, normal, rowExposure ?? _exposure, rowAmbient is { } air ? new ThermalEnvironment(air) : _environment, rowVelocity ?? _velocity, rowLeave, tilt,
                         fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
                         _cancellation.Token);
                     progress.RecordType = ProgressRecordType.Completed;

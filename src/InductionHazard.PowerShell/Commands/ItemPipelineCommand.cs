@@ -95,6 +95,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     [Vector]
     public Vector3D? Normal { get; set; }
 
+    /// <summary>Instead of -Normal, how far the item's loop is turned from the orientation that links the largest flux change ('30 deg'; 0 to 90 degrees), toward the side that keeps the most. Rows may give their own Tilt.</summary>
+    [Parameter]
+    [Quantity(QuantityKind.Angle)]
+    public double? Tilt { get; set; }
+
     /// <summary>The velocity at which the item is moved through the field, as x,y,z speeds ('1.5 m/s, 0, 0'; bare numbers in m/s): the motional emf around it and, for a closed item, the braking force, with the field at its peak. Rows may give their own as VelocityX, VelocityY, VelocityZ or a Velocity column (zero: placed).</summary>
     [Parameter]
     [Vector(QuantityKind.Speed)]
@@ -166,6 +171,11 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
             if (Velocity is { } moving)
             {
                 _ = new Placement(Vector3D.Zero, null, moving);
+            }
+
+            if (Tilt is { } tilt)
+            {
+                _ = new Placement(Vector3D.Zero, Normal, null, tilt);
             }
         }
         catch (InductionHazardException ex)
@@ -333,15 +343,20 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private Scenario ScenarioOf(PSObject input, IReadOnlyList<KeyValuePair<string, object?>>? record, string label, int row)
     {
         ConductiveItem item = ItemInput.ToItem(input, record, _materials, row, _units, _acceptUnusualSize);
-        (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity) = record is null ? (null, null, null) : PlacementRecordReader.Read(record, label, _units);
+        (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity, double? rowTilt) = record is null ? (null, null, null, null) : PlacementRecordReader.Read(record, label, _units);
         (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label, _units);
         Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
             : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
+        // The orientation: the row's normal or tilt, else -Normal or -Tilt, else the station's normal, else the worst.
+        (Vector3D? normal, double? tilt) = rowNormal is not null || rowTilt is not null ? (rowNormal, rowTilt)
+            : Normal is not null || Tilt is not null ? (Normal, Tilt)
+            : (station?.Placement.Normal, null);
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
-            rowNormal ?? Normal ?? station?.Placement.Normal,
-            rowVelocity ?? Velocity ?? station?.Placement.Velocity);
+            normal,
+            rowVelocity ?? Velocity ?? station?.Placement.Velocity,
+            tilt);
         // The air: the row's own, else -AmbientTemperature where given, else the station's, else 20 degC.
         double? ambient = rowAmbient ?? (_ambientGiven ? null : station?.AmbientCelsius);
         ThermalEnvironment environment = ambient is { } air && air != _environment.AmbientCelsius ? new ThermalEnvironment(air) : _environment;

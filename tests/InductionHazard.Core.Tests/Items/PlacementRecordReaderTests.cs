@@ -13,7 +13,7 @@ public class PlacementRecordReaderTests
 {
     private static List<KeyValuePair<string, object?>> Row(params (string Key, object? Value)[] extra) => Fixtures.InventoryRow(extra);
 
-    private static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity) Read(List<KeyValuePair<string, object?>> row, IReadOnlyDictionary<string, string>? units = null) =>
+    private static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity, double? TiltDegrees) Read(List<KeyValuePair<string, object?>> row, IReadOnlyDictionary<string, string>? units = null) =>
         PlacementRecordReader.Read(row, "row 2 ('Ring')", units);
 
     private static void Near(Vector3D expected, Vector3D? actual)
@@ -43,12 +43,12 @@ public class PlacementRecordReaderTests
         {
             foreach (string name in new[] { field.Key }.Concat(field.Value))
             {
-                bool whole = field.Key is "Position" or "Normal" or "Velocity";
-                string value = field.Key.StartsWith("Normal", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1" : "1") : field.Key.StartsWith("Velocity", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1 m/s" : "1 m/s") : (whole ? "0, 0, 1 m" : "1 m");
+                bool whole = field.Key is "Position" or "Normal" or "Velocity" or "Tilt";
+                string value = field.Key == "Tilt" ? "30 deg" : field.Key.StartsWith("Normal", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1" : "1") : field.Key.StartsWith("Velocity", System.StringComparison.Ordinal) ? (whole ? "0, 0, 1 m/s" : "1 m/s") : (whole ? "0, 0, 1 m" : "1 m");
                 if (whole)
                 {
                     var read = Read(Row((name, value)));
-                    Assert.True(read.Position is not null || read.Normal is not null || read.Velocity is not null, name + " was not read");
+                    Assert.True(read.Position is not null || read.Normal is not null || read.Velocity is not null || read.TiltDegrees is not null, name + " was not read");
                 }
                 else
                 {
@@ -62,8 +62,8 @@ public class PlacementRecordReaderTests
     [Fact]
     public void ARowThatGivesNoneOfAVectorLeavesItToTheRun()
     {
-        Assert.Equal(((Vector3D?)null, (Vector3D?)null, (Vector3D?)null), Read(Row()));
-        Assert.Equal(((Vector3D?)null, (Vector3D?)null, (Vector3D?)null), Read(Row(("Position", " "), ("Velocity", ""))));
+        Assert.Equal(((Vector3D?)null, (Vector3D?)null, (Vector3D?)null, (double?)null), Read(Row()));
+        Assert.Equal(((Vector3D?)null, (Vector3D?)null, (Vector3D?)null, (double?)null), Read(Row(("Position", " "), ("Velocity", ""))));
     }
 
     [Fact]
@@ -99,12 +99,26 @@ public class PlacementRecordReaderTests
     [InlineData("Normal", "up", "expected three numbers")]
     [InlineData("Velocity", "0, 0, 300 m/s", "the speed must be between 0 m/s and 30 m/s")]
     [InlineData("Velocity", "0, 0, 1.5 m", "component 3")]
+    [InlineData("Tilt", "120 deg", "must be between 0 degrees and 90 degrees")]
+    [InlineData("Tilt", "30", "has no unit")]
     public void AMalformedVectorIsRefusedNamingTheRowAndTheColumn(string column, string value, string expected)
     {
         var error = Assert.Throws<RecordException>(() => Read(Row((column, value))));
         Assert.Contains(column, error.Fields);
         Assert.StartsWith("row 2 ('Ring')", error.Message, System.StringComparison.Ordinal);
         Assert.Contains(expected, error.Message, System.StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ARowMayGiveATiltFromTheWorstOrientationInPlaceOfANormal()
+    {
+        Assert.Equal(30.0, Read(Row(("Tilt", "30 deg"))).TiltDegrees!.Value, 12);
+        Assert.Equal(30.0, Read(Row(("Tilt (deg)", "30"))).TiltDegrees!.Value, 12);
+        Assert.Equal(90.0, Read(Row(("Tilt", "1.5707963267948966 rad"))).TiltDegrees!.Value, 9);
+        var both = Assert.Throws<RecordException>(() => Read(Row(("Tilt", "30 deg"), ("Normal", "z"))));
+        Assert.Contains("Tilt", both.Fields);
+        Assert.Contains("not both", both.Message, System.StringComparison.Ordinal);
+        Assert.Throws<RecordException>(() => Read(Row(("Tilt", "30 deg"), ("NX", "0"), ("NY", "0"), ("NZ", "1"))));
     }
 
     [Fact]
