@@ -47,14 +47,14 @@ internal sealed class EngineContext
             if (scenario.Placement.Normal is null || loop is SphereBody)
             {
                 // A sphere has no axis of its own: its filaments' axis follows the largest flux change.
-                Normal = FluxCoupling.WorstNormal(source, centre, loop);
                 if (scenario.Placement.TiltDegrees is { } tilt && loop is not SphereBody)
                 {
-                    Normal = FluxCoupling.TiltedNormal(source, centre, loop, Normal, tilt);
+                    Normal = FluxCoupling.TiltedNormal(source, centre, loop, tilt);
                     Orientation = "tilted " + SiFormat.Plain(tilt) + " degrees from the largest flux change (toward the side that keeps the most), normal " + Normal;
                 }
                 else
                 {
+                    Normal = FluxCoupling.WorstNormal(source, centre, loop);
                     Orientation = (loop is SphereBody ? "axis " : string.Empty) + "facing the largest flux change, normal " + Normal
                         + (scenario.Placement.TiltDegrees is not null ? " (a sphere has no axis to tilt)" : string.Empty);
                 }

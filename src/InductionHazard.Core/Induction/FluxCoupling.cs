@@ -47,130 +47,30 @@ public static class FluxCoupling
     /// defined, so a positive drive gives a positive flux.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
-    public static Vector3D WorstNormal(FieldSource source, Vector3D centre, LoopGeometry loop)
-    {
-        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
-        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
-        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, loop);
-        Vector3D M(int k) => new(mx[k], my[k], mz[k]);
-        int n = mx.Length;
-        Vector3D best;
-        if (source.IsSinusoidal)
-        {
-            // Phi(t) = Im(V e^(j omega t)) with V = sum M_k A_k e^(j phi_k): the largest |n . Phi(t)| is along the
-            // principal axis of Re(V) Re(V)^T + Im(V) Im(V)^T.
-            Vector3D re = Vector3D.Zero, im = Vector3D.Zero;
-            for (int k = 0; k < n; k++)
-            {
-                Complex a = ((SineWaveform)source.Terms[k].Waveform).Phasor;
-                re += a.Real * M(k);
-                im += a.Imaginary * M(k);
-            }
-
-            best = PrincipalAxis(re, im);
-        }
-        else
-        {
-            var drives = new FieldWaveform[n];
-            for (int k = 0; k < n; k++)
-            {
-                drives[k] = source.Terms[k].Waveform;
-            }
-
-            double[] times = source.DriveTimes;
-            Vector3D Flux(double t)
-            {
-                Vector3D sum = Vector3D.Zero;
-                for (int k = 0; k < n; k++)
-                {
-                    sum += drives[k].Value(t) * M(k);
-                }
-
-                return sum;
-            }
-
-            Vector3D first = Flux(times[0]);
-            Vector3D change = Vector3D.Zero, held = Vector3D.Zero;
-            foreach (double t in times)
-            {
-                Vector3D phi = Flux(t);
-                Vector3D d = phi - first;
-                change = d.Length > change.Length ? d : change;
-                held = phi.Length > held.Length ? phi : held;
-            }
-
-            best = change.Length >= held.Length ? change : held;
-        }
-
-        if (!(best.Length > 0) || !best.IsFinite)
-        {
-            return Vector3D.UnitZ;
-        }
-
-        Vector3D unit = best.Normalized();
-        Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
-        return b.Dot(unit) < 0 ? -unit : unit;
-    }
+    public static Vector3D WorstNormal(FieldSource source, Vector3D centre, LoopGeometry loop) =>
+        Worst(source, centre, FluxVectors(source, centre, loop));
 
     /// <summary>
-    /// The normal turned by a tilt from the worst one, <paramref name="worst"/>, toward the side that keeps the most
+    /// The normal turned by a tilt from the worst one (<see cref="WorstNormal"/>) toward the side that keeps the most
     /// flux change: n = cos(tilt) worst + sin(tilt) u, with u the one of 24 directions across the worst normal, 7.5
-    /// degrees apart, for which the loop's peak flux per the three axes' couplings (a sinusoid's phasor magnitude, or
-    /// a transient's largest change or held flux over the drive's times) is largest. For a field of one direction
+    /// degrees apart, for which the loop's peak flux by the same three axes' couplings (a sinusoid's phasor magnitude,
+    /// or a transient's largest change or held flux over the drive's times) is largest. For a field of one direction
     /// over the loop every u gives the same flux, cos(tilt) of the worst; for a field that turns as it alternates, the
     /// side the field turns toward keeps more, and that side is taken.
     /// </summary>
     /// <param name="source">The field source.</param>
     /// <param name="centre">The loop's centre, m.</param>
     /// <param name="loop">The loop.</param>
-    /// <param name="worst">The worst normal (<see cref="WorstNormal"/>).</param>
     /// <param name="tiltDegrees">The tilt, degrees.</param>
-    public static Vector3D TiltedNormal(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D worst, double tiltDegrees)
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
+    public static Vector3D TiltedNormal(FieldSource source, Vector3D centre, LoopGeometry loop, double tiltDegrees)
     {
+        List<Vector3D> vectors = FluxVectors(source, centre, loop);
+        Vector3D worst = Worst(source, centre, vectors);
         double tilt = tiltDegrees * Math.PI / 180;
         if (tilt == 0)
         {
             return worst;
-        }
-
-        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
-        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
-        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, loop);
-        int n = mx.Length;
-        var m = new Vector3D[n];
-        for (int k = 0; k < n; k++)
-        {
-            m[k] = new Vector3D(mx[k], my[k], mz[k]);
-        }
-
-        // The flux vectors whose projection on a normal is the loop's flux: a sinusoid's phasor as two vectors, a
-        // transient's flux at each of its drive times.
-        var vectors = new List<Vector3D>();
-        if (source.IsSinusoidal)
-        {
-            Vector3D re = Vector3D.Zero, im = Vector3D.Zero;
-            for (int k = 0; k < n; k++)
-            {
-                Complex a = ((SineWaveform)source.Terms[k].Waveform).Phasor;
-                re += a.Real * m[k];
-                im += a.Imaginary * m[k];
-            }
-
-            vectors.Add(re);
-            vectors.Add(im);
-        }
-        else
-        {
-            foreach (double t in source.DriveTimes)
-            {
-                Vector3D sum = Vector3D.Zero;
-                for (int k = 0; k < n; k++)
-                {
-                    sum += source.Terms[k].Waveform.Value(t) * m[k];
-                }
-
-                vectors.Add(sum);
-            }
         }
 
         double Peak(Vector3D normal)
@@ -209,6 +109,86 @@ public static class FluxCoupling
         }
 
         return best;
+    }
+
+    /// <summary>
+    /// The vectors whose projection on a normal is the loop's flux, from its couplings facing x, y and z: a sinusoid's
+    /// summed complex flux as its real and imaginary parts (Phi(t) = Im(V e^(j omega t)), V = sum M_k A_k e^(j phi_k)),
+    /// else the flux at each of the drive's times.
+    /// </summary>
+    private static List<Vector3D> FluxVectors(FieldSource source, Vector3D centre, LoopGeometry loop)
+    {
+        double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
+        double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
+        double[] mz = PerUnitDrive(source, centre, Vector3D.UnitZ, loop);
+        Vector3D M(int k) => new(mx[k], my[k], mz[k]);
+        int n = mx.Length;
+        if (source.IsSinusoidal)
+        {
+            Vector3D re = Vector3D.Zero, im = Vector3D.Zero;
+            for (int k = 0; k < n; k++)
+            {
+                Complex a = ((SineWaveform)source.Terms[k].Waveform).Phasor;
+                re += a.Real * M(k);
+                im += a.Imaginary * M(k);
+            }
+
+            return new List<Vector3D> { re, im };
+        }
+
+        var drives = new FieldWaveform[n];
+        for (int k = 0; k < n; k++)
+        {
+            drives[k] = source.Terms[k].Waveform;
+        }
+
+        double[] times = source.DriveTimes;
+        var fluxes = new List<Vector3D>(times.Length);
+        foreach (double t in times)
+        {
+            Vector3D sum = Vector3D.Zero;
+            for (int k = 0; k < n; k++)
+            {
+                sum += drives[k].Value(t) * M(k);
+            }
+
+            fluxes.Add(sum);
+        }
+
+        return fluxes;
+    }
+
+    /// <summary>The worst normal from the flux vectors (<see cref="WorstNormal"/>).</summary>
+    private static Vector3D Worst(FieldSource source, Vector3D centre, List<Vector3D> vectors)
+    {
+        Vector3D best;
+        if (source.IsSinusoidal)
+        {
+            // The largest |n . Phi(t)| is along the principal axis of Re(V) Re(V)^T + Im(V) Im(V)^T.
+            best = PrincipalAxis(vectors[0], vectors[1]);
+        }
+        else
+        {
+            Vector3D first = vectors[0];
+            Vector3D change = Vector3D.Zero, held = Vector3D.Zero;
+            foreach (Vector3D phi in vectors)
+            {
+                Vector3D d = phi - first;
+                change = d.Length > change.Length ? d : change;
+                held = phi.Length > held.Length ? phi : held;
+            }
+
+            best = change.Length >= held.Length ? change : held;
+        }
+
+        if (!(best.Length > 0) || !best.IsFinite)
+        {
+            return Vector3D.UnitZ;
+        }
+
+        Vector3D unit = best.Normalized();
+        Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
+        return b.Dot(unit) < 0 ? -unit : unit;
     }
 
     /// <summary>The unit eigenvector of the largest eigenvalue of a a^T + b b^T (power iteration from the larger of a and b).</summary>

@@ -198,10 +198,8 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 else
                 {
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
-                    // The orientation: the row's normal or tilt, else -Normal or -Tilt, else the station's normal, else the worst at each point.
-                    (Vector3D? normal, double? tilt) = rowNormal is not null || rowTilt is not null ? (rowNormal, rowTilt)
-                        : Normal is not null || Tilt is not null ? (Normal, Tilt)
-                        : (_normal, null);
+                    // _normal is -Normal or the station's: with -Tilt the run's tilt stands over the station's normal.
+                    (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), _normal);
 
                     // A visitor the row names is judged at the public's limits along the whole ray.
                     HazardPolicy policy = _policy.For(wearer);

@@ -348,10 +348,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         Station? station = !AtSite ? null
             : Station is not null ? Site.Find(Station)
             : Site.StationOf(record ?? Array.Empty<KeyValuePair<string, object?>>(), label);
-        // The orientation: the row's normal or tilt, else -Normal or -Tilt, else the station's normal, else the worst.
-        (Vector3D? normal, double? tilt) = rowNormal is not null || rowTilt is not null ? (rowNormal, rowTilt)
-            : Normal is not null || Tilt is not null ? (Normal, Tilt)
-            : (station?.Placement.Normal, null);
+        (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), station?.Placement.Normal);
         var placement = new Placement(
             rowPosition ?? Position ?? station?.Placement.Centre ?? Vector3D.Zero,
             normal,

@@ -49,6 +49,17 @@ public class TiltTests
     }
 
     [Fact]
+    public void TheRowsOrientationStandsOverTheRunsAndTheRunsOverTheStations()
+    {
+        Vector3D x = Vector3D.UnitX, y = Vector3D.UnitY, z = Vector3D.UnitZ;
+        Assert.Equal(((Vector3D?)null, (double?)30), Placement.Orientation((null, 30), (x, null), y));
+        Assert.Equal(((Vector3D?)z, (double?)null), Placement.Orientation((z, null), (null, 45), y));
+        Assert.Equal(((Vector3D?)null, (double?)45), Placement.Orientation((null, null), (null, 45), y));
+        Assert.Equal(((Vector3D?)y, (double?)null), Placement.Orientation((null, null), (null, null), y));
+        Assert.Equal(((Vector3D?)null, (double?)null), Placement.Orientation((null, null), (null, null), null));
+    }
+
+    [Fact]
     public void ATiltIsGivenInPlaceOfANormalAndWithinAQuarterTurn()
     {
         Assert.Throws<InductionHazard.Errors.InvalidInputException>(() => new Placement(Vector3D.Zero, Vector3D.UnitZ, null, 30));
