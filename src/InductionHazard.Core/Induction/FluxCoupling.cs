@@ -65,7 +65,8 @@ public static class FluxCoupling
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
     public static Vector3D TiltedNormal(FieldSource source, Vector3D centre, LoopGeometry loop, double tiltDegrees)
     {
-        List<Vector3D> vectors = FluxVectors(source, centre, loop);
+        // Held, as each of 24 directions reads them again.
+        List<Vector3D> vectors = FluxVectors(source, centre, loop).ToList();
         Vector3D worst = Worst(source, centre, vectors);
         double tilt = tiltDegrees * Math.PI / 180;
         if (tilt == 0)
@@ -114,9 +115,10 @@ public static class FluxCoupling
     /// <summary>
     /// The vectors whose projection on a normal is the loop's flux, from its couplings facing x, y and z: a sinusoid's
     /// summed complex flux as its real and imaginary parts (Phi(t) = Im(V e^(j omega t)), V = sum M_k A_k e^(j phi_k)),
-    /// else the flux at each of the drive's times.
+    /// else the flux at each of the drive's times, made as they are read (a curved drive has thousands of times, and
+    /// the worst normal reads each once).
     /// </summary>
-    private static List<Vector3D> FluxVectors(FieldSource source, Vector3D centre, LoopGeometry loop)
+    private static IEnumerable<Vector3D> FluxVectors(FieldSource source, Vector3D centre, LoopGeometry loop)
     {
         double[] mx = PerUnitDrive(source, centre, Vector3D.UnitX, loop);
         double[] my = PerUnitDrive(source, centre, Vector3D.UnitY, loop);
@@ -133,7 +135,7 @@ public static class FluxCoupling
                 im += a.Imaginary * M(k);
             }
 
-            return new List<Vector3D> { re, im };
+            return new[] { re, im };
         }
 
         var drives = new FieldWaveform[n];
@@ -142,38 +144,47 @@ public static class FluxCoupling
             drives[k] = source.Terms[k].Waveform;
         }
 
-        double[] times = source.DriveTimes;
-        var fluxes = new List<Vector3D>(times.Length);
+        var m = new Vector3D[n];
+        for (int k = 0; k < n; k++)
+        {
+            m[k] = M(k);
+        }
+
+        return FluxAtTimes(drives, m, source.DriveTimes);
+    }
+
+    private static IEnumerable<Vector3D> FluxAtTimes(FieldWaveform[] drives, Vector3D[] m, double[] times)
+    {
         foreach (double t in times)
         {
             Vector3D sum = Vector3D.Zero;
-            for (int k = 0; k < n; k++)
+            for (int k = 0; k < m.Length; k++)
             {
-                sum += drives[k].Value(t) * M(k);
+                sum += drives[k].Value(t) * m[k];
             }
 
-            fluxes.Add(sum);
+            yield return sum;
         }
-
-        return fluxes;
     }
 
     /// <summary>The worst normal from the flux vectors (<see cref="WorstNormal"/>).</summary>
-    private static Vector3D Worst(FieldSource source, Vector3D centre, List<Vector3D> vectors)
+    private static Vector3D Worst(FieldSource source, Vector3D centre, IEnumerable<Vector3D> vectors)
     {
         Vector3D best;
         if (source.IsSinusoidal)
         {
             // The largest |n . Phi(t)| is along the principal axis of Re(V) Re(V)^T + Im(V) Im(V)^T.
-            best = PrincipalAxis(vectors[0], vectors[1]);
+            Vector3D[] phasor = vectors.ToArray();
+            best = PrincipalAxis(phasor[0], phasor[1]);
         }
         else
         {
-            Vector3D first = vectors[0];
+            Vector3D? first = null;
             Vector3D change = Vector3D.Zero, held = Vector3D.Zero;
             foreach (Vector3D phi in vectors)
             {
-                Vector3D d = phi - first;
+                first ??= phi;
+                Vector3D d = phi - first.Value;
                 change = d.Length > change.Length ? d : change;
                 held = phi.Length > held.Length ? phi : held;
             }
