@@ -153,6 +153,27 @@ Describe 'Find-SafeDistance' {
         ($row | Find-SafeDistance -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m').DistanceMeters | Should -Be $tilted.DistanceMeters
     }
 
+    It 'takes a station''s Tilt along the ray, under -Normal' {
+        $siteFile = Join-Path $TestDrive 'feeder-site.psd1'
+        @'
+@{
+    Site = 'Feeder bay'
+    Stations = @(
+        @{ Name = 'Cable tray'; Position = '200 mm, 0, 0'; Tilt = '60 deg'
+           Sources = @( @{ Form = 'Conductor'; Name = 'Feeder'; Waveform = @{ Form = 'Sine'; Amplitude = '50 kA'; Frequency = '10 kHz' } } ) }
+    )
+}
+'@ | Set-Content -LiteralPath $siteFile
+        $site = Import-HazardSite $siteFile
+        $line = New-FieldWaveform -Sine -Amplitude '50 kA' -Frequency '10 kHz' | New-FieldSource -Conductor -Name 'Feeder'
+        $loop = New-ConductiveItem -Name 'Cable loop' -Material Copper -Diameter '300 mm' -WireDiameter '4 mm' -Gap '5 mm' -Contact Free
+        $tilted = Find-SafeDistance -Item $loop -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m' -Tilt '60 deg'
+        $facing = Find-SafeDistance -Item $loop -Source $line -From '200 mm, 0, 0' -Direction x -MaxDistance '10 m'
+        (Find-SafeDistance -Item $loop -Site $site -Station 'Cable tray' -Direction x -MaxDistance '10 m').DistanceMeters | Should -Be $tilted.DistanceMeters
+        (Find-SafeDistance -Item $loop -Site $site -Station 'Cable tray' -Direction x -MaxDistance '10 m' -Tilt '0 deg').DistanceMeters | Should -Be $facing.DistanceMeters -Because '-Tilt stands over the station''s'
+        (Find-SafeDistance -Item $loop -Site $site -Station 'Cable tray' -Direction x -MaxDistance '10 m' -Normal x).DistanceMeters | Should -Be 0 -Because 'a loop edge-on to the line''s circling field links none of it'
+    }
+
     It 'searches for a row''s own ExposureTime as -ExposureTime would' {
         $heater = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '12 kHz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater coil'
         $row = 'Name,Material,Diameter,WireDiameter,Contact,ExposureTime', 'Loose ring,Copper,20 mm,2 mm,Free,10 s' | ConvertFrom-Csv

@@ -183,7 +183,7 @@ Describe 'Hostile input (fixed-seed corpus)' {
             "Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = 'NaN'; Frequency = '50 Hz' }"
             "Form = 'Map'; Path = 'no-such-map.csv'; Waveform = @{ Form = 'Sine'; Amplitude = '1 mT'; Frequency = '50 Hz' }"
         )
-        $extras = @('', "Position = '0, 300 mm, 0'", "Position = 'x'", "ExposureTime = '2 min'", "ExposureTime = '1 ms'", "Normal = 'z'", "Normal = '0,0,0'", "Colour = 'red'", "AmbientTemperature = '35 degC'", "AmbientTemperature = '500 degC'", "AmbientTemperature = 'warm'")
+        $extras = @('', "Position = '0, 300 mm, 0'", "Position = 'x'", "ExposureTime = '2 min'", "ExposureTime = '1 ms'", "Normal = 'z'", "Normal = '0,0,0'", "Colour = 'red'", "AmbientTemperature = '35 degC'", "AmbientTemperature = '500 degC'", "AmbientTemperature = 'warm'", "Tilt = '30 deg'", "Tilt = '120 deg'", "Tilt = 'NaN deg'")
         $read = 0
         $refused = [System.Collections.Generic.List[object]]::new()
         foreach ($k in 1..200) {

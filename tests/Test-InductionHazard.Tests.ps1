@@ -663,6 +663,51 @@ Ring,Copper,20 mm,2 mm,Skin,,
             $null = $row | Test-InductionHazard -Source $coil -ErrorVariable failed -ErrorAction SilentlyContinue
             "$($failed[0])" | Should -BeLike "row 1 ('Ring'): Tilt: give a normal*or a tilt from the worst orientation, not both*"
         }
+
+        It 'takes a station''s Tilt, under a row''s normal or tilt and under -Normal or -Tilt' {
+            $siteFile = Join-Path $TestDrive 'tilted-site.psd1'
+            @'
+@{
+    Site = 'Tilt bench'
+    Stations = @(
+        @{ Name = 'Slanted rack'; Tilt = '60 deg'; Sources = @( @{ Form = 'Uniform'; Name = 'Coil'; Waveform = @{ Form = 'Sine'; Amplitude = '10 mT'; Frequency = '50 Hz' } } ) }
+    )
+}
+'@ | Set-Content -LiteralPath $siteFile
+            $site = Import-HazardSite $siteFile
+            ($site.Stations[0] | Format-List | Out-String) | Should -BeLike '*tilted 60 degrees from the orientation that links the largest flux change*'
+            $coil = New-FieldWaveform -Sine -Amplitude '10 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Coil'
+            $ring = New-ConductiveItem -Name 'Ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Contact Skin
+            $facing = Test-InductionHazard -Item $ring -Source $coil
+            $tilted = Test-InductionHazard -Item $ring -Source $coil -Tilt '60 deg'
+            $rows = @'
+Name,Material,Diameter,WireDiameter,Contact,Station,Tilt,Normal
+Ring,Copper,20 mm,2 mm,Skin,Slanted rack,,
+Ring,Copper,20 mm,2 mm,Skin,Slanted rack,30 deg,
+Ring,Copper,20 mm,2 mm,Skin,Slanted rack,,x
+'@ | ConvertFrom-Csv
+            $out = @($rows | Test-InductionHazard -Site $site)
+            $out[0].PeakEmfVolts | Should -Be $tilted.PeakEmfVolts -Because 'the station''s tilt is taken as -Tilt is'
+            $out[0].Response.Orientation | Should -BeLike 'tilted 60 degrees from the largest flux change*'
+            [math]::Abs($out[1].PeakEmfVolts / $facing.PeakEmfVolts - [math]::Cos([math]::PI / 6)) | Should -BeLessThan 1e-9 -Because 'the row''s own tilt stands over the station''s'
+            $out[2].PeakEmfVolts | Should -BeLessThan (1e-9 * $facing.PeakEmfVolts) -Because 'the row''s own normal, edge-on to the field, stands over the station''s tilt'
+            $overNormal = @($rows[0] | Test-InductionHazard -Site $site -Normal x)
+            $overNormal[0].PeakEmfVolts | Should -BeLessThan (1e-9 * $facing.PeakEmfVolts) -Because '-Normal stands over the station''s tilt'
+            $overTilt = @($rows[0] | Test-InductionHazard -Site $site -Tilt '0 deg')
+            $overTilt[0].PeakEmfVolts | Should -Be $facing.PeakEmfVolts -Because '-Tilt stands over the station''s'
+            (Get-InductionResponse -Item $ring -Site $site -Station 'Slanted rack').PeakEmfVolts | Should -Be $tilted.Response.PeakEmfVolts
+        }
+
+        It 'refuses a station''s tilt beside its normal, or beyond a quarter turn, naming the station' {
+            foreach ($case in @(
+                    @{ Values = "Tilt = '30 deg'; Normal = 'z'"; Message = "*station 'Rack'*Tilt*give a Normal or a Tilt from the worst orientation, not both*" },
+                    @{ Values = "Tilt = '120 deg'"; Message = "*station 'Rack'*Tilt*must be between 0 degrees and 90 degrees*" },
+                    @{ Values = "Tilt = '30'"; Message = "*station 'Rack'*Tilt*" })) {
+                $siteFile = Join-Path $TestDrive 'bad-tilt.psd1'
+                "@{ Site = 'Bench'; Stations = @( @{ Name = 'Rack'; $($case.Values); Sources = @( @{ Form = 'Uniform'; Waveform = @{ Form = 'Sine'; Amplitude = '10 mT'; Frequency = '50 Hz' } } ) } ) }" | Set-Content -LiteralPath $siteFile
+                { Import-HazardSite $siteFile } | Should -Throw -ExpectedMessage $case.Message
+            }
+        }
     }
 
     Context 'the air around a station or a row' {

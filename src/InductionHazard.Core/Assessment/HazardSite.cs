@@ -92,7 +92,7 @@ public sealed class HazardSite
 /// </summary>
 /// <param name="Name">The station's name, as inventory rows name it.</param>
 /// <param name="Source">The field there (several sources summed).</param>
-/// <param name="Placement">Where an item's loop is centred and how it faces (null normal: the worst orientation).</param>
+/// <param name="Placement">Where an item's loop is centred and how it faces (null normal: the worst orientation, turned by its tilt where it gives one).</param>
 /// <param name="ExposureSeconds">How long an item stays, s; null for the default.</param>
 /// <param name="LeaveSeconds">How long carrying an item out takes, s; null for the default.</param>
 /// <param name="Description">Why the station is assessed, in a sentence.</param>

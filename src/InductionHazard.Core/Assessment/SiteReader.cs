@@ -13,8 +13,9 @@ namespace InductionHazard.Assessment;
 
 /// <summary>
 /// Builds a site from its data (a PowerShell data file read as data): Site (the name) and Stations, each a table
-/// with Name, Sources (tables of a source's values with a Waveform table), and optionally Position, Normal,
-/// ExposureTime, LeaveTime, Description and Policy (the station's own policy values, merged over the site's); and
+/// with Name, Sources (tables of a source's values with a Waveform table), and optionally the rest of <see
+/// cref="StationKeys"/> (Position, Normal or Tilt, Velocity, ExposureTime, LeaveTime, AmbientTemperature, Description,
+/// and Policy: the station's own policy values, merged over the site's); and
 /// optionally the site's Policy (a table of policy values, read by <see cref="Criteria.PolicyReader"/>). Every problem
 /// names the station and the value.
 /// </summary>
@@ -24,7 +25,7 @@ public static class SiteReader
     public const string ErrorId = "InvalidSiteFile";
 
     /// <summary>The values a station table may give, each by its name (the about topic of the site file names every one).</summary>
-    public static IReadOnlyList<string> StationKeys { get; } = new[] { "Name", "Sources", "Position", "Normal", "Velocity", "ExposureTime", "LeaveTime", "AmbientTemperature", "Description", "Policy" };
+    public static IReadOnlyList<string> StationKeys { get; } = new[] { "Name", "Sources", "Position", "Normal", "Tilt", "Velocity", "ExposureTime", "LeaveTime", "AmbientTemperature", "Description", "Policy" };
 
     /// <summary>Reads the site.</summary>
     /// <param name="data">The file's top-level table.</param>
@@ -89,6 +90,16 @@ public static class SiteReader
         object? rawSources = fields.Raw("Sources", required: true, "Source");
         Vector3D position = Vector(fields, "Position", QuantityKind.Length, label) ?? Vector3D.Zero;
         Vector3D? normal = Vector(fields, "Normal", null, label);
+        double? tilt = fields.Quantity("Tilt", QuantityKind.Angle, required: false);
+        if (tilt is { } t && PhysicalRanges.Tilt.Problem(t) is { } tiltProblem)
+        {
+            fields.AddError("Tilt", tiltProblem);
+        }
+        else if (tilt is not null && normal is not null)
+        {
+            fields.AddError("Tilt", "give a Normal or a Tilt from the worst orientation, not both");
+        }
+
         Vector3D? velocity = Vector(fields, "Velocity", QuantityKind.Speed, label);
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);
         double? leave = fields.Quantity("LeaveTime", QuantityKind.Time, required: false);
@@ -146,7 +157,7 @@ public static class SiteReader
         Criteria.HazardPolicy? own = rawPolicy is IDictionary policyValues
             ? Criteria.PolicyReader.Read(policyValues, label + ", its Policy", sitePolicy, (sitePolicy?.Name ?? "published limits") + " at " + name)
             : null;
-        return new Station(name, source, new Placement(position, normal, velocity), exposure, leave, description) { Policy = own, AmbientCelsius = ambient };
+        return new Station(name, source, new Placement(position, normal, velocity, tilt), exposure, leave, description) { Policy = own, AmbientCelsius = ambient };
     }
 
     private static Vector3D? Vector(RecordFields fields, string name, QuantityKind? kind, string label)

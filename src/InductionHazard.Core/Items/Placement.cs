@@ -52,16 +52,19 @@ public sealed class Placement
 
     /// <summary>
     /// The orientation that stands where a row, the run and a station may each give one: the row's normal or tilt,
-    /// else the run's (-Normal or -Tilt), else the station's normal, else none (the worst orientation). A normal and a
-    /// tilt given together at one level are refused when the placement is made.
+    /// else the run's (-Normal or -Tilt), else the station's normal or tilt, else none (the worst orientation). A
+    /// normal and a tilt given together at one level are refused when the placement is made.
     /// </summary>
     /// <param name="row">The row's normal and tilt.</param>
     /// <param name="run">The run's normal and tilt.</param>
-    /// <param name="station">The station's normal.</param>
-    public static (Vector3D? Normal, double? TiltDegrees) Orientation((Vector3D? Normal, double? TiltDegrees) row, (Vector3D? Normal, double? TiltDegrees) run, Vector3D? station) =>
+    /// <param name="station">The station's normal and tilt.</param>
+    public static (Vector3D? Normal, double? TiltDegrees) Orientation((Vector3D? Normal, double? TiltDegrees) row, (Vector3D? Normal, double? TiltDegrees) run, (Vector3D? Normal, double? TiltDegrees) station) =>
         row.Normal is not null || row.TiltDegrees is not null ? row
         : run.Normal is not null || run.TiltDegrees is not null ? run
-        : (station, null);
+        : station;
+
+    /// <summary>The placement's own normal and tilt, as <see cref="Orientation"/> takes a station's.</summary>
+    public (Vector3D? Normal, double? TiltDegrees) Facing => (Normal, TiltDegrees);
 
     /// <summary>How far the loop is turned from the orientation that links the largest flux change, degrees; null when it faces it (or a normal is given).</summary>
     public double? TiltDegrees { get; }

@@ -24,7 +24,8 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private readonly CancellationTokenSource _cancellation = new();
     private FieldSource _source = null!;
     private Vector3D _from;
-    private Vector3D? _normal;
+    /// <summary>The station's normal or tilt, where the search runs at a station.</summary>
+    private (Vector3D? Normal, double? TiltDegrees) _stationFacing;
     private double? _exposure;
     private HazardPolicy _policy = HazardPolicy.Default;
     private Vector3D? _velocity;
@@ -106,7 +107,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     {
         try
         {
-            (_from, _normal, _exposure, _policy, _velocity) = (From, Normal, ExposureTime, Policy ?? HazardPolicy.Default, Velocity);
+            (_from, _exposure, _policy, _velocity) = (From, ExposureTime, Policy ?? HazardPolicy.Default, Velocity);
             _environment = new ThermalEnvironment(AmbientTemperature);
             if (ParameterSetName == SiteSet)
             {
@@ -114,7 +115,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 Station station = Site.Find(Station);
                 _source = station.Source;
                 _from = MyInvocation.BoundParameters.ContainsKey(nameof(From)) ? From : station.Placement.Centre;
-                _normal = Normal ?? station.Placement.Normal;
+                _stationFacing = station.Placement.Facing;
                 _exposure = ExposureTime ?? station.ExposureSeconds;
                 _velocity = Velocity ?? station.Placement.Velocity;
                 if (!MyInvocation.BoundParameters.ContainsKey(nameof(AmbientTemperature)) && station.AmbientCelsius is { } stationAir)
@@ -198,8 +199,8 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
                 else
                 {
                     ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
-                    // _normal is -Normal or the station's: with -Tilt the run's tilt stands over the station's normal.
-                    (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), _normal);
+                    // The row's normal or tilt, else -Normal or -Tilt, else the station's.
+                    (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), _stationFacing);
 
                     // A visitor the row names is judged at the public's limits along the whole ray.
                     HazardPolicy policy = _policy.For(wearer);

@@ -52,11 +52,18 @@ public class TiltTests
     public void TheRowsOrientationStandsOverTheRunsAndTheRunsOverTheStations()
     {
         Vector3D x = Vector3D.UnitX, y = Vector3D.UnitY, z = Vector3D.UnitZ;
-        Assert.Equal(((Vector3D?)null, (double?)30), Placement.Orientation((null, 30), (x, null), y));
-        Assert.Equal(((Vector3D?)z, (double?)null), Placement.Orientation((z, null), (null, 45), y));
-        Assert.Equal(((Vector3D?)null, (double?)45), Placement.Orientation((null, null), (null, 45), y));
-        Assert.Equal(((Vector3D?)y, (double?)null), Placement.Orientation((null, null), (null, null), y));
-        Assert.Equal(((Vector3D?)null, (double?)null), Placement.Orientation((null, null), (null, null), null));
+        Assert.Equal(((Vector3D?)null, (double?)30), Placement.Orientation((null, 30), (x, null), (y, null)));
+        Assert.Equal(((Vector3D?)z, (double?)null), Placement.Orientation((z, null), (null, 45), (y, null)));
+        Assert.Equal(((Vector3D?)null, (double?)45), Placement.Orientation((null, null), (null, 45), (y, null)));
+        Assert.Equal(((Vector3D?)y, (double?)null), Placement.Orientation((null, null), (null, null), (y, null)));
+        Assert.Equal(((Vector3D?)null, (double?)null), Placement.Orientation((null, null), (null, null), (null, null)));
+
+        // A station's tilt, under the row's and the run's normal or tilt.
+        Assert.Equal(((Vector3D?)null, (double?)60), Placement.Orientation((null, null), (null, null), (null, 60)));
+        Assert.Equal(((Vector3D?)x, (double?)null), Placement.Orientation((null, null), (x, null), (null, 60)));
+        Assert.Equal(((Vector3D?)null, (double?)0), Placement.Orientation((null, 0), (null, null), (null, 60)));
+        var station = new Placement(Vector3D.Zero, null, null, 60);
+        Assert.Equal(((Vector3D?)null, (double?)60), station.Facing);
     }
 
     [Fact]
