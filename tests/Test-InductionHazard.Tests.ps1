@@ -698,6 +698,20 @@ Ring,Copper,20 mm,2 mm,Skin,Slanted rack,,x
             (Get-InductionResponse -Item $ring -Site $site -Station 'Slanted rack').PeakEmfVolts | Should -Be $tilted.Response.PeakEmfVolts
         }
 
+        It 'faces a large loop beside a coil the way that links the most flux, and is Indeterminate where that way runs into the winding' {
+            $coil = New-FieldWaveform -Sine -Amplitude '1 kA' -Frequency '50 Hz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater coil'
+            $loop = New-ConductiveItem -Name 'Cable loop' -Material Copper -Diameter '300 mm' -WireDiameter '4 mm' -Gap '5 mm' -Contact Free
+            # 50 mm above the coil, on its axis: turned some 21 degrees the loop links 2.6 % more than facing the axis.
+            $above = Test-InductionHazard -Item $loop -Source $coil -Position '0, 0, 50 mm'
+            $facing = Test-InductionHazard -Item $loop -Source $coil -Position '0, 0, 50 mm' -Normal z
+            $above.PeakEmfVolts | Should -BeGreaterThan (1.02 * $facing.PeakEmfVolts)
+            # 30 mm above the winding, off the axis: the flux grows as the loop turns toward the winding until it cannot be found.
+            $near = Test-InductionHazard -Item $loop -Source $coil -Position '120 mm, 0, 30 mm' -WarningAction SilentlyContinue
+            $near.Verdict | Should -Be 'Indeterminate'
+            ($near.Reasons -join ' ') | Should -BeLike '*orientation that links the largest flux change cannot be found this near the source*give how the item sits (-Normal*'
+            (Test-InductionHazard -Item $loop -Source $coil -Position '120 mm, 0, 30 mm' -Normal z).Verdict | Should -Not -Be 'Indeterminate' -Because 'given how it sits, it is judged'
+        }
+
         It 'refuses a station''s tilt beside its normal, or beyond a quarter turn, naming the station' {
             foreach ($case in @(
                     @{ Values = "Tilt = '30 deg'; Normal = 'z'"; Message = "*station 'Rack'*Tilt*give a Normal or a Tilt from the worst orientation, not both*" },

@@ -40,15 +40,273 @@ public static class FluxCoupling
     };
 
     /// <summary>
-    /// The unit normal that links the largest flux change: the flux per unit drive is found for loops facing x, y and
-    /// z (a vector per term); for sinusoids of one frequency, the principal direction of the summed complex flux
+    /// The unit normal that links the largest flux change. First from the flux per unit drive of loops facing x, y and
+    /// z (a vector per term): for sinusoids of one frequency, the principal direction of the summed complex flux
     /// vector; otherwise the direction of the largest flux change over the drive, or of the largest flux (which
-    /// leaving the field removes), whichever is larger. Oriented along the field at the centre where that is
-    /// defined, so a positive drive gives a positive flux.
+    /// leaving the field removes), whichever is larger. That is exact where the loop's flux is linear in its normal (a
+    /// uniform field); in a field that varies across the loop the disc turns with its normal and the flux is not, so the
+    /// normal of a loop or a flat body is then refined on its own flux (<see cref="Refined"/>). Oriented along the field
+    /// at the centre where that is defined, so a positive drive gives a positive flux.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
     public static Vector3D WorstNormal(FieldSource source, Vector3D centre, LoopGeometry loop) =>
-        Worst(source, centre, FluxVectors(source, centre, loop));
+        Refined(source, centre, loop, Worst(source, centre, FluxVectors(source, centre, loop)));
+
+    /// <summary>The largest angle between normals the refinement starts from, radians (8 degrees).</summary>
+    private const double FirstTurn = 8 * Math.PI / 180;
+
+    /// <summary>The smallest, radians (a quarter of a degree): near the largest, the flux falls with the square of the angle, here by some 1e-5.</summary>
+    private const double LastTurn = 0.25 * Math.PI / 180;
+
+    /// <summary>The most trial normals the refinement takes.</summary>
+    private const int MostTrials = 200;
+
+    /// <summary>What a turn from the estimate may be predicted to add to its peak, at most, for the estimate to stand: a share of the peak.</summary>
+    private const double GainTolerance = 1e-5;
+
+    /// <summary>The turn each way about the estimate by which the gain is predicted, radians (2 degrees).</summary>
+    private const double CheckTurn = 2 * Math.PI / 180;
+
+    /// <summary>
+    /// What turning from a normal could add to its peak, by a parabola through the peak there and at a turn each way
+    /// along each of two directions across it: the sum over the two of g^2 / 2|c|, with g the slope and
+    /// c the curvature, and where the two put the top (-g / c along each). Infinite where a turn could not be
+    /// integrated or either parabola does not open downward.
+    /// </summary>
+    private static (double Gain, double X1, double X2) Gain(double peak, double?[] polled, double turn)
+    {
+        double gain = 0;
+        var top = new double[2];
+        for (int axis = 0; axis < 2; axis++)
+        {
+            if (polled[2 * axis] is not { } plus || polled[(2 * axis) + 1] is not { } minus)
+            {
+                return (double.PositiveInfinity, 0, 0);
+            }
+
+            double slope = (plus - minus) / (2 * turn), curvature = (plus + minus - (2 * peak)) / (turn * turn);
+            if (!(curvature < 0))
+            {
+                return (double.PositiveInfinity, 0, 0);
+            }
+
+            gain += slope * slope / (-2 * curvature);
+            top[axis] = -slope / curvature;
+        }
+
+        return (gain, top[0], top[1]);
+    }
+
+    /// <summary>A normal turned by an angle toward a unit direction across it.</summary>
+    private static Vector3D Turned(Vector3D normal, Vector3D toward, double angle) =>
+        ((Math.Cos(angle) * normal) + (Math.Sin(angle) * toward)).Normalized();
+
+    /// <summary>
+    /// The normal, from the axes' estimate, that links the largest peak flux change by the loop's own flux at each
+    /// normal tried (its disc or rectangle turned with it; a flat body's, a disc's or a plate's, as a loop's): a
+    /// compass search on the sphere, turning the best normal so far by 8 degrees toward each of four directions across
+    /// it, moving wherever the peak grows and halving the turn where it does not, down to a quarter of a degree. In a
+    /// uniform field the estimate is exact and is kept. Where a poll two degrees each way about the estimate shows a
+    /// cap whose top a parabola each way puts within 1e-5 of the peak of it (<see cref="Gain"/>), the estimate is kept:
+    /// a small loop where the field bends gently, whose search would move its peak by parts in a million. Otherwise,
+    /// where the parabolas put the top within 32 degrees and it links more, the search starts there turning by two
+    /// degrees. The search only ever moves to a
+    /// normal that links more: never less than the estimate. A normal at which the field cannot be integrated (the
+    /// loop turned into a winding, or onto a conductor) is passed over while the search turns by more than a quarter
+    /// of a degree; one at the last turn means the flux grows as the loop turns toward the source until it cannot be
+    /// found, and the largest is not found: the search then refuses, naming the turn, rather than stand the estimate
+    /// in for it.
+    /// </summary>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated at a normal tried.</exception>
+    private static Vector3D Refined(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D estimate)
+    {
+        if (source.Terms.All(t => t.Geometry is UniformField))
+        {
+            // The flux is linear in the normal: the estimate is exact.
+            return estimate;
+        }
+
+        if (loop is BodyGeometry body && (body is SphereBody || body.Section is not BodySection section || section.AxialExtentMeters > 0.5 * body.HalfSpanMeters))
+        {
+            // A body longer along its axis than a quarter of its span (a rod, a tube, a bar, a sphere) couples through its
+            // whole length, which a turn moves across the field, not through its middle section alone: its own flux is not
+            // the measure to turn it by, and the estimate stands.
+            return estimate;
+        }
+
+        PeakFlux peak = new(source);
+        (Vector3D Normal, string Reason)? failed = null;
+        double? At(Vector3D normal)
+        {
+            try
+            {
+                return peak.Of(PerUnitDrive(source, centre, normal, loop));
+            }
+            catch (Errors.FieldEvaluationException ex)
+            {
+                failed = (normal, ex.Message);
+                return null;
+            }
+        }
+
+        double atEstimate = At(estimate) ?? double.NaN;
+        if (!Finite.Is(atEstimate))
+        {
+            // The estimate's own flux cannot be found: the engine finds it again there and says so.
+            return estimate;
+        }
+
+        // First whether a search could gain anything: a poll two degrees each way about the estimate.
+        (Vector3D c1, Vector3D c2) = Across(estimate);
+        Vector3D[] across = { c1, -c1, c2, -c2 };
+        var polled = new double?[4];
+        (Vector3D best, double bestPeak) = (estimate, atEstimate);
+        for (int d = 0; d < 4; d++)
+        {
+            Vector3D candidate = Turned(estimate, across[d], CheckTurn);
+            polled[d] = At(candidate);
+            if (polled[d] is { } value && value > bestPeak)
+            {
+                (best, bestPeak) = (candidate, value);
+            }
+        }
+
+        (double gain, double x1, double x2) = Gain(atEstimate, polled, CheckTurn);
+        if (gain <= GainTolerance * atEstimate)
+        {
+            // The peak about the estimate is a cap whose top lies so near it that a turn there would raise the peak by
+            // less than the tolerance: the estimate stands.
+            return estimate;
+        }
+
+        // Where the parabolas put the top, if it lies within a few turns: the search then starts from there by the
+        // poll's turn, rather than from the best so far by eight degrees.
+        double turn = FirstTurn, reach = Math.Sqrt((x1 * x1) + (x2 * x2));
+        if (Finite.Is(gain) && reach > 0 && reach <= 4 * FirstTurn)
+        {
+            Vector3D top = Turned(estimate, ((x1 * c1) + (x2 * c2)).Normalized(), reach);
+            if (At(top) is { } atTop && atTop > bestPeak)
+            {
+                (best, bestPeak, turn) = (top, atTop, CheckTurn);
+            }
+        }
+
+        bool edge = false;
+        for (int trials = 1; turn >= LastTurn && trials < MostTrials;)
+        {
+            (Vector3D e1, Vector3D e2) = Across(best);
+            Vector3D moved = best;
+            double movedPeak = bestPeak;
+            failed = null;
+            foreach (Vector3D direction in new[] { e1, -e1, e2, -e2 })
+            {
+                Vector3D candidate = Turned(best, direction, turn);
+                double? value = At(candidate);
+                trials++;
+                if (value > movedPeak)
+                {
+                    (moved, movedPeak) = (candidate, value.Value);
+                }
+            }
+
+            // A normal that cannot be integrated this close to the best (at the last turn, once the loop ends): the best
+            // lies at the edge of what can be.
+            edge = failed is not null;
+
+            if (movedPeak > bestPeak * (1 + 1e-12))
+            {
+                (best, bestPeak) = (moved, movedPeak);
+            }
+            else
+            {
+                turn /= 2;
+            }
+        }
+
+        if (edge && turn < LastTurn && failed is { } last)
+        {
+            // Near the source the flux grows as the loop turns toward it until the field can no longer be integrated: a
+            // normal a quarter of a degree from the best found cannot be, so the largest is not found, and no
+            // orientation may stand in for it.
+            double degrees = Math.Acos(Math.Max(-1, Math.Min(1, Math.Abs(last.Normal.Dot(estimate))))) * 180 / Math.PI;
+            throw new Errors.FieldEvaluationException(
+                "the orientation that links the largest flux change cannot be found this near the source: the flux grows as the loop turns toward it until, "
+                + SiFormat.Plain(Math.Round(degrees, 1)) + " degrees from the estimate by the field's axes (normal " + estimate + "), it cannot be found (" + last.Reason
+                + "); give how the item sits (-Normal or a Normal column), or assess it further from the source");
+        }
+
+        Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
+        return b.Dot(best) < 0 ? -best : best;
+    }
+
+    /// <summary>Two unit directions across a normal, square to it and to each other.</summary>
+    private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)
+    {
+        Vector3D across = Math.Abs(normal.X) < 0.9 ? Vector3D.UnitX : Vector3D.UnitY;
+        Vector3D e1 = (across - (across.Dot(normal) * normal)).Normalized();
+        return (e1, normal.Cross(e1).Normalized());
+    }
+
+    /// <summary>
+    /// The loop's peak flux change from its flux per unit drive of each term: for sinusoids the summed phasor's
+    /// magnitude; otherwise the largest change from the first of the drive's times or flux held at any, whichever is
+    /// larger (the measure the axes' estimate takes).
+    /// </summary>
+    private sealed class PeakFlux
+    {
+        private readonly FieldSource _source;
+        private double[,]? _drives;
+
+        public PeakFlux(FieldSource source) => _source = source;
+
+        /// <summary>The peak for the couplings m_k.</summary>
+        public double Of(double[] m)
+        {
+            IReadOnlyList<SourceTerm> terms = _source.Terms;
+            if (_source.IsSinusoidal)
+            {
+                Complex sum = Complex.Zero;
+                for (int k = 0; k < m.Length; k++)
+                {
+                    sum += m[k] * ((SineWaveform)terms[k].Waveform).Phasor;
+                }
+
+                return sum.Magnitude;
+            }
+
+            double[] times = _source.DriveTimes;
+            if (_drives is null)
+            {
+                _drives = new double[times.Length, m.Length];
+                for (int i = 0; i < times.Length; i++)
+                {
+                    for (int k = 0; k < m.Length; k++)
+                    {
+                        _drives[i, k] = terms[k].Waveform.Value(times[i]);
+                    }
+                }
+            }
+
+            double first = 0, largest = 0;
+            for (int i = 0; i < times.Length; i++)
+            {
+                double phi = 0;
+                for (int k = 0; k < m.Length; k++)
+                {
+                    phi += m[k] * _drives[i, k];
+                }
+
+                if (i == 0)
+                {
+                    first = phi;
+                }
+
+                largest = Math.Max(largest, Math.Max(Math.Abs(phi - first), Math.Abs(phi)));
+            }
+
+            return largest;
+        }
+    }
 
     /// <summary>
     /// The normal turned by a tilt from the worst one (<see cref="WorstNormal"/>) toward the side that keeps the most
@@ -67,7 +325,7 @@ public static class FluxCoupling
     {
         // Held, as each of 24 directions reads them again.
         List<Vector3D> vectors = FluxVectors(source, centre, loop).ToList();
-        Vector3D worst = Worst(source, centre, vectors);
+        Vector3D worst = Refined(source, centre, loop, Worst(source, centre, vectors));
         double tilt = tiltDegrees * Math.PI / 180;
         if (tilt == 0)
         {

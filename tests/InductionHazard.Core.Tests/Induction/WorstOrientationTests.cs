@@ -1,0 +1,183 @@
+using System;
+using System.Collections.Generic;
+using InductionHazard.Assessment;
+using InductionHazard.Fields;
+using InductionHazard.Induction;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
+using Xunit;
+
+namespace InductionHazard.Tests.Induction;
+
+/// <summary>
+/// The orientation the engine takes for a loop given no normal is the one that links the largest flux change, also
+/// where the field varies across the loop and the flux is not linear in the normal: checked against a search over
+/// every orientation by an independent model of the true geometry, the flux as a line integral around the loop's own
+/// outline (Neumann's formula for a coil, the vector potential of a line current), with no disc quadrature.
+/// </summary>
+public class WorstOrientationTests
+{
+    private const double Mu0 = 4e-7 * Math.PI;
+
+    private static ConductiveItem Ring(string diameter, string wire) => ItemRecordReader.Read(
+        new Dictionary<string, object?> { ["Name"] = "loop", ["Material"] = "Copper", ["Diameter"] = diameter, ["WireDiameter"] = wire, ["Contact"] = "Free" }, MaterialLibrary.BuiltIn);
+
+    private static FieldSource Sine(IFieldGeometry geometry) =>
+        new("source", new[] { new SourceTerm(geometry, new SineWaveform(1000, 50, drive: DriveKind.Current)) });
+
+    /// <summary>Points and tangent steps around a circle of radius r centred at c square to n, in n's right-hand sense.</summary>
+    private static (Vector3D[] Points, Vector3D[] Steps) Circle(Vector3D c, Vector3D n, double r, int segments)
+    {
+        Vector3D across = Math.Abs(n.X) < 0.9 ? Vector3D.UnitX : Vector3D.UnitY;
+        Vector3D e1 = (across - (across.Dot(n) * n)).Normalized();
+        Vector3D e2 = n.Cross(e1);
+        var points = new Vector3D[segments];
+        var steps = new Vector3D[segments];
+        double dt = 2 * Math.PI / segments;
+        for (int i = 0; i < segments; i++)
+        {
+            double t = i * dt;
+            points[i] = c + (r * Math.Cos(t) * e1) + (r * Math.Sin(t) * e2);
+            steps[i] = r * dt * ((-Math.Sin(t) * e1) + (Math.Cos(t) * e2));
+        }
+
+        return (points, steps);
+    }
+
+    /// <summary>
+    /// Flux per ampere through a loop from a coil of N turns: N times Neumann's mutual inductance, mu0 / 4 pi times the
+    /// double line integral of dl1 . dl2 / |r1 - r2| (trapezoid rule, which converges geometrically for the smooth
+    /// periodic integrand of two separate circles).
+    /// </summary>
+    private static double CoilFlux((Vector3D[] Points, Vector3D[] Steps) coil, double turns, Vector3D c, Vector3D n, double r, int segments)
+    {
+        (Vector3D[] points, Vector3D[] steps) = Circle(c, n, r, segments);
+        double sum = 0;
+        for (int j = 0; j < points.Length; j++)
+        {
+            // Plain doubles in the inner loop: the search calls it some 10^8 times.
+            double px = points[j].X, py = points[j].Y, pz = points[j].Z, sx = steps[j].X, sy = steps[j].Y, sz = steps[j].Z;
+            for (int i = 0; i < coil.Points.Length; i++)
+            {
+                Vector3D q = coil.Points[i], d = coil.Steps[i];
+                double dx = q.X - px, dy = q.Y - py, dz = q.Z - pz;
+                sum += ((d.X * sx) + (d.Y * sy) + (d.Z * sz)) / Math.Sqrt((dx * dx) + (dy * dy) + (dz * dz));
+            }
+        }
+
+        return turns * Mu0 / (4 * Math.PI) * sum;
+    }
+
+    /// <summary>Flux per ampere through a loop from a line current along z through the origin: the line integral of A = -(mu0 / 2 pi) ln(rho) z.</summary>
+    private static double LineFlux(Vector3D c, Vector3D n, double r, int segments)
+    {
+        (Vector3D[] points, Vector3D[] steps) = Circle(c, n, r, segments);
+        double sum = 0;
+        for (int j = 0; j < points.Length; j++)
+        {
+            sum += -Math.Log(Math.Sqrt((points[j].X * points[j].X) + (points[j].Y * points[j].Y))) * steps[j].Z;
+        }
+
+        return Mu0 / (2 * Math.PI) * sum;
+    }
+
+    private static Vector3D Normal(double thetaDegrees, double phiDegrees)
+    {
+        double t = thetaDegrees * Math.PI / 180, p = phiDegrees * Math.PI / 180;
+        return new Vector3D(Math.Sin(t) * Math.Cos(p), Math.Sin(t) * Math.Sin(p), Math.Cos(t));
+    }
+
+    /// <summary>
+    /// The largest |flux| over every orientation: a grid over the half sphere (2 degrees by 4), then a grid a twentieth as
+    /// fine about its best, over a step and a fifth of the grid each way (u and -u link the same flux).
+    /// </summary>
+    private static (double Flux, Vector3D Normal) LargestOverOrientations(Func<Vector3D, int, double> flux, int coarse, int fine)
+    {
+        (double best, double theta, double phi) = (-1, 0, 0);
+        for (double t = 0; t <= 90; t += 2)
+        {
+            for (double p = 0; p < 360; p += t == 0 ? 360 : 4)
+            {
+                double f = Math.Abs(flux(Normal(t, p), coarse));
+                if (f > best)
+                {
+                    (best, theta, phi) = (f, t, p);
+                }
+            }
+        }
+
+        (double fineBest, Vector3D normal) = (-1, Vector3D.UnitZ);
+        for (double t = theta - 1.2; t <= theta + 1.2 + 1e-9; t += 0.2)
+        {
+            for (double p = phi - 2.4; p <= phi + 2.4 + 1e-9; p += 0.4)
+            {
+                Vector3D n = Normal(t, p);
+                double f = Math.Abs(flux(n, fine));
+                if (f > fineBest)
+                {
+                    (fineBest, normal) = (f, n);
+                }
+            }
+        }
+
+        return (fineBest, normal);
+    }
+
+    [Theory]
+    [InlineData("300 mm", "4 mm", 0.0, 0.0, 0.05)]
+    [InlineData("20 mm", "2 mm", 0.09, 0.0, 0.01)]
+    [InlineData("20 mm", "2 mm", 0.1, 0.0, 0.015)]
+    [Validates("the loop's flux at the orientation the engine takes for the worst, against the largest over every orientation, near a coil (a loop wider than the coil above it; a ring 10-15 mm from the winding)", "Neumann's formula for the mutual inductance of two circles at any orientation, by the trapezoid rule around both (independent of the disc quadrature), searched over the half sphere", "1e-4")]
+    public void NearACoilTheLoopFacesTheOrientationThatLinksTheMostFlux(string diameter, string wire, double x, double y, double z)
+    {
+        var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
+        ConductiveItem loop = Ring(diameter, wire);
+        var centre = new Vector3D(x, y, z);
+        double r = loop.Loop.HalfSpanMeters;
+        var coarseCoil = Circle(Vector3D.Zero, Vector3D.UnitZ, 0.1, 256);
+        var fineCoil = Circle(Vector3D.Zero, Vector3D.UnitZ, 0.1, 1024);
+        double Flux(Vector3D n, int segments) => CoilFlux(segments < 100 ? coarseCoil : fineCoil, 10, centre, n, r, segments);
+
+        (double largest, Vector3D bestNormal) = LargestOverOrientations(Flux, 64, 256);
+        Vector3D taken = FluxCoupling.WorstNormal(Sine(coil), centre, loop.Loop);
+        double atTaken = Math.Abs(Flux(taken, 256));
+        Assert.True(atTaken >= (1 - 1e-4) * largest, $"the orientation taken, {taken}, links {atTaken:G8} Wb/A; {bestNormal} links {largest:G8}");
+
+        // The engine's own flux there, by its quadrature, is the line integral's.
+        InductionResponse response = InductionEngine.Respond(new Scenario(loop, Sine(coil), new Placement(centre)));
+        Within.Relative(1000 * atTaken, response.PeakFluxWebers, 1e-6, "peak flux at the orientation taken");
+    }
+
+    [Fact]
+    [Validates("the loop's flux at the orientation the engine takes for the worst, against the largest over every orientation, for a 300 mm loop beside a line current", "the line integral of a line current's vector potential, A = -(mu0 I / 2 pi) ln(rho), around the loop (Stokes' theorem; independent of the disc quadrature), searched over the half sphere", "1e-4")]
+    public void BesideALineTheLoopFacesTheOrientationThatLinksTheMostFlux()
+    {
+        var line = new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ));
+        ConductiveItem loop = Ring("300 mm", "4 mm");
+        var centre = new Vector3D(0.16, 0.05, 0.03);
+        double r = loop.Loop.HalfSpanMeters;
+        double Flux(Vector3D n, int segments) => LineFlux(centre, n, r, 8 * segments);
+
+        (double largest, Vector3D bestNormal) = LargestOverOrientations(Flux, 64, 256);
+        Vector3D taken = FluxCoupling.WorstNormal(Sine(line), centre, loop.Loop);
+        double atTaken = Math.Abs(Flux(taken, 256));
+        Assert.True(atTaken >= (1 - 1e-4) * largest, $"the orientation taken, {taken}, links {atTaken:G8} Wb/A; {bestNormal} links {largest:G8}");
+    }
+
+    [Fact]
+    public void WhereTheFluxGrowsUntilTheLoopReachesTheWindingTheOrientationIsNotFoundAndTheResponseSaysSo()
+    {
+        // A 300 mm loop 30 mm above a 100 mm coil's winding, off its axis: turned toward the winding its flux grows until
+        // the field over it can no longer be integrated, so no orientation may stand for the worst.
+        var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
+        ConductiveItem loop = Ring("300 mm", "4 mm");
+        var centre = new Vector3D(0.12, 0, 0.03);
+        InductionResponse response = InductionEngine.Respond(new Scenario(loop, Sine(coil), new Placement(centre)));
+        Assert.False(response.IsValid);
+        Assert.Contains(response.ValidityIssues, i => i.Reason.Contains("the orientation that links the largest flux change cannot be found this near the source", StringComparison.Ordinal));
+
+        // Given how it sits, it is solved.
+        Assert.True(InductionEngine.Respond(new Scenario(loop, Sine(coil), new Placement(centre, Vector3D.UnitZ))).IsValid);
+    }
+}
