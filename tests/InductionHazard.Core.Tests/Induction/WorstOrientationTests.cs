@@ -166,6 +166,21 @@ public class WorstOrientationTests
     }
 
     [Fact]
+    public void ATransientDriveOfOneTermFacesTheWayASineDoes()
+    {
+        // One term's peak flux change is its coupling's magnitude times its drive's range, whatever the waveform: the
+        // search on a ramp's flux over the drive's times must land where the sine's phasor does.
+        var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
+        ConductiveItem ring = Ring("20 mm", "2 mm");
+        var centre = new Vector3D(0.09, 0, 0.01);
+        Vector3D bySine = FluxCoupling.WorstNormal(Sine(coil), centre, ring.Loop);
+        var ramp = new FieldSource("ramp", new[] { new SourceTerm(coil, new RampWaveform(0, 1000, 0.01, drive: DriveKind.Current)) });
+        Vector3D byRamp = FluxCoupling.WorstNormal(ramp, centre, ring.Loop);
+        Within.Absolute(1, Math.Abs(bySine.Dot(byRamp)), 1e-12, "the two normals' alignment");
+        Assert.True(Math.Abs(bySine.Dot(new Vector3D(0.5875, 0, 0.8092))) < Math.Cos(3 * Math.PI / 180), "the search turns the ring from the axes' estimate");
+    }
+
+    [Fact]
     public void WhereTheFluxGrowsUntilTheLoopReachesTheWindingTheOrientationIsNotFoundAndTheResponseSaysSo()
     {
         // A 300 mm loop 30 mm above a 100 mm coil's winding, off its axis: turned toward the winding its flux grows until
