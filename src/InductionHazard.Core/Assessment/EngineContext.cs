@@ -47,16 +47,18 @@ internal sealed class EngineContext
             if (scenario.Placement.Normal is null || loop is SphereBody)
             {
                 // A sphere has no axis of its own: its filaments' axis follows the largest flux change.
-                if (scenario.Placement.TiltDegrees is { } tilt && loop is not SphereBody)
+                if (scenario.Placement.TiltDegrees is { } tilt && tilt != 0 && loop is not SphereBody)
                 {
                     Normal = FluxCoupling.TiltedNormal(source, centre, loop, tilt);
                     Orientation = "tilted " + SiFormat.Plain(tilt) + " degrees from the largest flux change (toward the side that keeps the most), normal " + Normal;
                 }
                 else
                 {
-                    Normal = FluxCoupling.WorstNormal(source, centre, loop);
+                    (Normal, Width) = FluxCoupling.WorstOrientation(source, centre, loop);
                     Orientation = (loop is SphereBody ? "axis " : string.Empty) + "facing the largest flux change, normal " + Normal
-                        + (scenario.Placement.TiltDegrees is not null ? " (a sphere has no axis to tilt)" : string.Empty);
+                        + (Width is { } w ? ", width along " + w : string.Empty)
+                        + (scenario.Placement.TiltDegrees is { } given && given != 0 && loop is SphereBody ? " (a sphere has no axis to tilt)" : string.Empty)
+                        + (scenario.Placement.TiltDegrees == 0 ? " (tilted 0 degrees)" : string.Empty);
                 }
             }
             else
@@ -64,7 +66,7 @@ internal sealed class EngineContext
                 Orientation = "as given, normal " + Normal;
             }
 
-            Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop);
+            Coupling = FluxCoupling.PerUnitDrive(source, centre, Normal, loop, Width);
             Vector3D[] b = source.FieldPerUnitDrive(centre);
             NormalField = new double[b.Length];
             TorqueField = new Vector3D[b.Length];
@@ -111,8 +113,8 @@ internal sealed class EngineContext
 
         try
         {
-            double[,] pathCoupling = Paths.Coupling(Scenario.Source, Scenario.Placement.Centre, Normal);
-            Vector3D[,] gradient = Paths.CouplingGradient(Scenario.Source, Scenario.Placement.Centre, Normal);
+            double[,] pathCoupling = Paths.Coupling(Scenario.Source, Scenario.Placement.Centre, Normal, Width);
+            Vector3D[,] gradient = Paths.CouplingGradient(Scenario.Source, Scenario.Placement.Centre, Normal, Width);
             Modal = Paths.Modes.Drive(pathCoupling, gradient, Paths.PathAreas());
         }
         catch (FieldEvaluationException ex)
@@ -208,6 +210,9 @@ internal sealed class EngineContext
     public Scenario Scenario { get; }
 
     public Vector3D Normal { get; }
+
+    /// <summary>For a rectangular outline turned within its plane by the search for the worst orientation, the direction of its width; null for the usual one.</summary>
+    public Vector3D? Width { get; }
 
     public Vector3D FieldDirection { get; }
 

@@ -56,7 +56,7 @@ internal static class EngineMechanics
         try
         {
             ItemPaths outline = ItemPaths.For(c.Scenario.Item, c.Frequency, c.Start, thinLoop: true);
-            Vector3D[,] gradient = outline.CouplingGradient(c.Scenario.Source, c.Scenario.Placement.Centre, c.Normal);
+            Vector3D[,] gradient = outline.CouplingGradient(c.Scenario.Source, c.Scenario.Placement.Centre, c.Normal, c.Width);
             double rate = 0;
             for (int j = 0; j < peak.Length; j++)
             {

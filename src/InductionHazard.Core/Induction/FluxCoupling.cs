@@ -17,49 +17,64 @@ public static class FluxCoupling
 {
     /// <summary>The flux through the loop per unit drive of each term (Wb per tesla or per ampere).</summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
-    public static double[] PerUnitDrive(FieldSource source, Vector3D centre, Vector3D normal, LoopGeometry loop)
+    /// <param name="source">The field source.</param>
+    /// <param name="centre">The loop's centre, m.</param>
+    /// <param name="normal">The loop's unit normal.</param>
+    /// <param name="loop">The loop.</param>
+    /// <param name="width">For a rectangular outline, the direction of its width in its plane; null for the usual one (<see cref="RectangularLoopGeometry.WidthDirection(Vector3D)"/>).</param>
+    public static double[] PerUnitDrive(FieldSource source, Vector3D centre, Vector3D normal, LoopGeometry loop, Vector3D? width = null)
     {
         var coupling = new double[source.Terms.Count];
         for (int k = 0; k < coupling.Length; k++)
         {
-            coupling[k] = Flux(source.Terms[k].Geometry, centre, normal, loop);
+            coupling[k] = Flux(source.Terms[k].Geometry, centre, normal, loop, width);
         }
 
         return coupling;
     }
 
-    /// <summary>The flux per unit drive of one geometry through the loop's outline: a disc, or a rectangle whose width lies along <see cref="RectangularLoopGeometry.WidthDirection"/>.</summary>
+    /// <summary>The flux per unit drive of one geometry through the loop's outline: a disc, or a rectangle whose width lies along <paramref name="width"/> (by default <see cref="RectangularLoopGeometry.WidthDirection(Vector3D)"/>).</summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
-    public static double Flux(IFieldGeometry geometry, Vector3D centre, Vector3D normal, LoopGeometry loop) => loop switch
+    public static double Flux(IFieldGeometry geometry, Vector3D centre, Vector3D normal, LoopGeometry loop, Vector3D? width = null) => loop switch
     {
         RectangularLoopGeometry r when geometry is UniformField u => u.Direction.Dot(normal) * r.LoopAreaSquareMeters,
-        RectangularLoopGeometry r => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal), r.WidthMeters, r.HeightMeters),
+        RectangularLoopGeometry r => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal, width), r.WidthMeters, r.HeightMeters),
         PrismBody p when geometry is UniformField u => u.Direction.Dot(normal) * p.LoopAreaSquareMeters,
-        PrismBody p => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal), p.WidthMeters, p.HeightMeters),
+        PrismBody p => RectangleQuadrature.Flux(geometry.FieldPerUnitDrive, centre, normal, RectangularLoopGeometry.WidthDirection(normal, width), p.WidthMeters, p.HeightMeters),
         _ => geometry.FluxThroughDisc(centre, normal, loop.HalfSpanMeters),
     };
 
     /// <summary>
-    /// The unit normal that links the largest flux change. First from the flux per unit drive of loops facing x, y and
-    /// z (a vector per term): for sinusoids of one frequency, the principal direction of the summed complex flux
-    /// vector; otherwise the direction of the largest flux change over the drive, or of the largest flux (which
-    /// leaving the field removes), whichever is larger. That is exact where the loop's flux is linear in its normal (a
-    /// uniform field); in a field that varies across the loop the disc turns with its normal and the flux is not, so the
-    /// normal of a loop or a flat body is then refined on its own flux (<see cref="Refined"/>). Oriented along the field
-    /// at the centre where that is defined, so a positive drive gives a positive flux.
+    /// The unit normal that links the largest flux change (<see cref="WorstOrientation"/>, without a rectangle's turn
+    /// within its plane).
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
     public static Vector3D WorstNormal(FieldSource source, Vector3D centre, LoopGeometry loop) =>
+        WorstOrientation(source, centre, loop).Normal;
+
+    /// <summary>
+    /// The orientation that links the largest flux change. First the normal from the flux per unit drive of loops
+    /// facing x, y and z (a vector per term): for sinusoids of one frequency, the principal direction of the summed
+    /// complex flux vector; otherwise the direction of the largest flux change over the drive, or of the largest flux
+    /// (which leaving the field removes), whichever is larger. That is exact where the loop's flux is linear in its
+    /// normal (a uniform field); in a field that varies across the loop the outline turns with its normal and the flux
+    /// is not, so the orientation of a loop or a flat body is then refined on its own flux (<see cref="Refined"/>),
+    /// a rectangle's turn within its plane with it. The normal is oriented along the field at the centre where that is
+    /// defined, so a positive drive gives a positive flux.
+    /// </summary>
+    /// <returns>The normal, and for a rectangular outline whose turn within its plane was searched, the direction of its width (null: the usual one, <see cref="RectangularLoopGeometry.WidthDirection(Vector3D)"/>).</returns>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over the loop.</exception>
+    public static (Vector3D Normal, Vector3D? Width) WorstOrientation(FieldSource source, Vector3D centre, LoopGeometry loop) =>
         Refined(source, centre, loop, Worst(source, centre, FluxVectors(source, centre, loop)));
 
-    /// <summary>The largest angle between normals the refinement starts from, radians (8 degrees).</summary>
+    /// <summary>The largest angle between orientations the refinement starts from, radians (8 degrees).</summary>
     private const double FirstTurn = 8 * Math.PI / 180;
 
     /// <summary>The smallest, radians (a quarter of a degree): near the largest, the flux falls with the square of the angle, here by some 1e-5.</summary>
     private const double LastTurn = 0.25 * Math.PI / 180;
 
-    /// <summary>The most trial normals the refinement takes.</summary>
-    private const int MostTrials = 200;
+    /// <summary>The most trial orientations the refinement takes.</summary>
+    private const int MostTrials = 300;
 
     /// <summary>What a turn from the estimate may be predicted to add to its peak, at most, for the estimate to stand: a share of the peak.</summary>
     private const double GainTolerance = 1e-5;
@@ -68,33 +83,40 @@ public static class FluxCoupling
     private const double CheckTurn = 2 * Math.PI / 180;
 
     /// <summary>
-    /// What turning from a normal could add to its peak, by a parabola through the peak there and at a turn each way
-    /// along each of two directions across it: the sum over the two of g^2 / 2|c|, with g the slope and
-    /// c the curvature, and where the two put the top (-g / c along each). Infinite where a turn could not be
-    /// integrated or either parabola does not open downward.
+    /// What turning from an orientation could add to its peak, by a parabola through the peak there and at a turn each
+    /// way about each of its axes of turning (pairs in <paramref name="polled"/>): the sum over them of g^2 / 2|c|, with
+    /// g the slope and c the curvature, and where each puts the top (-g / c). Nothing about an axis along which the
+    /// peak is level both ways to 1e-9; infinite where a turn could not be integrated or a parabola does not open
+    /// downward.
     /// </summary>
-    private static (double Gain, double X1, double X2) Gain(double peak, double?[] polled, double turn)
+    private static (double Gain, double[] Top) Gain(double peak, double?[] polled, double turn)
     {
         double gain = 0;
-        var top = new double[2];
-        for (int axis = 0; axis < 2; axis++)
+        var top = new double[polled.Length / 2];
+        for (int axis = 0; axis < top.Length; axis++)
         {
             if (polled[2 * axis] is not { } plus || polled[(2 * axis) + 1] is not { } minus)
             {
-                return (double.PositiveInfinity, 0, 0);
+                return (double.PositiveInfinity, top);
+            }
+
+            if (Math.Abs(plus - peak) <= 1e-9 * peak && Math.Abs(minus - peak) <= 1e-9 * peak)
+            {
+                // Level both ways (a loop on a coil's axis turned within its plane): nothing to gain about this axis.
+                continue;
             }
 
             double slope = (plus - minus) / (2 * turn), curvature = (plus + minus - (2 * peak)) / (turn * turn);
             if (!(curvature < 0))
             {
-                return (double.PositiveInfinity, 0, 0);
+                return (double.PositiveInfinity, top);
             }
 
             gain += slope * slope / (-2 * curvature);
             top[axis] = -slope / curvature;
         }
 
-        return (gain, top[0], top[1]);
+        return (gain, top);
     }
 
     /// <summary>A normal turned by an angle toward a unit direction across it.</summary>
@@ -102,28 +124,49 @@ public static class FluxCoupling
         ((Math.Cos(angle) * normal) + (Math.Sin(angle) * toward)).Normalized();
 
     /// <summary>
-    /// The normal, from the axes' estimate, that links the largest peak flux change by the loop's own flux at each
-    /// normal tried (its disc or rectangle turned with it; a flat body's, a disc's or a plate's, as a loop's): a
-    /// compass search on the sphere, turning the best normal so far by 8 degrees toward each of four directions across
-    /// it, moving wherever the peak grows and halving the turn where it does not, down to a quarter of a degree. In a
-    /// uniform field the estimate is exact and is kept. Where a poll two degrees each way about the estimate shows a
-    /// cap whose top a parabola each way puts within 1e-5 of the peak of it (<see cref="Gain"/>), the estimate is kept:
-    /// a small loop where the field bends gently, whose search would move its peak by parts in a million. Otherwise,
-    /// where the parabolas put the top within 32 degrees and it links more, the search starts there turning by two
-    /// degrees. The search only ever moves to a
-    /// normal that links more: never less than the estimate. A normal at which the field cannot be integrated (the
-    /// loop turned into a winding, or onto a conductor) is passed over while the search turns by more than a quarter
-    /// of a degree; one at the last turn means the flux grows as the loop turns toward the source until it cannot be
-    /// found, and the largest is not found: the search then refuses, naming the turn, rather than stand the estimate
-    /// in for it.
+    /// An orientation: a unit normal and, for a rectangle, the direction of its width in its plane. Turned about an axis
+    /// across the normal, the width goes with it; turned about the normal, the width turns in the plane.
     /// </summary>
-    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated at a normal tried.</exception>
-    private static Vector3D Refined(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D estimate)
+    private readonly record struct Facing(Vector3D Normal, Vector3D? Width)
+    {
+        /// <summary>Turned by an angle about one of its axes: 0 and 1 across the normal (toward e1 and e2 of <see cref="Across"/>), 2 the normal itself.</summary>
+        public Facing Turn(int axis, double angle)
+        {
+            if (axis == 2)
+            {
+                Vector3D w = Width!.Value;
+                return this with { Width = ((Math.Cos(angle) * w) + (Math.Sin(angle) * Normal.Cross(w))).Normalized() };
+            }
+
+            (Vector3D e1, Vector3D e2) = Across(Normal);
+            Vector3D toward = axis == 0 ? e1 : e2;
+            Vector3D n = Turned(Normal, angle < 0 ? -toward : toward, Math.Abs(angle));
+            return new Facing(n, Width is { } v ? (v - (v.Dot(n) * n)).Normalized() : null);
+        }
+    }
+
+    /// <summary>
+    /// The orientation, from the axes' estimate of the normal, that links the largest peak flux change by the loop's own
+    /// flux at each orientation tried (its disc or rectangle turned with it; a flat body's, a disc's or a plate's, as a
+    /// loop's): a compass search, turning the best orientation so far by 8 degrees each way about two axes across its
+    /// normal (and, for a rectangle, about the normal, turning it within its plane), moving wherever the peak grows and
+    /// halving the turn where it does not, down to a quarter of a degree. In a uniform field the estimate is exact and
+    /// is kept. Where a poll two degrees each way about the estimate shows a cap whose top a parabola each way puts
+    /// within 1e-5 of the peak of it (<see cref="Gain"/>), the estimate is kept: a small loop where the field bends
+    /// gently, whose search would move its peak by parts in a million. Otherwise, where the parabolas put the top within
+    /// 32 degrees and it links more, the search starts there turning by two degrees. The search only ever moves to an
+    /// orientation that links more: never less than the estimate. One at which the field cannot be integrated (the loop
+    /// turned into a winding, or onto a conductor) is passed over while the search turns by more than a quarter of a
+    /// degree; one at the last turn means the flux grows as the loop turns toward the source until it cannot be found,
+    /// and the largest is not found: the search then refuses, naming the turn, rather than stand the estimate in for it.
+    /// </summary>
+    /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated at an orientation tried.</exception>
+    private static (Vector3D Normal, Vector3D? Width) Refined(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D estimate)
     {
         if (source.Terms.All(t => t.Geometry is UniformField))
         {
-            // The flux is linear in the normal: the estimate is exact.
-            return estimate;
+            // The flux is linear in the normal, and a rectangle's turn within its plane does not change it: the estimate is exact.
+            return (estimate, null);
         }
 
         if (loop is BodyGeometry body && (body is SphereBody || body.Section is not BodySection section || section.AxialExtentMeters > 0.5 * body.HalfSpanMeters))
@@ -131,39 +174,40 @@ public static class FluxCoupling
             // A body longer along its axis than a quarter of its span (a rod, a tube, a bar, a sphere) couples through its
             // whole length, which a turn moves across the field, not through its middle section alone: its own flux is not
             // the measure to turn it by, and the estimate stands.
-            return estimate;
+            return (estimate, null);
         }
 
         PeakFlux peak = new(source);
         (Vector3D Normal, string Reason)? failed = null;
-        double? At(Vector3D normal)
+        double? At(Facing facing)
         {
             try
             {
-                return peak.Of(PerUnitDrive(source, centre, normal, loop));
+                return peak.Of(PerUnitDrive(source, centre, facing.Normal, loop, facing.Width));
             }
             catch (Errors.FieldEvaluationException ex)
             {
-                failed = (normal, ex.Message);
+                failed = (facing.Normal, ex.Message);
                 return null;
             }
         }
 
-        double atEstimate = At(estimate) ?? double.NaN;
+        bool rectangular = loop is RectangularLoopGeometry or PrismBody;
+        var start = new Facing(estimate, rectangular ? RectangularLoopGeometry.WidthDirection(estimate) : null);
+        int axes = rectangular ? 3 : 2;
+        double atEstimate = At(start) ?? double.NaN;
         if (!Finite.Is(atEstimate))
         {
             // The estimate's own flux cannot be found: the engine finds it again there and says so.
-            return estimate;
+            return (estimate, null);
         }
 
         // First whether a search could gain anything: a poll two degrees each way about the estimate.
-        (Vector3D c1, Vector3D c2) = Across(estimate);
-        Vector3D[] across = { c1, -c1, c2, -c2 };
-        var polled = new double?[4];
-        (Vector3D best, double bestPeak) = (estimate, atEstimate);
-        for (int d = 0; d < 4; d++)
+        var polled = new double?[2 * axes];
+        (Facing best, double bestPeak) = (start, atEstimate);
+        for (int d = 0; d < polled.Length; d++)
         {
-            Vector3D candidate = Turned(estimate, across[d], CheckTurn);
+            Facing candidate = start.Turn(d / 2, d % 2 == 0 ? CheckTurn : -CheckTurn);
             polled[d] = At(candidate);
             if (polled[d] is { } value && value > bestPeak)
             {
@@ -171,36 +215,43 @@ public static class FluxCoupling
             }
         }
 
-        (double gain, double x1, double x2) = Gain(atEstimate, polled, CheckTurn);
+        (double gain, double[] top) = Gain(atEstimate, polled, CheckTurn);
         if (gain <= GainTolerance * atEstimate)
         {
             // The peak about the estimate is a cap whose top lies so near it that a turn there would raise the peak by
             // less than the tolerance: the estimate stands.
-            return estimate;
+            return (estimate, null);
         }
 
         // Where the parabolas put the top, if it lies within a few turns: the search then starts from there by the
         // poll's turn, rather than from the best so far by eight degrees.
-        double turn = FirstTurn, reach = Math.Sqrt((x1 * x1) + (x2 * x2));
+        double turn = FirstTurn, reach = Math.Sqrt(top.Sum(x => x * x));
         if (Finite.Is(gain) && reach > 0 && reach <= 4 * FirstTurn)
         {
-            Vector3D top = Turned(estimate, ((x1 * c1) + (x2 * c2)).Normalized(), reach);
-            if (At(top) is { } atTop && atTop > bestPeak)
+            (Vector3D e1, Vector3D e2) = Across(estimate);
+            Vector3D across = (top[0] * e1) + (top[1] * e2);
+            Facing jump = across.Length > 0 ? new Facing(Turned(estimate, across.Normalized(), across.Length), null) : new Facing(estimate, null);
+            jump = jump with { Width = start.Width is { } w ? (w - (w.Dot(jump.Normal) * jump.Normal)).Normalized() : null };
+            if (axes == 3 && top[2] != 0)
             {
-                (best, bestPeak, turn) = (top, atTop, CheckTurn);
+                jump = jump.Turn(2, top[2]);
+            }
+
+            if (At(jump) is { } atTop && atTop > bestPeak)
+            {
+                (best, bestPeak, turn) = (jump, atTop, CheckTurn);
             }
         }
 
         bool edge = false;
         for (int trials = 1; turn >= LastTurn && trials < MostTrials;)
         {
-            (Vector3D e1, Vector3D e2) = Across(best);
-            Vector3D moved = best;
+            Facing moved = best;
             double movedPeak = bestPeak;
             failed = null;
-            foreach (Vector3D direction in new[] { e1, -e1, e2, -e2 })
+            for (int d = 0; d < 2 * axes; d++)
             {
-                Vector3D candidate = Turned(best, direction, turn);
+                Facing candidate = best.Turn(d / 2, d % 2 == 0 ? turn : -turn);
                 double? value = At(candidate);
                 trials++;
                 if (value > movedPeak)
@@ -209,11 +260,11 @@ public static class FluxCoupling
                 }
             }
 
-            // A normal that cannot be integrated this close to the best (at the last turn, once the loop ends): the best
-            // lies at the edge of what can be.
+            // An orientation that cannot be integrated this close to the best (at the last turn, once the loop ends): the
+            // best lies at the edge of what can be.
             edge = failed is not null;
 
-            if (movedPeak > bestPeak * (1 + 1e-12))
+            if (movedPeak > bestPeak * (1 + 1e-9))
             {
                 (best, bestPeak) = (moved, movedPeak);
             }
@@ -225,8 +276,8 @@ public static class FluxCoupling
 
         if (edge && turn < LastTurn && failed is { } last)
         {
-            // Near the source the flux grows as the loop turns toward it until the field can no longer be integrated: a
-            // normal a quarter of a degree from the best found cannot be, so the largest is not found, and no
+            // Near the source the flux grows as the loop turns toward it until the field can no longer be integrated: an
+            // orientation a quarter of a degree from the best found cannot be, so the largest is not found, and no
             // orientation may stand in for it.
             double degrees = Math.Acos(Math.Max(-1, Math.Min(1, Math.Abs(last.Normal.Dot(estimate))))) * 180 / Math.PI;
             throw new Errors.FieldEvaluationException(
@@ -236,9 +287,8 @@ public static class FluxCoupling
         }
 
         Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
-        return b.Dot(best) < 0 ? -best : best;
+        return (b.Dot(best.Normal) < 0 ? -best.Normal : best.Normal, best.Width);
     }
-
     /// <summary>Two unit directions across a normal, square to it and to each other.</summary>
     private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)
     {
@@ -325,7 +375,7 @@ public static class FluxCoupling
     {
         // Held, as each of 24 directions reads them again.
         List<Vector3D> vectors = FluxVectors(source, centre, loop).ToList();
-        Vector3D worst = Refined(source, centre, loop, Worst(source, centre, vectors));
+        Vector3D worst = Refined(source, centre, loop, Worst(source, centre, vectors)).Normal;
         double tilt = tiltDegrees * Math.PI / 180;
         if (tilt == 0)
         {

@@ -174,9 +174,9 @@ public sealed class ItemPaths
     }
 
     /// <summary>The flux per unit drive through each cell of a block's mesh: the cell's rectangle at its centre.</summary>
-    private static double[,] MeshCoupling(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal)
+    private static double[,] MeshCoupling(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal, Vector3D? width)
     {
-        (Vector3D ex, Vector3D ey) = FaceAxes(normal);
+        (Vector3D ex, Vector3D ey) = FaceAxes(normal, width);
         var coupling = new double[mesh.Count, source.Terms.Count];
         for (int j = 0; j < source.Terms.Count; j++)
         {
@@ -204,9 +204,9 @@ public sealed class ItemPaths
     /// The force per ampere of each cell's current and unit drive of each term: the sum over its branches, with the
     /// signs its current runs in them, of l x b at two Gauss points along each branch.
     /// </summary>
-    private static Vector3D[,] MeshForce(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal)
+    private static Vector3D[,] MeshForce(PlateMesh mesh, FieldSource source, Vector3D centre, Vector3D normal, Vector3D? width)
     {
-        (Vector3D ex, Vector3D ey) = FaceAxes(normal);
+        (Vector3D ex, Vector3D ey) = FaceAxes(normal, width);
         var force = new Vector3D[mesh.Count, source.Terms.Count];
         double g = 0.5 / Math.Sqrt(3);
         for (int j = 0; j < source.Terms.Count; j++)
@@ -269,10 +269,10 @@ public sealed class ItemPaths
             : new ItemPaths(item, set, modes with { CurrentWeights = centre }, description, null, rho);
     }
 
-    /// <summary>The unit directions of a block's width, height and axis for a normal.</summary>
-    private static (Vector3D X, Vector3D Y) FaceAxes(Vector3D normal)
+    /// <summary>The unit directions of a block's width and height for a normal (and its width's direction, if given).</summary>
+    private static (Vector3D X, Vector3D Y) FaceAxes(Vector3D normal, Vector3D? width)
     {
-        Vector3D x = RectangularLoopGeometry.WidthDirection(normal);
+        Vector3D x = RectangularLoopGeometry.WidthDirection(normal, width);
         return (x, normal.Cross(x));
     }
 
@@ -280,19 +280,23 @@ public sealed class ItemPaths
     /// The flux per unit drive of each term through each path (paths x terms), Wb per drive unit: through the disc
     /// of each filament (radius r_i, at z_i along the normal), or through the loop's own outline for one path.
     /// </summary>
+    /// <param name="source">The field source.</param>
+    /// <param name="centre">The item's centre, m.</param>
+    /// <param name="normal">The item's unit normal (its axis).</param>
+    /// <param name="width">For a rectangular outline or block, the direction of its width; null for the usual one.</param>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated over a path.</exception>
-    public double[,] Coupling(FieldSource source, Vector3D centre, Vector3D normal)
+    public double[,] Coupling(FieldSource source, Vector3D centre, Vector3D normal, Vector3D? width = null)
     {
         int terms = source.Terms.Count;
         if (Paths?.Plate is { } mesh)
         {
-            return MeshCoupling(mesh, source, centre, normal);
+            return MeshCoupling(mesh, source, centre, normal, width);
         }
 
         if (Paths?.Filaments is not { } cells)
         {
             // One path, or shells that all follow the outline: each links the outline's flux.
-            double[] outline = FluxCoupling.PerUnitDrive(source, centre, normal, Item.Loop);
+            double[] outline = FluxCoupling.PerUnitDrive(source, centre, normal, Item.Loop, width);
             int count = Paths?.Count ?? 1;
             var single = new double[count, terms];
             for (int i = 0; i < count; i++)
@@ -383,8 +387,12 @@ public sealed class ItemPaths
     /// axis, <see cref="IClosedFormDiscFlux"/>); around a rectangle by 16-point Gauss-Legendre on each side. Zero for a
     /// source whose every term is uniform.
     /// </summary>
+    /// <param name="source">The field source.</param>
+    /// <param name="centre">The item's centre, m.</param>
+    /// <param name="normal">The item's unit normal (its axis).</param>
+    /// <param name="width">For a rectangular outline or block, the direction of its width; null for the usual one.</param>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be evaluated on a path.</exception>
-    public Vector3D[,] CouplingGradient(FieldSource source, Vector3D centre, Vector3D normal)
+    public Vector3D[,] CouplingGradient(FieldSource source, Vector3D centre, Vector3D normal, Vector3D? width = null)
     {
         int paths = Paths?.Count ?? 1, terms = source.Terms.Count;
         var gradient = new Vector3D[paths, terms];
@@ -401,7 +409,7 @@ public sealed class ItemPaths
 
         if (Paths?.Plate is { } mesh)
         {
-            return MeshForce(mesh, source, centre, normal);
+            return MeshForce(mesh, source, centre, normal, width);
         }
 
         (Vector3D u, Vector3D v) = DiscQuadrature.Basis(normal);
@@ -425,7 +433,7 @@ public sealed class ItemPaths
             else
             {
                 Vector3D around = Item.Loop is RectangularLoopGeometry rectangle
-                    ? AroundRectangle(geometry, centre, normal, rectangle)
+                    ? AroundRectangle(geometry, centre, normal, rectangle, width)
                     : (geometry as IClosedFormDiscFlux)?.ClosedFormRimForce(centre, normal, Item.Loop.HalfSpanMeters) ?? AroundCircle(geometry, centre, u, v, Item.Loop.HalfSpanMeters);
                 for (int i = 0; i < paths; i++)
                 {
@@ -453,9 +461,9 @@ public sealed class ItemPaths
         return sum;
     }
 
-    private static Vector3D AroundRectangle(IFieldGeometry geometry, Vector3D centre, Vector3D normal, RectangularLoopGeometry rectangle)
+    private static Vector3D AroundRectangle(IFieldGeometry geometry, Vector3D centre, Vector3D normal, RectangularLoopGeometry rectangle, Vector3D? width)
     {
-        Vector3D w = RectangularLoopGeometry.WidthDirection(normal);
+        Vector3D w = RectangularLoopGeometry.WidthDirection(normal, width);
         Vector3D h = normal.Cross(w);
         double a = rectangle.WidthMeters / 2, b = rectangle.HeightMeters / 2;
         GaussLegendre.Rule rule = GaussLegendre.Of(16);

@@ -44,6 +44,10 @@ public sealed class RectangularLoopGeometry : LoopGeometry
         return (helper - (helper.Dot(normal) * normal)).Normalized();
     }
 
+    /// <summary>The unit direction of the width for a normal: a given direction projected onto the plane, or without one the usual (<see cref="WidthDirection(Vector3D)"/>).</summary>
+    public static Vector3D WidthDirection(Vector3D normal, Vector3D? width) =>
+        width is { } w ? (w - (w.Dot(normal) * normal)).Normalized() : WidthDirection(normal);
+
     /// <inheritdoc />
     public override string Describe() => "rectangle " + SiFormat.Format(WidthMeters, "m") + " x " + SiFormat.Format(HeightMeters, "m");
 }

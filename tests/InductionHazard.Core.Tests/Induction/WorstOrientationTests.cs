@@ -165,6 +165,89 @@ public class WorstOrientationTests
         Assert.True(atTaken >= (1 - 1e-4) * largest, $"the orientation taken, {taken}, links {atTaken:G8} Wb/A; {bestNormal} links {largest:G8}");
     }
 
+    /// <summary>Flux per ampere through a w x h rectangle (width along u, normal n) from a line current along z: the line integral of A around its sides (16-point Gauss-Legendre on each of a number of pieces a side).</summary>
+    private static double LineFluxRectangle(Vector3D c, Vector3D n, Vector3D u, double w, double h, int pieces = 32)
+    {
+        Vector3D v = n.Cross(u);
+        Vector3D[] corners = { c - (0.5 * w * u) - (0.5 * h * v), c + (0.5 * w * u) - (0.5 * h * v), c + (0.5 * w * u) + (0.5 * h * v), c - (0.5 * w * u) + (0.5 * h * v) };
+        (double[] x, double[] wt) = (new[] { -0.9894009349916499, -0.9445750230732326, -0.8656312023878318, -0.7554044083550030, -0.6178762444026438, -0.4580167776572274, -0.2816035507792589, -0.0950125098376374, 0.0950125098376374, 0.2816035507792589, 0.4580167776572274, 0.6178762444026438, 0.7554044083550030, 0.8656312023878318, 0.9445750230732326, 0.9894009349916499 },
+            new[] { 0.0271524594117541, 0.0622535239386479, 0.0951585116824928, 0.1246289712555339, 0.1495959888165767, 0.1691565193950025, 0.1826034150449236, 0.1894506104550685, 0.1894506104550685, 0.1826034150449236, 0.1691565193950025, 0.1495959888165767, 0.1246289712555339, 0.0951585116824928, 0.0622535239386479, 0.0271524594117541 });
+        double sum = 0;
+        for (int side = 0; side < 4; side++)
+        {
+            Vector3D from = corners[side], to = corners[(side + 1) % 4];
+            for (int piece = 0; piece < pieces; piece++)
+            {
+                Vector3D a = from + (((double)piece / pieces) * (to - from)), b = from + (((double)(piece + 1) / pieces) * (to - from));
+                Vector3D mid = 0.5 * (a + b), half = 0.5 * (b - a);
+                for (int k = 0; k < x.Length; k++)
+                {
+                    Vector3D p = mid + (x[k] * half);
+                    sum += wt[k] * -Math.Log(Math.Sqrt((p.X * p.X) + (p.Y * p.Y))) * half.Z;
+                }
+            }
+        }
+
+        return Mu0 / (2 * Math.PI) * sum;
+    }
+
+    [Fact]
+    [Validates("a rectangular loop's flux at the orientation the engine takes for the worst (its normal and its turn within its plane), against the largest over every orientation, for a 400 mm x 600 mm loop beside a line current", "the line integral of a line current's vector potential, A = -(mu0 I / 2 pi) ln(rho), around the rectangle's sides (Stokes' theorem; independent of the rectangle quadrature), searched over the half sphere and a half turn within the plane", "1e-4")]
+    public void BesideALineARectangleFacesAndTurnsTheWayThatLinksTheMostFlux()
+    {
+        var line = new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ));
+        ConductiveItem frame = ItemRecordReader.Read(
+            new Dictionary<string, object?> { ["Name"] = "frame", ["Shape"] = "RectangularLoop", ["Material"] = "Copper", ["Width"] = "400 mm", ["Height"] = "600 mm", ["WireDiameter"] = "4 mm", ["Contact"] = "Free" }, MaterialLibrary.BuiltIn);
+        var rectangle = (RectangularLoopGeometry)frame.Loop;
+        var centre = new Vector3D(0.4, 0.15, 0.05);
+        double Flux(Vector3D n, double psiDegrees, int pieces)
+        {
+            Vector3D u0 = RectangularLoopGeometry.WidthDirection(n), v0 = n.Cross(u0);
+            double psi = psiDegrees * Math.PI / 180;
+            return Math.Abs(LineFluxRectangle(centre, n, (Math.Cos(psi) * u0) + (Math.Sin(psi) * v0), rectangle.WidthMeters, rectangle.HeightMeters, pieces));
+        }
+
+        (double best, double theta, double phi, double psiBest) = (-1, 0, 0, 0);
+        for (double t = 0; t <= 90; t += 3)
+        {
+            for (double p = 0; p < 360; p += t == 0 ? 360 : 6)
+            {
+                for (double q = 0; q < 180; q += 6)
+                {
+                    double f = Flux(Normal(t, p), q, 2);
+                    if (f > best)
+                    {
+                        (best, theta, phi, psiBest) = (f, t, p, q);
+                    }
+                }
+            }
+        }
+
+        double largest = 0;
+        for (double t = theta - 3; t <= theta + 3 + 1e-9; t += 0.5)
+        {
+            for (double p = phi - 6; p <= phi + 6 + 1e-9; p += 1)
+            {
+                for (double q = psiBest - 6; q <= psiBest + 6 + 1e-9; q += 1)
+                {
+                    largest = Math.Max(largest, Flux(Normal(t, p), q, 32));
+                }
+            }
+        }
+
+        (Vector3D normal, Vector3D? width) = FluxCoupling.WorstOrientation(Sine(line), centre, rectangle);
+        double atTaken = Math.Abs(LineFluxRectangle(centre, normal, RectangularLoopGeometry.WidthDirection(normal, width), rectangle.WidthMeters, rectangle.HeightMeters));
+        Assert.True(atTaken >= (1 - 1e-4) * largest, $"the orientation taken, {normal} width along {width}, links {atTaken:G8} Wb/A; the largest found {largest:G8}");
+
+        // Its width's usual direction links less by more than the tolerance: the turn within the plane is what was needed.
+        double usual = Math.Abs(LineFluxRectangle(centre, normal, RectangularLoopGeometry.WidthDirection(normal), rectangle.WidthMeters, rectangle.HeightMeters));
+        Assert.True(usual < (1 - 1e-3) * largest, $"with its width the usual way it links {usual:G8} of {largest:G8}");
+
+        // The engine's own flux there, by its quadrature, is the line integral's.
+        InductionResponse response = InductionEngine.Respond(new Scenario(frame, Sine(line), new Placement(centre)));
+        Within.Relative(1000 * atTaken, response.PeakFluxWebers, 1e-6, "peak flux at the orientation taken");
+    }
+
     [Fact]
     public void ATransientDriveOfOneTermFacesTheWayASineDoes()
     {
