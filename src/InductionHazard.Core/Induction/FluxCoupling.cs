@@ -146,19 +146,22 @@ public static class FluxCoupling
     }
 
     /// <summary>
-    /// The orientation, from the axes' estimate of the normal, that links the largest peak flux change by the loop's own
-    /// flux at each orientation tried (its disc or rectangle turned with it; a flat body's, a disc's or a plate's, as a
-    /// loop's): a compass search, turning the best orientation so far by 8 degrees each way about two axes across its
-    /// normal (and, for a rectangle, about the normal, turning it within its plane), moving wherever the peak grows and
-    /// halving the turn where it does not, down to a quarter of a degree. In a uniform field the estimate is exact and
-    /// is kept. Where a poll two degrees each way about the estimate shows a cap whose top a parabola each way puts
-    /// within 1e-5 of the peak of it (<see cref="Gain"/>), the estimate is kept: a small loop where the field bends
-    /// gently, whose search would move its peak by parts in a million. Otherwise, where the parabolas put the top within
-    /// 32 degrees and it links more, the search starts there turning by two degrees. The search only ever moves to an
-    /// orientation that links more: never less than the estimate. One at which the field cannot be integrated (the loop
-    /// turned into a winding, or onto a conductor) is passed over while the search turns by more than a quarter of a
-    /// degree; one at the last turn means the flux grows as the loop turns toward the source until it cannot be found,
-    /// and the largest is not found: the search then refuses, naming the turn, rather than stand the estimate in for it.
+    /// The orientation, from the axes' estimate of the normal, that links the largest peak flux change by the loop's
+    /// own flux at each orientation tried (its disc or rectangle turned with it; a flat body's, a disc's or a plate's,
+    /// as a loop's): a compass search, turning the best orientation so far by 8 degrees each way about two axes across
+    /// its normal (and, for a rectangle, about the normal, turning it within its plane), moving wherever the peak
+    /// grows and halving the turn where it does not, down to a quarter of a degree. In a uniform field the estimate is
+    /// exact and is kept. Where a poll two degrees each way about the estimate shows a cap whose top a parabola each
+    /// way puts within 1e-5 of the peak of it (<see cref="Gain"/>), the estimate is kept: a small loop where the field
+    /// bends gently, whose search would move its peak by parts in a million. Otherwise, where the parabolas put the
+    /// top within 32 degrees and it links more, the search starts there turning by two degrees. Then, since near a
+    /// winding the peak may have more than one top, 24 normals spread over the half sphere (a rectangle at three turns
+    /// in its plane each) are tried, and from each that links more than the top reached, best first and at most three,
+    /// the search runs again. The search only ever moves to an orientation that links more: never less than the
+    /// estimate. One at which the field cannot be integrated (the loop turned into a winding, or onto a conductor) is
+    /// passed over while the search turns by more than a quarter of a degree; one at the last turn means the flux
+    /// grows as the loop turns toward the source until it cannot be found, and the largest is not found: the search
+    /// then refuses, naming the turn, rather than stand the estimate in for it.
     /// </summary>
     /// <exception cref="Errors.FieldEvaluationException">The field cannot be integrated at an orientation tried.</exception>
     private static (Vector3D Normal, Vector3D? Width) Refined(FieldSource source, Vector3D centre, LoopGeometry loop, Vector3D estimate)
@@ -243,52 +246,97 @@ public static class FluxCoupling
             }
         }
 
-        bool edge = false;
-        for (int trials = 1; turn >= LastTurn && trials < MostTrials;)
+        // A compass search from there; then from those of a spread of orientations over the half sphere that link more
+        // than the top it reached, best first, at most three (near a winding the peak may have more than one top).
+        (best, bestPeak, (Vector3D Normal, string Reason)? last) = Climb(best, bestPeak, turn);
+        var spread = new List<(Facing Facing, double Peak)>();
+        foreach (Vector3D n in Spread)
         {
-            Facing moved = best;
-            double movedPeak = bestPeak;
-            failed = null;
-            for (int d = 0; d < 2 * axes; d++)
+            for (int k = 0; k < (rectangular ? 3 : 1); k++)
             {
-                Facing candidate = best.Turn(d / 2, d % 2 == 0 ? turn : -turn);
-                double? value = At(candidate);
-                trials++;
-                if (value > movedPeak)
+                var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
+                other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
+                if (At(other) is { } value)
                 {
-                    (moved, movedPeak) = (candidate, value.Value);
+                    spread.Add((other, value));
                 }
-            }
-
-            // An orientation that cannot be integrated this close to the best (at the last turn, once the loop ends): the
-            // best lies at the edge of what can be.
-            edge = failed is not null;
-
-            if (movedPeak > bestPeak * (1 + 1e-9))
-            {
-                (best, bestPeak) = (moved, movedPeak);
-            }
-            else
-            {
-                turn /= 2;
             }
         }
 
-        if (edge && turn < LastTurn && failed is { } last)
+        int climbs = 0;
+        foreach ((Facing facing, double value) in spread.OrderByDescending(f => f.Peak))
+        {
+            if (!(value > bestPeak * (1 + 1e-9)) || ++climbs > 3)
+            {
+                break;
+            }
+
+            (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, FirstTurn);
+            if (reachedPeak > bestPeak)
+            {
+                (best, bestPeak, last) = (reached, reachedPeak, edge);
+            }
+        }
+
+        (Facing Best, double Peak, (Vector3D Normal, string Reason)? Edge) Climb(Facing from, double fromPeak, double firstTurn)
+        {
+            double turn = firstTurn;
+            bool edge = false;
+            for (int trials = 1; turn >= LastTurn && trials < MostTrials;)
+            {
+                Facing moved = from;
+                double movedPeak = fromPeak;
+                failed = null;
+                for (int d = 0; d < 2 * axes; d++)
+                {
+                    Facing candidate = from.Turn(d / 2, d % 2 == 0 ? turn : -turn);
+                    double? value = At(candidate);
+                    trials++;
+                    if (value > movedPeak)
+                    {
+                        (moved, movedPeak) = (candidate, value.Value);
+                    }
+                }
+
+                // An orientation that cannot be integrated this close to the best (at the last turn, once the loop ends):
+                // the best lies at the edge of what can be.
+                edge = failed is not null;
+                if (movedPeak > fromPeak * (1 + 1e-9))
+                {
+                    (from, fromPeak) = (moved, movedPeak);
+                }
+                else
+                {
+                    turn /= 2;
+                }
+            }
+
+            return (from, fromPeak, edge && turn < LastTurn ? failed : null);
+        }
+
+        if (last is { } edgeOf)
         {
             // Near the source the flux grows as the loop turns toward it until the field can no longer be integrated: an
             // orientation a quarter of a degree from the best found cannot be, so the largest is not found, and no
             // orientation may stand in for it.
-            double degrees = Math.Acos(Math.Max(-1, Math.Min(1, Math.Abs(last.Normal.Dot(estimate))))) * 180 / Math.PI;
+            double degrees = Math.Acos(Math.Max(-1, Math.Min(1, Math.Abs(edgeOf.Normal.Dot(estimate))))) * 180 / Math.PI;
             throw new Errors.FieldEvaluationException(
                 "the orientation that links the largest flux change cannot be found this near the source: the flux grows as the loop turns toward it until, "
-                + SiFormat.Plain(Math.Round(degrees, 1)) + " degrees from the estimate by the field's axes (normal " + estimate + "), it cannot be found (" + last.Reason
+                + SiFormat.Plain(Math.Round(degrees, 1)) + " degrees from the estimate by the field's axes (normal " + estimate + "), it cannot be found (" + edgeOf.Reason
                 + "); give how the item sits (-Normal or a Normal column), or assess it further from the source");
         }
 
         Vector3D b = source.Terms[0].Geometry.FieldPerUnitDrive(centre);
         return (b.Dot(best.Normal) < 0 ? -best.Normal : best.Normal, best.Width);
     }
+
+    /// <summary>Twenty-four normals spread evenly over the half sphere (a Fibonacci lattice): where the search looks for a top its compass search did not reach.</summary>
+    private static readonly Vector3D[] Spread = Enumerable.Range(0, 24).Select(i =>
+    {
+        double z = 1 - ((i + 0.5) / 24), r = Math.Sqrt(1 - (z * z)), phi = i * Math.PI * (3 - Math.Sqrt(5));
+        return new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
+    }).ToArray();
+
     /// <summary>Two unit directions across a normal, square to it and to each other.</summary>
     private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)
     {

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using CsCheck;
 using InductionHazard.Assessment;
 using InductionHazard.Fields;
 using InductionHazard.Induction;
@@ -246,6 +247,64 @@ public class WorstOrientationTests
         // The engine's own flux there, by its quadrature, is the line integral's.
         InductionResponse response = InductionEngine.Respond(new Scenario(frame, Sine(line), new Placement(centre)));
         Within.Relative(1000 * atTaken, response.PeakFluxWebers, 1e-6, "peak flux at the orientation taken");
+    }
+
+    [Fact]
+    public void NoOrientationOfAHundredAndFiftyLinksMoreThanTheOneTakenForRandomLoopsNearACoil()
+    {
+        // For rings of 10 to 300 mm anywhere from the coil's axis to well beyond its winding, 20 to 150 mm above its
+        // plane: the orientation taken links, by the engine's own flux, no less than any of 150 spread over the half
+        // sphere (a Fibonacci lattice), or the response refuses to name one. A property of the search, not of the flux.
+        var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
+        FieldSource source = Sine(coil);
+        var spread = new Vector3D[150];
+        for (int i = 0; i < spread.Length; i++)
+        {
+            double z = 1 - ((i + 0.5) / spread.Length), r = Math.Sqrt(1 - (z * z)), phi = i * Math.PI * (3 - Math.Sqrt(5));
+            spread[i] = new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
+        }
+
+        Gen.Select(Gen.Double[0.01, 0.3], Gen.Double[0, 0.25], Gen.Double[0.02, 0.15]).Sample((diameter, x, z) =>
+        {
+            ConductiveItem ring = Ring(diameter.ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " m", "2 mm");
+            var centre = new Vector3D(x, 0, z);
+            Vector3D taken;
+            try
+            {
+                taken = FluxCoupling.WorstNormal(source, centre, ring.Loop);
+            }
+            catch (Errors.FieldEvaluationException)
+            {
+                // No orientation is named (the loop reaches the winding facing an axis, or turned toward it): Indeterminate.
+                return;
+            }
+
+            double atTaken;
+            try
+            {
+                atTaken = Math.Abs(FluxCoupling.Flux(coil, centre, taken, ring.Loop));
+            }
+            catch (Errors.FieldEvaluationException)
+            {
+                // The engine finds the flux again at the orientation taken and says it cannot: Indeterminate.
+                return;
+            }
+
+            foreach (Vector3D n in spread)
+            {
+                double other;
+                try
+                {
+                    other = Math.Abs(FluxCoupling.Flux(coil, centre, n, ring.Loop));
+                }
+                catch (Errors.FieldEvaluationException)
+                {
+                    continue;
+                }
+
+                Assert.True(atTaken >= (1 - 1e-4) * other, $"a {diameter:G4} m ring at {centre}: the orientation taken, {taken}, links {atTaken:G8}; {n} links {other:G8}");
+            }
+        }, seed: "0N0XIzNsQ0O2", iter: 30);
     }
 
     [Fact]
