@@ -714,7 +714,7 @@ Ring,Copper,20 mm,2 mm,Skin,Slanted rack,,x
 
         It 'refuses a station''s tilt beside its normal, or beyond a quarter turn, naming the station' {
             foreach ($case in @(
-                    @{ Values = "Tilt = '30 deg'; Normal = 'z'"; Message = "*station 'Rack'*Tilt*give a Normal or a Tilt from the worst orientation, not both*" },
+                    @{ Values = "Tilt = '30 deg'; Normal = 'z'"; Message = "*station 'Rack'*Tilt*give a normal (Normal) or a tilt from the worst orientation, not both*" },
                     @{ Values = "Tilt = '120 deg'"; Message = "*station 'Rack'*Tilt*must be between 0 degrees and 90 degrees*" },
                     @{ Values = "Tilt = '30'"; Message = "*station 'Rack'*Tilt*" })) {
                 $siteFile = Join-Path $TestDrive 'bad-tilt.psd1'

@@ -90,15 +90,7 @@ public static class SiteReader
         object? rawSources = fields.Raw("Sources", required: true, "Source");
         Vector3D position = Vector(fields, "Position", QuantityKind.Length, label) ?? Vector3D.Zero;
         Vector3D? normal = Vector(fields, "Normal", null, label);
-        double? tilt = fields.Quantity("Tilt", QuantityKind.Angle, required: false);
-        if (tilt is { } t && PhysicalRanges.Tilt.Problem(t) is { } tiltProblem)
-        {
-            fields.AddError("Tilt", tiltProblem);
-        }
-        else if (tilt is not null && normal is not null)
-        {
-            fields.AddError("Tilt", "give a Normal or a Tilt from the worst orientation, not both");
-        }
+        double? tilt = PlacementRecordReader.Tilt(fields, normal is not null, "Normal");
 
         Vector3D? velocity = Vector(fields, "Velocity", QuantityKind.Speed, label);
         double? exposure = fields.Quantity("ExposureTime", QuantityKind.Time, required: false);

@@ -141,7 +141,7 @@ public static class FluxCoupling
             (Vector3D e1, Vector3D e2) = Across(Normal);
             Vector3D toward = axis == 0 ? e1 : e2;
             Vector3D n = Turned(Normal, angle < 0 ? -toward : toward, Math.Abs(angle));
-            return new Facing(n, Width is { } v ? (v - (v.Dot(n) * n)).Normalized() : null);
+            return new Facing(n, Width is { } v ? RectangularLoopGeometry.WidthDirection(n, v) : null);
         }
     }
 
@@ -234,7 +234,7 @@ public static class FluxCoupling
             (Vector3D e1, Vector3D e2) = Across(estimate);
             Vector3D across = (top[0] * e1) + (top[1] * e2);
             Facing jump = across.Length > 0 ? new Facing(Turned(estimate, across.Normalized(), across.Length), null) : new Facing(estimate, null);
-            jump = jump with { Width = start.Width is { } w ? (w - (w.Dot(jump.Normal) * jump.Normal)).Normalized() : null };
+            jump = jump with { Width = start.Width is { } w ? RectangularLoopGeometry.WidthDirection(jump.Normal, w) : null };
             if (axes == 3 && top[2] != 0)
             {
                 jump = jump.Turn(2, top[2]);
@@ -337,11 +337,10 @@ public static class FluxCoupling
         return new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
     }).ToArray();
 
-    /// <summary>Two unit directions across a normal, square to it and to each other.</summary>
+    /// <summary>Two unit directions across a normal, square to it and to each other: a rectangle's usual width and height.</summary>
     private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)
     {
-        Vector3D across = Math.Abs(normal.X) < 0.9 ? Vector3D.UnitX : Vector3D.UnitY;
-        Vector3D e1 = (across - (across.Dot(normal) * normal)).Normalized();
+        Vector3D e1 = RectangularLoopGeometry.WidthDirection(normal);
         return (e1, normal.Cross(e1).Normalized());
     }
 
@@ -448,9 +447,7 @@ public static class FluxCoupling
         }
 
         // Two directions across the worst normal, and the 24 between them on a half turn (u and -u give the same peak).
-        Vector3D across = Math.Abs(worst.X) < 0.9 ? Vector3D.UnitX : Vector3D.UnitY;
-        Vector3D e1 = (across - (across.Dot(worst) * worst)).Normalized();
-        Vector3D e2 = worst.Cross(e1).Normalized();
+        (Vector3D e1, Vector3D e2) = Across(worst);
         Vector3D best = worst;
         double bestPeak = double.NegativeInfinity;
         for (int i = 0; i < 24; i++)

@@ -42,6 +42,28 @@ public static class PlacementRecordReader
     /// <summary>Every field's key and its aliases', normalized: most rows give none of them, and are not read further.</summary>
     private static readonly HashSet<string> Keys = new(Aliases.SelectMany(p => p.Value.Append(p.Key)).Select(RecordFields.Normalize), StringComparer.Ordinal);
 
+    /// <summary>
+    /// A record's Tilt, with the errors it has recorded on the fields: outside 0 to 90 degrees, or given beside a normal
+    /// (a row's, a site file station's).
+    /// </summary>
+    /// <param name="fields">The record's fields.</param>
+    /// <param name="normalGiven">Whether the record gives a normal too.</param>
+    /// <param name="normalNames">How the record names its normal, for the message.</param>
+    internal static double? Tilt(RecordFields fields, bool normalGiven, string normalNames)
+    {
+        double? tilt = fields.Quantity("Tilt", QuantityKind.Angle, required: false, NoAliases);
+        if (tilt is { } t && PhysicalRanges.Tilt.Problem(t) is { } problem)
+        {
+            fields.AddError("Tilt", problem);
+        }
+        else if (tilt is not null && normalGiven)
+        {
+            fields.AddError("Tilt", "give a normal (" + normalNames + ") or a tilt from the worst orientation, not both");
+        }
+
+        return tilt;
+    }
+
     /// <summary>The position, normal, velocity and tilt a record gives, each null when the record gives none of it.</summary>
     /// <exception cref="RecordException">Some but not all components are given, a vector is given both ways, one is malformed, the normal is zero, the speed is beyond what a person moves an item at, or a tilt is given with a normal or outside 0 to 90 degrees.</exception>
     public static (Vector3D? Position, Vector3D? Normal, Vector3D? Velocity, double? TiltDegrees) Read(IEnumerable<KeyValuePair<string, object?>> record, string label, IReadOnlyDictionary<string, string>? units = null)
@@ -56,18 +78,7 @@ public static class PlacementRecordReader
         Vector3D? position = Vector(fields, "Position", Position, QuantityKind.Length);
         Vector3D? normal = Vector(fields, "Normal", Normal, null);
         Vector3D? velocity = Vector(fields, "Velocity", Velocity, QuantityKind.Speed);
-        double? tilt = fields.Quantity("Tilt", QuantityKind.Angle, required: false, NoAliases);
-        if (tilt is { } t)
-        {
-            if (PhysicalRanges.Tilt.Problem(t) is { } tiltProblem)
-            {
-                fields.AddError("Tilt", tiltProblem);
-            }
-            else if (normal is not null || fields.Has("Normal") || fields.Has("NormalX", Aliases["NormalX"]))
-            {
-                fields.AddError("Tilt", "give a normal (Normal or NormalX, NormalY, NormalZ) or a tilt from the worst orientation, not both");
-            }
-        }
+        double? tilt = Tilt(fields, normal is not null || fields.Has("Normal") || fields.Has("NormalX", Aliases["NormalX"]), "Normal or NormalX, NormalY, NormalZ");
         if (normal is { } n && (n.X == 0 && n.Y == 0 && n.Z == 0))
         {
             fields.AddError(fields.Has("Normal") ? "Normal" : "NormalX", "the normal must not be zero");
