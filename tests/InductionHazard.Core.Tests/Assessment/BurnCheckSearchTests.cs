@@ -225,3 +225,26 @@ public sealed class BurnCheckSearchTests
         Assert.Throws<ArgumentException>(() => new ContactBurnThreshold(new[] { (1.0, double.NaN) }, "test"));
     }
 }
+
+/// <summary>What the burn finding says of the dose once the item passes the range the dose relation was fitted on.</summary>
+public sealed class BurnDoseTextTests
+{
+    [Fact]
+    public void PastTheFittedRangeTheDoseIsNotPrintedAsANumber()
+    {
+        // A gold ring worn in 50 mT at 10 kHz reaches its melting point: the added dose at its own rise is some 1e300
+        // CEM43 by the relation's extrapolation, a number with no meaning; the margin on the rise still stands.
+        var ring = InductionHazard.Items.ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "band", ["Material"] = "Gold", ["Diameter"] = "20 mm", ["WireDiameter"] = "2 mm", ["Contact"] = "Skin" }, InductionHazard.Items.MaterialLibrary.BuiltIn);
+        var field = InductionHazard.Fields.FieldSource.Uniform("coil", new InductionHazard.Waveforms.SineWaveform(0.05, 10000, drive: InductionHazard.Waveforms.DriveKind.FluxDensity), InductionHazard.Quantities.Vector3D.UnitZ);
+        InductionAssessment hot = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(ring, field)), HazardPolicy.Default);
+        Assert.True(hot.Response.PeakTemperatureCelsius > ThermalDose.FittedUpToCelsius);
+        MechanismResult burn = hot.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
+        Assert.Contains("thermal dose added beyond the range its relation was fitted on", burn.Detail, StringComparison.Ordinal);
+        Assert.DoesNotContain("E+", burn.Detail, StringComparison.Ordinal);
+
+        // A ring that warms a little keeps its dose as a number.
+        var gentle = InductionHazard.Fields.FieldSource.Uniform("mains", new InductionHazard.Waveforms.SineWaveform(0.01, 50, drive: InductionHazard.Waveforms.DriveKind.FluxDensity), InductionHazard.Quantities.Vector3D.UnitZ);
+        MechanismResult warm = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(ring, gentle)), HazardPolicy.Default).Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
+        Assert.Matches("thermal dose added [0-9.e-]+ CEM43 against 2", warm.Detail);
+    }
+}

@@ -79,6 +79,7 @@ public sealed class BurnCheck : IHazardCheck
             // contact margin is below the bound. What they hold is swept only if the finding is read.
             var deferred = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, true, double.NaN, double.NaN, double.NaN, double.NaN, start, placeSeconds)
             {
+                PeakCelsius = response.PeakTemperatureCelsius,
                 Sweep = new ContactSweep(history, durations, durationThresholds),
             };
             return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", first, policy.SafetyFactor, basis,
@@ -98,7 +99,10 @@ public sealed class BurnCheck : IHazardCheck
         }
 
         bool contactJudged = durations.Length > 0 || (span < curve.ShortestSeconds && curve.CelsiusFor(curve.ShortestSeconds) > start);
-        var found = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, contactJudged, worst.held, worst.seconds, worst.threshold, worst.margin, start, placeSeconds);
+        var found = new ContactFindings(doseMargin, dose, policy.ThermalDoseLimitMinutes, contactJudged, worst.held, worst.seconds, worst.threshold, worst.margin, start, placeSeconds)
+        {
+            PeakCelsius = response.PeakTemperatureCelsius,
+        };
         if (!contactJudged && doseMargin is null)
         {
             // Neither criterion can judge what the field adds: fail closed.
@@ -123,8 +127,13 @@ public sealed class BurnCheck : IHazardCheck
         /// <summary>Where the dose governed before the contact times were swept: what to sweep for the finding.</summary>
         public ContactSweep? Sweep { get; init; }
 
+        /// <summary>The history's peak, °C: past the range the dose relation was fitted on, the dose as it is is not a number to print.</summary>
+        public double PeakCelsius { get; init; } = double.NaN;
+
         public string Dose() => DoseMargin is { } dm
-            ? "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
+            ? PeakCelsius > ThermalDose.FittedUpToCelsius
+                ? "thermal dose added beyond the range its relation was fitted on (the item passes " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + "), its limit reached at a rise " + SiFormat.Plain(dm) + " of this one (the margin on the rise)"
+                : "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
             : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
 
         public string Contact()
