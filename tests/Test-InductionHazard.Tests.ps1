@@ -835,12 +835,25 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,site rules,technician
             $table = $assessed | Format-Table | Out-String -Width 200
             $table | Should -Not -Match '\d\.?\d*E[+-]\d' -Because 'no margin or figure is shown in exponent form'
             $shown = $assessed | ForEach-Object { [InductionHazard.Quantities.SiFormat]::Margin($_.MinimumMargin) }
-            foreach ($text in $shown | Where-Object { $_ -notin '> 1000', '< 0.001', 'NaN' }) {
+            foreach ($text in $shown | Where-Object { $_ -notin '> 1000', '< 0.001', 'not judged' }) {
                 [double] $text | Should -BeGreaterOrEqual 0.001
                 [double] $text | Should -BeLessThan 1000
             }
             ($assessed | Where-Object MinimumMargin -GE 1000).Count | Should -BeGreaterThan 0 -Because 'the demo has items with huge margins, shown as "> 1000"'
             $table | Should -Match '> 1000'
+        }
+
+        It 'shows an item that could not be judged with its margin "not judged", never as a number' {
+            $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')
+            $assessed = @(Import-Csv $inventoryPath | Test-InductionHazard -Site $site -WarningAction SilentlyContinue)
+            $open = @($assessed | Where-Object Verdict -EQ 'Indeterminate')
+            $open.Count | Should -BeGreaterThan 0 -Because 'the demo has an item the model cannot judge'
+            $lines = ($open | Format-Table | Out-String -Width 200) -split [Environment]::NewLine | Where-Object { $_ -match 'Indeterminate' }
+            $lines.Count | Should -Be $open.Count
+            foreach ($line in $lines) {
+                $line | Should -Match 'Indeterminate\s+\w+\s+not judged\s' -Because 'the margin column says the item was not judged'
+            }
+            ($open[0].Mechanisms | Where-Object Verdict -EQ 'Indeterminate' | Format-Table | Out-String -Width 200) | Should -Match 'Indeterminate\s+not judged'
         }
     }
 }

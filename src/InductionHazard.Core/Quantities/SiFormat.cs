@@ -53,13 +53,22 @@ public static class SiFormat
         return digits;
     }
 
+    /// <summary>How a margin that could not be judged reads.</summary>
+    public const string NotJudged = "not judged";
+
     /// <summary>
     /// A margin as a person reads it: "> 1000" when it is at least a thousand (so large that its figure says nothing
-    /// more), "&lt; 0.001" when below a thousandth, otherwise three significant digits; the property keeps the number.
+    /// more), "&lt; 0.001" when below a thousandth, "not judged" for NaN (a mechanism or an item that could not be
+    /// judged: never a number), otherwise three significant digits; the property keeps the number.
     /// </summary>
     public static string Margin(double? margin)
     {
-        if (margin is { } m && !double.IsNaN(m))
+        if (margin is { } nan && double.IsNaN(nan))
+        {
+            return NotJudged;
+        }
+
+        if (margin is { } m)
         {
             if (m >= 1000)
             {

@@ -132,7 +132,7 @@ a { color: inherit; }
             {
                 int index = report.IndexOf(a);
                 w.Write("<tr><td class=\"n\">" + E(HazardReport.RowText(a)) + "</td><td><a href=\"#item-" + index.ToString(CultureInfo.InvariantCulture) + "\">" + E(a.ItemName) + "</a></td><td>" + E(a.StationName)
-                    + "</td><td>" + Badge(a.Verdict) + "</td><td>" + E(a.GoverningMechanism?.ToString()) + "</td><td class=\"n\">" + E(ReportLines.Margin(a.MinimumMargin)) + "</td><td>" + E(a.Action) + "</td></tr>\n");
+                    + "</td><td>" + Badge(a.Verdict) + "</td><td>" + E(a.GoverningMechanism?.ToString()) + "</td><td class=\"n\">" + E(SiFormat.Margin(a.MinimumMargin)) + "</td><td>" + E(a.Action) + "</td></tr>\n");
             }
 
             w.Write("</tbody></table>\n");

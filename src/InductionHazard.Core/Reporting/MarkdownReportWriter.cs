@@ -65,7 +65,7 @@ public static class MarkdownReportWriter
             w.Write("| Row | Item | Station | Verdict | Governing | Margin | Action |\n|---:|---|---|---|---|---:|---|\n");
             foreach (InductionAssessment a in flagged)
             {
-                w.Write("| " + HazardReport.RowText(a) + " | " + M(a.ItemName) + " | " + M(a.StationName) + " | **" + a.Verdict + "** | " + a.GoverningMechanism + " | " + M(ReportLines.Margin(a.MinimumMargin)) + " | " + M(a.Action) + " |\n");
+                w.Write("| " + HazardReport.RowText(a) + " | " + M(a.ItemName) + " | " + M(a.StationName) + " | **" + a.Verdict + "** | " + a.GoverningMechanism + " | " + M(SiFormat.Margin(a.MinimumMargin)) + " | " + M(a.Action) + " |\n");
             }
 
             w.Write("\n");

@@ -126,9 +126,6 @@ public static class ReportLines
          m.Basis,
          m.Detail);
 
-    /// <summary>A margin as text: the bound forms, or "not judged" for an Indeterminate.</summary>
-    public static string Margin(double margin) => double.IsNaN(margin) ? "not judged" : SiFormat.Margin(margin);
-
     /// <summary>The report's heading line for an item: "Row 7 · Wedding band".</summary>
     public static string Heading(InductionAssessment a) =>
         (a.RowNumber is { } row ? "Row " + row.ToString(CultureInfo.InvariantCulture) + " · " : string.Empty) + a.ItemName;

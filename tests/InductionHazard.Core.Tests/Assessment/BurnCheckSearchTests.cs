@@ -157,7 +157,7 @@ public sealed class BurnCheckSearchTests
             bool doseGoverns = dose is { } d && (double.IsNaN(d) || d < contact);
             _ = doseGoverns ? byDose++ : byContact++;
             string label = item.Name + " at " + source.Name;
-            Assert.Equal(doseGoverns ? "thermal dose added" : "skin contact temperature held for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s"), burn.Quantity);
+            Assert.Equal(doseGoverns ? BurnDoseTextTests.DoseQuantity(response) : "skin contact temperature held for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s"), burn.Quantity);
             double expected = VerdictRules.Bounded(doseGoverns ? dose!.Value : contact);
             Assert.True(Math.Abs(expected - burn.Margin) <= 1e-9 * expected, label + ": margin " + burn.Margin + " against " + expected);
             Assert.Contains("for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s") + " against the threshold " + InductionHazard.Quantities.SiFormat.Celsius(thresholds[worst]), burn.Detail, StringComparison.Ordinal);
@@ -229,6 +229,10 @@ public sealed class BurnCheckSearchTests
 /// <summary>What the burn finding says of the dose once the item passes the range the dose relation was fitted on.</summary>
 public sealed class BurnDoseTextTests
 {
+    /// <summary>The dose criterion's quantity as the rule has it: extrapolated once the item passes the fitted range's 57 °C.</summary>
+    public static string DoseQuantity(InductionResponse response) =>
+        response.PeakTemperatureCelsius > 57 ? "thermal dose added, extrapolated (the item passes 57.0 °C)" : "thermal dose added";
+
     [Fact]
     public void PastTheFittedRangeTheDoseIsNotPrintedAsANumber()
     {
@@ -241,10 +245,13 @@ public sealed class BurnDoseTextTests
         MechanismResult burn = hot.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
         Assert.Contains("thermal dose added beyond the range its relation was fitted on", burn.Detail, StringComparison.Ordinal);
         Assert.DoesNotContain("E+", burn.Detail, StringComparison.Ordinal);
+        Assert.Equal("CEM43 min", burn.Unit);
+        Assert.Equal("thermal dose added, extrapolated (the item passes 57.0 °C)", burn.Quantity);
 
         // A ring that warms a little keeps its dose as a number.
         var gentle = InductionHazard.Fields.FieldSource.Uniform("mains", new InductionHazard.Waveforms.SineWaveform(0.01, 50, drive: InductionHazard.Waveforms.DriveKind.FluxDensity), InductionHazard.Quantities.Vector3D.UnitZ);
         MechanismResult warm = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(ring, gentle)), HazardPolicy.Default).Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn);
         Assert.Matches("thermal dose added [0-9.e-]+ CEM43 against 2", warm.Detail);
+        Assert.Equal("thermal dose added", warm.Quantity);
     }
 }

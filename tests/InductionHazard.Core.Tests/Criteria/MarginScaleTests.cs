@@ -146,7 +146,7 @@ public sealed class MarginScaleTests
         // A field that does heat the ring is judged by the dose it adds over that baseline, and can still be a Hazard.
         InductionAssessment heated = Assess(Ring(0, "Skin"), Sine(0.01), Vector3D.Zero, ambient: 45);
         MechanismResult burnHeated = Assert.Single(heated.Mechanisms, m => m.Mechanism == HazardMechanism.Burn);
-        Assert.Equal("thermal dose added", burnHeated.Quantity);
+        Assert.Equal(InductionHazard.Tests.Assessment.BurnDoseTextTests.DoseQuantity(heated.Response), burnHeated.Quantity);
         Assert.True(burnHeated.Margin > 0 && burnHeated.Margin < none.Mechanisms[2].Margin);
     }
 }

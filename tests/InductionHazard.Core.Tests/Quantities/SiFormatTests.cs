@@ -36,7 +36,7 @@ public class SiFormatTests
         Assert.Equal("< 0.001", SiFormat.Margin(8.9e-5));
         Assert.Equal("999", SiFormat.Margin(999.4));
         Assert.Equal("2.59", SiFormat.Margin(2.5894));
-        Assert.Equal("NaN", SiFormat.Margin(double.NaN));
+        Assert.Equal("not judged", SiFormat.Margin(double.NaN));
         Assert.Equal(string.Empty, SiFormat.Margin(null));
     }
 

@@ -82,7 +82,7 @@ public sealed class BurnCheck : IHazardCheck
                 PeakCelsius = response.PeakTemperatureCelsius,
                 Sweep = new ContactSweep(history, durations, durationThresholds),
             };
-            return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", first, policy.SafetyFactor, basis,
+            return MechanismResult.Judged(Mechanism, DoseQuantity(response), dose, policy.ThermalDoseLimitMinutes, "CEM43 min", first, policy.SafetyFactor, basis,
                 deferred, static f => "skin in contact: " + f.Dose() + "; " + f.Contact() + f.Place());
         }
 
@@ -112,13 +112,23 @@ public sealed class BurnCheck : IHazardCheck
 
         if (doseMargin is { } byDose && (double.IsNaN(byDose) || byDose < worst.margin || !contactJudged))
         {
-            return MechanismResult.Judged(Mechanism, "thermal dose added", dose, policy.ThermalDoseLimitMinutes, "CEM43 min", byDose, policy.SafetyFactor, basis,
+            return MechanismResult.Judged(Mechanism, DoseQuantity(response), dose, policy.ThermalDoseLimitMinutes, "CEM43 min", byDose, policy.SafetyFactor, basis,
                 found, static f => "skin in contact: " + f.Dose() + "; " + f.Contact() + f.Place());
         }
 
         return MechanismResult.Judged(Mechanism, "skin contact temperature held for " + SiFormat.Format(worst.seconds, "s"), worst.held, worst.threshold, "°C", worst.margin, policy.SafetyFactor, basis,
             found, static f => "skin in contact: " + f.Contact() + "; " + f.Dose() + f.Place());
     }
+
+    /// <summary>
+    /// What the dose criterion names as its quantity: past <see cref="ThermalDose.FittedUpToCelsius"/> the dose is the
+    /// relation's extrapolation, a figure with no meaning of its own (the margin on the rise still holds), and a table
+    /// that shows it says so beside it.
+    /// </summary>
+    private static string DoseQuantity(InductionResponse response) =>
+        response.PeakTemperatureCelsius > ThermalDose.FittedUpToCelsius
+            ? "thermal dose added, extrapolated (the item passes " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ")"
+            : "thermal dose added";
 
     /// <summary>What a worn or held item's burn check found, for its finding's text (written when first read).</summary>
     private sealed record ContactFindings(
