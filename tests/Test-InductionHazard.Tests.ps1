@@ -423,6 +423,19 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             ($fast.Reasons -join ' ') | Should -Match 'mesh currents, more than'
         }
 
+        It 'judges a rod given no normal with its axis across the field, where it heats more than along it, and says so' {
+            $mains = New-FieldWaveform -Sine -Amplitude '20 mT' -Frequency '50 Hz' | New-FieldSource -Uniform -Name 'Mains coil'
+            $rod = New-ConductiveItem -Name 'Copper rod' -Shape Cylinder -Material Copper -Diameter '10 mm' -Length '150 mm' -Contact Held
+            $judged = Test-InductionHazard -Item $rod -Source $mains -WarningAction SilentlyContinue
+            $along = Test-InductionHazard -Item $rod -Source $mains -Normal z -WarningAction SilentlyContinue
+            $across = Test-InductionHazard -Item $rod -Source $mains -Normal x -WarningAction SilentlyContinue
+            $judged.Orientation | Should -Match '^axis across the largest flux change, normal \(1, 0, 0\) \(judged worse than its axis along it, normal \(0, 0, 1\)'
+            $judged.BurnMargin | Should -Be $across.BurnMargin
+            $judged.BurnMargin | Should -BeLessThan $along.BurnMargin
+            $judged.Response.EnergyDissipatedJoules | Should -BeGreaterThan (1.9 * $along.Response.EnergyDissipatedJoules) -Because 'a long cylinder loses twice as much across its axis as along it'
+            (Get-InductionResponse -Item $rod -Source $mains).Orientation | Should -Match 'facing the largest flux change, normal \(0, 0, 1\) \(an assessment judges its axis across it too'
+        }
+
         It 'refuses a field that belongs to another shape, naming it' {
             { New-ConductiveItem -Shape Disc -Material Copper -Diameter '50 mm' -Thickness '3 mm' -WireDiameter '2 mm' } |
                 Should -Throw -ExpectedMessage '*WireDiameter*does not apply to a disc*'

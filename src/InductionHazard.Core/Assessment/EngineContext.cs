@@ -61,6 +61,11 @@ internal sealed class EngineContext
                         + (scenario.Placement.TiltDegrees == 0 ? " (tilted 0 degrees)" : string.Empty);
                 }
             }
+            else if (scenario.Placement.AxisAlong is { } along)
+            {
+                Orientation = "axis across the largest flux change, normal " + Normal + " (judged worse than its axis along it, normal " + along
+                    + "; the field across drives currents along the body and back, which heat it, while the emf and current around its axis are those of the flux along it)";
+            }
             else
             {
                 Orientation = "as given, normal " + Normal;

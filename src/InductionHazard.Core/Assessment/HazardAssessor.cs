@@ -23,7 +23,72 @@ public static class HazardAssessor
     /// <param name="policy">The limits and safety factor.</param>
     /// <param name="rowNumber">The record's position in its input, if any.</param>
     /// <param name="now">The time to record (UTC); default now.</param>
+    /// <remarks>
+    /// A body placed without a normal is judged with its axis along the largest flux change and across it (see
+    /// <see cref="InductionResponse.AcrossAxis"/>), and the worst of these is the assessment: the most severe verdict
+    /// (Hazard, then Indeterminate, Caution, Clear, as <see cref="VerdictRules.Combine"/> ranks them), then the smaller
+    /// judged margins in turn, smallest first. Its orientation says which it is.
+    /// </remarks>
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
+    {
+        InductionAssessment assessed = AssessOne(response, policy, rowNumber, now);
+        for (int k = 0; k < response.AcrossAxis.Count; k++)
+        {
+            InductionAssessment other = AssessOne(response.AcrossAxis[k], policy, rowNumber, now);
+            if (Worse(other, assessed))
+            {
+                (assessed, other.AcrossIndex) = (other, k);
+            }
+        }
+
+        return assessed;
+    }
+
+    /// <summary>Whether <paramref name="a"/> is judged worse than <paramref name="b"/>: its verdict more severe, or as severe with smaller judged margins, compared smallest first.</summary>
+    internal static bool Worse(InductionAssessment a, InductionAssessment b)
+    {
+        int severityA = Severity(a.Verdict), severityB = Severity(b.Verdict);
+        if (severityA != severityB)
+        {
+            return severityA > severityB;
+        }
+
+        double[] marginsA = JudgedMargins(a), marginsB = JudgedMargins(b);
+        for (int k = 0; k < Math.Min(marginsA.Length, marginsB.Length); k++)
+        {
+            if (marginsA[k] != marginsB[k])
+            {
+                return marginsA[k] < marginsB[k];
+            }
+        }
+
+        return false;
+    }
+
+    private static int Severity(Verdict verdict) => verdict switch
+    {
+        Verdict.Hazard => 3,
+        Verdict.Indeterminate => 2,
+        Verdict.Caution => 1,
+        _ => 0,
+    };
+
+    private static double[] JudgedMargins(InductionAssessment a)
+    {
+        var margins = new List<double>(a.Mechanisms.Count);
+        foreach (MechanismResult m in a.Mechanisms)
+        {
+            if (m.Applies && m.Verdict != Verdict.Indeterminate && !double.IsNaN(m.Margin))
+            {
+                margins.Add(m.Margin);
+            }
+        }
+
+        margins.Sort();
+        return margins.ToArray();
+    }
+
+    private static InductionAssessment AssessOne(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now)
     {
         policy.Validated();
         // A visitor named by the inventory row is judged at the public's limits whatever the policy's group.

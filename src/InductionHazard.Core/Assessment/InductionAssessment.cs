@@ -156,6 +156,9 @@ public sealed class InductionAssessment
 
     private InductionResponse _response = null!;
 
+    /// <summary>Which of a body's responses with its axis across the field this assessment kept as the worst (<see cref="InductionResponse.AcrossAxis"/>); -1: the one along it, or an item with one response.</summary>
+    internal int AcrossIndex { get; set; } = -1;
+
     /// <summary>
     /// This assessment for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the same verdict, margins and findings under that row's item name, row number, station and inventory columns,
@@ -169,7 +172,8 @@ public sealed class InductionAssessment
         copy._stationName = response.Scenario.StationName ?? string.Empty;
         copy._inventory = response.Scenario.Inventory;
         copy._assessedUtc = HazardAssessor.Stamp((now ?? DateTime.UtcNow).ToUniversalTime());
-        copy._response = response;
+        // An assessment that kept a body's axis across the field is that orientation's: the same of the row's response.
+        copy._response = AcrossIndex >= 0 && AcrossIndex < response.AcrossAxis.Count ? response.AcrossAxis[AcrossIndex] : response;
         copy._inputHash = null;
         return copy;
     }

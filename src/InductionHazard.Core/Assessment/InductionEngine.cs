@@ -58,7 +58,41 @@ public static class InductionEngine
         }
 
         CheckFinite(response, c.Issues);
-        return response;
+        return AxisAcross(response, c, cancellation);
+    }
+
+    /// <summary>
+    /// A body with an axis (a rod, a tube, a bar, a disc, a plate) placed without a normal or a tilt: besides its axis
+    /// along the largest flux change, the two orientations with its axis across it, each solved in full. The flux
+    /// change along the axis drives the coaxial currents; one across it drives currents along the body's length and
+    /// back, which in a rod or a tube heat it more (a long cylinder's low-frequency loss across its axis is twice that
+    /// along it). Which orientation is worst depends on the mechanism, so the assessment judges all three and keeps the
+    /// worst (<see cref="HazardAssessor.Assess"/>). A sphere has no axis; a ferromagnetic body's currents are not
+    /// solved, and its pull is largest with its axis along the field.
+    /// </summary>
+    private static InductionResponse AxisAcross(InductionResponse response, EngineContext c, CancellationToken cancellation)
+    {
+        Scenario scenario = c.Scenario;
+        if (scenario.Placement.Normal is not null || (scenario.Placement.TiltDegrees ?? 0) != 0 || c.FieldFailed
+            || scenario.Item.Loop is not BodyGeometry || scenario.Item.Loop is SphereBody || scenario.Item.IsSplit || scenario.Item.Material.IsFerromagnetic)
+        {
+            return response;
+        }
+
+        Vector3D along = c.Normal;
+        Vector3D first = RectangularLoopGeometry.WidthDirection(along);
+        Vector3D[] across = { first, along.Cross(first).Normalized() };
+        var others = new InductionResponse[across.Length];
+        for (int k = 0; k < across.Length; k++)
+        {
+            others[k] = Respond(scenario.With(Placement.AcrossAxis(scenario.Placement, across[k], along)), cancellation);
+        }
+
+        return response with
+        {
+            Orientation = response.Orientation + " (an assessment judges its axis across it too, normals " + across[0] + " and " + across[1] + ", and keeps the worst)",
+            AcrossAxis = others,
+        };
     }
 
     private static InductionResponse Sinusoidal(EngineContext c, CancellationToken cancellation)

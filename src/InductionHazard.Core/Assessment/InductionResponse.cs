@@ -25,9 +25,23 @@ public sealed record InductionResponse
     /// <summary>
     /// This response for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the same physics, for <paramref name="scenario"/>, this one's scenario under that row's name and inventory columns
-    /// (<see cref="Scenario.For"/>).
+    /// (<see cref="Scenario.For"/>); the responses with a body's axis across the field (<see cref="AcrossAxis"/>) with it.
     /// </summary>
-    internal InductionResponse For(Scenario scenario) => this with { Scenario = scenario };
+    internal InductionResponse For(Scenario scenario)
+    {
+        if (AcrossAxis.Count == 0)
+        {
+            return this with { Scenario = scenario };
+        }
+
+        var across = new InductionResponse[AcrossAxis.Count];
+        for (int k = 0; k < across.Length; k++)
+        {
+            across[k] = AcrossAxis[k].For(scenario.With(AcrossAxis[k].Scenario.Placement));
+        }
+
+        return this with { Scenario = scenario, AcrossAxis = across };
+    }
 
     /// <summary>The source's name.</summary>
     public string SourceName => Scenario.Source.Name;
@@ -157,6 +171,12 @@ public sealed record InductionResponse
 
     /// <summary>The pull on a ferromagnetic item toward stronger field, N; null for an item that is not ferromagnetic.</summary>
     public double? AttractionForceNewtons => Attraction?.ForceNewtons;
+
+    /// <summary>
+    /// For a body with an axis placed without a normal: the responses with its axis across the largest flux change
+    /// (this one has it along), which an assessment judges beside this one, keeping the worst. Empty otherwise.
+    /// </summary>
+    internal IReadOnlyList<InductionResponse> AcrossAxis { get; init; } = Array.Empty<InductionResponse>();
 
     /// <summary>The item's mass, kg.</summary>
     public double MassKilograms => Scenario.Item.MassKilograms;

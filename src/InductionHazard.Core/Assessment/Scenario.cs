@@ -50,7 +50,7 @@ public sealed class Scenario
     {
         var text = new System.Text.StringBuilder(256);
         text.Append(ItemHash(Item)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
-            .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n ? Exact(n) : Placement.TiltDegrees is { } tilt ? "tilted " + TextHash.Exact(tilt) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
+            .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n && Placement.AxisAlong is null ? Exact(n) : Placement.TiltDegrees is { } tilt ? "tilted " + TextHash.Exact(tilt) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
             .Append('|').Append(ExposureSeconds is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         if (WearerGroup is { } group)
@@ -105,6 +105,10 @@ public sealed class Scenario
     /// </summary>
     internal Scenario For(string itemName, InventoryFields inventory) =>
         new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = inventory };
+
+    /// <summary>This scenario with the item placed otherwise; everything else is this one's.</summary>
+    internal Scenario With(Placement placement) =>
+        new(Item, Source, placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory };
 
     /// <summary>The site station the scenario stands for, if it came from one.</summary>
     public string? StationName { get; init; }

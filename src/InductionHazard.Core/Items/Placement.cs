@@ -69,6 +69,19 @@ public sealed class Placement
     /// <summary>How far the loop is turned from the orientation that links the largest flux change, degrees; null when it faces it (or a normal is given).</summary>
     public double? TiltDegrees { get; }
 
+    /// <summary>
+    /// A body's placement turned with its axis across the largest flux change, for judging beside the axis along it
+    /// (<see cref="Assessment.InductionEngine"/>): the normal is the engine's choice, not the user's.
+    /// </summary>
+    /// <param name="given">The placement as given, without a normal or a tilt.</param>
+    /// <param name="across">The axis across the largest flux change.</param>
+    /// <param name="along">The axis along it, the orientation the engine found first.</param>
+    internal static Placement AcrossAxis(Placement given, Vector3D across, Vector3D along) =>
+        new(given.Centre, across, given.Velocity, null) { AxisAlong = along };
+
+    /// <summary>For a body turned with its axis across the largest flux change by the engine, the axis along it; null otherwise.</summary>
+    internal Vector3D? AxisAlong { get; private init; }
+
     /// <summary>The loop at the origin facing the field.</summary>
     public static Placement FacingField { get; } = new(Vector3D.Zero);
 
