@@ -40,7 +40,12 @@ internal sealed class EngineContext
         FieldDirection = Normal;
         Coupling = new double[source.Terms.Count];
         NormalField = new double[source.Terms.Count];
-        CrossCoupling = new Vector3D[source.Terms.Count];
+        CrossCoupling = new double[source.Terms.Count][];
+        for (int j = 0; j < CrossCoupling.Length; j++)
+        {
+            CrossCoupling[j] = Array.Empty<double>();
+        }
+
         TorqueField = new Vector3D[source.Terms.Count];
         try
         {
@@ -86,11 +91,18 @@ internal sealed class EngineContext
             }
 
             FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
-            if (loop is BodyGeometry)
+            if (loop is BodyGeometry body)
             {
-                // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the methods).
-                Vector3D n = Normal;
-                CrossCoupling = b.Select(v => v - (v.Dot(n) * n)).ToArray();
+                // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the
+                // methods), by its mean square over the body. Where that cannot be found, the heating cannot.
+                try
+                {
+                    CrossCoupling = CrossAxisField.Couplings(source, centre, Normal, Width, body);
+                }
+                catch (FieldEvaluationException ex)
+                {
+                    Issues.Add(new ValidityIssue(ex.Message, AffectedResults.Heating));
+                }
             }
         }
         catch (FieldEvaluationException ex)
@@ -202,8 +214,11 @@ internal sealed class EngineContext
     /// <summary>n x b_j: the normal crossed with each term's field per unit drive at the centre (the torque on the item's moment).</summary>
     public Vector3D[] TorqueField { get; } = Array.Empty<Vector3D>();
 
-    /// <summary>The field across a body's axis at its centre per unit drive of each term (zero for a loop).</summary>
-    public Vector3D[] CrossCoupling { get; }
+    /// <summary>
+    /// The field across a body's axis per unit drive of each term, as vectors whose drive-weighted sum has the square
+    /// length of its mean square over the body (<see cref="CrossAxisField"/>); empty for a loop.
+    /// </summary>
+    public double[][] CrossCoupling { get; }
 
     /// <summary>The cross-axis low-frequency loss factor at the reference resistivity, W per (T/s)^2 (zero for a loop).</summary>
     public double CrossPowerFactor { get; private set; }

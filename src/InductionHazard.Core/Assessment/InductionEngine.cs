@@ -152,16 +152,26 @@ public static class InductionEngine
         else
         {
             var drives = new Complex[terms.Count];
-            Vector3D crossRe = Vector3D.Zero, crossIm = Vector3D.Zero;
             for (int k = 0; k < terms.Count; k++)
             {
                 // u_k = -d_k' has the phasor -j omega D_k.
                 drives[k] = -Complex.ImaginaryOne * omega * ((SineWaveform)terms[k].Waveform).Phasor;
-                crossRe += drives[k].Real * c.CrossCoupling[k];
-                crossIm += drives[k].Imaginary * c.CrossCoupling[k];
             }
 
-            double crossAtUnitScale = 0.5 * c.CrossPowerFactor * (crossRe.Dot(crossRe) + crossIm.Dot(crossIm));
+            // The cycle's mean of |sum_k u_k v_k|^2: half the square length of the phasor sum, part by part.
+            double crossSquare = 0;
+            for (int m = 0; m < c.CrossCoupling[0].Length; m++)
+            {
+                Complex part = Complex.Zero;
+                for (int k = 0; k < terms.Count; k++)
+                {
+                    part += drives[k] * c.CrossCoupling[k][m];
+                }
+
+                crossSquare += (part.Real * part.Real) + (part.Imaginary * part.Imaginary);
+            }
+
+            double crossAtUnitScale = 0.5 * c.CrossPowerFactor * crossSquare;
             steady = ItemPaths.Steady(c.Modal!, drives, omega, c.Paths.ScaleAt, crossAtUnitScale);
         }
 
@@ -406,7 +416,7 @@ public static class InductionEngine
     }
 
     /// <summary>The words for the cross-axis heating, when the field has a part across a body's axis.</summary>
-    private static string CrossWords(EngineContext c) => c.CrossPowerFactor > 0 && c.CrossCoupling.Any(v => v.Length > 0)
+    private static string CrossWords(EngineContext c) => c.CrossPowerFactor > 0 && c.CrossCoupling.Any(v => v.Any(x => x != 0))
         ? ", plus the heating by the field across the axis bounded from above at its low-frequency value (Thomson's minimum-dissipation principle)"
         : string.Empty;
 

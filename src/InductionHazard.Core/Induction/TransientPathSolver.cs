@@ -125,9 +125,10 @@ public sealed class TransientPathSolver
 
     /// <summary>
     /// Heating besides the modes' own, from eddy currents the paths do not carry (a field across a body's axis):
-    /// power = <see cref="CrossPowerFactor"/> |sum_j CrossCoupling_j u_j(t)|^2 / s(T), W.
+    /// power = <see cref="CrossPowerFactor"/> |sum_j CrossCoupling_j u_j(t)|^2 / s(T), W (the vectors of
+    /// <see cref="CrossAxisField.Couplings"/>, all of one length).
     /// </summary>
-    public Vector3D[]? CrossCoupling { get; init; }
+    public double[][]? CrossCoupling { get; init; }
 
     /// <summary>The factor of the cross-axis heating at s = 1, W per (T/s)^2.</summary>
     public double CrossPowerFactor { get; init; }
@@ -457,17 +458,25 @@ public sealed class TransientPathSolver
             return 0;
         }
 
-        Vector3D va = Vector3D.Zero, vb = Vector3D.Zero;
-        for (int j = 0; j < CrossCoupling.Length; j++)
+        // Each component of v(x) = v0 + v1 x on [0, 1] through v(1/4) = va, v(3/4) = vb; the integral of |v|^2 is
+        // |v0|^2 + v0.v1 + |v1|^2 / 3.
+        double sum = 0;
+        int length = CrossCoupling.Length == 0 ? 0 : CrossCoupling[0].Length;
+        for (int m = 0; m < length; m++)
         {
-            va += work.DriveA[j] * CrossCoupling[j];
-            vb += work.DriveB[j] * CrossCoupling[j];
+            double va = 0, vb = 0;
+            for (int j = 0; j < CrossCoupling.Length; j++)
+            {
+                va += work.DriveA[j] * CrossCoupling[j][m];
+                vb += work.DriveB[j] * CrossCoupling[j][m];
+            }
+
+            double v1 = 2 * (vb - va);
+            double v0 = va - (0.25 * v1);
+            sum += (v0 * v0) + (v0 * v1) + (v1 * v1 / 3);
         }
 
-        // v(x) = v0 + v1 x on [0, 1] through v(1/4) = va, v(3/4) = vb; the integral of |v|^2 is |v0|^2 + v0.v1 + |v1|^2 / 3.
-        Vector3D v1 = 2 * (vb - va);
-        Vector3D v0 = va - (0.25 * v1);
-        return CrossPowerFactor * h * (v0.Dot(v0) + v0.Dot(v1) + (v1.Dot(v1) / 3));
+        return CrossPowerFactor * h * sum;
     }
 
     private double Total(double[] z)
