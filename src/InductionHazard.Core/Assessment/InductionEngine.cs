@@ -88,12 +88,30 @@ public static class InductionEngine
             others[k] = Respond(scenario.With(Placement.AcrossAxis(scenario.Placement, across[k], along)), cancellation);
         }
 
+        // Where the field varies through the body, an orientation between these (its length turned toward the source)
+        // may take more: said beside whichever the assessment keeps.
+        double variation = CrossAxisField.Variation(scenario.Source, scenario.Placement.Centre, along, (BodyGeometry)scenario.Item.Loop);
+        if (!(variation <= VariationNoted))
+        {
+            string note = "orientation: the field varies through the body (" + (double.IsNaN(variation) ? "it cannot be evaluated everywhere in it" : "by " + SiFormat.Plain(100 * variation) + " % rms of its value at the centre")
+                + "): of its orientations only its axis along the largest flux change and across it are judged, and one turned toward the source may heat it more; where how it sits is known, give it (-Normal or a Normal column)";
+            for (int k = 0; k < others.Length; k++)
+            {
+                others[k] = others[k] with { ModelNotes = others[k].ModelNotes.Concat(new[] { note }).ToArray() };
+            }
+
+            response = response with { ModelNotes = response.ModelNotes.Concat(new[] { note }).ToArray() };
+        }
+
         return response with
         {
             Orientation = response.Orientation + " (an assessment judges its axis across it too, normals " + across[0] + " and " + across[1] + ", and keeps the worst)",
             AcrossAxis = others,
         };
     }
+
+    /// <summary>The rms variation of the field through a body, relative to its centre's, above which the three orientations judged are said not to cover every one.</summary>
+    private const double VariationNoted = 0.1;
 
     private static InductionResponse Sinusoidal(EngineContext c, CancellationToken cancellation)
     {

@@ -52,6 +52,42 @@ internal static class CrossAxisField
         return Factored(fine);
     }
 
+    /// <summary>
+    /// How much the field varies through the body: the root mean square over its volume of the field less the field at
+    /// its centre, relative to the field at its centre (per unit drive, summed over the terms); 0 in a uniform field,
+    /// NaN where the field cannot be evaluated.
+    /// </summary>
+    public static double Variation(FieldSource source, Vector3D centre, Vector3D axis, BodyGeometry body)
+    {
+        try
+        {
+            Vector3D u = RectangularLoopGeometry.WidthDirection(axis, null);
+            Vector3D v = axis.Cross(u);
+            Vector3D[] atCentre = source.FieldPerUnitDrive(centre);
+            double deviation = 0, reference = 0;
+            foreach (Vector3D b in atCentre)
+            {
+                reference += b.Dot(b);
+            }
+
+            foreach ((double x, double y, double z, double weight) in Points(body, 2))
+            {
+                Vector3D[] b = source.FieldPerUnitDrive(centre + (x * u) + (y * v) + (z * axis));
+                for (int j = 0; j < b.Length; j++)
+                {
+                    Vector3D d = b[j] - atCentre[j];
+                    deviation += weight * d.Dot(d);
+                }
+            }
+
+            return Math.Sqrt(deviation / reference);
+        }
+        catch (FieldEvaluationException)
+        {
+            return double.NaN;
+        }
+    }
+
     /// <summary>G_jk: the mean over the body's volume of b_j . b_k, b_j the field across the axis per unit drive of term j.</summary>
     private static double[,] Gram(FieldSource source, Vector3D centre, Vector3D axis, Vector3D u, Vector3D v, BodyGeometry body, int refinement)
     {

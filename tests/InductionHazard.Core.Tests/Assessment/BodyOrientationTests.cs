@@ -106,6 +106,22 @@ public sealed class BodyOrientationTests
     }
 
     [Fact]
+    public void WhereTheFieldVariesThroughABodyItsNotesSayTheOrientationsJudgedMayNotCoverEveryOne()
+    {
+        // Beside a 50 mm coil a 120 mm rod spans fields that differ severalfold; in a uniform field it spans one.
+        var coil = new FieldSource("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.05, 10), new SineWaveform(100, 50, drive: DriveKind.Current)) });
+        var mains = FieldSource.Uniform("mains", new SineWaveform(0.01, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        ConductiveItem rod = Held("Cylinder", "Copper", 0.01, ("Length", 0.12));
+        InductionAssessment near = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, coil, new Placement(new Vector3D(0, 0, 0.06)))), HazardPolicy.Default);
+        string note = Assert.Single(near.Response.ModelNotes, n => n.StartsWith("orientation: the field varies through the body (by ", StringComparison.Ordinal));
+        Assert.Contains("one turned toward the source may heat it more", note, StringComparison.Ordinal);
+        InductionAssessment uniform = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, mains)), HazardPolicy.Default);
+        Assert.DoesNotContain(uniform.Response.ModelNotes, n => n.StartsWith("orientation:", StringComparison.Ordinal));
+        InductionAssessment given = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, coil, new Placement(new Vector3D(0, 0, 0.06), Vector3D.UnitZ))), HazardPolicy.Default);
+        Assert.DoesNotContain(given.Response.ModelNotes, n => n.StartsWith("orientation:", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void ABodyThatFacesAsGivenOrIsASphereIsJudgedOnceAndTheFingerprintIsTheInputs()
     {
         var mains = FieldSource.Uniform("mains", new SineWaveform(0.01, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
