@@ -91,6 +91,21 @@ internal sealed class EngineContext
             }
 
             FieldDirection = b[0].Length > 0 && b[0].IsFinite ? b[0].Normalized() : Normal;
+            CentreField = b;
+            if (scenario.Placement.Normal is null && (scenario.Placement.TiltDegrees ?? 0) == 0 && loop is not SphereBody && !scenario.Item.IsSplit && !scenario.Item.Material.IsFerromagnetic)
+            {
+                // The engine chose the orientation, so the item may sit turned from it: the torque on its moment is
+                // judged at the worst turn (Torque check). In a field of one direction the moment falls as the cosine of
+                // the turn and the field across it grows as the sine: at most half of |m| |B|, at 45 degrees; where the
+                // field turns as it alternates, |m| |B| itself bounds it.
+                bool oneDirection = true;
+                foreach (Vector3D v in b)
+                {
+                    oneDirection &= v.Cross(FieldDirection).Length <= 1e-9 * v.Length;
+                }
+
+                TiltTorqueFactor = oneDirection ? 0.5 : 1;
+            }
             if (loop is BodyGeometry body)
             {
                 // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the
@@ -222,6 +237,15 @@ internal sealed class EngineContext
 
     /// <summary>The cross-axis low-frequency loss factor at the reference resistivity, W per (T/s)^2 (zero for a loop).</summary>
     public double CrossPowerFactor { get; private set; }
+
+    /// <summary>b_j, each term's field per unit drive at the centre.</summary>
+    public Vector3D[] CentreField { get; private set; } = Array.Empty<Vector3D>();
+
+    /// <summary>
+    /// For an item whose orientation the engine chose (no normal, no tilt): the largest torque on its moment as it
+    /// turns, per |m| |B| (0.5 in a field of one direction, at 45 degrees; 1, a bound, where the field turns); 0 otherwise.
+    /// </summary>
+    public double TiltTorqueFactor { get; private set; }
 
     public bool FieldFailed { get; }
 

@@ -143,7 +143,10 @@ internal static class EngineMechanics
             }
         }
 
-        return SteadyMechanics.Of(modal, amplitudes, drives, c.TorqueField);
+        SteadyMechanics mechanics = SteadyMechanics.Of(modal, amplitudes, drives, c.TorqueField);
+        return c.TiltTorqueFactor > 0
+            ? mechanics with { PeakMomentField = SteadyMechanics.MomentField(modal, amplitudes, drives, c.CentreField) }
+            : mechanics;
     }
 
     /// <summary>

@@ -214,6 +214,7 @@ public static class InductionEngine
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
             Forces = (mechanics.PeakForce, null, mechanics.PeakTorqueNewtonMeters, mechanics.MeanForce),
+            PeakTorqueTurnedNewtonMeters = c.TiltTorqueFactor > 0 ? c.TiltTorqueFactor * mechanics.PeakMomentField : null,
         };
     }
 
@@ -399,6 +400,7 @@ public static class InductionEngine
                 CrossPowerFactor = c.CrossPowerFactor,
                 DriveValues = values,
                 TorqueField = c.TorqueField,
+                CentreField = c.TiltTorqueFactor > 0 ? c.CentreField : null,
             }.Run(drives, Emf, breakpoints, begin, end, c.Start, cancellation);
         NoteHowItEnded(c, run.MeltedAtSeconds, run.BudgetExceeded, "the circuit solver");
 
@@ -430,6 +432,7 @@ public static class InductionEngine
             CircuitSeries = run.Circuit,
             PathCount = c.Paths.Paths!.Count,
             Forces = (run.PeakForce, run.Impulse, run.PeakTorqueNewtonMeters, null),
+            PeakTorqueTurnedNewtonMeters = c.TiltTorqueFactor > 0 ? c.TiltTorqueFactor * run.PeakMomentField : null,
         };
     }
 

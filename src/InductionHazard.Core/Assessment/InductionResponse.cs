@@ -153,6 +153,15 @@ public sealed record InductionResponse
     /// <summary>The largest torque on the item's magnetic moment, |m x B|, N m.</summary>
     public double PeakTorqueNewtonMeters { get; init; }
 
+    /// <summary>
+    /// For an item placed without a normal or a tilt (its orientation the engine's choice): the largest torque on its
+    /// induced moment were it turned from that orientation, N m: in a field of one direction at 45 degrees, half the
+    /// largest |m| |B| (the moment falls as the cosine of the turn, the field across it grows as the sine); where the field
+    /// turns as it alternates, |m| |B| itself, a bound. Null when the orientation was given, or the item is split,
+    /// ferromagnetic or a sphere.
+    /// </summary>
+    public double? PeakTorqueTurnedNewtonMeters { get; init; }
+
     /// <summary>For a pulse train: the temperature the item would settle at just after each pulse if the train went on, °C; null otherwise (or when nothing cools it).</summary>
     public double? PeriodicSteadyStateCelsius { get; init; }
 

@@ -12,17 +12,24 @@ internal sealed class StepMechanics
     private readonly ModalCircuit _circuit;
     private readonly Func<double, double>[]? _values;
     private readonly Vector3D[]? _torqueField;
+    private readonly Vector3D[]? _centreField;
     private readonly double[] _drive;
     private Vector3D _last;
 
     // Squared lengths compared (the square root is monotone): no root per step.
-    private double _peakForceSquared, _peakTorqueSquared;
+    private double _peakForceSquared, _peakTorqueSquared, _peakMomentFieldSquared;
 
-    public StepMechanics(ModalCircuit circuit, Func<double, double>[]? values, Vector3D[]? torqueField, int terms)
+    /// <param name="circuit">The modes.</param>
+    /// <param name="values">d_j(t), each term's drive as the item sees it.</param>
+    /// <param name="torqueField">n x b_j per term (null for no torque).</param>
+    /// <param name="terms">The number of terms.</param>
+    /// <param name="centreField">b_j, each term's field per unit drive at the centre, when the largest |m| |B| is wanted (an item whose orientation the engine chose); null otherwise.</param>
+    public StepMechanics(ModalCircuit circuit, Func<double, double>[]? values, Vector3D[]? torqueField, int terms, Vector3D[]? centreField = null)
     {
         _circuit = circuit;
         _values = values;
         _torqueField = torqueField;
+        _centreField = circuit.MomentWeights is null ? null : centreField;
         _drive = new double[terms];
         Inert = NoForceOrTorque(circuit, torqueField);
     }
@@ -41,6 +48,9 @@ internal sealed class StepMechanics
     public Vector3D Impulse { get; private set; }
 
     public double PeakTorque => Math.Sqrt(_peakTorqueSquared);
+
+    /// <summary>The largest |m| |B| at the steps' ends, the moment's size times the field's at the centre, N m; 0 when not wanted.</summary>
+    public double PeakMomentField => Math.Sqrt(_peakMomentFieldSquared);
 
     /// <summary>
     /// True when every force coupling and every torque field is zero or absent (a loop in a uniform field facing it):
@@ -76,7 +86,7 @@ internal sealed class StepMechanics
         // An inert item's force and torque are zero at every step while its amplitudes are finite (every coupling and
         // field is zero), so the drives are not read; amplitudes that are not finite still go through, and carry NaN
         // into the impulse and the torque as they always did.
-        if (_values is not { } values || (Inert && Finite.All(z)))
+        if (_values is not { } values || (Inert && _centreField is null && Finite.All(z)))
         {
             return;
         }
@@ -84,6 +94,15 @@ internal sealed class StepMechanics
         for (int j = 0; j < _drive.Length; j++)
         {
             _drive[j] = values[j](driveAt);
+        }
+
+        if (_centreField is { } b)
+        {
+            RecordMomentField(z, b);
+            if (Inert && Finite.All(z))
+            {
+                return;
+            }
         }
 
         if (_circuit.ForceCoupling is { } g)
@@ -131,5 +150,24 @@ internal sealed class StepMechanics
 
             _peakTorqueSquared = Math.Max(_peakTorqueSquared, torque.Dot(torque));
         }
+    }
+
+    private void RecordMomentField(double[] z, Vector3D[] b)
+    {
+        double[] a = _circuit.MomentWeights!;
+        double moment = 0;
+        for (int k = 0; k < z.Length; k++)
+        {
+            moment += a[k] * z[k];
+        }
+
+        Vector3D field = Vector3D.Zero;
+        for (int j = 0; j < _drive.Length; j++)
+        {
+            field += _drive[j] * b[j];
+        }
+
+        double squared = moment * moment * field.Dot(field);
+        _peakMomentFieldSquared = double.IsNaN(squared) ? double.NaN : Math.Max(_peakMomentFieldSquared, squared);
     }
 }

@@ -142,6 +142,9 @@ public sealed class TransientPathSolver
     /// <summary>n x b_j: the item's normal crossed with each term's field per unit drive at its centre; the torque on the moment m n is m n x B.</summary>
     public Vector3D[]? TorqueField { get; init; }
 
+    /// <summary>b_j, each term's field per unit drive at the centre, when the run is to find the largest |m| |B| (an item whose orientation the engine chose); null otherwise.</summary>
+    public Vector3D[]? CentreField { get; init; }
+
     /// <summary>Runs one loop driven by one emf (coupling 1): the thin-loop case.</summary>
     public TransientRun Run(Func<double, double> emf, IEnumerable<double> breakpoints, double tStart, double tEnd, double celsius0, CancellationToken cancellation) =>
         Run(new[] { emf }, emf, breakpoints, tStart, tEnd, celsius0, cancellation);
@@ -168,7 +171,7 @@ public sealed class TransientPathSolver
         var work = new StepWork(modes, terms);
         double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
-        var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms);
+        var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms, CentreField);
         bool onePathInert = modes == 1 && mechanics.Inert;
         int steps = 0;
         bool budgetExceeded = false;
@@ -358,6 +361,7 @@ public sealed class TransientPathSolver
             PeakForceSeconds = mechanics.PeakForceAt,
             Impulse = mechanics.Impulse,
             PeakTorqueNewtonMeters = mechanics.PeakTorque,
+            PeakMomentField = mechanics.PeakMomentField,
             Steps = steps,
             BudgetExceeded = budgetExceeded,
             MeltedAtSeconds = melted,

@@ -139,3 +139,86 @@ public sealed class BodyOrientationTests
         Assert.NotEqual(new Scenario(rod, mains, new Placement(Vector3D.Zero, judged.Response.Normal)).Fingerprint(), scenario.Fingerprint());
     }
 }
+
+/// <summary>The torque on an item whose orientation the engine chose, judged with the item turned from it.</summary>
+public sealed class TurnedTorqueTests
+{
+    private readonly ITestOutputHelper _out;
+
+    public TurnedTorqueTests(ITestOutputHelper output) => _out = output;
+
+    [Validates("a ring given no normal in a slow ramp: the torque judged, with the ring turned from facing the field, against m B sin(theta) cos(theta) at 45 degrees with m = I A and I = A B' / R, and against the engine's own m x B with the ring given each normal 0 to 90 degrees from the field", "textbook: the moment of a current loop m = I A, the torque m x B, the resistive-limit current emf / R (L / R = 91 us against a 1 s ramp)", "1e-3")]
+    [Fact]
+    public void ARingGivenNoNormalIsJudgedForTheTorqueItWouldFeelTurnedFromTheField()
+    {
+        // Facing the field the ring's moment lies along it and feels no torque; turned by theta the flux, the current
+        // and the moment fall as cos(theta) and the field across the moment grows as sin(theta): the torque is
+        // I A B sin(theta) cos(theta), largest at 45 degrees, half of I A B. At the ramp's end I = A B' / R and B = 1 T.
+        ConductiveItem ring = Fixtures.Ring(contact: "Free");
+        var ramp = FieldSource.Uniform("ramp", new RampWaveform(0, 1, 1, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        InductionResponse chosen = InductionEngine.Respond(new Scenario(ring, ramp));
+        double area = chosen.LoopAreaSquareMeters, current = area * 1 / chosen.ResistanceOhms;
+        double textbook = 0.5 * current * area * 1;
+        Assert.Equal(0, chosen.PeakTorqueNewtonMeters);
+        Assert.NotNull(chosen.PeakTorqueTurnedNewtonMeters);
+        Within.Relative(textbook, chosen.PeakTorqueTurnedNewtonMeters!.Value, 1e-3, "the torque turned 45 degrees");
+
+        double largest = 0;
+        for (int degrees = 0; degrees <= 90; degrees += 5)
+        {
+            double theta = degrees * Math.PI / 180;
+            InductionResponse given = InductionEngine.Respond(new Scenario(ring, ramp, new Placement(Vector3D.Zero, new Vector3D(Math.Sin(theta), 0, Math.Cos(theta)))));
+            Assert.Null(given.PeakTorqueTurnedNewtonMeters);
+            largest = Math.Max(largest, given.PeakTorqueNewtonMeters);
+        }
+
+        _out.WriteLine($"textbook {textbook:E5} N m, judged {chosen.PeakTorqueTurnedNewtonMeters:E5} N m, largest over normals given {largest:E5} N m");
+        Within.Relative(largest, chosen.PeakTorqueTurnedNewtonMeters.Value, 1e-3, "the largest torque over the normals given");
+
+        MechanismResult torque = HazardAssessor.Assess(chosen, HazardPolicy.Default).Mechanisms.Single(m => m.Mechanism == HazardMechanism.Torque);
+        Assert.True(torque.Applies);
+        Assert.Equal("peak torque, the item turned", torque.Quantity);
+        Assert.Contains("with the item turned from the orientation that links the largest flux change", torque.Detail, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ASineDrivesTheSameRuleAndAFieldThatTurnsIsBoundedByTheWholeProduct()
+    {
+        // At 50 Hz the ring's current leads the field by nearly 90 degrees: |m| |B| peaks where both are at 1/sqrt(2) of
+        // their peaks, so the turned torque is a quarter of I_peak A B_peak, which the explicit normals confirm.
+        ConductiveItem ring = Fixtures.Ring(contact: "Free");
+        var sine = FieldSource.Uniform("sine", new SineWaveform(0.1, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        InductionResponse chosen = InductionEngine.Respond(new Scenario(ring, sine));
+        double largest = 0;
+        for (int degrees = 0; degrees <= 90; degrees += 5)
+        {
+            double theta = degrees * Math.PI / 180;
+            largest = Math.Max(largest, InductionEngine.Respond(new Scenario(ring, sine, new Placement(Vector3D.Zero, new Vector3D(Math.Sin(theta), 0, Math.Cos(theta))))).PeakTorqueNewtonMeters);
+        }
+
+        Within.Relative(largest, chosen.PeakTorqueTurnedNewtonMeters!.Value, 2e-3, "the sine's torque turned");
+
+        // Two uniform terms at right angles a quarter period apart: a field that turns. Its bound is the whole |m| |B|,
+        // at least what any normal given feels.
+        var turning = FieldSource.Combine(new[]
+        {
+            FieldSource.Uniform("x", new SineWaveform(0.1, 50, drive: DriveKind.FluxDensity), Vector3D.UnitX),
+            FieldSource.Uniform("y", new SineWaveform(0.05, 50, phaseRadians: Math.PI / 2, drive: DriveKind.FluxDensity), Vector3D.UnitY),
+        });
+        InductionResponse turned = InductionEngine.Respond(new Scenario(ring, turning));
+        double any = 0;
+        for (int k = 0; k < 24; k++)
+        {
+            double phi = Math.PI * k / 24;
+            for (int degrees = 0; degrees <= 90; degrees += 15)
+            {
+                double theta = degrees * Math.PI / 180;
+                var normal = new Vector3D(Math.Sin(theta) * Math.Cos(phi), Math.Sin(theta) * Math.Sin(phi), Math.Cos(theta));
+                any = Math.Max(any, InductionEngine.Respond(new Scenario(ring, turning, new Placement(Vector3D.Zero, normal))).PeakTorqueNewtonMeters);
+            }
+        }
+
+        _out.WriteLine($"turning field: bound {turned.PeakTorqueTurnedNewtonMeters:E5} N m, largest over normals given {any:E5} N m");
+        Assert.True(turned.PeakTorqueTurnedNewtonMeters >= any, "bound " + turned.PeakTorqueTurnedNewtonMeters + " below " + any);
+    }
+}

@@ -114,14 +114,23 @@ public class HazardAssessorTests
         Assert.StartsWith("No action needed", clear.Action, StringComparison.Ordinal);
 
         // A field that burns a worn ring is far above the wearer's own reference level: people are kept out, and the
-        // action still says the ring would burn.
+        // action still says to take the ring off, for the worst of its own hazards: the ring turned from the orientation
+        // that links the most flux would be twisted harder still than it burns.
         InductionAssessment burn = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.5, 10000)));
         Assert.Equal(Verdict.Hazard, burn.Verdict);
         Assert.Equal(HazardMechanism.Exposure, burn.GoverningMechanism);
+        Assert.Equal(Verdict.Hazard, burn.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn).Verdict);
+        Assert.True(burn.TorqueMargin < burn.BurnMargin);
         Assert.StartsWith("Keep people out of this place", burn.Action, StringComparison.Ordinal);
         Assert.Contains("take it off", burn.Action, StringComparison.Ordinal);
-        Assert.Contains("burn", burn.Action, StringComparison.Ordinal);
+        Assert.Contains("twist", burn.Action, StringComparison.Ordinal);
         Assert.Equal("Keep people out", burn.ActionBrief);
+
+        // Given facing the field, it is not twisted, and the action says the ring would burn.
+        InductionAssessment facing = Assess(Fixtures.Respond(Fixtures.Ring(), Fixtures.UniformSine(0.5, 10000), normal: InductionHazard.Quantities.Vector3D.UnitZ));
+        Assert.Null(facing.TorqueMargin);
+        Assert.Contains("take it off", facing.Action, StringComparison.Ordinal);
+        Assert.Contains("burn", facing.Action, StringComparison.Ordinal);
 
         InductionAssessment loose = Assess(Fixtures.Respond(Fixtures.Ring(contact: "Free"), Fixtures.UniformSine(0.5, 10000)));
         Assert.Equal(Verdict.Hazard, loose.Verdict);

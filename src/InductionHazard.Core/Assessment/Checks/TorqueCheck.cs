@@ -39,7 +39,12 @@ public sealed class TorqueCheck : IHazardCheck
             return MechanismResult.Indeterminate(Mechanism, Sources, issues);
         }
 
-        if (response.PeakTorqueNewtonMeters == 0)
+        // Placed without a normal, the item may sit turned from the orientation the engine chose: its torque is judged
+        // at the worst turn where that exceeds the torque as placed (which is nil facing a field of one direction).
+        double placed = response.PeakTorqueNewtonMeters;
+        bool turned = response.PeakTorqueTurnedNewtonMeters is { } t && !(t <= placed);
+        double torque = turned ? response.PeakTorqueTurnedNewtonMeters!.Value : placed;
+        if (torque == 0)
         {
             return MechanismResult.NotApplicable(Mechanism, magnetised
                 ? "a sphere of soft ferromagnetic material has no preferred axis, so the field does not twist it"
@@ -47,9 +52,11 @@ public sealed class TorqueCheck : IHazardCheck
         }
 
         double gravitational = response.MassKilograms * PhysicalConstants.StandardGravity * response.Item.Loop.LargestDimensionMeters / 2;
-        double margin = VerdictRules.Margin(gravitational, response.PeakTorqueNewtonMeters);
+        double margin = VerdictRules.Margin(gravitational, torque);
         return MechanismResult.Judged(
-            Mechanism, "peak torque", response.PeakTorqueNewtonMeters, gravitational, "N·m", margin, policy.SafetyFactor, Sources, (magnetised, response.PeakTorqueNewtonMeters, gravitational),
-            static f => (f.magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(f.PeakTorqueNewtonMeters, "N·m") + " against the gravitational torque m g L/2 = " + SiFormat.Format(f.gravitational, "N·m"));
+            Mechanism, turned ? "peak torque, the item turned" : "peak torque", torque, gravitational, "N·m", margin, policy.SafetyFactor, Sources, (magnetised, torque, gravitational, turned, placed),
+            static f => (f.magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(f.torque, "N·m")
+                + (f.turned ? " with the item turned from the orientation that links the largest flux change (its orientation not given: " + SiFormat.Format(f.placed, "N·m") + " as it faces it)" : string.Empty)
+                + " against the gravitational torque m g L/2 = " + SiFormat.Format(f.gravitational, "N·m"));
     }
 }
