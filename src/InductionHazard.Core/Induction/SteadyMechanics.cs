@@ -20,14 +20,14 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
     private const int Samples = 64;
 
     /// <summary>The sine and cosine of each sample's phase, 2 pi n / 64, found once.</summary>
-    private static readonly double[] Sines = Table(Math.Sin), Cosines = Table(Math.Cos);
+    private static readonly double[] Sines = Table(Math.Sin, Samples), Cosines = Table(Math.Cos, Samples);
 
-    private static double[] Table(Func<double, double> f)
+    private static double[] Table(Func<double, double> f, int samples)
     {
-        var values = new double[Samples];
-        for (int n = 0; n < Samples; n++)
+        var values = new double[samples];
+        for (int n = 0; n < samples; n++)
         {
-            values[n] = f(2 * Math.PI * n / Samples);
+            values[n] = f(2 * Math.PI * n / samples);
         }
 
         return values;
@@ -167,18 +167,7 @@ public readonly record struct SteadyMechanics(Vector3D PeakForce, Vector3D MeanF
     /// <summary>cos(4 pi / 256): the least a degree-4 product can fall to half a sample's step from its peak, relative.</summary>
     private static readonly double TurningStep = Math.Cos(4 * Math.PI / TurningSamples);
 
-    private static readonly double[] TurningSines = Turning(Math.Sin), TurningCosines = Turning(Math.Cos);
-
-    private static double[] Turning(Func<double, double> f)
-    {
-        var values = new double[TurningSamples];
-        for (int n = 0; n < TurningSamples; n++)
-        {
-            values[n] = f(2 * Math.PI * n / TurningSamples);
-        }
-
-        return values;
-    }
+    private static readonly double[] TurningSines = Table(Math.Sin, TurningSamples), TurningCosines = Table(Math.Cos, TurningSamples);
 
     /// <summary>
     /// True when the loop below would give exactly zero: every force coupling and torque field zero (or absent), and
