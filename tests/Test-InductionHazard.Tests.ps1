@@ -436,6 +436,20 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             (Get-InductionResponse -Item $rod -Source $mains).Orientation | Should -Match 'facing the largest flux change, normal \(0, 0, 1\) \(an assessment judges its axis across it too'
         }
 
+        It 'judges a ring given no normal for the torque it would feel turned from the field, and not one given its normal' {
+            $ramp = New-FieldWaveform -Ramp -From '0 T' -To '1 T' -Duration '10 ms' | New-FieldSource -Uniform -Name 'Ramp bore'
+            $ring = New-ConductiveItem -Name 'Loose ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Contact Free
+            $chosen = Test-InductionHazard -Item $ring -Source $ramp -WarningAction SilentlyContinue
+            $facing = Test-InductionHazard -Item $ring -Source $ramp -Normal z -WarningAction SilentlyContinue
+            $chosen.Response.PeakTorqueNewtonMeters | Should -Be 0
+            $chosen.Response.PeakTorqueTurnedNewtonMeters | Should -BeGreaterThan 0
+            $chosen.TorqueMargin | Should -BeLessThan 1
+            ($chosen.Mechanisms | Where-Object Mechanism -EQ 'Torque').Detail | Should -Match 'with the item turned from the orientation that links the largest flux change'
+            $facing.Response.PeakTorqueTurnedNewtonMeters | Should -BeNullOrEmpty
+            $facing.TorqueMargin | Should -BeNullOrEmpty -Because 'facing the field as given, its moment lies along it'
+            (Get-InductionResponse -Item $ring -Source $ramp).PeakTorqueTurnedNewtonMeters | Should -Be $chosen.Response.PeakTorqueTurnedNewtonMeters
+        }
+
         It 'refuses a field that belongs to another shape, naming it' {
             { New-ConductiveItem -Shape Disc -Material Copper -Diameter '50 mm' -Thickness '3 mm' -WireDiameter '2 mm' } |
                 Should -Throw -ExpectedMessage '*WireDiameter*does not apply to a disc*'
