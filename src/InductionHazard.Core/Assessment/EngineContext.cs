@@ -106,6 +106,7 @@ internal sealed class EngineContext
 
                 TiltTorqueFactor = oneDirection ? 0.5 : 1;
             }
+
             if (loop is BodyGeometry body)
             {
                 // The field across a body's axis drives eddies the coaxial filaments do not carry (section 5 of the
