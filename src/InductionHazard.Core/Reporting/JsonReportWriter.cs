@@ -125,6 +125,7 @@ public static class JsonReportWriter
         Number(j, "energyDissipatedJoules", a.EnergyDissipatedJoules);
         Number(j, "peakForceNewtons", a.PeakForceNewtons);
         Number(j, "peakTorqueNewtonMeters", r.PeakTorqueNewtonMeters);
+        Number(j, "peakTorqueTurnedNewtonMeters", r.PeakTorqueTurnedNewtonMeters);
         Number(j, "resistanceOhms", r.ResistanceOhms);
         Number(j, "inductanceHenries", r.InductanceHenries);
         Number(j, "massKilograms", r.MassKilograms);

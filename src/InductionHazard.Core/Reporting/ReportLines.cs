@@ -110,6 +110,7 @@ public static class ReportLines
         Add("Impulse", r.ImpulseNewtonSeconds, "N·s");
         Add("Launch speed if loose", r.LaunchSpeedMetersPerSecond, "m/s");
         Add("Peak torque", r.PeakTorqueNewtonMeters, "N·m");
+        Add("Peak torque, the item turned (its orientation not given)", r.PeakTorqueTurnedNewtonMeters, "N·m");
         Add("Braking force", r.BrakingForceNewtons, "N");
         Add("Pull toward the source", r.AttractionForceNewtons, "N");
         return lines;

@@ -29,6 +29,22 @@ public sealed class ReportWriterTests
     private static HazardReport Report(params InductionAssessment[] assessments) =>
         new(assessments, null, "Test site", new DateTime(2026, 12, 2, 9, 30, 0, DateTimeKind.Utc), new[] { "=cmd|' /C calc'!A0 (a hostile row): Diameter is missing" });
 
+    [Fact]
+    public void AnItemGivenNoNormalShowsItsTorqueTurnedAmongItsFiguresAndInTheJson()
+    {
+        // Facing the field its torque is nil; the Torque check judges it turned, and the figures say what was judged.
+        var ramp = InductionHazard.Fields.FieldSource.Uniform("ramp", new InductionHazard.Waveforms.RampWaveform(0, 1, 0.01, drive: InductionHazard.Waveforms.DriveKind.FluxDensity), InductionHazard.Quantities.Vector3D.UnitZ);
+        InductionAssessment chosen = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Fixtures.Ring(contact: "Free"), ramp)), HazardPolicy.Default);
+        double turned = chosen.Response.PeakTorqueTurnedNewtonMeters!.Value;
+        string figure = InductionHazard.Quantities.SiFormat.Format(turned, "N·m");
+        Assert.Contains("| Peak torque, the item turned (its orientation not given) | " + figure + " |", Write(Report(chosen), (r, w) => MarkdownReportWriter.Write(r, w)), StringComparison.Ordinal);
+        using JsonDocument doc = JsonDocument.Parse(Write(Report(chosen), (r, w) => JsonReportWriter.Write(r, w, includeSeries: false)));
+        Assert.Contains(turned.ToString("R", CultureInfo.InvariantCulture), doc.RootElement.GetRawText(), StringComparison.Ordinal);
+
+        InductionAssessment given = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Fixtures.Ring(contact: "Free"), ramp, new Placement(InductionHazard.Quantities.Vector3D.Zero, InductionHazard.Quantities.Vector3D.UnitZ))), HazardPolicy.Default);
+        Assert.DoesNotContain("the item turned", Write(Report(given), (r, w) => MarkdownReportWriter.Write(r, w)), StringComparison.Ordinal);
+    }
+
     private static string Write(HazardReport report, Action<HazardReport, TextWriter> write)
     {
         using var w = new StringWriter(CultureInfo.InvariantCulture);
