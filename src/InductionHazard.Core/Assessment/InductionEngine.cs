@@ -88,6 +88,13 @@ public static class InductionEngine
             others[k] = Respond(scenario.With(Placement.AcrossAxis(scenario.Placement, across[k], along)), cancellation);
         }
 
+        // The torque turned from the orientation the engine chose is the body's whichever of the three is kept: its
+        // orientation was not given, and turning it is what the figure covers.
+        for (int k = 0; k < others.Length; k++)
+        {
+            others[k] = others[k] with { PeakTorqueTurnedNewtonMeters = response.PeakTorqueTurnedNewtonMeters };
+        }
+
         // Where the field varies through the body, an orientation between these (its length turned toward the source)
         // may take more: said beside whichever the assessment keeps.
         double variation = CrossAxisField.Variation(scenario.Source, scenario.Placement.Centre, along, (BodyGeometry)scenario.Item.Loop);

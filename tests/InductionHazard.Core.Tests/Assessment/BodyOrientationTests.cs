@@ -166,6 +166,14 @@ public sealed class BodyOrientationTests
         InductionAssessment judged = HazardAssessor.Assess(InductionEngine.Respond(scenario), HazardPolicy.Default);
         Assert.StartsWith("axis across", judged.Orientation, StringComparison.Ordinal);
         Assert.Equal(scenario.Fingerprint(), judged.Response.Scenario.Fingerprint());
+
+        // Kept across the field, it still shows the torque it would feel turned: its orientation was not given.
+        double? turned = InductionEngine.Respond(scenario).PeakTorqueTurnedNewtonMeters;
+        Assert.True(turned > 0);
+        Assert.Equal(turned, judged.Response.PeakTorqueTurnedNewtonMeters);
+        InductionAssessment held = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Held("Cylinder", "Copper", 0.01, ("Length", 0.12)), mains)), HazardPolicy.Default);
+        Assert.StartsWith("axis across", held.Orientation, StringComparison.Ordinal);
+        Assert.Equal("peak torque, the item turned", held.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Torque).Quantity);
         Assert.NotEqual(new Scenario(rod, mains, new Placement(Vector3D.Zero, judged.Response.Normal)).Fingerprint(), scenario.Fingerprint());
     }
 }

@@ -56,7 +56,7 @@ public sealed class TorqueCheck : IHazardCheck
         return MechanismResult.Judged(
             Mechanism, turned ? "peak torque, the item turned" : "peak torque", torque, gravitational, "N·m", margin, policy.SafetyFactor, Sources, (magnetised, torque, gravitational, turned, placed),
             static f => (f.magnetised ? "twist of its magnetisation, at most V M |B| = " : "peak torque ") + SiFormat.Format(f.torque, "N·m")
-                + (f.turned ? " with the item turned from the orientation that links the largest flux change (its orientation not given: " + SiFormat.Format(f.placed, "N·m") + " as it faces it)" : string.Empty)
+                + (f.turned ? " with the item turned from the orientation that links the largest flux change (its orientation not given; " + SiFormat.Format(f.placed, "N·m") + " as placed)" : string.Empty)
                 + " against the gravitational torque m g L/2 = " + SiFormat.Format(f.gravitational, "N·m"));
     }
 }
