@@ -85,14 +85,12 @@ public static class InductionEngine
         var others = new InductionResponse[across.Length];
         for (int k = 0; k < across.Length; k++)
         {
-            others[k] = Respond(scenario.With(Placement.AcrossAxis(scenario.Placement, across[k], along)), cancellation);
-        }
-
-        // The torque turned from the orientation the engine chose is the body's whichever of the three is kept: its
-        // orientation was not given, and turning it is what the figure covers.
-        for (int k = 0; k < others.Length; k++)
-        {
-            others[k] = others[k] with { PeakTorqueTurnedNewtonMeters = response.PeakTorqueTurnedNewtonMeters };
+            // The torque turned from the orientation the engine chose is the body's whichever of the three is kept: its
+            // orientation was not given, and turning it is what the figure covers.
+            others[k] = Respond(scenario.With(Placement.AcrossAxis(scenario.Placement, across[k], along)), cancellation) with
+            {
+                PeakTorqueTurnedNewtonMeters = response.PeakTorqueTurnedNewtonMeters,
+            };
         }
 
         // Where the field varies through the body, an orientation between these (its length turned toward the source)
