@@ -17,7 +17,7 @@ internal sealed class StepMechanics
     private Vector3D _last;
 
     // Squared lengths compared (the square root is monotone): no root per step.
-    private double _peakForceSquared, _peakTorqueSquared, _peakMomentFieldSquared;
+    private double _peakForceSquared, _peakTorqueSquared, _peakMomentField, _lastField;
 
     /// <param name="circuit">The modes.</param>
     /// <param name="values">d_j(t), each term's drive as the item sees it.</param>
@@ -49,8 +49,8 @@ internal sealed class StepMechanics
 
     public double PeakTorque => Math.Sqrt(_peakTorqueSquared);
 
-    /// <summary>The largest |m| |B| at the steps' ends, the moment's size times the field's at the centre, N m; 0 when not wanted.</summary>
-    public double PeakMomentField => Math.Sqrt(_peakMomentFieldSquared);
+    /// <summary>The largest |m| |B| over the run, bounded step by step (the moment's largest size in a step times the field's larger at its ends), N m; 0 when not wanted.</summary>
+    public double PeakMomentField => _peakMomentField;
 
     /// <summary>
     /// True when every force coupling and every torque field is zero or absent (a loop in a uniform field facing it):
@@ -80,8 +80,27 @@ internal sealed class StepMechanics
         return true;
     }
 
+    /// <summary>The field's size at the centre where the run starts, for the first step's largest |m| |B| (when wanted).</summary>
+    public void StartAt(double t)
+    {
+        if (_centreField is { } b && _values is { } values)
+        {
+            for (int j = 0; j < _drive.Length; j++)
+            {
+                _drive[j] = values[j](t);
+            }
+
+            _lastField = FieldSize(b);
+        }
+    }
+
     /// <summary>Records the step ending at t (the drives read at <paramref name="driveAt"/>, just inside the step).</summary>
-    public void Record(double[] z, double driveAt, double t, double h)
+    /// <param name="z">The modal amplitudes at the step's end.</param>
+    /// <param name="driveAt">Where the drives are read.</param>
+    /// <param name="t">The step's end.</param>
+    /// <param name="h">The step.</param>
+    /// <param name="momentPeak">The moment's largest size within the step, when the largest |m| |B| is wanted; NaN otherwise.</param>
+    public void Record(double[] z, double driveAt, double t, double h, double momentPeak = double.NaN)
     {
         // An inert item's force and torque are zero at every step while its amplitudes are finite (every coupling and
         // field is zero), so the drives are not read; amplitudes that are not finite still go through, and carry NaN
@@ -98,7 +117,7 @@ internal sealed class StepMechanics
 
         if (_centreField is { } b)
         {
-            RecordMomentField(z, b);
+            RecordMomentField(momentPeak, b);
             if (Inert && Finite.All(z))
             {
                 return;
@@ -152,22 +171,29 @@ internal sealed class StepMechanics
         }
     }
 
-    private void RecordMomentField(double[] z, Vector3D[] b)
+    /// <summary>
+    /// The step's bound on |m| |B|: the moment's largest size within it times the field's larger size at its ends (the
+    /// field runs about linearly over a step: a curved drive takes short steps). A bound, never a sample that misses a
+    /// peak between steps' ends.
+    /// </summary>
+    private void RecordMomentField(double momentPeak, Vector3D[] b)
     {
-        double[] a = _circuit.MomentWeights!;
-        double moment = 0;
-        for (int k = 0; k < z.Length; k++)
-        {
-            moment += a[k] * z[k];
-        }
+        double field = FieldSize(b);
+        double larger = Math.Max(field, _lastField);
+        _lastField = field;
+        double product = momentPeak * (double.IsNaN(field) ? double.NaN : larger);
+        _peakMomentField = double.IsNaN(product) || double.IsNaN(_peakMomentField) ? double.NaN : Math.Max(_peakMomentField, product);
+    }
 
+    /// <summary>|sum_j d_j b_j|, the field's size at the centre for the drives last read.</summary>
+    private double FieldSize(Vector3D[] b)
+    {
         Vector3D field = Vector3D.Zero;
         for (int j = 0; j < _drive.Length; j++)
         {
             field += _drive[j] * b[j];
         }
 
-        double squared = moment * moment * field.Dot(field);
-        _peakMomentFieldSquared = double.IsNaN(squared) ? double.NaN : Math.Max(_peakMomentFieldSquared, squared);
+        return field.Length;
     }
 }

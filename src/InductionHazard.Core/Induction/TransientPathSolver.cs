@@ -172,6 +172,8 @@ public sealed class TransientPathSolver
         double t = tStart, temperature = celsius0, energy = 0, total = 0, lastPower = 0;
         (double current, double at) peak = (0, tStart);
         var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms, CentreField);
+        double[]? momentWeights = CentreField is null ? null : _circuit.MomentWeights;
+        mechanics.StartAt(tStart);
         bool onePathInert = modes == 1 && mechanics.Inert;
         int steps = 0;
         bool budgetExceeded = false;
@@ -287,6 +289,10 @@ public sealed class TransientPathSolver
                 }
 
                 (double stepPeak, double stepPeakAt) = PeakWithin(z, work, s, h, total);
+                // The moment's largest size within the step, for the torque were the item turned (ends and interior alike).
+                double momentPeak = momentWeights is null ? double.NaN
+                    : modes == 1 ? Math.Abs(stepPeak * momentWeights[0] / _circuit.TotalWeights[0])
+                    : Math.Abs(PeakWithin(z, work, s, h, Weighted(z, momentWeights), momentWeights).Current);
                 for (int k = 0; k < modes; k++)
                 {
                     z[k] = work.Next[k];
@@ -302,7 +308,7 @@ public sealed class TransientPathSolver
                 t = toEdge ? edge : t + h;
                 energy += stepEnergy;
                 lastPower = power;
-                mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h);
+                mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h, momentPeak);
                 double moved = Math.Abs(next - temperature);
                 temperature = next;
                 conductance = _thermal.Conductance(temperature);
@@ -392,17 +398,21 @@ public sealed class TransientPathSolver
     /// extremum); for several, the ends or the extremum of the cubic through the total current and its rate at both
     /// ends (each mode's rate from its equation, lambda z' = e - s z), which is within the step's own smoothness.
     /// </summary>
-    private (double Current, double At) PeakWithin(double[] z, StepWork work, double s, double h, double total0)
+    private (double Current, double At) PeakWithin(double[] z, StepWork work, double s, double h, double total0) =>
+        PeakWithin(z, work, s, h, total0, _circuit.TotalWeights);
+
+    /// <summary>The same for any weighted sum of the modes (the total current, or the moment with the moment weights), its value at the step's start given.</summary>
+    private (double Current, double At) PeakWithin(double[] z, StepWork work, double s, double h, double total0, double[] weights)
     {
         if (z.Length == 1)
         {
-            double w = _circuit.TotalWeights[0];
+            double w = weights[0];
             (double peak, double at) = RlStep.Peak(new RlStep.Circuit(_circuit.Lambdas[0], _inverseLambdas[0], s, work.InverseScale), z[0], work.Start[0], work.Slope[0], h, work.Next[0]);
             return (w * peak, at);
         }
 
         double end = 0, rate0 = 0, rate1 = 0;
-        double[] weights = _circuit.TotalWeights, inverseLambdas = _inverseLambdas;
+        double[] inverseLambdas = _inverseLambdas;
         for (int k = 0; k < z.Length; k++)
         {
             double next = work.Next[k];
@@ -434,6 +444,17 @@ public sealed class TransientPathSolver
         }
 
         return (best, bestAt);
+    }
+
+    private static double Weighted(double[] z, double[] weights)
+    {
+        double sum = 0;
+        for (int k = 0; k < z.Length; k++)
+        {
+            sum += weights[k] * z[k];
+        }
+
+        return sum;
     }
 
     /// <summary>The real roots of a u^2 + b u + c = 0, NaN where there is none (the stable form q = -(b + sign(b) sqrt(d))/2).</summary>

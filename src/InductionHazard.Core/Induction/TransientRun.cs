@@ -42,7 +42,7 @@ public sealed class TransientRun
     /// <summary>The largest torque on the item's moment, N m.</summary>
     public double PeakTorqueNewtonMeters { get; init; }
 
-    /// <summary>The largest |m| |B| at the steps' ends, N m, when the run was asked for it (<see cref="TransientPathSolver.CentreField"/>); 0 otherwise.</summary>
+    /// <summary>The largest |m| |B| over the run, bounded step by step, N m, when the run was asked for it (<see cref="TransientPathSolver.CentreField"/>); 0 otherwise.</summary>
     public double PeakMomentField { get; init; }
 
     /// <summary>The steps taken.</summary>
