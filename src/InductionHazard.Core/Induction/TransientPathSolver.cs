@@ -504,16 +504,7 @@ public sealed class TransientPathSolver
         return CrossPowerFactor * h * sum;
     }
 
-    private double Total(double[] z)
-    {
-        double total = 0;
-        for (int k = 0; k < z.Length; k++)
-        {
-            total += _circuit.TotalWeights[k] * z[k];
-        }
-
-        return total;
-    }
+    private double Total(double[] z) => Weighted(z, _circuit.TotalWeights);
 
     private static bool Changed(CircuitSample last, double current, double temperature) =>
         Math.Abs(temperature - last.TemperatureCelsius) > 0.5

@@ -56,25 +56,14 @@ public sealed class BodyOrientationTests
         var furnace = FieldSource.Uniform("furnace", new SineWaveform(0.0015, 9600, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
         var mains = FieldSource.Uniform("mains", new SineWaveform(0.01, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
         var ramp = FieldSource.Uniform("ramp", new RampWaveform(0, 1, 0.01, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
-        yield return new object[] { "rod above a pulse coil", Held("Cylinder", "Copper", 0.01, ("Length", 0.12)), coil, new Vector3D(0.02, 0, 0.1) };
-        yield return new object[] { "rod in mains", Held("Cylinder", "Copper", 0.01, ("Length", 0.12)), mains, Vector3D.Zero };
-        yield return new object[] { "disc at a furnace", Held("Disc", "Aluminium", 0.05, ("Thickness", 0.003)), furnace, Vector3D.Zero };
+        yield return new object[] { "rod above a pulse coil", FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held"), coil, new Vector3D(0.02, 0, 0.1) };
+        yield return new object[] { "rod in mains", FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held"), mains, Vector3D.Zero };
+        yield return new object[] { "disc at a furnace", FilamentModelTests.Body("Disc", "Aluminium", 0.05, thickness: 0.003, contact: "Held"), furnace, Vector3D.Zero };
         yield return new object[] { "tube in a ramp", FilamentModelTests.Body("Tube", "Aluminium", 0.06, length: 0.3, wall: 0.003), ramp, Vector3D.Zero };
-        yield return new object[] { "disc above a pulse coil", Held("Disc", "Aluminium", 0.05, ("Thickness", 0.003)), coil, new Vector3D(0, 0.03, 0.06) };
+        yield return new object[] { "disc above a pulse coil", FilamentModelTests.Body("Disc", "Aluminium", 0.05, thickness: 0.003, contact: "Held"), coil, new Vector3D(0, 0.03, 0.06) };
     }
 
     private static int Severity(Verdict verdict) => verdict switch { Verdict.Hazard => 3, Verdict.Indeterminate => 2, Verdict.Caution => 1, _ => 0 };
-
-    private static ConductiveItem Held(string shape, string material, double diameter, params (string Key, double Value)[] sizes)
-    {
-        var record = new Dictionary<string, object?> { ["Name"] = shape, ["Shape"] = shape, ["Material"] = material, ["Diameter"] = diameter, ["Contact"] = "Held" };
-        foreach (var (key, value) in sizes)
-        {
-            record[key] = value;
-        }
-
-        return ItemRecordReader.Read(record, MaterialLibrary.BuiltIn);
-    }
 
     [Theory]
     [MemberData(nameof(Bodies))]
@@ -114,7 +103,7 @@ public sealed class BodyOrientationTests
         // each of 40 normals spread over the half sphere is solved as given, and none heats the body more than the
         // most the three orientations judged do (to 2 %: the spread's own points miss the top by a little).
         var line = new FieldSource("line", new[] { new SourceTerm(new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ)), new SineWaveform(10000, 50, drive: DriveKind.Current)) });
-        ConductiveItem body = shape == "Cylinder" ? Held("Cylinder", "Copper", 0.01, ("Length", 0.12)) : Held("Disc", "Aluminium", 0.06, ("Thickness", 0.003));
+        ConductiveItem body = shape == "Cylinder" ? FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held") : FilamentModelTests.Body("Disc", "Aluminium", 0.06, thickness: 0.003, contact: "Held");
         var centre = new Vector3D(0.3, 0.1, 0);
         InductionResponse head = InductionEngine.Respond(new Scenario(body, line, new Placement(centre)));
         double judged = new[] { head }.Concat(head.AcrossAxis).Max(r => r.EnergyDissipatedJoules);
@@ -141,7 +130,7 @@ public sealed class BodyOrientationTests
         // Beside a 50 mm coil a 120 mm rod spans fields that differ severalfold; in a uniform field it spans one.
         var coil = new FieldSource("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.05, 10), new SineWaveform(100, 50, drive: DriveKind.Current)) });
         var mains = FieldSource.Uniform("mains", new SineWaveform(0.01, 50, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
-        ConductiveItem rod = Held("Cylinder", "Copper", 0.01, ("Length", 0.12));
+        ConductiveItem rod = FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held");
         InductionAssessment near = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, coil, new Placement(new Vector3D(0, 0, 0.06)))), HazardPolicy.Default);
         string note = Assert.Single(near.Response.ModelNotes, n => n.StartsWith("orientation: the field varies through the body (by ", StringComparison.Ordinal));
         Assert.Contains("one turned toward the source may heat it more", note, StringComparison.Ordinal);
@@ -171,7 +160,7 @@ public sealed class BodyOrientationTests
         double? turned = InductionEngine.Respond(scenario).PeakTorqueTurnedNewtonMeters;
         Assert.True(turned > 0);
         Assert.Equal(turned, judged.Response.PeakTorqueTurnedNewtonMeters);
-        InductionAssessment held = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(Held("Cylinder", "Copper", 0.01, ("Length", 0.12)), mains)), HazardPolicy.Default);
+        InductionAssessment held = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held"), mains)), HazardPolicy.Default);
         Assert.StartsWith("axis across", held.Orientation, StringComparison.Ordinal);
         Assert.Equal("peak torque, the item turned", held.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Torque).Quantity);
         Assert.NotEqual(new Scenario(rod, mains, new Placement(Vector3D.Zero, judged.Response.Normal)).Fingerprint(), scenario.Fingerprint());

@@ -27,9 +27,9 @@ public class FilamentModelTests
         _out = output;
     }
 
-    internal static ConductiveItem Body(string shape, string material, double diameter, double? thickness = null, double? length = null, double? wall = null, bool closedEnds = false)
+    internal static ConductiveItem Body(string shape, string material, double diameter, double? thickness = null, double? length = null, double? wall = null, bool closedEnds = false, string contact = "Fixed")
     {
-        var record = new Dictionary<string, object?> { ["Name"] = shape, ["Shape"] = shape, ["Material"] = material, ["Diameter"] = diameter, ["Contact"] = "Fixed", ["ClosedEnds"] = closedEnds };
+        var record = new Dictionary<string, object?> { ["Name"] = shape, ["Shape"] = shape, ["Material"] = material, ["Diameter"] = diameter, ["Contact"] = contact, ["ClosedEnds"] = closedEnds };
         if (thickness is { } t)
         {
             record["Thickness"] = t;
