@@ -172,7 +172,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             LaterSummary = LaterText.From((verdict, governing, policy.SafetyFactor), static f => Summarize(f.verdict, f.governing, f.SafetyFactor)),
-            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact),
+            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact) + RecommendedAction.PlaceItself(applicable, governing),
             ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),

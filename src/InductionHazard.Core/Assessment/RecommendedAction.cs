@@ -53,6 +53,30 @@ public static class RecommendedAction
     }
 
     /// <summary>
+    /// Where the item's own hazard governs but the person's own exposure is a Hazard too, the place's action as well, so
+    /// that taking the item off is not read as leave to enter ("... The place itself: keep people out ...").
+    /// </summary>
+    /// <param name="applicable">The mechanisms that apply.</param>
+    /// <param name="governing">The mechanism that governs.</param>
+    public static string PlaceItself(IReadOnlyList<MechanismResult> applicable, MechanismResult? governing)
+    {
+        if (governing is null || governing.Mechanism == HazardMechanism.Exposure || governing.Verdict != Verdict.Hazard)
+        {
+            return string.Empty;
+        }
+
+        foreach (MechanismResult r in applicable)
+        {
+            if (r.Mechanism == HazardMechanism.Exposure && r.Verdict == Verdict.Hazard)
+            {
+                return " The place itself: keep people out while the source runs, with or without the item: the field here is above the limit for a person's own exposure (see Test-FieldExposure).";
+            }
+        }
+
+        return string.Empty;
+    }
+
+    /// <summary>
     /// Where the person's own exposure governs, the item's own worst hazard as well, so that the action for the item
     /// is not lost behind the place's ("... The item itself: take it off before entering this place: it would burn
     /// the skin it touches.").

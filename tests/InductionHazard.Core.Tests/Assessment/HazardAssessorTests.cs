@@ -132,6 +132,15 @@ public class HazardAssessorTests
         Assert.Contains("take it off", facing.Action, StringComparison.Ordinal);
         Assert.Contains("burn", facing.Action, StringComparison.Ordinal);
 
+        // The other way about: a worn ring in a 7 T quench is twisted harder than the wearer's own field exceeds its limit.
+        // Taking it off is not leave to enter: the place's action stands beside the item's.
+        InductionAssessment twisted = Assess(Fixtures.Respond(Fixtures.Ring("Gold"), Fixtures.UniformRamp(7, 0, 1)));
+        Assert.Equal(HazardMechanism.Torque, twisted.GoverningMechanism);
+        Assert.Equal(Verdict.Hazard, twisted.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Exposure).Verdict);
+        Assert.StartsWith("Take it off before entering this place", twisted.Action, StringComparison.Ordinal);
+        Assert.Contains("The place itself: keep people out while the source runs", twisted.Action, StringComparison.Ordinal);
+        Assert.DoesNotContain("The place itself", burn.Action, StringComparison.Ordinal);
+
         InductionAssessment loose = Assess(Fixtures.Respond(Fixtures.Ring(contact: "Free"), Fixtures.UniformSine(0.5, 10000)));
         Assert.Equal(Verdict.Hazard, loose.Verdict);
         Assert.StartsWith("Keep it out of this place", loose.Action, StringComparison.Ordinal);
