@@ -66,6 +66,11 @@ internal sealed class EngineContext
                         + (scenario.Placement.TiltDegrees == 0 ? " (tilted 0 degrees)" : string.Empty);
                 }
             }
+            else if (scenario.Placement.AxisAlong is { } searchedFrom && scenario.Placement.Searched)
+            {
+                Orientation = "axis turned to normal " + Normal + ", the orientation a search found heating it most (judged beside its axis along the largest flux change, normal " + searchedFrom
+                    + ", and across it: the field varies through the body, and a search on a low-frequency model of its heating fitted to those found this one worse)";
+            }
             else if (scenario.Placement.AxisAlong is { } along)
             {
                 Orientation = "axis across the largest flux change, normal " + Normal + " (judged worse than its axis along it, normal " + along

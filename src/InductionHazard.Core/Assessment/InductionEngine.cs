@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using System.Numerics;
 using System.Threading;
+using InductionHazard.Fields;
 using InductionHazard.Induction;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
@@ -94,12 +95,18 @@ public static class InductionEngine
         }
 
         // Where the field varies through the body, an orientation between these (its length turned toward the source)
-        // may take more: said beside whichever the assessment keeps.
+        // may take more: a search on a low-frequency model fitted to the three looks for it, and one it finds worse is
+        // solved and judged too. The search is not every orientation solved: said beside whichever the assessment keeps.
         double variation = CrossAxisField.Variation(scenario.Source, scenario.Placement.Centre, along, (BodyGeometry)scenario.Item.Loop);
+        var turned = new List<InductionResponse>();
         if (!(variation <= VariationNoted))
         {
+            turned = TurnedBySearch(response, others, c, cancellation);
+            others = others.Concat(turned).ToArray();
             string note = "orientation: the field varies through the body (" + (double.IsNaN(variation) ? "it cannot be evaluated everywhere in it" : "by " + SiFormat.Plain(100 * variation) + " % rms of its value at the centre")
-                + "): of its orientations only its axis along the largest flux change and across it are judged, and one turned toward the source may heat it more; where how it sits is known, give it (-Normal or a Normal column)";
+                + "): judged are its axis along the largest flux change, across it"
+                + (turned.Count == 0 ? " (a search on a low-frequency model of its heating found no orientation worse)" : ", and turned as a search on a low-frequency model of its heating found worse, normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)))
+                + "; the search solves a model, not every orientation, so where how it sits is known, give it (-Normal or a Normal column)";
             for (int k = 0; k < others.Length; k++)
             {
                 others[k] = others[k] with { ModelNotes = others[k].ModelNotes.Concat(new[] { note }).ToArray() };
@@ -110,9 +117,199 @@ public static class InductionEngine
 
         return response with
         {
-            Orientation = response.Orientation + " (an assessment judges its axis across it too, normals " + across[0] + " and " + across[1] + ", and keeps the worst)",
+            Orientation = response.Orientation + " (an assessment judges its axis across it too, normals " + across[0] + " and " + across[1]
+                + (turned.Count == 0 ? string.Empty : ", and turned to normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)) + " as a search found worse") + ", and keeps the worst)",
             AcrossAxis = others,
         };
+    }
+
+    /// <summary>
+    /// Where the field varies through a body given no normal, the orientations that heat it most by a low-frequency
+    /// model fitted to those solved, each solved in full: in rounds, each fitting the model to every orientation solved
+    /// so far whose heating was found (the three, then what earlier rounds found) and solving the one it puts highest,
+    /// until it puts none above them by more than <see cref="SearchedAbove"/>, finds one already solved, or cannot be
+    /// fitted (fewer than two heatings found, or nothing heated), or after <see cref="SearchRounds"/> rounds. The model:
+    /// the temperature rise is a A + b X, with A the field along the axis and X the field across it in the mean squares
+    /// <see cref="CrossAxisField.Parts"/> gives, a and b (not negative) fitted by least squares to the rises solved, so
+    /// that what the frequency, the body's inductance and its cooling do to each part is the engine's. (The rise, not
+    /// the energy: an item that melts stops taking energy there, and one held just below it takes energy all along.)
+    /// Where the heat lost grows in proportion to the rise and the item does not melt, the model is exact in a uniform
+    /// field, whose largest value is at one of the three. Searched over 64 axes spread evenly over the half sphere (an
+    /// axis and its reverse heat alike), then refined about the best.
+    /// </summary>
+    private static List<InductionResponse> TurnedBySearch(InductionResponse along, InductionResponse[] across, EngineContext c, CancellationToken cancellation)
+    {
+        Scenario scenario = c.Scenario;
+        var body = (BodyGeometry)scenario.Item.Loop;
+        FieldSource source = scenario.Source;
+        Vector3D centre = scenario.Placement.Centre;
+        Complex[] weights = DriveWeights(source);
+        var solved = new List<(Vector3D Axis, double Along, double Across, InductionResponse Response)>();
+        foreach (InductionResponse r in new[] { along }.Concat(across))
+        {
+            Vector3D axis = r.Scenario.Placement.Normal ?? c.Normal;
+            (double a, double x) = CrossAxisField.Parts(source, centre, axis, body, weights);
+            solved.Add((axis, a, x, r));
+        }
+
+        var found = new List<InductionResponse>();
+        for (int round = 0; round < SearchRounds; round++)
+        {
+            // Fitted to the orientations whose heating was found (at least two): one not found is judged as it is
+            // (Indeterminate unless another is worse), and a search among the rest may still find one worse.
+            double saa = 0, sxx = 0, sax = 0, sae = 0, sxe = 0;
+            int fitted = 0;
+            foreach ((_, double a, double x, InductionResponse r) in solved)
+            {
+                double rise = r.TemperatureRiseKelvin;
+                if (r.IsValid && Finite.Is(rise) && Finite.Is(a) && Finite.Is(x))
+                {
+                    (saa, sxx, sax, sae, sxe) = (saa + (a * a), sxx + (x * x), sax + (a * x), sae + (a * rise), sxe + (x * rise));
+                    fitted++;
+                }
+            }
+
+            if (fitted < 2)
+            {
+                return found;
+            }
+
+            (double alongFactor, double acrossFactor) = NonNegativeFit(saa, sxx, sax, sae, sxe);
+            if (!(alongFactor + acrossFactor > 0))
+            {
+                return found;
+            }
+
+            double Model(Vector3D axis)
+            {
+                (double a, double x) = CrossAxisField.Parts(source, centre, axis, body, weights);
+                return (alongFactor * a) + (acrossFactor * x);
+            }
+
+            double known = double.NegativeInfinity;
+            foreach ((_, double a, double x, InductionResponse r) in solved)
+            {
+                known = r.IsValid ? Math.Max(known, (alongFactor * a) + (acrossFactor * x)) : known;
+            }
+
+            (Vector3D best, double bestValue) = Highest(Model, c.Normal, cancellation);
+            if (!(bestValue > (1 + SearchedAbove) * known) || solved.Any(s => Math.Abs(s.Axis.Dot(best)) > SameAxisCosine))
+            {
+                return found;
+            }
+
+            InductionResponse turned = Respond(scenario.With(Placement.TurnedBySearch(scenario.Placement, best, c.Normal)), cancellation) with
+            {
+                PeakTorqueTurnedNewtonMeters = along.PeakTorqueTurnedNewtonMeters,
+            };
+            found.Add(turned);
+            (double turnedAlong, double turnedAcross) = CrossAxisField.Parts(source, centre, best, body, weights);
+            solved.Add((best, turnedAlong, turnedAcross, turned));
+        }
+
+        return found;
+    }
+
+    /// <summary>
+    /// The axis at which a function of it is highest, and its value there: 64 axes spread evenly over the half sphere
+    /// (a Fibonacci lattice), then the best refined by steps round it that halve from 0.2 rad to 0.0125 rad.
+    /// </summary>
+    private static (Vector3D Axis, double Value) Highest(Func<Vector3D, double> value, Vector3D start, CancellationToken cancellation)
+    {
+        const int Spread = 64;
+        (Vector3D best, double bestValue) = (start, value(start));
+        double golden = Math.PI * (3 - Math.Sqrt(5));
+        for (int i = 0; i < Spread; i++)
+        {
+            double z = 1 - ((i + 0.5) / Spread), r = Math.Sqrt(1 - (z * z)), phi = golden * i;
+            var axis = new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
+            double v = value(axis);
+            if (v > bestValue)
+            {
+                (best, bestValue) = (axis, v);
+            }
+        }
+
+        for (double step = 0.2; step > 0.01; step /= 2)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            Vector3D u = RectangularLoopGeometry.WidthDirection(best), w = best.Cross(u);
+            bool moved = true;
+            for (int round = 0; round < 8 && moved; round++)
+            {
+                moved = false;
+                foreach (Vector3D tangent in new[] { u, -1 * u, w, -1 * w })
+                {
+                    Vector3D axis = (best + (step * tangent)).Normalized();
+                    double v = value(axis);
+                    if (v > bestValue)
+                    {
+                        (best, bestValue, moved) = (axis, v, true);
+                    }
+                }
+            }
+        }
+
+        return (best, bestValue);
+    }
+
+    /// <summary>The most orientations a search solves beyond the three.</summary>
+    private const int SearchRounds = 3;
+
+    /// <summary>The cosine above which an axis the search finds is one already solved (2 degrees).</summary>
+    private static readonly double SameAxisCosine = Math.Cos(2 * Math.PI / 180);
+
+    /// <summary>How far above the three orientations solved the model must put the one a search finds for it to be solved too.</summary>
+    private const double SearchedAbove = 0.02;
+
+    /// <summary>
+    /// a and b, neither negative, minimising the squares of a A_i + b X_i - E_i, from the sums of the products: the
+    /// normal equations' solution where both come out not negative, else the better of a alone and b alone.
+    /// </summary>
+    private static (double A, double B) NonNegativeFit(double saa, double sxx, double sax, double sae, double sxe)
+    {
+        double determinant = (saa * sxx) - (sax * sax);
+        if (determinant > 1e-12 * saa * sxx)
+        {
+            double a = ((sae * sxx) - (sxe * sax)) / determinant, b = ((saa * sxe) - (sax * sae)) / determinant;
+            if (a >= 0 && b >= 0)
+            {
+                return (a, b);
+            }
+        }
+
+        // Alone, each reduces the sum of squares by (s_e)^2 / s: the larger reduction is the better fit.
+        double alone = saa > 0 ? Math.Max(0, sae / saa) : 0, acrossAlone = sxx > 0 ? Math.Max(0, sxe / sxx) : 0;
+        return alone * sae >= acrossAlone * sxe ? (alone, 0) : (0, acrossAlone);
+    }
+
+    /// <summary>
+    /// Each term's weight in the field a search compares orientations by: a sine's phasor, else the drive's value of
+    /// largest size over the source's drive times (its sign kept).
+    /// </summary>
+    private static Complex[] DriveWeights(FieldSource source)
+    {
+        var weights = new Complex[source.Terms.Count];
+        for (int j = 0; j < weights.Length; j++)
+        {
+            FieldWaveform waveform = source.Terms[j].Waveform;
+            if (waveform is SineWaveform sine)
+            {
+                weights[j] = sine.Phasor;
+                continue;
+            }
+
+            double largest = 0;
+            foreach (double t in source.DriveTimes)
+            {
+                double value = waveform.Value(t);
+                largest = Math.Abs(value) > Math.Abs(largest) ? value : largest;
+            }
+
+            weights[j] = largest;
+        }
+
+        return weights;
     }
 
     /// <summary>The rms variation of the field through a body, relative to its centre's, above which the three orientations judged are said not to cover every one.</summary>

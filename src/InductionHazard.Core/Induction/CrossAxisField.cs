@@ -70,7 +70,7 @@ internal static class CrossAxisField
                 reference += b.Dot(b);
             }
 
-            foreach ((double x, double y, double z, double weight) in Points(body, 2))
+            foreach ((double x, double y, double z, double weight, _) in Points(body, 2))
             {
                 Vector3D[] b = source.FieldPerUnitDrive(centre + (x * u) + (y * v) + (z * axis));
                 for (int j = 0; j < b.Length; j++)
@@ -88,13 +88,67 @@ internal static class CrossAxisField
         }
     }
 
+    /// <summary>
+    /// The two parts of a low-frequency model of how a body's heating turns with it, for a search over its orientations
+    /// (<see cref="Assessment.InductionEngine"/>): with its axis along <paramref name="axis"/>, the square of the field
+    /// along the axis meaned over each slice across it (what the flux through the slice drives round the axis), meaned
+    /// over the slices; and the mean square over the volume of the field across the axis (what drives currents along
+    /// the body and back). The field is the sum of the terms' fields per unit drive, each weighted as given (a sine's by
+    /// its phasor). Coarser than the heating's own quadrature (a search compares orientations; the one it finds is then
+    /// solved in full). NaN where the field cannot be evaluated.
+    /// </summary>
+    public static (double Along, double Across) Parts(FieldSource source, Vector3D centre, Vector3D axis, BodyGeometry body, System.Numerics.Complex[] weights)
+    {
+        Vector3D u = RectangularLoopGeometry.WidthDirection(axis, null);
+        Vector3D v = axis.Cross(u);
+        const int Refinement = 1;
+        var sliceWeight = new double[4 * Refinement];
+        var sliceReal = new double[sliceWeight.Length];
+        var sliceImaginary = new double[sliceWeight.Length];
+        double across = 0;
+        try
+        {
+            foreach ((double x, double y, double z, double weight, int slice) in Points(body, Refinement))
+            {
+                Vector3D[] b = source.FieldPerUnitDrive(centre + (x * u) + (y * v) + (z * axis));
+                Vector3D real = Vector3D.Zero, imaginary = Vector3D.Zero;
+                for (int j = 0; j < b.Length; j++)
+                {
+                    real += weights[j].Real * b[j];
+                    imaginary += weights[j].Imaginary * b[j];
+                }
+
+                double realAlong = real.Dot(axis), imaginaryAlong = imaginary.Dot(axis);
+                sliceWeight[slice] += weight;
+                sliceReal[slice] += weight * realAlong;
+                sliceImaginary[slice] += weight * imaginaryAlong;
+                across += weight * (real.Dot(real) - (realAlong * realAlong) + imaginary.Dot(imaginary) - (imaginaryAlong * imaginaryAlong));
+            }
+        }
+        catch (FieldEvaluationException)
+        {
+            return (double.NaN, double.NaN);
+        }
+
+        double along = 0;
+        for (int s = 0; s < sliceWeight.Length; s++)
+        {
+            if (sliceWeight[s] > 0)
+            {
+                along += ((sliceReal[s] * sliceReal[s]) + (sliceImaginary[s] * sliceImaginary[s])) / sliceWeight[s];
+            }
+        }
+
+        return (along, across);
+    }
+
     /// <summary>G_jk: the mean over the body's volume of b_j . b_k, b_j the field across the axis per unit drive of term j.</summary>
     private static double[,] Gram(FieldSource source, Vector3D centre, Vector3D axis, Vector3D u, Vector3D v, BodyGeometry body, int refinement)
     {
         int terms = source.Terms.Count;
         var gram = new double[terms, terms];
         var across = new Vector3D[terms];
-        foreach ((double x, double y, double z, double weight) in Points(body, refinement))
+        foreach ((double x, double y, double z, double weight, _) in Points(body, refinement))
         {
             Vector3D[] b = source.FieldPerUnitDrive(centre + (x * u) + (y * v) + (z * axis));
             for (int j = 0; j < terms; j++)
@@ -151,9 +205,10 @@ internal static class CrossAxisField
     /// axis), with weights summing to 1: Gauss-Legendre in the square of the radius (the volume's own measure), equal
     /// steps round the axis and Gauss-Legendre along it for a body of revolution; Gauss-Legendre in the cube of the
     /// radius and the cosine of the polar angle for a sphere; Gauss-Legendre along each side for a plate or a bar.
-    /// A tube's closed ends are left out (its wall holds nearly all of it).
+    /// A tube's closed ends are left out (its wall holds nearly all of it). Each point says which slice across the axis
+    /// it lies in (its node along the axis; for a sphere, its polar node), numbered from 0 to fewer than 4 times the refinement.
     /// </summary>
-    private static IEnumerable<(double X, double Y, double Z, double Weight)> Points(BodyGeometry body, int refinement)
+    private static IEnumerable<(double X, double Y, double Z, double Weight, int Slice)> Points(BodyGeometry body, int refinement)
     {
         switch (body)
         {
@@ -164,7 +219,7 @@ internal static class CrossAxisField
                     for (int j = 0; j < a.Nodes.Length; j++)
                         for (int k = 0; k < c.Nodes.Length; k++)
                         {
-                            yield return (0.5 * prism.WidthMeters * a.Nodes[i], 0.5 * prism.HeightMeters * a.Nodes[j], 0.5 * prism.DepthMeters * c.Nodes[k], a.Weights[i] * a.Weights[j] * c.Weights[k] / 8);
+                            yield return (0.5 * prism.WidthMeters * a.Nodes[i], 0.5 * prism.HeightMeters * a.Nodes[j], 0.5 * prism.DepthMeters * c.Nodes[k], a.Weights[i] * a.Weights[j] * c.Weights[k] / 8, k);
                         }
 
                 yield break;
@@ -184,7 +239,7 @@ internal static class CrossAxisField
                         for (int k = 0; k < round; k++)
                         {
                             double phi = 2 * Math.PI * (k + 0.5) / round;
-                            yield return (radius * sin * Math.Cos(phi), radius * sin * Math.Sin(phi), radius * cos, radial.Weights[i] * polar.Weights[j] / 4 / round);
+                            yield return (radius * sin * Math.Cos(phi), radius * sin * Math.Sin(phi), radius * cos, radial.Weights[i] * polar.Weights[j] / 4 / round, j);
                         }
                     }
                 }
@@ -211,7 +266,7 @@ internal static class CrossAxisField
                         double phi = 2 * Math.PI * (k + 0.5) / round;
                         for (int j = 0; j < along.Nodes.Length; j++)
                         {
-                            yield return (radius * Math.Cos(phi), radius * Math.Sin(phi), 0.5 * length * along.Nodes[j], radial.Weights[i] * along.Weights[j] / 4 / round);
+                            yield return (radius * Math.Cos(phi), radius * Math.Sin(phi), 0.5 * length * along.Nodes[j], radial.Weights[i] * along.Weights[j] / 4 / round, j);
                         }
                     }
                 }

@@ -79,8 +79,21 @@ public sealed class Placement
     internal static Placement AcrossAxis(Placement given, Vector3D across, Vector3D along) =>
         new(given.Centre, across, given.Velocity, null) { AxisAlong = along };
 
-    /// <summary>For a body turned with its axis across the largest flux change by the engine, the axis along it; null otherwise.</summary>
+    /// <summary>
+    /// A body's placement turned to the orientation a search found heating it most, for judging beside its axis along
+    /// the largest flux change and across it (<see cref="Assessment.InductionEngine"/>): the normal is the engine's choice.
+    /// </summary>
+    /// <param name="given">The placement as given, without a normal or a tilt.</param>
+    /// <param name="axis">The axis the search found.</param>
+    /// <param name="along">The axis along the largest flux change.</param>
+    internal static Placement TurnedBySearch(Placement given, Vector3D axis, Vector3D along) =>
+        new(given.Centre, axis, given.Velocity, null) { AxisAlong = along, Searched = true };
+
+    /// <summary>For a body turned by the engine (across the largest flux change, or by a search), the axis along it; null otherwise.</summary>
     internal Vector3D? AxisAlong { get; private init; }
+
+    /// <summary>True for a body the engine turned to the orientation a search found (<see cref="TurnedBySearch"/>).</summary>
+    internal bool Searched { get; private init; }
 
     /// <summary>The loop at the origin facing the field.</summary>
     public static Placement FacingField { get; } = new(Vector3D.Zero);

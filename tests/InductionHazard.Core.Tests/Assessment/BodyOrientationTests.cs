@@ -70,11 +70,12 @@ public sealed class BodyOrientationTests
     public void TheAssessmentOfABodyGivenNoNormalIsNoMilderThanAnyOfItsOrientationsGiven(string label, ConductiveItem body, FieldSource source, Vector3D centre)
     {
         // The rule, not the physics: whichever mechanism governs, the kept orientation is at least as severe as each of
-        // the three given as a normal (along the largest flux change and across it both ways), by verdict, then by the
-        // judged margins smallest first. This holds what a reader of the verdict relies on: a late choice of orientation
-        // never turns one orientation's Hazard into a milder verdict.
+        // those judged given as a normal (along the largest flux change, across it both ways, and any a search found
+        // where the field varies through the body), by verdict, then by the judged margins smallest first. This holds
+        // what a reader of the verdict relies on: a late choice of orientation never turns one orientation's Hazard
+        // into a milder verdict.
         InductionResponse head = InductionEngine.Respond(new Scenario(body, source, new Placement(centre)));
-        Assert.Equal(2, head.AcrossAxis.Count);
+        Assert.InRange(head.AcrossAxis.Count, 2, 5);
         InductionAssessment judged = HazardAssessor.Assess(head, HazardPolicy.Default);
         var normals = new[] { head.Normal }.Concat(head.AcrossAxis.Select(r => r.Normal)).ToArray();
         Assert.Equal(0, normals[0].Dot(normals[1]), 12);
@@ -124,8 +125,45 @@ public sealed class BodyOrientationTests
         Assert.Equal(shape == "Cylinder", judged > head.EnergyDissipatedJoules);
     }
 
+    [Theory]
+    [InlineData("Cylinder")]
+    [InlineData("Tube")]
+    public void NearACoilASearchFindsTheOrientationThatHeatsABodyMostAmongFortyEight(string shape)
+    {
+        // The search, not the physics: 100 mm from a 100 mm coil at 1 kHz the field varies by half its value through a
+        // 120 mm rod or a 150 mm tube, and a body turned between its axis along the largest flux change and across it
+        // heats more than any of those three (by the engine's own model). Each of 48 normals spread over the half sphere
+        // is solved as given: the orientations judged reach the most of them (to 2 %: the spread's own points miss the
+        // top by a little), where the three alone fall short by more than a tenth.
+        var coil = new FieldSource("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10), new SineWaveform(1000, 1000, drive: DriveKind.Current)) });
+        ConductiveItem body = shape == "Cylinder"
+            ? FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held")
+            : FilamentModelTests.Body("Tube", "Aluminium", 0.04, length: 0.15, wall: 0.002, contact: "Held");
+        var centre = new Vector3D(0.2, 0, 0.1);
+        InductionResponse head = InductionEngine.Respond(new Scenario(body, coil, new Placement(centre)));
+        double three = new[] { head }.Concat(head.AcrossAxis.Take(2)).Max(r => r.TemperatureRiseKelvin);
+        double judged = new[] { head }.Concat(head.AcrossAxis).Max(r => r.TemperatureRiseKelvin);
+        double spread = 0;
+        const int count = 48;
+        double golden = Math.PI * (3 - Math.Sqrt(5));
+        for (int i = 0; i < count; i++)
+        {
+            double z = 1 - ((i + 0.5) / count), r = Math.Sqrt(1 - (z * z));
+            var normal = new Vector3D(r * Math.Cos(golden * i), r * Math.Sin(golden * i), z);
+            InductionResponse given = InductionEngine.Respond(new Scenario(body, coil, new Placement(centre, normal)));
+            Assert.True(given.IsValid, shape + " at normal " + normal + ": " + string.Join("; ", given.ValidityIssues));
+            spread = Math.Max(spread, given.TemperatureRiseKelvin);
+        }
+
+        _out.WriteLine($"{shape}: the three {three:F2} K, judged {judged:F2} K ({head.AcrossAxis.Count - 2} found by the search), the spread of {count} {spread:F2} K");
+        Assert.True(three < 0.9 * spread, shape + ": the three alone reach " + three + " K of the spread's " + spread + " K: the case does not need the search");
+        Assert.True(spread <= 1.02 * judged, shape + ": an orientation of the spread heats it by " + spread + " K against " + judged + " K judged");
+        InductionAssessment assessed = HazardAssessor.Assess(head, HazardPolicy.Default);
+        Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("turned as a search on a low-frequency model of its heating found worse, normal ", StringComparison.Ordinal));
+    }
+
     [Fact]
-    public void WhereTheFieldVariesThroughABodyItsNotesSayTheOrientationsJudgedMayNotCoverEveryOne()
+    public void WhereTheFieldVariesThroughABodyItsNotesSayTheOrientationsJudgedComeFromASearchOnAModel()
     {
         // Beside a 50 mm coil a 120 mm rod spans fields that differ severalfold; in a uniform field it spans one.
         var coil = new FieldSource("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.05, 10), new SineWaveform(100, 50, drive: DriveKind.Current)) });
@@ -133,7 +171,8 @@ public sealed class BodyOrientationTests
         ConductiveItem rod = FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held");
         InductionAssessment near = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, coil, new Placement(new Vector3D(0, 0, 0.06)))), HazardPolicy.Default);
         string note = Assert.Single(near.Response.ModelNotes, n => n.StartsWith("orientation: the field varies through the body (by ", StringComparison.Ordinal));
-        Assert.Contains("one turned toward the source may heat it more", note, StringComparison.Ordinal);
+        Assert.Contains("a search on a low-frequency model of its heating found", note, StringComparison.Ordinal);
+        Assert.Contains("the search solves a model, not every orientation", note, StringComparison.Ordinal);
         InductionAssessment uniform = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, mains)), HazardPolicy.Default);
         Assert.DoesNotContain(uniform.Response.ModelNotes, n => n.StartsWith("orientation:", StringComparison.Ordinal));
         InductionAssessment given = HazardAssessor.Assess(InductionEngine.Respond(new Scenario(rod, coil, new Placement(new Vector3D(0, 0, 0.06), Vector3D.UnitZ))), HazardPolicy.Default);
