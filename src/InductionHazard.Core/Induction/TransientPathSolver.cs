@@ -78,11 +78,19 @@ public sealed class TransientPathSolver
             _inverseLambdas[k] = 1 / circuit.Lambdas[k];
         }
 
-        // The time constant of the mode that stores most energy for a sudden unit drive (sum_j C_kj^2 lambda_k).
-        double best = -1;
+        // The time constant of the mode that stores most energy for a sudden unit drive (sum_j C_kj^2 lambda_k); where no
+        // mode is driven (a body whose flux along its axis is nil, heated only by the field across it), the slowest
+        // mode's: a mode that is not driven sets no time scale, and the first of them may be some 1e-17 s, from which the
+        // steps took some 150 a segment to grow and a run out of its budget before its end.
         for (int k = 0; k < circuit.Count; k++)
         {
             _slowestTimeConstant = Math.Max(_slowestTimeConstant, circuit.Lambdas[k]);
+        }
+
+        _leadTimeConstant = _slowestTimeConstant;
+        double best = 0;
+        for (int k = 0; k < circuit.Count; k++)
+        {
             double weight = 0;
             for (int j = 0; j < circuit.Terms; j++)
             {

@@ -162,6 +162,25 @@ public sealed class BodyOrientationTests
         Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("turned as a search on a low-frequency model of its heating found worse, normal ", StringComparison.Ordinal));
     }
 
+    [Theory]
+    [InlineData("Bar")]
+    [InlineData("Cylinder")]
+    public void ABodyAcrossAUniformRampWithNoFluxAlongItsAxisIsSolvedToTheEndOfItsRun(string shape)
+    {
+        // Across a uniform field no mode of the coaxial currents is driven: the body heats by the field across its axis
+        // alone. A mode that is not driven sets no time scale for the first step; a brass bar's first mode (some 1e-17 s)
+        // did, its steps took some 150 a segment to grow, and the run ran out of its budget before its end (Indeterminate).
+        var ramp = FieldSource.Uniform("ramp", new RampWaveform(0, 1, 0.01, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        ConductiveItem body = shape == "Bar"
+            ? ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "bar", ["Shape"] = "Bar", ["Material"] = "Brass", ["Width"] = "20 mm", ["Height"] = "15 mm", ["Length"] = "90 mm", ["Contact"] = "Held" }, MaterialLibrary.BuiltIn)
+            : FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held");
+        InductionResponse across = InductionEngine.Respond(new Scenario(body, ramp, new Placement(Vector3D.Zero, Vector3D.UnitX)));
+        Assert.True(across.IsValid, shape + ": " + string.Join("; ", across.ValidityIssues));
+        Assert.Equal(0, across.PeakFluxWebers);
+        Assert.True(across.TemperatureRiseKelvin > 0, shape + ": the field across the axis heats it");
+        Within.Relative(across.AssessedSeconds, across.HeatingSeries[across.HeatingSeries.Count - 1].TimeSeconds - across.HeatingSeries[0].TimeSeconds, 1e-12, shape + ": the run's end");
+    }
+
     [Fact]
     public void WhereTheFieldVariesThroughABodyItsNotesSayTheOrientationsJudgedComeFromASearchOnAModel()
     {
