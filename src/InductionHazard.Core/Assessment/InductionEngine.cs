@@ -101,11 +101,12 @@ public static class InductionEngine
         var turned = new List<InductionResponse>();
         if (!(variation <= VariationNoted))
         {
-            turned = TurnedBySearch(response, others, c, cancellation);
+            (turned, bool searched) = TurnedBySearch(response, others, c, cancellation);
             others = others.Concat(turned).ToArray();
             string note = "orientation: the field varies through the body (" + (double.IsNaN(variation) ? "it cannot be evaluated everywhere in it" : "by " + SiFormat.Plain(100 * variation) + " % rms of its value at the centre")
                 + "): judged are its axis along the largest flux change, across it"
-                + (turned.Count == 0 ? " (a search on a low-frequency model of its heating found no orientation worse)" : ", and turned as a search on a low-frequency model of its heating found worse, normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)))
+                + (turned.Count > 0 ? string.Empty : searched ? " (a search on a low-frequency model of its heating found no orientation worse)" : " (no search for one between them could be made: the heating of fewer than two of them was found)")
+                + (turned.Count == 0 ? string.Empty : ", and turned as a search on a low-frequency model of its heating found worse, normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)))
                 + "; the search solves a model, not every orientation, so where how it sits is known, give it (-Normal or a Normal column)";
             for (int k = 0; k < others.Length; k++)
             {
@@ -135,9 +136,9 @@ public static class InductionEngine
     /// the energy: an item that melts stops taking energy there, and one held just below it takes energy all along.)
     /// Where the heat lost grows in proportion to the rise and the item does not melt, the model is exact in a uniform
     /// field, whose largest value is at one of the three. Searched over 64 axes spread evenly over the half sphere (an
-    /// axis and its reverse heat alike), then refined about the best.
+    /// axis and its reverse heat alike), then refined about the best. Also whether a search was made.
     /// </summary>
-    private static List<InductionResponse> TurnedBySearch(InductionResponse along, InductionResponse[] across, EngineContext c, CancellationToken cancellation)
+    private static (List<InductionResponse> Found, bool Searched) TurnedBySearch(InductionResponse along, InductionResponse[] across, EngineContext c, CancellationToken cancellation)
     {
         Scenario scenario = c.Scenario;
         var body = (BodyGeometry)scenario.Item.Loop;
@@ -171,13 +172,13 @@ public static class InductionEngine
 
             if (fitted < 2)
             {
-                return found;
+                return (found, round > 0);
             }
 
             (double alongFactor, double acrossFactor) = NonNegativeFit(saa, sxx, sax, sae, sxe);
             if (!(alongFactor + acrossFactor > 0))
             {
-                return found;
+                return (found, round > 0);
             }
 
             double Model(Vector3D axis)
@@ -195,7 +196,7 @@ public static class InductionEngine
             (Vector3D best, double bestValue) = Highest(Model, c.Normal, cancellation);
             if (!(bestValue > (1 + SearchedAbove) * known) || solved.Any(s => Math.Abs(s.Axis.Dot(best)) > SameAxisCosine))
             {
-                return found;
+                return (found, true);
             }
 
             InductionResponse turned = Respond(scenario.With(Placement.TurnedBySearch(scenario.Placement, best, c.Normal)), cancellation) with
@@ -207,7 +208,7 @@ public static class InductionEngine
             solved.Add((best, turnedAlong, turnedAcross, turned));
         }
 
-        return found;
+        return (found, true);
     }
 
     /// <summary>
