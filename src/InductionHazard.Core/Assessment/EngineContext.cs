@@ -68,8 +68,8 @@ internal sealed class EngineContext
             }
             else if (scenario.Placement.AxisAlong is { } searchedFrom && scenario.Placement.Searched)
             {
-                Orientation = "axis turned to normal " + Normal + ", the orientation a search found heating it most (judged beside its axis along the largest flux change, normal " + searchedFrom
-                    + ", and across it: the field varies through the body, and a search on a low-frequency model of its heating fitted to those found this one worse)";
+                Orientation = "axis turned to normal " + Normal + ", where a search on a low-frequency model of its heating put the most (the field varies through the body; the model fitted to the orientations solved: its axis along the largest flux change, normal "
+                    + searchedFrom + ", and across it; judged beside them)";
             }
             else if (scenario.Placement.AxisAlong is { } along)
             {

@@ -80,8 +80,9 @@ public sealed class Placement
         new(given.Centre, across, given.Velocity, null) { AxisAlong = along };
 
     /// <summary>
-    /// A body's placement turned to the orientation a search found heating it most, for judging beside its axis along
-    /// the largest flux change and across it (<see cref="Assessment.InductionEngine"/>): the normal is the engine's choice.
+    /// A body's placement turned to the orientation where a search on a model of its heating put the most, for judging
+    /// beside its axis along the largest flux change and across it (<see cref="Assessment.InductionEngine"/>): the
+    /// normal is the engine's choice.
     /// </summary>
     /// <param name="given">The placement as given, without a normal or a tilt.</param>
     /// <param name="axis">The axis the search found.</param>
