@@ -436,6 +436,26 @@ Closed ring,Copper,20 mm,2 mm,,Skin,200 mm,0,0
             (Get-InductionResponse -Item $rod -Source $mains).Orientation | Should -Match 'facing the largest flux change, normal \(0, 0, 1\) \(an assessment judges its axis across it too'
         }
 
+        It 'judges a rod given no normal beside a coil also turned where a search on a model of its heating puts the most, and says so' {
+            # 100 mm from a 100 mm coil at 1 kHz the field varies by half through the rod: turned between its axis along the
+            # largest flux change and across it, the rod heats more than in any of those three.
+            $heater = New-FieldWaveform -Sine -Amplitude '1000 A' -Frequency '1 kHz' | New-FieldSource -Coil -Radius '100 mm' -Turns 10 -Name 'Heater H3'
+            $rod = New-ConductiveItem -Name 'Copper rod' -Shape Cylinder -Material Copper -Diameter '10 mm' -Length '120 mm' -Contact Held
+            $judged = Test-InductionHazard -Item $rod -Source $heater -Position '200 mm, 0, 100 mm' -WarningAction SilentlyContinue
+            $judged.Orientation | Should -Match '^axis turned to normal \(.*\), where a search on a low-frequency model of its heating put the most'
+            $note = $judged.Response.ModelNotes | Where-Object { $_ -like 'orientation: the field varies through the body*' }
+            $note | Should -Match 'turned as a search on a low-frequency model of its heating found worse, normal'
+            $note | Should -Match 'the search solves a model, not every orientation'
+            $normal = $judged.Response.Scenario.Placement.Normal
+            $given = Test-InductionHazard -Item $rod -Source $heater -Position '200 mm, 0, 100 mm' -Normal "$($normal.X), $($normal.Y), $($normal.Z)" -WarningAction SilentlyContinue
+            $given.Response.PeakTemperatureCelsius | Should -Be $judged.Response.PeakTemperatureCelsius -Because 'the orientation kept is solved as if it were given'
+            foreach ($axis in 'x', 'y', 'z') {
+                $other = Test-InductionHazard -Item $rod -Source $heater -Position '200 mm, 0, 100 mm' -Normal $axis -WarningAction SilentlyContinue
+                $other.Response.PeakTemperatureCelsius | Should -BeLessThan $judged.Response.PeakTemperatureCelsius
+            }
+            (Get-InductionResponse -Item $rod -Source $heater -Position '200 mm, 0, 100 mm').Orientation | Should -Match 'and turned to normal \(.*\) as a search found worse, and keeps the worst\)$'
+        }
+
         It 'judges a ring given no normal for the torque it would feel turned from the field, and not one given its normal' {
             $ramp = New-FieldWaveform -Ramp -From '0 T' -To '1 T' -Duration '10 ms' | New-FieldSource -Uniform -Name 'Ramp bore'
             $ring = New-ConductiveItem -Name 'Loose ring' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm' -Contact Free
