@@ -96,13 +96,19 @@ public static class InductionEngine
 
         // Where the field varies through the body, an orientation between these (its length turned toward the source)
         // may take more: a search on a low-frequency model fitted to the three looks for it, and one it finds worse is
-        // solved and judged too. The search is not every orientation solved: said beside whichever the assessment keeps.
+        // solved and judged too. The search is not every orientation solved: where the field varies by more than a tenth,
+        // or the search found one, said beside whichever the assessment keeps.
         double variation = CrossAxisField.Variation(scenario.Source, scenario.Placement.Centre, along, (BodyGeometry)scenario.Item.Loop);
         var turned = new List<InductionResponse>();
-        if (!(variation <= VariationNoted))
+        bool searched = false;
+        if (!(variation <= VariationSearched))
         {
-            (turned, bool searched) = TurnedBySearch(response, others, c, cancellation);
+            (turned, searched) = TurnedBySearch(response, others, c, cancellation);
             others = others.Concat(turned).ToArray();
+        }
+
+        if (!(variation <= VariationNoted) || turned.Count > 0)
+        {
             string note = "orientation: the field varies through the body (" + (double.IsNaN(variation) ? "it cannot be evaluated everywhere in it" : "by " + SiFormat.Plain(100 * variation) + " % rms of its value at the centre")
                 + "): judged are its axis along the largest flux change, across it"
                 + (turned.Count > 0 ? string.Empty : searched ? " (a search on a low-frequency model of its heating found no orientation worse)" : " (no search for one between them could be made: the heating of fewer than two of them was found)")
@@ -315,6 +321,14 @@ public static class InductionEngine
 
     /// <summary>The rms variation of the field through a body, relative to its centre's, above which the three orientations judged are said not to cover every one.</summary>
     private const double VariationNoted = 0.1;
+
+    /// <summary>
+    /// The rms variation of the field through a body above which a search looks for an orientation between the three
+    /// that heats it more (1 %): below, the three hold the most to within a small part of that variation, and nothing
+    /// is searched in a uniform field. Searching well below the note's tenth keeps a safe-distance search from passing
+    /// into Clear where the search stops.
+    /// </summary>
+    private const double VariationSearched = 0.01;
 
     private static InductionResponse Sinusoidal(EngineContext c, CancellationToken cancellation)
     {
