@@ -142,6 +142,44 @@ internal static class CrossAxisField
         return (along, across);
     }
 
+    /// <summary>
+    /// How far the field within a body's reach stands above its level there: the largest size over a sphere of radius
+    /// <paramref name="reach"/> about the centre (where the body, turned, can reach) over the rms size on it, of the sum
+    /// of the terms' fields per unit drive, each weighted as given. 1 in a uniform field; large where a conductor of the
+    /// source passes within reach. Infinite where the field cannot be evaluated on the sphere, NaN where it is not
+    /// finite. Evaluated at 200 points spread evenly over the sphere (a Fibonacci lattice).
+    /// </summary>
+    public static double ReachRatio(FieldSource source, Vector3D centre, double reach, System.Numerics.Complex[] weights)
+    {
+        const int Count = 200;
+        double golden = Math.PI * (3 - Math.Sqrt(5));
+        double largest = 0, squares = 0;
+        try
+        {
+            for (int i = 0; i < Count; i++)
+            {
+                double z = 1 - (2 * (i + 0.5) / Count), r = Math.Sqrt(1 - (z * z));
+                Vector3D[] b = source.FieldPerUnitDrive(centre + (reach * new Vector3D(r * Math.Cos(golden * i), r * Math.Sin(golden * i), z)));
+                Vector3D real = Vector3D.Zero, imaginary = Vector3D.Zero;
+                for (int j = 0; j < b.Length; j++)
+                {
+                    real += weights[j].Real * b[j];
+                    imaginary += weights[j].Imaginary * b[j];
+                }
+
+                double size = real.Dot(real) + imaginary.Dot(imaginary);
+                largest = double.IsNaN(size) ? double.NaN : Math.Max(largest, size);
+                squares += size;
+            }
+        }
+        catch (FieldEvaluationException)
+        {
+            return double.PositiveInfinity;
+        }
+
+        return squares > 0 ? Math.Sqrt(largest / (squares / Count)) : double.IsNaN(largest) ? double.NaN : 1;
+    }
+
     /// <summary>G_jk: the mean over the body's volume of b_j . b_k, b_j the field across the axis per unit drive of term j.</summary>
     private static double[,] Gram(FieldSource source, Vector3D centre, Vector3D axis, Vector3D u, Vector3D v, BodyGeometry body, int refinement)
     {

@@ -169,6 +169,34 @@ public sealed class BodyOrientationTests
         Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("turned as a search on a low-frequency model of its heating found worse, normal ", StringComparison.Ordinal));
     }
 
+    [Fact]
+    public void ABodyGivenNoNormalWithAConductorWithinItsReachIsNotJudgedForHeating()
+    {
+        // The rule, and why: 60 mm from a 10 kA line at 50 Hz a 120 mm rod, turned, reaches to within a few mm of the
+        // conductor. An orientation the three judged and the search's model both miss heats it over twice as much as
+        // any of the three (by the engine's own model), so without its normal its heating is not judged: Indeterminate,
+        // saying why. Given its normal it is solved; 300 mm away nothing is within reach.
+        var line = new FieldSource("line", new[] { new SourceTerm(new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ)), new SineWaveform(10000, 50, drive: DriveKind.Current)) });
+        ConductiveItem rod = FilamentModelTests.Body("Cylinder", "Copper", 0.01, length: 0.12, contact: "Held");
+        var near = new Vector3D(0.06, 0, 0);
+        InductionResponse head = InductionEngine.Respond(new Scenario(rod, line, new Placement(near)));
+        Assert.Contains(head.ValidityIssues, i => i.Reason.StartsWith("turned, the body reaches where the field is ", StringComparison.Ordinal) && i.Affects == AffectedResults.Heating);
+        Assert.All(head.AcrossAxis, r => Assert.Contains(r.ValidityIssues, i => i.Reason.StartsWith("turned, the body reaches", StringComparison.Ordinal)));
+        InductionAssessment assessed = HazardAssessor.Assess(head, HazardPolicy.Default);
+        Assert.Equal(Verdict.Indeterminate, assessed.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn).Verdict);
+        Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("a conductor of the source lies within its reach", StringComparison.Ordinal));
+
+        double three = new[] { head }.Concat(head.AcrossAxis).Max(r => r.TemperatureRiseKelvin);
+        InductionResponse towardTheLine = InductionEngine.Respond(new Scenario(rod, line, new Placement(near, new Vector3D(0.894, 0.046, 0.445))));
+        _out.WriteLine($"the three at most {three:F2} K; turned toward the line {towardTheLine.TemperatureRiseKelvin:F2} K");
+        Assert.True(towardTheLine.IsValid, string.Join("; ", towardTheLine.ValidityIssues));
+        Assert.True(towardTheLine.TemperatureRiseKelvin > 2 * three, "turned toward the line " + towardTheLine.TemperatureRiseKelvin + " K against " + three + " K");
+
+        Assert.True(InductionEngine.Respond(new Scenario(rod, line, new Placement(near, Vector3D.UnitZ))).IsValid, "given its normal");
+        InductionResponse far = InductionEngine.Respond(new Scenario(rod, line, new Placement(new Vector3D(0.3, 0.1, 0))));
+        Assert.DoesNotContain(far.ValidityIssues, i => i.Reason.StartsWith("turned, the body reaches", StringComparison.Ordinal));
+    }
+
     [Theory]
     [InlineData("Bar")]
     [InlineData("Cylinder")]
