@@ -137,7 +137,9 @@ public static class InductionEngine
                     : searched ? " (a search on a low-frequency model of its heating found no orientation worse)"
                     : " (no search for one between them could be made: the heating of fewer than two of them was found)")
                 + (turned.Count == 0 ? string.Empty : ", and turned as a search on a low-frequency model of its heating found worse, normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)))
-                + "; the search solves a model, not every orientation, so where how it sits is known, give it (-Normal or a Normal column)";
+                + (withinReach is not null
+                    ? "; for its heating to be judged, give how it sits (-Normal or a Normal column)"
+                    : "; the search solves a model, not every orientation, so where how it sits is known, give it (-Normal or a Normal column)");
             for (int k = 0; k < others.Length; k++)
             {
                 others[k] = others[k] with { ModelNotes = others[k].ModelNotes.Concat(new[] { note }).ToArray() };

@@ -184,7 +184,7 @@ public sealed class BodyOrientationTests
         Assert.All(head.AcrossAxis, r => Assert.Contains(r.ValidityIssues, i => i.Reason.StartsWith("turned, the body reaches", StringComparison.Ordinal)));
         InductionAssessment assessed = HazardAssessor.Assess(head, HazardPolicy.Default);
         Assert.Equal(Verdict.Indeterminate, assessed.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn).Verdict);
-        Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("a conductor of the source lies within its reach", StringComparison.Ordinal));
+        Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("a conductor of the source lies within its reach", StringComparison.Ordinal) && n.EndsWith("for its heating to be judged, give how it sits (-Normal or a Normal column)", StringComparison.Ordinal));
 
         double three = new[] { head }.Concat(head.AcrossAxis).Max(r => r.TemperatureRiseKelvin);
         InductionResponse towardTheLine = InductionEngine.Respond(new Scenario(rod, line, new Placement(near, new Vector3D(0.894, 0.046, 0.445))));
