@@ -10,7 +10,7 @@ namespace InductionHazard.Mechanics;
 /// <summary>
 /// The pull and twist on a soft ferromagnetic item in a source's field: magnetisation mu0 M = min(chi B / (1 + N chi), Bs)
 /// with the applied flux density B, the susceptibility chi = mu_r - 1, the demagnetising factor N and the saturation
-/// Bs (PHYSICS section 7); the force F = V M grad|B| (mu0 M in tesla: F = V (mu0 M / mu0) grad|B|); the torque bounded
+/// Bs (a soft ellipsoid magnetised in a uniform field, common practice); the force F = V M grad|B| (mu0 M in tesla: F = V (mu0 M / mu0) grad|B|); the torque bounded
 /// by |m x B| &lt;= V M |B| for an item with shape anisotropy, zero for a sphere of soft material.
 /// </summary>
 /// <param name="FieldTesla">The largest |B| at the item's centre over the drive, T.</param>

@@ -23,7 +23,7 @@ public sealed class BodyOrientationTests
 
     public BodyOrientationTests(ITestOutputHelper output) => _out = output;
 
-    [Validates("a rod given no normal in a 1 Hz field: the orientation kept heats it as a long cylinder across its axis, pi sigma l R^4 B'^2 / 4, twice the pi sigma l R^4 B'^2 / 8 along it", "classical eddy-current losses of a long cylinder along and across its axis (PHYSICS section 5; Landau and Lifshitz vol. 8 section 59 for the method)", "2 % (l = 40 R), 1 % along")]
+    [Validates("a rod given no normal in a 1 Hz field: the orientation kept heats it as a long cylinder across its axis, pi sigma l R^4 B'^2 / 4, twice the pi sigma l R^4 B'^2 / 8 along it", "classical eddy-current losses of a long cylinder along and across its axis (derived from the low-frequency current density, sigma B' r / 2 round the axis and sigma B' x along it; Landau and Lifshitz vol. 8 section 59 for the method)", "2 % (l = 40 R), 1 % along")]
     [Fact]
     public void ARodGivenNoNormalIsJudgedWithItsAxisAcrossTheFieldWhichHeatsItTwiceAsMuch()
     {

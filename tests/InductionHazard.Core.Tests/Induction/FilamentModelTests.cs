@@ -128,7 +128,7 @@ public class FilamentModelTests
         Assert.True(Math.Abs(fine - expected) < 0.5 * Math.Abs(coarse - expected), "a mesh three times finer at least halves the error");
     }
 
-    [Validates("long cylinder along the field, low frequency: P = pi sigma l R^4 B'^2 / 8", "classical eddy-current loss (PHYSICS section 5); end effects vanish at low frequency", "1 %")]
+    [Validates("long cylinder along the field, low frequency: P = pi sigma l R^4 B'^2 / 8", "classical eddy-current loss, derived from the current density sigma B' r / 2 round the axis; end effects vanish at low frequency", "1 %")]
     [Fact]
     public void ALongCylinderAlongTheFieldLosesPiSigmaLR4BDot2Over8()
     {
@@ -290,7 +290,7 @@ public class FilamentModelTests
         Within.Relative(work - stored, run.EnergyJoules, 1e-3, "energy dissipated against the source's work");
     }
 
-    [Validates("thin-walled tube in a ramp 70 times faster than mu0 sigma R t / 2 shields its centre to under 5 %; one 10 times slower does not", "shorted-turn time constant mu0 sigma R t / 2 (PHYSICS section 5); field of coaxial loops mu0 I a^2 / 2 (a^2 + z^2)^1.5", "5 %")]
+    [Validates("thin-walled tube in a ramp 70 times faster than mu0 sigma R t / 2 shields its centre to under 5 %; one 10 times slower does not", "shorted-turn time constant mu0 sigma R t / 2 (a thin wall's L = mu0 pi R^2 / l over R = 2 pi R / (sigma t l), common practice); field of coaxial loops mu0 I a^2 / 2 (a^2 + z^2)^1.5", "5 %")]
     [Fact]
     public void AThinWalledTubeShieldsItsInteriorFromAFastPulse()
     {
@@ -329,7 +329,7 @@ public class FilamentModelTests
         Assert.True(slow > 0.8, "a slow one is not: " + slow);
     }
 
-    [Validates("closed tube (gas cylinder shell), low frequency: the open wall's pi sigma l (R^4 - Ri^4) B'^2 / 8 plus two end discs' pi sigma t Ri^4 B'^2 / 8", "classical eddy-current losses (PHYSICS section 5; Duffin for the discs): at low frequency each loop carries its own emf / R", "1.5 %; the ends' share 5 %")]
+    [Validates("closed tube (gas cylinder shell), low frequency: the open wall's pi sigma l (R^4 - Ri^4) B'^2 / 8 plus two end discs' pi sigma t Ri^4 B'^2 / 8", "classical eddy-current losses (derived from the current density sigma B' r / 2 round the axis; Duffin for the discs): at low frequency each loop carries its own emf / R", "1.5 %; the ends' share 5 %")]
     [Fact]
     public void AClosedTubeAtLowFrequencyLosesItsWallsAndEndsLosses()
     {
@@ -377,7 +377,7 @@ public class FilamentModelTests
         }
     }
 
-    [Validates("field across a body's axis at low frequency: the Thomson bound against the exact losses of a sphere (2 pi sigma R^5 B'^2/15), a long cylinder across its axis (pi sigma l R^4 B'^2/4) and a thin disc with the field in its plane (sigma t^2 B'^2 V/12)", "Landau and Lifshitz vol. 8 section 59; classical eddy-current losses (PHYSICS section 5); Bertotti 1998 (lamination)", "1 % sphere (its axis follows the field: filaments); 2 % cylinder (l = 40 R); 1 % disc (t/R = 0.02)")]
+    [Validates("field across a body's axis at low frequency: the Thomson bound against the exact losses of a sphere (2 pi sigma R^5 B'^2/15), a long cylinder across its axis (pi sigma l R^4 B'^2/4) and a thin disc with the field in its plane (sigma t^2 B'^2 V/12)", "Landau and Lifshitz vol. 8 section 59; classical eddy-current losses (derived from the current density sigma B' x along the cylinder); Bertotti 1998 (lamination)", "1 % sphere (its axis follows the field: filaments); 2 % cylinder (l = 40 R); 1 % disc (t/R = 0.02)")]
     [Theory]
     [InlineData("Sphere")]
     [InlineData("Cylinder")]

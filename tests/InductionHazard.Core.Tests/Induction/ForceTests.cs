@@ -128,7 +128,7 @@ public class ForceTests
         Assert.Equal(0, r.PeakForceNewtons);
     }
 
-    [Validates("Force and Torque margins: weight over peak force, m g L/2 over peak torque; a margin of 1 lands on the limit", "ASTM F2052 and F2213 criteria (as PHYSICS section 8 states them)", "1e-12")]
+    [Validates("Force and Torque margins: weight over peak force, m g L/2 over peak torque; a margin of 1 lands on the limit", "ASTM F2052 and F2213 criteria (from memory of the standards' methods)", "1e-12")]
     [Fact]
     public void TheForceAndTorqueMarginsCompareWithTheWeightAndTheGravitationalTorque()
     {
