@@ -358,8 +358,8 @@ public static class InductionEngine
     /// <summary>
     /// The largest field over the sphere a body sweeps, relative to its rms there, above which a conductor of the source
     /// is taken to lie within the body's reach (4). Checked against orientations solved as given near a coil and a line:
-    /// where the ratio was at most 3.2 the orientations judged reached the most of 60 to 100 solved to within 2 %; where it
-    /// was 5.3 or more (the body, turned, reaching to within a few mm of a winding or a line) some orientation heated the
+    /// where the ratio was at most 3.3 the orientations judged reached the most of 60 to 100 solved to within 2 %; where it
+    /// was 8 or more (the body, turned, reaching to within a few mm of a winding or a line) some orientation heated the
     /// body 1.2 to 5.6 times more than any judged, but for two bodies at their melting point in every orientation.
     /// </summary>
     private const double ReachLimit = 4;
