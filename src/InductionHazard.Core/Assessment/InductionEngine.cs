@@ -243,18 +243,14 @@ public static class InductionEngine
     }
 
     /// <summary>
-    /// The axis at which a function of it is highest, and its value there: 64 axes spread evenly over the half sphere
-    /// (a Fibonacci lattice), then the best refined by steps round it that halve from 0.2 rad to 0.0125 rad.
+    /// The axis at which a function of it is highest, and its value there: 64 axes spread evenly over the half sphere,
+    /// then a climb from the best (<see cref="SphereSearch"/>).
     /// </summary>
     private static (Vector3D Axis, double Value) Highest(Func<Vector3D, double> value, Vector3D start, CancellationToken cancellation)
     {
-        const int Spread = 64;
         (Vector3D best, double bestValue) = (start, value(start));
-        double golden = Math.PI * (3 - Math.Sqrt(5));
-        for (int i = 0; i < Spread; i++)
+        foreach (Vector3D axis in SphereSearch.Spread(64, half: true))
         {
-            double z = 1 - ((i + 0.5) / Spread), r = Math.Sqrt(1 - (z * z)), phi = golden * i;
-            var axis = new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
             double v = value(axis);
             if (v > bestValue)
             {
@@ -262,27 +258,7 @@ public static class InductionEngine
             }
         }
 
-        for (double step = 0.2; step > 0.01; step /= 2)
-        {
-            cancellation.ThrowIfCancellationRequested();
-            Vector3D u = RectangularLoopGeometry.WidthDirection(best), w = best.Cross(u);
-            bool moved = true;
-            for (int round = 0; round < 8 && moved; round++)
-            {
-                moved = false;
-                foreach (Vector3D tangent in new[] { u, -1 * u, w, -1 * w })
-                {
-                    Vector3D axis = (best + (step * tangent)).Normalized();
-                    double v = value(axis);
-                    if (v > bestValue)
-                    {
-                        (best, bestValue, moved) = (axis, v, true);
-                    }
-                }
-            }
-        }
-
-        return (best, bestValue);
+        return SphereSearch.Climb(value, best, bestValue, cancellation);
     }
 
     /// <summary>The most orientations a search solves beyond the three.</summary>

@@ -153,7 +153,6 @@ internal static class CrossAxisField
     public static double ReachRatio(FieldSource source, Vector3D centre, double reach, System.Numerics.Complex[] weights)
     {
         const int Count = 200;
-        double golden = Math.PI * (3 - Math.Sqrt(5));
         double squares = 0;
         (Vector3D direction, double size) largest = (Vector3D.UnitZ, 0);
         double SizeAt(Vector3D direction)
@@ -171,10 +170,8 @@ internal static class CrossAxisField
 
         try
         {
-            for (int i = 0; i < Count; i++)
+            foreach (Vector3D direction in SphereSearch.Spread(Count, half: false))
             {
-                double z = 1 - (2 * (i + 0.5) / Count), r = Math.Sqrt(1 - (z * z));
-                var direction = new Vector3D(r * Math.Cos(golden * i), r * Math.Sin(golden * i), z);
                 double size = SizeAt(direction);
                 if (double.IsNaN(size))
                 {
@@ -185,24 +182,7 @@ internal static class CrossAxisField
                 largest = size > largest.size ? (direction, size) : largest;
             }
 
-            for (double step = 0.2; step > 0.01; step /= 2)
-            {
-                Vector3D u = RectangularLoopGeometry.WidthDirection(largest.direction), v = largest.direction.Cross(u);
-                bool moved = true;
-                for (int round = 0; round < 8 && moved; round++)
-                {
-                    moved = false;
-                    foreach (Vector3D tangent in new[] { u, -1 * u, v, -1 * v })
-                    {
-                        Vector3D direction = (largest.direction + (step * tangent)).Normalized();
-                        double size = SizeAt(direction);
-                        if (size > largest.size)
-                        {
-                            (largest, moved) = ((direction, size), true);
-                        }
-                    }
-                }
-            }
+            largest = SphereSearch.Climb(SizeAt, largest.direction, largest.size);
         }
         catch (FieldEvaluationException)
         {

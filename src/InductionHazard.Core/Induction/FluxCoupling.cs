@@ -331,11 +331,7 @@ public static class FluxCoupling
     }
 
     /// <summary>Twenty-four normals spread evenly over the half sphere (a Fibonacci lattice): where the search looks for a top its compass search did not reach.</summary>
-    private static readonly Vector3D[] Spread = Enumerable.Range(0, 24).Select(i =>
-    {
-        double z = 1 - ((i + 0.5) / 24), r = Math.Sqrt(1 - (z * z)), phi = i * Math.PI * (3 - Math.Sqrt(5));
-        return new Vector3D(r * Math.Cos(phi), r * Math.Sin(phi), z);
-    }).ToArray();
+    private static readonly Vector3D[] Spread = SphereSearch.Spread(24, half: true);
 
     /// <summary>Two unit directions across a normal, square to it and to each other: a rectangle's usual width and height.</summary>
     private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)

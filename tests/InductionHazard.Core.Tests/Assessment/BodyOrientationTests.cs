@@ -63,17 +63,6 @@ public sealed class BodyOrientationTests
         yield return new object[] { "disc above a pulse coil", FilamentModelTests.Body("Disc", "Aluminium", 0.05, thickness: 0.003, contact: "Held"), coil, new Vector3D(0, 0.03, 0.06) };
     }
 
-    /// <summary>Normals spread evenly over the half sphere (a Fibonacci lattice).</summary>
-    private static IEnumerable<Vector3D> HalfSphere(int count)
-    {
-        double golden = Math.PI * (3 - Math.Sqrt(5));
-        for (int i = 0; i < count; i++)
-        {
-            double z = 1 - ((i + 0.5) / count), r = Math.Sqrt(1 - (z * z));
-            yield return new Vector3D(r * Math.Cos(golden * i), r * Math.Sin(golden * i), z);
-        }
-    }
-
     private static int Severity(Verdict verdict) => verdict switch { Verdict.Hazard => 3, Verdict.Indeterminate => 2, Verdict.Caution => 1, _ => 0 };
 
     [Theory]
@@ -121,7 +110,7 @@ public sealed class BodyOrientationTests
         double judged = new[] { head }.Concat(head.AcrossAxis).Max(r => r.EnergyDissipatedJoules);
         double spread = 0;
         const int count = 40;
-        foreach (Vector3D normal in HalfSphere(count))
+        foreach (Vector3D normal in SphereSearch.Spread(count, half: true))
         {
             spread = Math.Max(spread, InductionEngine.Respond(new Scenario(body, line, new Placement(centre, normal))).EnergyDissipatedJoules);
         }
@@ -155,7 +144,7 @@ public sealed class BodyOrientationTests
         double judged = new[] { head }.Concat(head.AcrossAxis).Max(r => r.TemperatureRiseKelvin);
         double spread = 0;
         const int count = 48;
-        foreach (Vector3D normal in HalfSphere(count))
+        foreach (Vector3D normal in SphereSearch.Spread(count, half: true))
         {
             InductionResponse given = InductionEngine.Respond(new Scenario(body, coil, new Placement(centre, normal)));
             Assert.True(given.IsValid, shape + " at normal " + normal + ": " + string.Join("; ", given.ValidityIssues));
