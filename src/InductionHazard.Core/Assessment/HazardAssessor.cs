@@ -161,6 +161,7 @@ public static class HazardAssessor
 
         AddOnce(standardList, Standards.SafetyFactorOf(policy));
         string[] standards = standardList.ToArray();
+        string unjudged = RecommendedAction.Unjudged(verdict, applicable, governing, response.Item.Contact);
 
         return new InductionAssessment
         {
@@ -172,8 +173,8 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             LaterSummary = LaterText.From((verdict, governing, policy.SafetyFactor), static f => Summarize(f.verdict, f.governing, f.SafetyFactor)),
-            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact) + RecommendedAction.PlaceItself(applicable, governing),
-            ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact),
+            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact, unjudged.Length > 0) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact) + unjudged + RecommendedAction.PlaceItself(applicable, governing),
+            ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact, applicable),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
             ArcMargin = MarginOf(results, HazardMechanism.Arc),

@@ -17,8 +17,10 @@ public static class RecommendedAction
     /// <param name="governing">The mechanism that governs it.</param>
     /// <param name="policy">The policy (its safety factor).</param>
     /// <param name="contact">How a person touches the item: a worn item is taken off, others kept out.</param>
-    public static string For(Verdict verdict, MechanismResult? governing, HazardPolicy policy, ContactKind contact = ContactKind.Free)
+    /// <param name="othersUnjudged">Whether some of the item's own mechanisms could not be judged: fixing it down is not offered then (see <see cref="Unjudged"/>).</param>
+    public static string For(Verdict verdict, MechanismResult? governing, HazardPolicy policy, ContactKind contact = ContactKind.Free, bool othersUnjudged = false)
     {
+        string fixDown = contact == ContactKind.Skin || othersUnjudged ? string.Empty : ", or fix it down";
         string keepOut = contact == ContactKind.Skin ? "Take it off before entering this place" : "Keep it out of this place";
         if (verdict == Verdict.Indeterminate || governing is null)
         {
@@ -44,8 +46,8 @@ public static class RecommendedAction
             HazardMechanism.Arc => keepOut + ": its gap would spark, and never near a flammable atmosphere.",
             HazardMechanism.Burn => keepOut + ": it would burn the skin it touches.",
             HazardMechanism.Overheat => keepOut + ": it would overheat, softening or melting.",
-            HazardMechanism.Force => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down with a mounting rated for the force") + ": the field would push or throw it.",
-            HazardMechanism.Torque => keepOut + (contact == ContactKind.Skin ? string.Empty : ", or fix it down") + ": the field would twist it hard enough to wrench it from the hand, the body or its mounting.",
+            HazardMechanism.Force => keepOut + (fixDown.Length == 0 ? string.Empty : fixDown + " with a mounting rated for the force") + ": the field would push or throw it.",
+            HazardMechanism.Torque => keepOut + fixDown + ": the field would twist it hard enough to wrench it from the hand, the body or its mounting.",
             HazardMechanism.Attraction => keepOut + ": it would be pulled toward the source and could become a projectile.",
             HazardMechanism.Exposure => "Keep people out of this place while the source runs, with or without the item: the field here is above the limit for a person's own exposure (see Test-FieldExposure).",
             _ => keepOut + " until the exposure is reduced and it is assessed again.",
@@ -121,11 +123,46 @@ public static class RecommendedAction
         }
 
         string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);
-        return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1);
+        return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1)
+            + (unjudged is null ? string.Empty : " Not judged for the item: " + string.Join(", ", unjudged) + " (see the findings).");
+    }
+
+    /// <summary>
+    /// Where a Hazard stands beside mechanisms of the item's own that could not be judged, says so, so that answering the
+    /// governing hazard (fixing the item down, a shorter stay) is not read as leave to use it: "... Not judged: Burn,
+    /// Overheat (see the findings): fixing it down would not answer them; keep it out until they are assessed another
+    /// way." <see cref="For"/> then does not offer fixing it down. Empty for any other verdict (an Indeterminate verdict's action already says to treat the item as unsafe),
+    /// and where the person's exposure governs (<see cref="ItemItself"/> speaks for the item then).
+    /// </summary>
+    /// <param name="verdict">The overall verdict.</param>
+    /// <param name="applicable">The mechanisms that apply.</param>
+    /// <param name="governing">The mechanism that governs.</param>
+    /// <param name="contact">How a person touches the item.</param>
+    public static string Unjudged(Verdict verdict, IReadOnlyList<MechanismResult> applicable, MechanismResult? governing, ContactKind contact)
+    {
+        if (verdict != Verdict.Hazard || governing is null || governing.Mechanism == HazardMechanism.Exposure)
+        {
+            return string.Empty;
+        }
+
+        List<string>? unjudged = UnjudgedOwn(applicable);
+        if (unjudged is null)
+        {
+            return string.Empty;
+        }
+
+        string names = string.Join(", ", unjudged);
+        return OffersFixingDown(governing, contact)
+            ? " Not judged: " + names + " (see the findings): fixing it down would not answer them; keep it out until they are assessed another way (measured, or by a specialist)."
+            : " Not judged: " + names + " (see the findings); assess them another way (measured, or by a specialist) before it is allowed here, even once the " + governing.Mechanism + " hazard is answered.";
     }
 
     /// <summary>The action in a few words, for a table at 80 columns: "Take it off", "Keep out or fix down", "Unsafe until assessed", "Use with care", "None".</summary>
-    public static string Brief(Verdict verdict, MechanismResult? governing, ContactKind contact = ContactKind.Free)
+    /// <param name="verdict">The overall verdict.</param>
+    /// <param name="governing">The mechanism that governs.</param>
+    /// <param name="contact">How a person touches the item.</param>
+    /// <param name="applicable">The mechanisms that apply: where some of the item's own could not be judged, fixing it down is not offered.</param>
+    public static string Brief(Verdict verdict, MechanismResult? governing, ContactKind contact = ContactKind.Free, IReadOnlyList<MechanismResult>? applicable = null)
     {
         if (verdict == Verdict.Indeterminate || governing is null)
         {
@@ -138,9 +175,28 @@ public static class RecommendedAction
             Verdict.Caution => "Use with care",
             _ when governing.Mechanism == HazardMechanism.Exposure => "Keep people out",
             _ when contact == ContactKind.Skin => "Take it off",
-            _ when governing.Mechanism is HazardMechanism.Force or HazardMechanism.Torque => "Keep out or fix down",
+            _ when OffersFixingDown(governing, contact) && (applicable is null || UnjudgedOwn(applicable) is null) => "Keep out or fix down",
             _ => "Keep it out",
         };
+    }
+
+    private static bool OffersFixingDown(MechanismResult governing, ContactKind contact) =>
+        contact != ContactKind.Skin && governing.Mechanism is HazardMechanism.Force or HazardMechanism.Torque;
+
+    /// <summary>The item's own mechanisms (not the person's exposure) that could not be judged, or null if none.</summary>
+    private static List<string>? UnjudgedOwn(IReadOnlyList<MechanismResult> applicable)
+    {
+        List<string>? unjudged = null;
+        for (int k = 0; k < applicable.Count; k++)
+        {
+            MechanismResult r = applicable[k];
+            if (r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Indeterminate)
+            {
+                (unjudged ??= new List<string>()).Add(r.Mechanism.ToString());
+            }
+        }
+
+        return unjudged;
     }
 
     private static string Remedy(HazardMechanism mechanism) => mechanism switch

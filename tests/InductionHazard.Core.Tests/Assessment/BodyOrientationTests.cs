@@ -173,6 +173,10 @@ public sealed class BodyOrientationTests
         Assert.All(head.AcrossAxis, r => Assert.Contains(r.ValidityIssues, i => i.Reason.StartsWith("turned, the body reaches", StringComparison.Ordinal)));
         InductionAssessment assessed = HazardAssessor.Assess(head, HazardPolicy.Default);
         Assert.Equal(Verdict.Indeterminate, assessed.Mechanisms.Single(m => m.Mechanism == HazardMechanism.Burn).Verdict);
+        _out.WriteLine(assessed.Verdict + ": " + assessed.Action);
+        // A Hazard by the holder's exposure stands beside it: the action still names the heating as not judged.
+        Assert.Equal(Verdict.Hazard, assessed.Verdict);
+        Assert.Contains("could not be judged (Burn, Overheat)", assessed.Action, StringComparison.Ordinal);
         Assert.Contains(assessed.Response.ModelNotes, n => n.Contains("a conductor of the source lies within its reach", StringComparison.Ordinal) && n.EndsWith("for its heating to be judged, give how it sits (-Normal or a Normal column)", StringComparison.Ordinal));
 
         double three = new[] { head }.Concat(head.AcrossAxis).Max(r => r.TemperatureRiseKelvin);
