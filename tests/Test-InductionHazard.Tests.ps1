@@ -875,6 +875,18 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,site rules,technician
         }
     }
 
+    Context 'a stay longer than the drive' {
+        It 'judges an 8 h stay no milder than leaving as soon as a ramp ends, and says which stay it kept' {
+            $ring = New-ConductiveItem -Name 'Ring at the bore' -Material Copper -Diameter '20 mm' -WireDiameter '2 mm'
+            $ramp = New-FieldWaveform -Ramp -From '0 T' -To '3 T' -Duration '1 s' | New-FieldSource -Uniform -Name 'Bore ramp'
+            $long = Test-InductionHazard -Item $ring -Source $ramp -ExposureTime '8 h'
+            $once = Test-InductionHazard -Item $ring -Source $ramp
+            $long.BurnMargin | Should -Be $once.BurnMargin -Because 'leaving as the ramp ends adds its heat to the ramp''s before the ring cools'
+            $long.Response.ExposureSeconds | Should -Be 1
+            ($long.Response.ModelNotes -join "`n") | Should -Match 'stay: judged as given \(28\.8 ks\) and leaving as soon as the drive stops changing \(1 s\).*this is the shorter stay'
+        }
+    }
+
     Context 'the demo site as a person reads it' {
         It 'shows every margin in the table as a plain figure between 0.001 and 1000, or as a bound' {
             $site = Import-HazardSite (Join-Path $root 'examples/marrowby-heath-site.psd1')

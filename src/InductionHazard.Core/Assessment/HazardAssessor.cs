@@ -27,9 +27,27 @@ public static class HazardAssessor
     /// A body placed without a normal is judged with its axis along the largest flux change and across it (see
     /// <see cref="InductionResponse.AcrossAxis"/>), and the worst of these is the assessment: the most severe verdict
     /// (Hazard, then Indeterminate, Caution, Clear, as <see cref="VerdictRules.Combine"/> ranks them), then the smaller
-    /// judged margins in turn, smallest first. Its orientation says which it is.
+    /// judged margins in turn, smallest first. Its orientation says which it is. An item given a stay longer than its
+    /// drive changes is judged leaving as soon as the drive stops changing too (<see cref="InductionResponse.ShorterStay"/>),
+    /// and the worse kept the same way; its model notes say which stay it is.
     /// </remarks>
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
+    {
+        InductionAssessment assessed = AssessOrientations(response, policy, rowNumber, now);
+        if (response.ShorterStay is { } shorter)
+        {
+            InductionAssessment other = AssessOrientations(shorter, policy, rowNumber, now);
+            if (Worse(other, assessed))
+            {
+                (assessed, other.ShorterStayKept) = (other, true);
+            }
+        }
+
+        return assessed;
+    }
+
+    /// <summary>The worst of a response and its orientations with a body's axis across the field.</summary>
+    private static InductionAssessment AssessOrientations(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now)
     {
         InductionAssessment assessed = AssessOne(response, policy, rowNumber, now);
         for (int k = 0; k < response.AcrossAxis.Count; k++)

@@ -159,6 +159,9 @@ public sealed class InductionAssessment
     /// <summary>Which of a body's responses with its axis across the field this assessment kept as the worst (<see cref="InductionResponse.AcrossAxis"/>); -1: the one along it, or an item with one response.</summary>
     internal int AcrossIndex { get; set; } = -1;
 
+    /// <summary>Whether this assessment kept the stay that leaves as soon as the drive stops changing (<see cref="InductionResponse.ShorterStay"/>) over the stay given.</summary>
+    internal bool ShorterStayKept { get; set; }
+
     /// <summary>
     /// This assessment for another row that describes the same item at the same place (see <see cref="RepeatedRows"/>):
     /// the same verdict, margins and findings under that row's item name, row number, station and inventory columns,
@@ -173,7 +176,8 @@ public sealed class InductionAssessment
         copy._inventory = response.Scenario.Inventory;
         copy._assessedUtc = HazardAssessor.Stamp((now ?? DateTime.UtcNow).ToUniversalTime());
         // An assessment that kept a body's axis across the field is that orientation's: the same of the row's response.
-        copy._response = AcrossIndex >= 0 && AcrossIndex < response.AcrossAxis.Count ? response.AcrossAxis[AcrossIndex] : response;
+        InductionResponse stay = ShorterStayKept && response.ShorterStay is { } shorter ? shorter : response;
+        copy._response = AcrossIndex >= 0 && AcrossIndex < stay.AcrossAxis.Count ? stay.AcrossAxis[AcrossIndex] : stay;
         copy._inputHash = null;
         return copy;
     }

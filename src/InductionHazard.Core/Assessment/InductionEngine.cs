@@ -59,7 +59,63 @@ public static class InductionEngine
         }
 
         CheckFinite(response, c.Issues);
-        return AxisAcross(response, c, cancellation);
+        return ShorterStay(AxisAcross(response, c, cancellation), cancellation);
+    }
+
+    /// <summary>
+    /// An item given a stay longer than its drive changes, under a drive that ends holding flux in it, from which it is
+    /// carried out: also solved leaving as soon as the drive stops changing, which an assessment judges beside the stay
+    /// as given, keeping the worse (<see cref="HazardAssessor.Assess"/>). Leaving is a flux change of its own; soon
+    /// after the drive, its heat adds to the drive's before the item has shed it, while a longer stay lets it cool in
+    /// between (a ring whose ramp and leaving heat it alike is left with up to half the rise after a long stay). A stay
+    /// given is read as the longest an item stays, so a shorter one is no milder. Within the drive, the stay is as
+    /// given: leaving earlier is not searched.
+    /// </summary>
+    private static InductionResponse ShorterStay(InductionResponse response, CancellationToken cancellation)
+    {
+        Scenario scenario = response.Scenario;
+        FieldSource source = scenario.Source;
+        if (scenario.ExposureSeconds is not { } given || source.IsSinusoidal || !scenario.Leaves || scenario.Item.IsSplit
+            || scenario.Item.Material.IsFerromagnetic || scenario.Placement.Velocity is not null || double.IsInfinity(source.EndSeconds))
+        {
+            return response;
+        }
+
+        double runs = source.EndSeconds - source.StartSeconds;
+        if (!(runs > 0) || !(given > runs * (1 + 1e-9)) || !(Math.Abs(response.PeakFluxWebers) > 0) || HeldAtEnd(source) == 0)
+        {
+            return response;
+        }
+
+        InductionResponse shorter = Respond(scenario.WithExposure(runs), cancellation);
+        string Note(bool asGiven) => "stay: judged as given (" + SiFormat.Format(given, "s") + ") and leaving as soon as the drive stops changing ("
+            + SiFormat.Format(runs, "s") + "), whose leaving heats the item before it has shed the drive's heat; the worse is kept, and this is the "
+            + (asGiven ? "stay as given" : "shorter stay");
+        return WithNote(response, Note(true)) with { ShorterStay = WithNote(shorter, Note(false)) };
+    }
+
+    /// <summary>A response and its orientations with one more model note.</summary>
+    private static InductionResponse WithNote(InductionResponse response, string note)
+    {
+        var across = new InductionResponse[response.AcrossAxis.Count];
+        for (int k = 0; k < across.Length; k++)
+        {
+            across[k] = response.AcrossAxis[k] with { ModelNotes = response.AcrossAxis[k].ModelNotes.Concat(new[] { note }).ToArray() };
+        }
+
+        return response with { ModelNotes = response.ModelNotes.Concat(new[] { note }).ToArray(), AcrossAxis = across };
+    }
+
+    /// <summary>The largest size of any term's drive once the drive stops changing: zero where it ends with nothing held.</summary>
+    private static double HeldAtEnd(FieldSource source)
+    {
+        double held = 0;
+        foreach (SourceTerm term in source.Terms)
+        {
+            held = Math.Max(held, Math.Abs(term.Waveform.Value(source.EndSeconds)));
+        }
+
+        return held;
     }
 
     /// <summary>

@@ -29,9 +29,10 @@ public sealed record InductionResponse
     /// </summary>
     internal InductionResponse For(Scenario scenario)
     {
+        InductionResponse? shorter = ShorterStay?.For(scenario.WithExposure(ShorterStay.Scenario.ExposureSeconds));
         if (AcrossAxis.Count == 0)
         {
-            return this with { Scenario = scenario };
+            return this with { Scenario = scenario, ShorterStay = shorter };
         }
 
         var across = new InductionResponse[AcrossAxis.Count];
@@ -40,7 +41,7 @@ public sealed record InductionResponse
             across[k] = AcrossAxis[k].For(scenario.With(AcrossAxis[k].Scenario.Placement));
         }
 
-        return this with { Scenario = scenario, AcrossAxis = across };
+        return this with { Scenario = scenario, AcrossAxis = across, ShorterStay = shorter };
     }
 
     /// <summary>The source's name.</summary>
@@ -186,6 +187,13 @@ public sealed record InductionResponse
     /// (this one has it along), which an assessment judges beside this one, keeping the worst. Empty otherwise.
     /// </summary>
     internal IReadOnlyList<InductionResponse> AcrossAxis { get; init; } = Array.Empty<InductionResponse>();
+
+    /// <summary>
+    /// For an item given a stay longer than its drive changes, carried out of a field that still holds flux in it: the
+    /// same scenario leaving as soon as the drive stops changing, which an assessment judges beside this one, keeping
+    /// the worse (leaving soon after the drive heats the item before it has shed the drive's heat). Null otherwise.
+    /// </summary>
+    internal InductionResponse? ShorterStay { get; init; }
 
     /// <summary>The item's mass, kg.</summary>
     public double MassKilograms => Scenario.Item.MassKilograms;

@@ -106,6 +106,10 @@ public sealed class Scenario
     internal Scenario For(string itemName, InventoryFields inventory) =>
         new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = inventory };
 
+    /// <summary>This scenario with another stay in the field; everything else is this one's.</summary>
+    internal Scenario WithExposure(double? exposureSeconds) =>
+        new(Item, Source, Placement, exposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory };
+
     /// <summary>This scenario with the item placed otherwise; everything else is this one's.</summary>
     internal Scenario With(Placement placement) =>
         new(Item, Source, placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory };

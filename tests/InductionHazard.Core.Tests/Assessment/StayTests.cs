@@ -1,0 +1,81 @@
+using System;
+using System.Linq;
+using InductionHazard.Assessment;
+using InductionHazard.Criteria;
+using InductionHazard.Items;
+using InductionHazard.Quantities;
+using Xunit;
+using Xunit.Abstractions;
+
+namespace InductionHazard.Tests.Assessment;
+
+/// <summary>
+/// A stay given longer than the drive changes is read as the longest an item stays: leaving soon after the drive adds
+/// the heat of leaving to the drive's before the item has shed it, so the shorter stay is judged too and the worse kept.
+/// </summary>
+public class StayTests
+{
+    private readonly ITestOutputHelper _out;
+
+    public StayTests(ITestOutputHelper output) => _out = output;
+
+    [Validates("a ring's rise after a ramp and leaving alike, stacked (short stay) and apart (long stay): 2 E / (m c) and E / (m c), E = (A B / T)^2 T / R", "Faraday's law and Joule heating, lumped heat capacity (textbook)", "0.01")]
+    [Fact]
+    public void ALongStayIsJudgedNoMilderThanLeavingAsSoonAsTheDriveStops()
+    {
+        // A worn 20 mm copper ring in a uniform ramp to 3 T over 1 s, carried out over 1 s (the default): the ramp and
+        // the leaving each deposit E = (A B / T)^2 T / R (L/R = 91 us, so the current follows the emf). Leaving at once,
+        // the two add before the ring cools (its time constant on the skin some minutes): a rise of 2 E / (m c). After
+        // 8 h in the field the ramp's heat is long gone: E / (m c). The stay given, 8 h, is judged no milder than 1 s.
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.02, 0.002, contact: "Skin");
+        var source = Fixtures.UniformRamp(0, 3, 1);
+        InductionResponse response = Fixtures.Respond(ring, source, exposure: 8 * 3600);
+        Assert.NotNull(response.ShorterStay);
+        InductionResponse shorter = response.ShorterStay!;
+        Assert.Equal(1, shorter.ExposureSeconds, 12);
+        Assert.Equal(8 * 3600, response.ExposureSeconds, 6);
+
+        double energy = Math.Pow(response.LoopAreaSquareMeters * 3 / 1, 2) * 1 / response.ResistanceOhms;
+        double heatCapacity = ring.MassKilograms * ring.Material.SpecificHeatJoulesPerKilogramKelvin;
+        _out.WriteLine($"E = {energy:G5} J; rise leaving at once {shorter.TemperatureRiseKelvin:G5} K against {2 * energy / heatCapacity:G5}; after 8 h {response.TemperatureRiseKelvin:G5} K against {energy / heatCapacity:G5}");
+        Within.Relative(2 * energy / heatCapacity, shorter.TemperatureRiseKelvin, 0.01, "rise leaving as soon as the ramp ends");
+        Within.Relative(energy / heatCapacity, response.TemperatureRiseKelvin, 0.01, "rise leaving after 8 h");
+
+        InductionAssessment assessed = HazardAssessor.Assess(response, HazardPolicy.Default);
+        InductionAssessment asGiven = HazardAssessor.Assess(response with { ShorterStay = null }, HazardPolicy.Default);
+        InductionAssessment atOnce = HazardAssessor.Assess(shorter, HazardPolicy.Default);
+        Assert.Same(shorter, assessed.Response);
+        Assert.Equal(atOnce.BurnMargin, assessed.BurnMargin);
+        Assert.True(assessed.BurnMargin < 0.6 * asGiven.BurnMargin, assessed.BurnMargin + " against " + asGiven.BurnMargin);
+        Assert.Contains(assessed.Response.ModelNotes, n => n.StartsWith("stay: judged as given (28.8 ks) and leaving as soon as the drive stops changing (1 s)", StringComparison.Ordinal) && n.EndsWith("this is the shorter stay", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void OnlyAStayLongerThanTheDriveFromAFieldThatStillHoldsFluxIsJudgedShorterToo()
+    {
+        // Not for the default stay (as long as the drive changes), a fixed item (it does not leave), a drive that ends
+        // holding nothing (leaving heats nothing), or a sine (its heating grows with the stay).
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.02, 0.002, contact: "Skin");
+        Assert.Null(Fixtures.Respond(ring, Fixtures.UniformRamp(0, 3, 1)).ShorterStay);
+        Assert.Null(Fixtures.Respond(ring, Fixtures.UniformRamp(0, 3, 1), exposure: 0.5).ShorterStay);
+        Assert.Null(Fixtures.Respond(Fixtures.Ring("Copper", 0.02, 0.002, contact: "Fixed"), Fixtures.UniformRamp(0, 3, 1), exposure: 600).ShorterStay);
+        Assert.Null(Fixtures.Respond(ring, Fixtures.UniformRamp(3, 0, 1), exposure: 600).ShorterStay);
+        Assert.Null(Fixtures.Respond(ring, Fixtures.UniformSine(0.01, 50, duration: 10), exposure: 600).ShorterStay);
+        Assert.NotNull(Fixtures.Respond(ring, Fixtures.UniformRamp(0, 3, 1), exposure: 600).ShorterStay);
+    }
+
+    [Fact]
+    public void ARepeatedRowTakesTheShorterStayItsFirstRowKept()
+    {
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.02, 0.002, contact: "Skin");
+        InductionResponse response = Fixtures.Respond(ring, Fixtures.UniformRamp(0, 3, 1), exposure: 600);
+        InductionAssessment assessed = HazardAssessor.Assess(response, HazardPolicy.Default, 1);
+        Assert.Equal(1, assessed.Response.ExposureSeconds, 12);
+        InductionResponse again = RepeatedRows.Relabel(response, "Spare ring", Fixtures.InventoryRow(), 2);
+        InductionAssessment relabelled = assessed.For(again, 2);
+        Assert.Equal("Spare ring", relabelled.ItemName);
+        Assert.Equal(1, relabelled.Response.ExposureSeconds, 12);
+        Assert.Equal("Spare ring", relabelled.Response.ItemName);
+        Assert.Equal(HazardAssessor.Assess(again, HazardPolicy.Default, 2).BurnMargin, relabelled.BurnMargin);
+    }
+}
