@@ -37,7 +37,7 @@ public static class HazardAssessor
         if (response.ShorterStay is { } shorter)
         {
             InductionAssessment other = AssessOrientations(shorter, policy, rowNumber, now);
-            if (Worse(other, assessed))
+            if (Worse(other, assessed, HeatingFirst))
             {
                 (assessed, other.ShorterStayKept) = (other, true);
             }
@@ -62,13 +62,35 @@ public static class HazardAssessor
         return assessed;
     }
 
-    /// <summary>Whether <paramref name="a"/> is judged worse than <paramref name="b"/>: its verdict more severe, or as severe with smaller judged margins, compared smallest first.</summary>
-    internal static bool Worse(InductionAssessment a, InductionAssessment b)
+    /// <summary>
+    /// The mechanisms two stays differ in: their drive, leaving, force and torque are the same, and only the heating
+    /// moves with the time the item has to cool between the drive and leaving (their steps differ, which moves the
+    /// others in the fifth figure, not by the physics).
+    /// </summary>
+    private static readonly HazardMechanism[] HeatingFirst = { HazardMechanism.Burn, HazardMechanism.Overheat };
+
+    /// <summary>
+    /// Whether <paramref name="a"/> is judged worse than <paramref name="b"/>: its verdict more severe, or as severe with
+    /// smaller judged margins, compared smallest first; those of <paramref name="first"/> compared before the rest, where given.
+    /// </summary>
+    internal static bool Worse(InductionAssessment a, InductionAssessment b, HazardMechanism[]? first = null)
     {
         int severityA = Severity(a.Verdict), severityB = Severity(b.Verdict);
         if (severityA != severityB)
         {
             return severityA > severityB;
+        }
+
+        if (first is not null)
+        {
+            double[] firstA = JudgedMargins(a, first), firstB = JudgedMargins(b, first);
+            for (int k = 0; k < Math.Min(firstA.Length, firstB.Length); k++)
+            {
+                if (firstA[k] != firstB[k])
+                {
+                    return firstA[k] < firstB[k];
+                }
+            }
         }
 
         double[] marginsA = JudgedMargins(a), marginsB = JudgedMargins(b);
@@ -91,12 +113,12 @@ public static class HazardAssessor
         _ => 0,
     };
 
-    private static double[] JudgedMargins(InductionAssessment a)
+    private static double[] JudgedMargins(InductionAssessment a, HazardMechanism[]? only = null)
     {
         var margins = new List<double>(a.Mechanisms.Count);
         foreach (MechanismResult m in a.Mechanisms)
         {
-            if (m.Applies && m.Verdict != Verdict.Indeterminate && !double.IsNaN(m.Margin))
+            if (m.Applies && m.Verdict != Verdict.Indeterminate && !double.IsNaN(m.Margin) && (only is null || Array.IndexOf(only, m.Mechanism) >= 0))
             {
                 margins.Add(m.Margin);
             }

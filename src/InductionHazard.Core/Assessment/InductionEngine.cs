@@ -82,12 +82,14 @@ public static class InductionEngine
         }
 
         double runs = source.EndSeconds - source.StartSeconds;
-        if (!(runs > 0) || !(given > runs * (1 + 1e-9)) || !(Math.Abs(response.PeakFluxWebers) > 0) || HeldAtEnd(source) == 0)
+        // Not the flux along the axis alone: a body's leaving also moves the field across it, which heats it too.
+        if (!(runs > 0) || !(given > runs * (1 + 1e-9)) || HeldAtEnd(source) == 0)
         {
             return response;
         }
 
-        InductionResponse shorter = Respond(scenario.WithExposure(runs), cancellation);
+        // The default stay is the drive's span: a 10 ms pulse's, shorter than a stay anyone can give (0.1 s at least).
+        InductionResponse shorter = Respond(scenario.WithExposure(null), cancellation);
         string Note(bool asGiven) => "stay: judged as given (" + SiFormat.Format(given, "s") + ") and leaving as soon as the drive stops changing ("
             + SiFormat.Format(runs, "s") + "), whose leaving heats the item before it has shed the drive's heat; the worse is kept, and this is the "
             + (asGiven ? "stay as given" : "shorter stay");

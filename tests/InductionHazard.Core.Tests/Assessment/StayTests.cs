@@ -62,6 +62,28 @@ public class StayTests
         Assert.Null(Fixtures.Respond(ring, Fixtures.UniformRamp(3, 0, 1), exposure: 600).ShorterStay);
         Assert.Null(Fixtures.Respond(ring, Fixtures.UniformSine(0.01, 50, duration: 10), exposure: 600).ShorterStay);
         Assert.NotNull(Fixtures.Respond(ring, Fixtures.UniformRamp(0, 3, 1), exposure: 600).ShorterStay);
+
+        // A drive shorter than any stay that can be given (0.1 s at least): its own span, not a refused input.
+        InductionResponse pulse = Fixtures.Respond(ring, Fixtures.UniformRamp(0, 1, 0.01), exposure: 2);
+        Assert.Equal(0.01, pulse.ShorterStay!.ExposureSeconds, 12);
+        Assert.True(HazardAssessor.Assess(pulse, HazardPolicy.Default).BurnMargin <= HazardAssessor.Assess(pulse with { ShorterStay = null }, HazardPolicy.Default).BurnMargin);
+    }
+
+    [Fact]
+    public void TheStayKeptIsTheOneThatHeatsMoreNotOneWhoseTorqueDiffersInItsFifthFigure()
+    {
+        // Both stays are torque Hazards, their torque margins a step's rounding apart (0.04643 and 0.04644 when this
+        // was written); the heating differs by a quarter. The stay kept is the one that heats more, so the burn
+        // margin reported is the smaller.
+        ConductiveItem ring = Fixtures.Ring("Copper", 0.02, 0.002, contact: "Skin");
+        InductionResponse response = InductionEngine.Respond(new Scenario(ring, Fixtures.UniformRamp(0, 3, 1), null, 601, null, 0.3));
+        InductionAssessment asGiven = HazardAssessor.Assess(response with { ShorterStay = null }, HazardPolicy.Default);
+        InductionAssessment atOnce = HazardAssessor.Assess(response.ShorterStay!, HazardPolicy.Default);
+        _out.WriteLine($"torque margins {asGiven.TorqueMargin:G6} and {atOnce.TorqueMargin:G6}; burn margins {asGiven.BurnMargin:G6} and {atOnce.BurnMargin:G6}");
+        Assert.Equal(Verdict.Hazard, asGiven.Verdict);
+        Assert.True(atOnce.BurnMargin < 0.9 * asGiven.BurnMargin);
+        Within.Relative(asGiven.TorqueMargin!.Value, atOnce.TorqueMargin!.Value, 1e-3, "torque margins of the two stays");
+        Assert.Equal(atOnce.BurnMargin, HazardAssessor.Assess(response, HazardPolicy.Default).BurnMargin);
     }
 
     [Fact]
