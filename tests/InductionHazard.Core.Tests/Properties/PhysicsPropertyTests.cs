@@ -164,6 +164,57 @@ public class PhysicsPropertyTests
         }, seed: "0N0XIzNsQ0O6", iter: Iterations / 2);
     }
 
+    [Validates("no heating or shock margin falls as an item moves away from a line current (property)", "Ampere's law (the field and its rate fall as 1/r everywhere along the item)", "strict")]
+    [Fact]
+    public void FartherFromALineCurrentNoHeatingOrShockMarginFalls()
+    {
+        // Moving an item straight away from a long line current lowers the field and its rate at every point of it
+        // (Ampere's law, B = mu0 I / (2 pi r)), so the heating, the emf across a gap and the wearer's field can only
+        // fall: no margin of those may fall farther out, nor the verdict grow, whether the item's orientation is given
+        // or the engine turns it. Exact, with no slack: the steps differ from place to place, but each is exact for its
+        // drive. Random items, distances and drives around 6 to 100 cm.
+        var line = new LineConductor(new Axis(Vector3D.Zero, Vector3D.UnitZ));
+        HazardMechanism[] judged = { HazardMechanism.Burn, HazardMechanism.Overheat, HazardMechanism.Shock, HazardMechanism.Exposure };
+        int compared = 0;
+        Gen.Select(Gen.Int[0, 3], Gen.Double[0.06, 0.5], Gen.Double[1.1, 2.5], Gen.Int[0, 2], Gen.Bool).Sample((kind, near, factor, drive, given) =>
+        {
+            ConductiveItem item = kind switch
+            {
+                0 => Ring(0.02, 0.002, 0, "Skin"),
+                1 => Ring(0.03, 0.003, 3, "Held", gap: 0.002),
+                2 => ItemRecordReader.Read(new Dictionary<string, object?> { ["Shape"] = "Cylinder", ["Material"] = "Copper", ["Diameter"] = "10 mm", ["Length"] = "80 mm", ["Contact"] = "Held" }, MaterialLibrary.BuiltIn),
+                _ => ItemRecordReader.Read(new Dictionary<string, object?> { ["Shape"] = "Disc", ["Material"] = "Aluminium", ["Diameter"] = "50 mm", ["Thickness"] = "2 mm", ["Contact"] = "Held" }, MaterialLibrary.BuiltIn),
+            };
+            FieldWaveform waveform = drive switch
+            {
+                0 => new SineWaveform(2000, 50, drive: DriveKind.Current),
+                1 => new RampWaveform(0, 20000, 0.02, drive: DriveKind.Current),
+                _ => new DecayWaveform(20000, 0.05, drive: DriveKind.Current),
+            };
+            var source = new FieldSource("line", new[] { new SourceTerm(line, waveform) });
+            Vector3D? normal = given ? Vector3D.UnitY : null;
+            InductionAssessment At(double r) => HazardAssessor.Assess(InductionEngine.Respond(new Scenario(item, source, new Placement(new Vector3D(r, 0, 0), normal))), HazardPolicy.Default);
+            InductionAssessment nearer = At(near), farther = At(near * factor);
+            foreach (HazardMechanism mechanism in judged)
+            {
+                MechanismResult a = nearer.Mechanisms.Single(m => m.Mechanism == mechanism), b = farther.Mechanisms.Single(m => m.Mechanism == mechanism);
+                if (!a.Applies || !b.Applies || a.Verdict == Verdict.Indeterminate || b.Verdict == Verdict.Indeterminate)
+                {
+                    continue;
+                }
+
+                Assert.True(b.Margin >= a.Margin, $"{item.Loop.Describe()} {mechanism}: {a.Margin:R} at {near:G4} m, {b.Margin:R} at {near * factor:G4} m");
+                compared++;
+            }
+
+            if (nearer.Verdict != Verdict.Indeterminate && farther.Verdict != Verdict.Indeterminate && farther.GoverningMechanism is not (HazardMechanism.Force or HazardMechanism.Torque))
+            {
+                Assert.True(Severity(farther.Verdict) <= Severity(nearer.Verdict), $"{item.Loop.Describe()}: {farther.Verdict} at {near * factor:G4} m against {nearer.Verdict} at {near:G4} m");
+            }
+        }, seed: "0N0XIzNsQ0P1", iter: Iterations / 2, threads: 1);
+        Assert.True(compared > 40, compared + " margins compared");
+    }
+
     [Fact]
     public void DoublingTheLimitsNeverGivesAWorseVerdict()
     {
