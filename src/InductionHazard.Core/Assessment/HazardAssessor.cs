@@ -33,33 +33,103 @@ public static class HazardAssessor
     /// </remarks>
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
     {
-        InductionAssessment assessed = AssessOrientations(response, policy, rowNumber, now);
+        if (response.AcrossAxis.Count == 0 && response.ShorterStay is null)
+        {
+            return AssessOne(response, policy, rowNumber, now);
+        }
+
+        InductionAssessment[] given = AssessOrientations(response, policy, rowNumber, now, out InductionAssessment assessed);
+        InductionAssessment[] other = Array.Empty<InductionAssessment>();
+        bool shorterKept = false;
         if (response.ShorterStay is { } shorter)
         {
-            InductionAssessment other = AssessOrientations(shorter, policy, rowNumber, now);
-            if (Worse(other, assessed, HeatingFirst))
+            other = AssessOrientations(shorter, policy, rowNumber, now, out InductionAssessment early);
+            if (Worse(early, assessed, HeatingFirst))
             {
-                (assessed, other.ShorterStayKept) = (other, true);
+                (assessed, shorterKept) = (early, true);
+                (given, other) = (other, given);
             }
         }
 
+        // Each mechanism at the orientation worst for it (the orientation is not known), and between the stays the
+        // heating (they differ in nothing else): the verdict is the same as the worst alternative's, but a mechanism
+        // that does not govern is no longer shown milder than another orientation makes it.
+        MechanismResult[]? envelope = null;
+        for (int m = 0; m < assessed.Mechanisms.Count; m++)
+        {
+            MechanismResult worst = assessed.Mechanisms[m];
+            foreach (InductionAssessment a in given)
+            {
+                worst = WorseOf(worst, a, m, assessed, stay: null);
+            }
+
+            if (Array.IndexOf(HeatingFirst, worst.Mechanism) >= 0)
+            {
+                foreach (InductionAssessment a in other)
+                {
+                    worst = WorseOf(worst, a, m, assessed, shorterKept ? "staying as given" : "leaving as soon as the drive stops changing");
+                }
+            }
+
+            if (!ReferenceEquals(worst, assessed.Mechanisms[m]))
+            {
+                envelope ??= assessed.Mechanisms.ToArray();
+                envelope[m] = worst;
+            }
+        }
+
+        if (envelope is not null)
+        {
+            int across = assessed.AcrossIndex;
+            assessed = AssessOne(assessed.Response, policy, rowNumber, now, envelope);
+            assessed.AcrossIndex = across;
+        }
+
+        assessed.ShorterStayKept = shorterKept;
         return assessed;
     }
 
-    /// <summary>The worst of a response and its orientations with a body's axis across the field.</summary>
-    private static InductionAssessment AssessOrientations(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now)
+    /// <summary>
+    /// The worse for mechanism <paramref name="m"/> of <paramref name="worst"/> and <paramref name="other"/>'s, led by
+    /// which orientation or stay it is when it is the other's: one that cannot be judged over one that is (fail closed),
+    /// else the smaller margin.
+    /// </summary>
+    private static MechanismResult WorseOf(MechanismResult worst, InductionAssessment other, int m, InductionAssessment kept, string? stay)
     {
-        InductionAssessment assessed = AssessOne(response, policy, rowNumber, now);
+        MechanismResult candidate = other.Mechanisms[m];
+        if (ReferenceEquals(other, kept) || !candidate.Applies || !worst.Applies || worst.Verdict == Verdict.Indeterminate)
+        {
+            return worst;
+        }
+
+        bool worse = candidate.Verdict == Verdict.Indeterminate || candidate.Margin < worst.Margin;
+        if (!worse)
+        {
+            return worst;
+        }
+
+        Vector3D normal = other.Response.Normal;
+        string turned = normal.Equals(kept.Response.Normal) ? string.Empty : "with normal " + normal;
+        string where = stay is null ? (turned.Length == 0 ? "in another of its orientations" : turned) : turned.Length == 0 ? stay : stay + ", " + turned;
+        return candidate.Elsewhere(where);
+    }
+
+    /// <summary>The assessments of a response and its orientations with a body's axis across the field, and the worst of them.</summary>
+    private static InductionAssessment[] AssessOrientations(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now, out InductionAssessment worst)
+    {
+        var all = new InductionAssessment[1 + response.AcrossAxis.Count];
+        worst = all[0] = AssessOne(response, policy, rowNumber, now);
         for (int k = 0; k < response.AcrossAxis.Count; k++)
         {
-            InductionAssessment other = AssessOne(response.AcrossAxis[k], policy, rowNumber, now);
-            if (Worse(other, assessed))
+            InductionAssessment other = all[k + 1] = AssessOne(response.AcrossAxis[k], policy, rowNumber, now);
+            other.AcrossIndex = k;
+            if (Worse(other, worst))
             {
-                (assessed, other.AcrossIndex) = (other, k);
+                worst = other;
             }
         }
 
-        return assessed;
+        return all;
     }
 
     /// <summary>
@@ -128,18 +198,23 @@ public static class HazardAssessor
         return margins.ToArray();
     }
 
-    private static InductionAssessment AssessOne(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now)
+    /// <summary>Assesses one response; <paramref name="given"/>, where given, are its mechanisms' results (each mechanism at the orientation worst for it) in place of its own.</summary>
+    private static InductionAssessment AssessOne(InductionResponse response, HazardPolicy policy, int? rowNumber, DateTime? now, MechanismResult[]? given = null)
     {
         policy.Validated();
         // A visitor named by the inventory row is judged at the public's limits whatever the policy's group.
         policy = policy.For(response.Scenario.WearerGroup);
         // Loops rather than queries: an assessment is made hundreds of thousands of times in an audit.
-        var results = new MechanismResult[Checks.Length];
+        var results = given ?? new MechanismResult[Checks.Length];
         var applicableList = new List<MechanismResult>(Checks.Length);
         bool anyIndeterminate = false;
         for (int k = 0; k < Checks.Length; k++)
         {
-            results[k] = Checks[k].Evaluate(response, policy);
+            if (given is null)
+            {
+                results[k] = Checks[k].Evaluate(response, policy);
+            }
+
             if (results[k].Applies)
             {
                 applicableList.Add(results[k]);

@@ -95,6 +95,18 @@ public sealed class MechanismResult
             _detail = detail,
         };
 
+    /// <summary>
+    /// This result as found for another of the item's possible orientations or stays than the one its assessment
+    /// shows, its finding led by which ("with normal (1, 0, 0): peak force ...").
+    /// </summary>
+    /// <param name="where">Which orientation or stay it is.</param>
+    internal MechanismResult Elsewhere(string where)
+    {
+        var copy = (MechanismResult)MemberwiseClone();
+        copy._detail = LaterText.From((where, original: this), static f => f.where + ": " + f.original.Detail);
+        return copy;
+    }
+
     /// <summary>"Burn: Hazard (margin 0.42)".</summary>
     public override string ToString() =>
         Mechanism + ": " + (Applies ? Verdict + " (margin " + Quantities.SiFormat.Plain(Margin) + ")" : "not applicable");

@@ -61,6 +61,11 @@ public sealed class BodyOrientationTests
         yield return new object[] { "disc at a furnace", FilamentModelTests.Body("Disc", "Aluminium", 0.05, thickness: 0.003, contact: "Held"), furnace, Vector3D.Zero };
         yield return new object[] { "tube in a ramp", FilamentModelTests.Body("Tube", "Aluminium", 0.06, length: 0.3, wall: 0.003), ramp, Vector3D.Zero };
         yield return new object[] { "disc above a pulse coil", FilamentModelTests.Body("Disc", "Aluminium", 0.05, thickness: 0.003, contact: "Held"), coil, new Vector3D(0, 0.03, 0.06) };
+
+        // Burn and overheat Hazards in every orientation; the force a Caution in one and some 5e-6 of the weight in the one
+        // kept for its heating.
+        var heater = new FieldSource("heater coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10), new SineWaveform(300, 10000, drive: DriveKind.Current)) });
+        yield return new object[] { "disc at a heater coil", FilamentModelTests.Body("Disc", "Aluminium", 0.06, thickness: 0.003, contact: "Held"), heater, new Vector3D(0, 0, 0.05) };
     }
 
     private static int Severity(Verdict verdict) => verdict switch { Verdict.Hazard => 3, Verdict.Indeterminate => 2, Verdict.Caution => 1, _ => 0 };
@@ -91,6 +96,14 @@ public sealed class BodyOrientationTests
             if (given.Verdict == judged.Verdict && !double.IsNaN(judged.MinimumMargin))
             {
                 Assert.True(given.MinimumMargin >= judged.MinimumMargin * (1 - 1e-9), label + ": smallest margin " + given.MinimumMargin + " at " + n + " below the kept " + judged.MinimumMargin);
+            }
+
+            // Each mechanism too, governing or not: its margin is that of the orientation worst for it, so a force or
+            // a burn that does not govern is never shown milder than some orientation makes it.
+            foreach (MechanismResult g in given.Mechanisms.Where(m => m.Applies && m.Verdict != Verdict.Indeterminate))
+            {
+                MechanismResult kept = judged.Mechanisms.Single(m => m.Mechanism == g.Mechanism);
+                Assert.True(kept.Verdict == Verdict.Indeterminate || g.Margin >= kept.Margin * (1 - 1e-9), label + ": " + g.Mechanism + " margin " + g.Margin + " at " + n + " below the kept " + kept.Margin + " (" + kept.Detail + ")");
             }
         }
     }
