@@ -89,7 +89,7 @@ public static class InductionEngine
         }
 
         // The default stay is the drive's span: a 10 ms pulse's, shorter than a stay anyone can give (0.1 s at least).
-        InductionResponse shorter = Respond(scenario.WithExposure(null), cancellation);
+        InductionResponse shorter = Respond(scenario.LeavingAtOnce(), cancellation);
         string Note(bool asGiven) => "stay: judged as given (" + SiFormat.Format(given, "s") + ") and leaving as soon as the drive stops changing ("
             + SiFormat.Format(runs, "s") + "), whose leaving heats the item before it has shed the drive's heat; the worse is kept, and this is the "
             + (asGiven ? "stay as given" : "shorter stay");

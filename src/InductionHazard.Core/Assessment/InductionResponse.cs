@@ -29,7 +29,7 @@ public sealed record InductionResponse
     /// </summary>
     internal InductionResponse For(Scenario scenario)
     {
-        InductionResponse? shorter = ShorterStay?.For(scenario.WithExposure(ShorterStay.Scenario.ExposureSeconds));
+        InductionResponse? shorter = ShorterStay?.For(scenario.LeavingAtOnce());
         if (AcrossAxis.Count == 0)
         {
             return this with { Scenario = scenario, ShorterStay = shorter };

@@ -45,6 +45,8 @@ public class StayTests
         InductionAssessment asGiven = HazardAssessor.Assess(response with { ShorterStay = null }, HazardPolicy.Default);
         InductionAssessment atOnce = HazardAssessor.Assess(shorter, HazardPolicy.Default);
         Assert.Same(shorter, assessed.Response);
+        Assert.Equal(asGiven.InputHash, assessed.InputHash);
+        Assert.NotEqual(HazardAssessor.Assess(Fixtures.Respond(ring, source), HazardPolicy.Default).InputHash, assessed.InputHash);
         Assert.Equal(atOnce.BurnMargin, assessed.BurnMargin);
         Assert.True(assessed.BurnMargin < 0.6 * asGiven.BurnMargin, assessed.BurnMargin + " against " + asGiven.BurnMargin);
         Assert.Contains(assessed.Response.ModelNotes, n => n.StartsWith("stay: judged as given (28.8 ks) and leaving as soon as the drive stops changing (1 s)", StringComparison.Ordinal) && n.EndsWith("this is the shorter stay", StringComparison.Ordinal));
