@@ -884,6 +884,9 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,site rules,technician
             $long.BurnMargin | Should -Be $once.BurnMargin -Because 'leaving as the ramp ends adds its heat to the ramp''s before the ring cools'
             $long.Response.ExposureSeconds | Should -Be 1
             ($long.Response.ModelNotes -join "`n") | Should -Match 'stay: judged as given \(28\.8 ks\) and leaving as soon as the drive stops changing \(1 s\).*this is the shorter stay'
+            $long.InputHash | Should -Not -Be $once.InputHash -Because 'the inputs gave 8 h, whichever stay was kept'
+            $long | Export-HazardReport -Path (Join-Path $TestDrive 'stay.md')
+            Get-Content (Join-Path $TestDrive 'stay.md') -Raw | Should -Match '\| Time in the field \| 1 s, leaving as soon as the drive stops changing, which heats it more than the stay given \(28\.8 ks\)'
         }
     }
 
