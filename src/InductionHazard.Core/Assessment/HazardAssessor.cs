@@ -432,9 +432,9 @@ public static class HazardAssessor
 
         return verdict switch
         {
-            Verdict.Clear => "Clear: every margin is at least " + SiFormat.Plain(safetyFactor) + "; the lowest is " + governing.Mechanism + " at " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
-            Verdict.Caution => "Caution: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " is below the safety factor " + SiFormat.Plain(safetyFactor) + " (" + governing.Detail + ").",
-            Verdict.Hazard => "Hazard: " + governing.Mechanism + " margin " + SiFormat.Plain(governing.Margin) + " (" + governing.Detail + ").",
+            Verdict.Clear => "Clear: every margin is at least " + SiFormat.Plain(safetyFactor) + "; the lowest is " + governing.Mechanism + " at " + SiFormat.Margin(governing.Margin) + " (" + governing.Detail + ").",
+            Verdict.Caution => "Caution: " + governing.Mechanism + " margin " + SiFormat.Margin(governing.Margin) + " is below the safety factor " + SiFormat.Plain(safetyFactor) + " (" + governing.Detail + ").",
+            Verdict.Hazard => "Hazard: " + governing.Mechanism + " margin " + SiFormat.Margin(governing.Margin) + " (" + governing.Detail + ").",
             _ => "Indeterminate: " + governing.Mechanism + " " + governing.Detail + ".",
         };
     }

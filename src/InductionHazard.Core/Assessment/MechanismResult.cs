@@ -109,5 +109,5 @@ public sealed class MechanismResult
 
     /// <summary>"Burn: Hazard (margin 0.42)".</summary>
     public override string ToString() =>
-        Mechanism + ": " + (Applies ? Verdict + " (margin " + Quantities.SiFormat.Plain(Margin) + ")" : "not applicable");
+        Mechanism + ": " + (Applies ? Verdict + " (margin " + Quantities.SiFormat.Margin(Margin) + ")" : "not applicable");
 }

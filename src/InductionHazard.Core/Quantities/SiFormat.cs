@@ -59,7 +59,9 @@ public static class SiFormat
     /// <summary>
     /// A margin as a person reads it: "> 1000" when it is at least a thousand (so large that its figure says nothing
     /// more), "&lt; 0.001" when below a thousandth, "not judged" for NaN (a mechanism or an item that could not be
-    /// judged: never a number), otherwise three significant digits; the property keeps the number.
+    /// judged: never a number), otherwise three significant digits, cut rather than rounded: a margin is never shown
+    /// above what it is, so a Hazard's 0.9996 reads 0.999, not 1.00, and a Caution's 1.9996 reads 1.99, not the safety
+    /// factor 2.00. The property keeps the number.
     /// </summary>
     public static string Margin(double? margin)
     {
@@ -78,6 +80,14 @@ public static class SiFormat
             if (m < 1e-3)
             {
                 return "< 0.001";
+            }
+
+            if (Finite.Is(m))
+            {
+                // Three significant digits cut toward zero; the factor 1 + 1e-12 keeps a margin such as 0.29, whose
+                // product with 100 falls a rounding short of 29, from losing its last digit.
+                double scale = Math.Pow(10, 2 - Math.Floor(Math.Log10(m)));
+                return Plain(Math.Floor(m * scale * (1 + 1e-12)) / scale, 3);
             }
         }
 

@@ -35,7 +35,25 @@ public class SiFormatTests
         Assert.Equal("> 1000", SiFormat.Margin(double.PositiveInfinity));
         Assert.Equal("< 0.001", SiFormat.Margin(8.9e-5));
         Assert.Equal("999", SiFormat.Margin(999.4));
-        Assert.Equal("2.59", SiFormat.Margin(2.5894));
+        Assert.Equal("999", SiFormat.Margin(999.97));
+        Assert.Equal("not judged", SiFormat.Margin(double.NaN));
+    }
+
+    [Fact]
+    public void AMarginIsCutNeverRoundedUpAcrossALimit()
+    {
+        // A Hazard's margin just below 1 must not read 1.00, nor a Caution's just below the safety factor 2 read 2.00.
+        Assert.Equal("0.999", SiFormat.Margin(0.99990013));
+        Assert.Equal("1.99", SiFormat.Margin(1.9996));
+        Assert.Equal("2.58", SiFormat.Margin(2.5894));
+        Assert.Equal("1", SiFormat.Margin(1.0));
+        Assert.Equal("2", SiFormat.Margin(2.0));
+        // Figures with no more digits than shown keep them all, though their products with a power of ten fall a
+        // rounding short (0.29 * 100 = 28.999999999999996).
+        Assert.Equal("0.29", SiFormat.Margin(0.29));
+        Assert.Equal("0.57", SiFormat.Margin(0.57));
+        Assert.Equal("0.0111", SiFormat.Margin(0.0111630711));
+        Assert.Equal("1.51", SiFormat.Margin(1.51720973));
         Assert.Equal("not judged", SiFormat.Margin(double.NaN));
         Assert.Equal(string.Empty, SiFormat.Margin(null));
     }
