@@ -161,7 +161,7 @@ public sealed class BurnCheckSearchTests
             double expected = VerdictRules.Bounded(doseGoverns ? dose!.Value : contact);
             Assert.True(Math.Abs(expected - burn.Margin) <= 1e-9 * expected, label + ": margin " + burn.Margin + " against " + expected);
             Assert.Contains("for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s") + " against the threshold " + InductionHazard.Quantities.SiFormat.Celsius(thresholds[worst]), burn.Detail, StringComparison.Ordinal);
-            Assert.Contains("(margin " + InductionHazard.Quantities.SiFormat.Plain(VerdictRules.Bounded(contact)) + ")", burn.Detail, StringComparison.Ordinal);
+            Assert.Contains("(margin " + InductionHazard.Quantities.SiFormat.Margin(VerdictRules.Bounded(contact)) + ")", burn.Detail, StringComparison.Ordinal);
         }
 
         Assert.True(byDose >= 2 && byContact >= 2, "the cases should include both criteria governing: dose " + byDose + ", contact " + byContact);

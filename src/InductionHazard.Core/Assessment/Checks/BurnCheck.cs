@@ -142,8 +142,8 @@ public sealed class BurnCheck : IHazardCheck
 
         public string Dose() => DoseMargin is { } dm
             ? PeakCelsius > ThermalDose.FittedUpToCelsius
-                ? "thermal dose added beyond the range its relation was fitted on (the item passes " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + "), its limit reached at a rise " + SiFormat.Plain(dm) + " of this one (the margin on the rise)"
-                : "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Plain(dm) + ")"
+                ? "thermal dose added beyond the range its relation was fitted on (the item passes " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + "), its limit reached at a rise " + SiFormat.Margin(dm) + " of this one (the margin on the rise)"
+                : "thermal dose added " + SiFormat.Plain(DoseMinutes) + " CEM43 against " + SiFormat.Plain(DoseLimitMinutes) + " (margin on the rise " + SiFormat.Margin(dm) + ")"
             : "thermal dose not the criterion: its limit lies above " + SiFormat.Celsius(ThermalDose.FittedUpToCelsius) + ", beyond the range the dose relation was fitted on";
 
         public string Contact()
@@ -156,7 +156,7 @@ public sealed class BurnCheck : IHazardCheck
             (double margin, double seconds, double held, double threshold) = Sweep is { } sweep
                 ? WorstOver(sweep.History, sweep.Durations, sweep.Thresholds, Start)
                 : (ContactMargin, Seconds, Held, Threshold);
-            return "held " + SiFormat.Celsius(held) + " for " + SiFormat.Format(seconds, "s") + " against the threshold " + SiFormat.Celsius(threshold) + " for that contact time (margin " + SiFormat.Plain(margin) + ")";
+            return "held " + SiFormat.Celsius(held) + " for " + SiFormat.Format(seconds, "s") + " against the threshold " + SiFormat.Celsius(threshold) + " for that contact time (margin " + SiFormat.Margin(margin) + ")";
         }
 
         public string Place() => PlaceSeconds is { } p
