@@ -122,9 +122,9 @@ public static class RecommendedAction
                 : " The item itself could not be judged (" + string.Join(", ", unjudged) + "): treat it as unsafe here until it is assessed another way.";
         }
 
-        string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact);
+        string action = RecommendedAction.For(Verdict.Hazard, own, policy, contact, othersUnjudged: unjudged is not null);
         return " The item itself: " + char.ToLowerInvariant(action[0]) + action.Substring(1)
-            + (unjudged is null ? string.Empty : " Not judged for the item: " + string.Join(", ", unjudged) + " (see the findings).");
+            + (unjudged is null ? string.Empty : " Not judged for the item: " + string.Join(", ", unjudged) + " (see the findings); until they are assessed another way (measured, or by a specialist), keep it out.");
     }
 
     /// <summary>

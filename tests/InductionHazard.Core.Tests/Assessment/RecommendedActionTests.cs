@@ -49,6 +49,18 @@ public sealed class RecommendedActionTests
     }
 
     [Fact]
+    public void WhereTheWearersExposureGovernsTheItemsOwnHazardDoesNotOfferFixingDownBesideUnjudgedMechanisms()
+    {
+        MechanismResult exposure = MechanismResult.Judged(HazardMechanism.Exposure, "field", 10, 1, "T", 0.1, 2.0, Sources, "the field the person holding it is in");
+        MechanismResult torque = MechanismResult.Judged(HazardMechanism.Torque, "peak torque", 5, 1, "N m", 0.2, 2.0, Sources, "peak torque against the gravitational torque");
+        MechanismResult[] applicable = { Unknown(HazardMechanism.Burn), Unknown(HazardMechanism.Force), torque, exposure };
+        string added = RecommendedAction.ItemItself(applicable, exposure, HazardPolicy.Default, ContactKind.Held);
+        Assert.Equal(" The item itself: keep it out of this place: the field would twist it hard enough to wrench it from the hand, the body or its mounting. Not judged for the item: Burn, Force (see the findings); until they are assessed another way (measured, or by a specialist), keep it out.", added);
+        MechanismResult[] judged = { torque, exposure };
+        Assert.StartsWith(" The item itself: keep it out of this place, or fix it down:", RecommendedAction.ItemItself(judged, exposure, HazardPolicy.Default, ContactKind.Held), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void OnlyAHazardVerdictAddsTheClause()
     {
         // An Indeterminate verdict already says to treat the item as unsafe; a Caution or Clear beside an unjudged
