@@ -250,15 +250,21 @@ public static class FluxCoupling
         // than the top it reached, best first, at most three (near a winding the peak may have more than one top).
         (best, bestPeak, (Vector3D Normal, string Reason)? last) = Climb(best, bestPeak, turn);
         var spread = new List<(Facing Facing, double Peak)>();
+        (Vector3D Normal, string Reason)? intoSource = null;
         foreach (Vector3D n in Spread)
         {
             for (int k = 0; k < (rectangular ? 3 : 1); k++)
             {
                 var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
                 other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
+                failed = null;
                 if (At(other) is { } value)
                 {
                     spread.Add((other, value));
+                }
+                else
+                {
+                    intoSource ??= failed;
                 }
             }
         }
@@ -314,6 +320,44 @@ public static class FluxCoupling
             return (from, fromPeak, edge && turn < LastTurn ? failed : null);
         }
 
+        if (intoSource is not null)
+        {
+            // Turned, the loop reaches into the source (the field over it cannot be integrated there): near such
+            // orientations its rim passes close by a conductor, where the flux may rise to a top too narrow for the
+            // coarse spread to land near (a 269 mm ring 23 mm above a coil's plane, its centre 86 mm outside the
+            // winding: 7.1E-08 Wb reached, 1.0E-07 beside the orientations that reach the winding, between spread
+            // orientations that could not be integrated). A spread ten times as fine is tried there, and climbed
+            // from as the coarse one is; a top at the edge of what can be integrated then refuses, as above.
+            var fine = new List<(Facing Facing, double Peak)>();
+            foreach (Vector3D n in FineSpread)
+            {
+                for (int k = 0; k < (rectangular ? 3 : 1); k++)
+                {
+                    var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
+                    other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
+                    if (At(other) is { } value && value > bestPeak * (1 + 1e-9))
+                    {
+                        fine.Add((other, value));
+                    }
+                }
+            }
+
+            climbs = 0;
+            foreach ((Facing facing, double value) in fine.OrderByDescending(f => f.Peak))
+            {
+                if (!(value > bestPeak * (1 + 1e-9)) || ++climbs > 3)
+                {
+                    break;
+                }
+
+                (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, FirstTurn / 4);
+                if (reachedPeak > bestPeak)
+                {
+                    (best, bestPeak, last) = (reached, reachedPeak, edge);
+                }
+            }
+        }
+
         if (last is { } edgeOf)
         {
             // Near the source the flux grows as the loop turns toward it until the field can no longer be integrated: an
@@ -332,6 +376,9 @@ public static class FluxCoupling
 
     /// <summary>Twenty-four normals spread evenly over the half sphere (a Fibonacci lattice): where the search looks for a top its compass search did not reach.</summary>
     private static readonly Vector3D[] Spread = SphereSearch.Spread(24, half: true);
+
+    /// <summary>Two hundred and forty normals spread over the half sphere: where some of <see cref="Spread"/> reach into the source.</summary>
+    private static readonly Vector3D[] FineSpread = SphereSearch.Spread(240, half: true);
 
     /// <summary>Two unit directions across a normal, square to it and to each other: a rectangle's usual width and height.</summary>
     private static (Vector3D E1, Vector3D E2) Across(Vector3D normal)
