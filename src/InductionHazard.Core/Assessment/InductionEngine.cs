@@ -186,6 +186,7 @@ public static class InductionEngine
             }
         }
 
+        response = response with { AcrossAxis = others };
         if (!(variation <= VariationNoted) || turned.Count > 0)
         {
             string note = "orientation: the field varies through the body (" + (double.IsNaN(variation) ? "it cannot be evaluated everywhere in it" : "by " + SiFormat.Plain(100 * variation) + " % rms of its value at the centre")
@@ -198,19 +199,13 @@ public static class InductionEngine
                 + (withinReach is not null
                     ? "; for its heating to be judged, give how it sits (-Normal or a Normal column)"
                     : "; the search solves a model, not every orientation, so where how it sits is known, give it (-Normal or a Normal column)");
-            for (int k = 0; k < others.Length; k++)
-            {
-                others[k] = others[k] with { ModelNotes = others[k].ModelNotes.Concat(new[] { note }).ToArray() };
-            }
-
-            response = response with { ModelNotes = response.ModelNotes.Concat(new[] { note }).ToArray() };
+            response = WithNote(response, note);
         }
 
         return response with
         {
             Orientation = response.Orientation + " (an assessment judges its axis across it too, normals " + across[0] + " and " + across[1]
                 + (turned.Count == 0 ? string.Empty : ", and turned to normal " + string.Join(" and ", turned.Select(t => t.Scenario.Placement.Normal)) + " as a search found worse") + ", and keeps the worst)",
-            AcrossAxis = others,
         };
     }
 

@@ -96,24 +96,16 @@ public static class RecommendedAction
 
         // The item's own Hazard of smallest margin (the first on a tie; see MechanismResult.MarginBelow).
         MechanismResult? own = null;
-        List<string>? unjudged = null;
         for (int k = 0; k < applicable.Count; k++)
         {
             MechanismResult r = applicable[k];
-            if (r.Mechanism == HazardMechanism.Exposure)
-            {
-                continue;
-            }
-
-            if (r.Verdict == Verdict.Hazard && r.MarginBelow(own))
+            if (r.Mechanism != HazardMechanism.Exposure && r.Verdict == Verdict.Hazard && r.MarginBelow(own))
             {
                 own = r;
             }
-            else if (r.Verdict == Verdict.Indeterminate)
-            {
-                (unjudged ??= new List<string>()).Add(r.Mechanism.ToString());
-            }
         }
+
+        List<string>? unjudged = UnjudgedOwn(applicable);
 
         if (own is null)
         {
@@ -131,8 +123,9 @@ public static class RecommendedAction
     /// Where a Hazard stands beside mechanisms of the item's own that could not be judged, says so, so that answering the
     /// governing hazard (fixing the item down, a shorter stay) is not read as leave to use it: "... Not judged: Burn,
     /// Overheat (see the findings): fixing it down would not answer them; keep it out until they are assessed another
-    /// way." <see cref="For"/> then does not offer fixing it down. Empty for any other verdict (an Indeterminate verdict's action already says to treat the item as unsafe),
-    /// and where the person's exposure governs (<see cref="ItemItself"/> speaks for the item then).
+    /// way." <see cref="For"/> then does not offer fixing it down. Empty for any other verdict (an Indeterminate
+    /// verdict's action already says to treat the item as unsafe), and where the person's exposure governs (<see
+    /// cref="ItemItself"/> speaks for the item then).
     /// </summary>
     /// <param name="verdict">The overall verdict.</param>
     /// <param name="applicable">The mechanisms that apply.</param>

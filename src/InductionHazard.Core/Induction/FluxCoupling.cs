@@ -157,7 +157,7 @@ public static class FluxCoupling
     /// top within 32 degrees and it links more, the search starts there turning by two degrees. Then, since near a
     /// winding the peak may have more than one top, 24 normals spread over the half sphere (a rectangle at three turns
     /// in its plane each) are tried, and from each that links more than the top reached, best first and at most three,
-    /// the search runs again. The search only ever moves to an orientation that links more: never less than the
+    /// the search runs again; where some of them reach into the source, 240 as well, the same way. The search only ever moves to an orientation that links more: never less than the
     /// estimate. One at which the field cannot be integrated (the loop turned into a winding, or onto a conductor) is
     /// passed over while the search turns by more than a quarter of a degree; one at the last turn means the flux
     /// grows as the loop turns toward the source until it cannot be found, and the largest is not found: the search
@@ -249,39 +249,55 @@ public static class FluxCoupling
         // A compass search from there; then from those of a spread of orientations over the half sphere that link more
         // than the top it reached, best first, at most three (near a winding the peak may have more than one top).
         (best, bestPeak, (Vector3D Normal, string Reason)? last) = Climb(best, bestPeak, turn);
-        var spread = new List<(Facing Facing, double Peak)>();
-        (Vector3D Normal, string Reason)? intoSource = null;
-        foreach (Vector3D n in Spread)
+        // Where some of the spread reach into the source (the field over the loop cannot be integrated there), its rim
+        // passes close by a conductor near them, where the flux may rise to a top too narrow for 24 to land near (a 269
+        // mm ring 23 mm above a coil's plane, its centre 86 mm outside the winding: 7.1E-08 Wb reached, 1.0E-07 beside
+        // the orientations that reach the winding): a spread ten times as fine is tried as well, and climbed from the
+        // same way; a top at the edge of what can be integrated then refuses, as below.
+        if (ClimbFromSpread(Spread, FirstTurn))
         {
-            for (int k = 0; k < (rectangular ? 3 : 1); k++)
-            {
-                var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
-                other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
-                failed = null;
-                if (At(other) is { } value)
-                {
-                    spread.Add((other, value));
-                }
-                else
-                {
-                    intoSource ??= failed;
-                }
-            }
+            ClimbFromSpread(FineSpread, FirstTurn / 4);
         }
 
-        int climbs = 0;
-        foreach ((Facing facing, double value) in spread.OrderByDescending(f => f.Peak))
+        // Climbs from those of a spread of normals (a rectangle at three turns in its plane each) that link more than
+        // the top reached, best first, at most three; whether any of them reaches into the source.
+        bool ClimbFromSpread(Vector3D[] normals, double firstTurn)
         {
-            if (!(value > bestPeak * (1 + 1e-9)) || ++climbs > 3)
+            var spread = new List<(Facing Facing, double Peak)>();
+            bool intoSource = false;
+            foreach (Vector3D n in normals)
             {
-                break;
+                for (int k = 0; k < (rectangular ? 3 : 1); k++)
+                {
+                    var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
+                    other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
+                    if (At(other) is { } value)
+                    {
+                        spread.Add((other, value));
+                    }
+                    else
+                    {
+                        intoSource = true;
+                    }
+                }
             }
 
-            (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, FirstTurn);
-            if (reachedPeak > bestPeak)
+            int climbs = 0;
+            foreach ((Facing facing, double value) in spread.OrderByDescending(f => f.Peak))
             {
-                (best, bestPeak, last) = (reached, reachedPeak, edge);
+                if (!(value > bestPeak * (1 + 1e-9)) || ++climbs > 3)
+                {
+                    break;
+                }
+
+                (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, firstTurn);
+                if (reachedPeak > bestPeak)
+                {
+                    (best, bestPeak, last) = (reached, reachedPeak, edge);
+                }
             }
+
+            return intoSource;
         }
 
         (Facing Best, double Peak, (Vector3D Normal, string Reason)? Edge) Climb(Facing from, double fromPeak, double firstTurn)
@@ -318,44 +334,6 @@ public static class FluxCoupling
             }
 
             return (from, fromPeak, edge && turn < LastTurn ? failed : null);
-        }
-
-        if (intoSource is not null)
-        {
-            // Turned, the loop reaches into the source (the field over it cannot be integrated there): near such
-            // orientations its rim passes close by a conductor, where the flux may rise to a top too narrow for the
-            // coarse spread to land near (a 269 mm ring 23 mm above a coil's plane, its centre 86 mm outside the
-            // winding: 7.1E-08 Wb reached, 1.0E-07 beside the orientations that reach the winding, between spread
-            // orientations that could not be integrated). A spread ten times as fine is tried there, and climbed
-            // from as the coarse one is; a top at the edge of what can be integrated then refuses, as above.
-            var fine = new List<(Facing Facing, double Peak)>();
-            foreach (Vector3D n in FineSpread)
-            {
-                for (int k = 0; k < (rectangular ? 3 : 1); k++)
-                {
-                    var other = new Facing(n, rectangular ? RectangularLoopGeometry.WidthDirection(n) : null);
-                    other = k == 0 ? other : other.Turn(2, k * Math.PI / 3);
-                    if (At(other) is { } value && value > bestPeak * (1 + 1e-9))
-                    {
-                        fine.Add((other, value));
-                    }
-                }
-            }
-
-            climbs = 0;
-            foreach ((Facing facing, double value) in fine.OrderByDescending(f => f.Peak))
-            {
-                if (!(value > bestPeak * (1 + 1e-9)) || ++climbs > 3)
-                {
-                    break;
-                }
-
-                (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, FirstTurn / 4);
-                if (reachedPeak > bestPeak)
-                {
-                    (best, bestPeak, last) = (reached, reachedPeak, edge);
-                }
-            }
         }
 
         if (last is { } edgeOf)
