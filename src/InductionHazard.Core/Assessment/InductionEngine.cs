@@ -673,6 +673,7 @@ public static class InductionEngine
             {
                 StopAboveCelsius = c.MeltingCelsius,
                 MaxStepSeconds = maxStep,
+                MaxStepAt = t => LeastMaxStepAt(terms, t),
                 CurvedUntilSeconds = curvedUntil,
                 CoolingFromSeconds = outside,
                 MaxSteps = budget,
@@ -799,6 +800,18 @@ public static class InductionEngine
     }
 
     /// <summary>The shortest of the terms' longest steps, s (NaN if any is, as Enumerable.Min gives it).</summary>
+    /// <summary>The least of the terms' largest steps from a time on (<see cref="FieldWaveform.MaxStepAt"/>), s.</summary>
+    private static double LeastMaxStepAt(IReadOnlyList<Fields.SourceTerm> terms, double t)
+    {
+        double least = double.PositiveInfinity;
+        for (int k = 0; k < terms.Count; k++)
+        {
+            least = Math.Min(least, terms[k].Waveform.MaxStepAt(t));
+        }
+
+        return least;
+    }
+
     private static double LeastMaxStep(IReadOnlyList<Fields.SourceTerm> terms)
     {
         double least = double.PositiveInfinity;

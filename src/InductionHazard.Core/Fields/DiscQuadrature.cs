@@ -108,14 +108,14 @@ public static class DiscQuadrature
         int angles = 2 * order;
         double half = 0.5 * (outer - inner), mid = 0.5 * (outer + inner);
         double sum = 0, magnitude = 0;
+        double[] trig = Angles(angles);
         for (int i = 0; i < rule.Nodes.Length; i++)
         {
             double r = mid + (half * rule.Nodes[i]);
             double ring = 0, ringMagnitude = 0;
             for (int j = 0; j < angles; j++)
             {
-                double theta = 2 * Math.PI * (j + 0.5) / angles;
-                Vector3D p = centre + (r * Math.Cos(theta) * u) + (r * Math.Sin(theta) * v);
+                Vector3D p = centre + (r * trig[2 * j] * u) + (r * trig[(2 * j) + 1] * v);
                 Vector3D b = field(p);
                 ring += b.Dot(normal);
                 ringMagnitude += b.Length;
@@ -128,6 +128,37 @@ public static class DiscQuadrature
         double area = half * 2 * Math.PI / angles;
         return (sum * area, magnitude * area);
     }
+
+    /// <summary>
+    /// The cosines and sines of the trapezoid rule's angles 2 pi (j + 1/2) / n, interleaved (cos, sin for each j), found
+    /// once for each n and shared by every radius and disc (they were found again at every point: a tenth of a filament
+    /// body's flux quadrature). One array, so that a thread reading its slot sees either nothing or the whole table.
+    /// </summary>
+    private static double[] Angles(int n)
+    {
+        if (n < AngleTables.Length && AngleTables[n] is { } known)
+        {
+            return known;
+        }
+
+        var table = new double[2 * n];
+        for (int j = 0; j < n; j++)
+        {
+            double theta = 2 * Math.PI * (j + 0.5) / n;
+            table[2 * j] = Math.Cos(theta);
+            table[(2 * j) + 1] = Math.Sin(theta);
+        }
+
+        if (n < AngleTables.Length)
+        {
+            AngleTables[n] = table;
+        }
+
+        return table;
+    }
+
+    /// <summary>The angle tables by their count (up to twice the last order), filled as first needed.</summary>
+    private static readonly double[]?[] AngleTables = new double[]?[(2 * LastOrder) + 1];
 
     /// <summary>The flux at one quadrature order: order Gauss-Legendre radii times 2 x order angles.</summary>
     public static double Flux(Func<Vector3D, Vector3D> field, Vector3D centre, Vector3D normal, double radius, int order) =>

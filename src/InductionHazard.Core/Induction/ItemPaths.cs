@@ -445,14 +445,18 @@ public sealed class ItemPaths
         return gradient;
     }
 
+    /// <summary>cos and sin of the circle's points k 2 pi / <see cref="CirclePoints"/>, found once (they were found at every point of every filament's circle).</summary>
+    private static readonly double[] CircleCosines = Enumerable.Range(0, CirclePoints).Select(k => Math.Cos(k * (2 * Math.PI / CirclePoints))).ToArray();
+
+    private static readonly double[] CircleSines = Enumerable.Range(0, CirclePoints).Select(k => Math.Sin(k * (2 * Math.PI / CirclePoints))).ToArray();
+
     private static Vector3D AroundCircle(IFieldGeometry geometry, Vector3D centre, Vector3D u, Vector3D v, double radius)
     {
         Vector3D sum = Vector3D.Zero;
         double step = 2 * Math.PI / CirclePoints;
         for (int k = 0; k < CirclePoints; k++)
         {
-            double phi = k * step;
-            double c = Math.Cos(phi), sn = Math.Sin(phi);
+            double c = CircleCosines[k], sn = CircleSines[k];
             Vector3D p = centre + (radius * c * u) + (radius * sn * v);
             Vector3D dl = (radius * step) * ((-sn * u) + (c * v));
             sum += dl.Cross(geometry.FieldPerUnitDrive(p));

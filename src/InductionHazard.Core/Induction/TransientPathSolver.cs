@@ -115,6 +115,13 @@ public sealed class TransientPathSolver
     /// </summary>
     public double MaxStepSeconds { get; init; } = double.PositiveInfinity;
 
+    /// <summary>
+    /// The largest step from a time on, s, where the drive is smoother in some parts than in its most curved (<see
+    /// cref="Waveforms.FieldWaveform.MaxStepAt"/>): never below <see cref="MaxStepSeconds"/>; null for that step
+    /// throughout. Read at each step's start (steps land on every breakpoint, where it may change).
+    /// </summary>
+    public Func<double, double>? MaxStepAt { get; init; }
+
     /// <summary>Until when <see cref="MaxStepSeconds"/> applies, s: after it the emf is piecewise linear (leaving, cooling).</summary>
     public double CurvedUntilSeconds { get; init; } = double.PositiveInfinity;
 
@@ -182,6 +189,7 @@ public sealed class TransientPathSolver
         var mechanics = new StepMechanics(_circuit, DriveValues, TorqueField, terms, CentreField);
         double[]? momentWeights = CentreField is null ? null : _circuit.MomentWeights;
         mechanics.StartAt(tStart);
+        StepMechanics.StepEnds? ends = mechanics.FollowsForce ? new StepMechanics.StepEnds(modes, terms) : null;
         bool onePathInert = modes == 1 && mechanics.Inert;
         int steps = 0;
         bool budgetExceeded = false;
@@ -301,6 +309,11 @@ public sealed class TransientPathSolver
                 double momentPeak = momentWeights is null ? double.NaN
                     : modes == 1 ? Math.Abs(stepPeak * momentWeights[0] / _circuit.TotalWeights[0])
                     : Math.Abs(PeakWithin(z, work, s, h, Weighted(z, momentWeights), momentWeights).Current);
+                if (ends is not null)
+                {
+                    StepEndsOf(ends, z, work, s, h);
+                }
+
                 for (int k = 0; k < modes; k++)
                 {
                     z[k] = work.Next[k];
@@ -316,7 +329,7 @@ public sealed class TransientPathSolver
                 t = toEdge ? edge : t + h;
                 energy += stepEnergy;
                 lastPower = power;
-                mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h, momentPeak);
+                mechanics.Record(z, Math.Min(t, edge - (1e-9 * h)), t, h, momentPeak, ends);
                 double moved = Math.Abs(next - temperature);
                 temperature = next;
                 conductance = _thermal.Conductance(temperature);
@@ -454,6 +467,28 @@ public sealed class TransientPathSolver
         return (best, bestAt);
     }
 
+    /// <summary>
+    /// The step's two ends for the impulse (<see cref="StepMechanics.StepEnds"/>): the amplitudes at its start (z, before
+    /// the step is taken), each mode's rate (e - s z) / lambda there and at its end (the modal emf e(x) = Start + Slope x),
+    /// and each drive's value at both ends on the step's line through its values at h/4 and 3h/4.
+    /// </summary>
+    private void StepEndsOf(StepMechanics.StepEnds ends, double[] z, StepWork work, double s, double h)
+    {
+        for (int k = 0; k < z.Length; k++)
+        {
+            ends.Start[k] = z[k];
+            ends.RateStart[k] = (work.Start[k] - (s * z[k])) * _inverseLambdas[k];
+            ends.RateEnd[k] = (work.Start[k] + (work.Slope[k] * h) - (s * work.Next[k])) * _inverseLambdas[k];
+        }
+
+        for (int j = 0; j < ends.DriveStart.Length; j++)
+        {
+            double rise = work.DriveB[j] - work.DriveA[j];
+            ends.DriveStart[j] = work.DriveA[j] - (0.5 * rise);
+            ends.DriveEnd[j] = work.DriveA[j] + (1.5 * rise);
+        }
+    }
+
     private static double Weighted(double[] z, double[] weights)
     {
         double sum = 0;
@@ -524,7 +559,7 @@ public sealed class TransientPathSolver
 
     /// <summary>The longest step at a time, with the conductance G at the item's temperature then.</summary>
     private double MaxStep(double conductance, double t) =>
-        Math.Min(t < CurvedUntilSeconds ? MaxStepSeconds : double.PositiveInfinity, Math.Max(_thermal.TimeConstantFor(conductance) * (t >= CoolingFromSeconds ? 1 : 0.1), 1e-6));
+        Math.Min(t >= CurvedUntilSeconds ? double.PositiveInfinity : MaxStepAt is { } at ? Math.Max(MaxStepSeconds, at(t)) : MaxStepSeconds, Math.Max(_thermal.TimeConstantFor(conductance) * (t >= CoolingFromSeconds ? 1 : 0.1), 1e-6));
 
     /// <summary>Per-step arrays, allocated once per run.</summary>
     private sealed class StepWork

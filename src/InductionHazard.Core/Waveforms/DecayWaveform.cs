@@ -64,7 +64,10 @@ public sealed class DecayWaveform : FieldWaveform
     public override double SignificantFrequencyHertz => 1 / (2 * Math.PI * TimeConstantSeconds);
 
     /// <inheritdoc />
-    public override double MaxStepSeconds => TimeConstantSeconds / 50;
+    public override double MaxStepSeconds => TimeConstantSeconds / StepsPerTimeConstant;
+
+    /// <summary>The steps per time constant of an exponential decay: its emf, e^(-t/tau), is then linear over a step to about 1e-5.</summary>
+    internal const double StepsPerTimeConstant = 50;
 
     /// <inheritdoc />
     public override double Value(double t) => t <= StartSeconds ? From : To + ((From - To) * Math.Exp(-(t - StartSeconds) / TimeConstantSeconds));

@@ -63,6 +63,14 @@ public abstract class FieldWaveform
     /// </summary>
     public virtual double MaxStepSeconds => double.PositiveInfinity;
 
+    /// <summary>
+    /// The largest step from time t on, s: <see cref="MaxStepSeconds"/> (the least over the drive) unless a part of the
+    /// drive is smoother than its most curved part, where a longer step keeps the emf as nearly linear over it. Never
+    /// below <see cref="MaxStepSeconds"/>. A step that starts at t may take it only when no breakpoint lies within it
+    /// (a time-stepping solver lands on every breakpoint, where the drive's form may change).
+    /// </summary>
+    public virtual double MaxStepAt(double t) => MaxStepSeconds;
+
     /// <summary>The same drive shifted in phase (for the other phases of a three-phase set).</summary>
     /// <exception cref="Errors.InvalidInputException">The form has no phase (only sines and faults do).</exception>
     public virtual FieldWaveform WithPhaseShift(double radians) =>
