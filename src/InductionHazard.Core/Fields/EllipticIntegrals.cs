@@ -48,10 +48,17 @@ public static class EllipticIntegrals
         {
             double an = 0.5 * (a + b);
             c = 0.5 * (a - b);
-            b = Math.Sqrt(a * b);
-            a = an;
             power *= 2;
             sum += power * c * c;
+            if (!(Math.Abs(c) > 1e-15 * an))
+            {
+                // The sequence ends here: the next geometric mean (a square root, a sixth of the work) would not be used.
+                a = an;
+                break;
+            }
+
+            b = Math.Sqrt(a * b);
+            a = an;
         }
 
         double k = Math.PI / (2 * a);

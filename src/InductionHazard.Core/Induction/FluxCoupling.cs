@@ -374,6 +374,25 @@ public static class FluxCoupling
     {
         private readonly FieldSource _source;
         private double[,]? _drives;
+        private double? _oneTermExtent;
+
+        /// <summary>The largest of |d - d(first time)| and |d| over the drive's times.</summary>
+        private static double OneTermExtent(FieldWaveform waveform, double[] times)
+        {
+            double first = 0, largest = 0;
+            for (int i = 0; i < times.Length; i++)
+            {
+                double d = waveform.Value(times[i]);
+                if (i == 0)
+                {
+                    first = d;
+                }
+
+                largest = Math.Max(largest, Math.Max(Math.Abs(d - first), Math.Abs(d)));
+            }
+
+            return largest;
+        }
 
         public PeakFlux(FieldSource source) => _source = source;
 
@@ -393,6 +412,14 @@ public static class FluxCoupling
             }
 
             double[] times = _source.DriveTimes;
+            if (m.Length == 1)
+            {
+                // One term: the flux is m d(t), so its largest change or value is |m| times the drive's own, found once
+                // (a search asks for some hundreds of couplings, each a pass over thousands of the drive's times).
+                _oneTermExtent ??= OneTermExtent(terms[0].Waveform, times);
+                return Math.Abs(m[0]) * _oneTermExtent.Value;
+            }
+
             if (_drives is null)
             {
                 _drives = new double[times.Length, m.Length];

@@ -105,6 +105,9 @@ public sealed class RepeatedWaveform : FieldWaveform
     /// <inheritdoc />
     public override double MaxStepSeconds => Pulse.MaxStepSeconds;
 
+    /// <summary>The pulse's own step at the same time within it (each pulse's breakpoints are the train's).</summary>
+    public override double MaxStepAt(double t) => Pulse.MaxStepAt(t - (Index(t) * PeriodSeconds));
+
     /// <inheritdoc />
     public override double Value(double t) => Pulse.Value(t - (Index(t) * PeriodSeconds));
 

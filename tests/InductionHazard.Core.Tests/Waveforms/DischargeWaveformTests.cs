@@ -103,6 +103,11 @@ public class DischargeWaveformTests
         Assert.Equal(fast.MaxStepSeconds, fast.MaxStepAt(fast.FirstPeakSeconds + 1e-3));
         var ringing = new DischargeWaveform(4e-3, 6000, 120e-6, 0.04);
         Assert.Equal(ringing.MaxStepSeconds, ringing.MaxStepAt(ringing.FirstPeakSeconds + 1e-3));
+
+        // A train of them takes each pulse's own step at the same time within it.
+        var train = new RepeatedWaveform(d, 3, 0.1);
+        Assert.Equal(d.MaxStepSeconds, train.MaxStepAt(0.2 + (0.5 * tp)));
+        Assert.Equal(d.MaxStepAt(tp + 0.01), train.MaxStepAt(0.2 + tp + 0.01));
     }
 
     [Validates("ring above a coil fed by a crowbarred discharge: peak current and energy", "the ring's circuit L di/dt + R i = -M di_c/dt with the discharge's closed-form rate, by fourth-order Runge-Kutta in 300,000 steps (independent of the module's exponential steps); M by Maxwell's coaxial formula", "1e-5")]
