@@ -450,20 +450,56 @@ public sealed class ItemPaths
 
     private static readonly double[] CircleSines = Enumerable.Range(0, CirclePoints).Select(k => Math.Sin(k * (2 * Math.PI / CirclePoints))).ToArray();
 
+    /// <summary>
+    /// The line integral of dl x b around a circle by the trapezoid rule on nested sets of its 96 points: every eighth
+    /// (12), then every fourth, second and all, each set adding the points between the last's. It stops at the first set
+    /// that agrees with the one before to 1e-10 of the integral of |b| dl: the rule converges spectrally for a smooth
+    /// field, so that set is within far less of the integral (a small filament far from every conductor agrees at 24
+    /// points, a quarter of the work); where the field varies fast around the circle, all 96 are taken, as before.
+    /// </summary>
     private static Vector3D AroundCircle(IFieldGeometry geometry, Vector3D centre, Vector3D u, Vector3D v, double radius)
     {
         Vector3D sum = Vector3D.Zero;
-        double step = 2 * Math.PI / CirclePoints;
-        for (int k = 0; k < CirclePoints; k++)
+        double magnitude = 0;
+        void Add(int k)
         {
             double c = CircleCosines[k], sn = CircleSines[k];
-            Vector3D p = centre + (radius * c * u) + (radius * sn * v);
-            Vector3D dl = (radius * step) * ((-sn * u) + (c * v));
-            sum += dl.Cross(geometry.FieldPerUnitDrive(p));
+            Vector3D b = geometry.FieldPerUnitDrive(centre + (radius * c * u) + (radius * sn * v));
+            sum += ((-sn * u) + (c * v)).Cross(b);
+            magnitude += b.Length;
         }
 
-        return sum;
+        for (int k = 0; k < CirclePoints; k += CircleFirstStride)
+        {
+            Add(k);
+        }
+
+        Vector3D previous = sum * (2 * Math.PI * radius * CircleFirstStride / CirclePoints);
+        for (int stride = CircleFirstStride / 2; stride >= 1; stride /= 2)
+        {
+            for (int k = stride; k < CirclePoints; k += 2 * stride)
+            {
+                Add(k);
+            }
+
+            double length = 2 * Math.PI * radius * stride / CirclePoints;
+            Vector3D estimate = sum * length;
+            if ((estimate - previous).Length <= CircleTolerance * magnitude * length)
+            {
+                return estimate;
+            }
+
+            previous = estimate;
+        }
+
+        return previous;
     }
+
+    /// <summary>The stride through the circle's points of the first set (every eighth: 12 points).</summary>
+    private const int CircleFirstStride = 8;
+
+    /// <summary>The agreement of two nested sets, relative to the integral of |b| dl, at which the line integral stops.</summary>
+    private const double CircleTolerance = 1e-10;
 
     private static Vector3D AroundRectangle(IFieldGeometry geometry, Vector3D centre, Vector3D normal, RectangularLoopGeometry rectangle, Vector3D? width)
     {
