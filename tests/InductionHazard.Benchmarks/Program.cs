@@ -11,7 +11,8 @@ namespace InductionHazard.Benchmarks;
 /// "memory capture" or "memory baseline" loads the 1,000,000-row capture once in this process and prints the
 /// process's peak working set, so two runs compare the memory of the module's loader with the baseline's; or with
 /// "loop" and a number of seconds, times the ring assessments of <see cref="EngineBenchmarks"/> in a plain loop, one
-/// line per case (tests/bench/CompareEngine.ps1 runs it against an earlier commit, alternately, in one session).
+/// line per case (tests/bench/CompareEngine.ps1 runs it against an earlier commit, alternately, in one session); with
+/// "pulse-loop", the same for <see cref="PulseBodyBenchmarks"/> (CompareEngine.ps1 -PulseBody).
 /// </summary>
 public static class Program
 {
@@ -41,8 +42,43 @@ public static class Program
             return 0;
         }
 
+        if (args.Length == 2 && args[0] == "pulse-loop")
+        {
+            PulseLoop(double.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture));
+            return 0;
+        }
+
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
         return 0;
+    }
+
+    /// <summary>Each case of <see cref="PulseBodyBenchmarks"/> for about the time given (at least three runs), after three runs to warm up: milliseconds per assessment.</summary>
+    private static void PulseLoop(double seconds)
+    {
+        var cases = new PulseBodyBenchmarks();
+        cases.Setup();
+        foreach ((string name, Func<object> run) in new (string, Func<object>)[]
+        {
+            ("ring", () => cases.Ring()),
+            ("drift-given", () => cases.DriftNormalGiven()),
+            ("drift", () => cases.DriftNoNormal()),
+        })
+        {
+            for (int i = 0; i < 3; i++)
+            {
+                run();
+            }
+
+            long count = 0;
+            var watch = Stopwatch.StartNew();
+            while (watch.Elapsed.TotalSeconds < seconds || count < 3)
+            {
+                run();
+                count++;
+            }
+
+            Console.WriteLine(FormattableString.Invariant($"{name} {watch.Elapsed.TotalMilliseconds / count:F3} ms"));
+        }
     }
 
     /// <summary>Each case of <see cref="EngineBenchmarks"/> for about the time given, after a warm-up: microseconds per assessment.</summary>

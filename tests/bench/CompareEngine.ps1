@@ -7,12 +7,18 @@
     this machine is noisy, so only a comparison made side by side in the same run says what a change did.
 .EXAMPLE
     dotnet pwsh -NoProfile -File tests/bench/CompareEngine.ps1 -Baseline 9df9151
+.EXAMPLE
+    dotnet pwsh -NoProfile -File tests/bench/CompareEngine.ps1 -Baseline 37d2c75 -PulseBody
+
+    The cases of PulseBodyBenchmarks instead: a ring and a solid body (given its normal, and not) beside a pulse coil,
+    in milliseconds.
 #>
 param(
     [Parameter(Mandatory = $true)]
     [string] $Baseline,
     [int] $Rounds = 4,
-    [double] $Seconds = 3
+    [double] $Seconds = 3,
+    [switch] $PulseBody
 )
 $ErrorActionPreference = 'Stop'
 $root = (Resolve-Path (Join-Path $PSScriptRoot '../..')).Path
@@ -34,7 +40,7 @@ try {
     $best = @{}
     foreach ($round in 1..$Rounds) {
         foreach ($which in 'baseline', 'current') {
-            foreach ($line in & dotnet (Join-Path $builds[$which] 'InductionHazard.Benchmarks.dll') loop $Seconds) {
+            foreach ($line in & dotnet (Join-Path $builds[$which] 'InductionHazard.Benchmarks.dll') $(if ($PulseBody) { 'pulse-loop' } else { 'loop' }) $Seconds) {
                 $name, $us, $null = $line -split ' '
                 $key = "$which/$name"
                 if (-not $best.ContainsKey($key) -or [double]$us -lt $best[$key]) { $best[$key] = [double]$us }
@@ -42,8 +48,9 @@ try {
         }
     }
 
-    foreach ($name in 'sine', 'ramp10ms', 'ramp1s', 'row', 'readrow') {
-        '{0,-9} {1}: {2,8:F2} us   working tree: {3,8:F2} us   ratio {4:F2}  (fastest of {5} alternate rounds)' -f $name, $Baseline, $best["baseline/$name"], $best["current/$name"], ($best["current/$name"] / $best["baseline/$name"]), $Rounds
+    $names, $unit = if ($PulseBody) { @('ring', 'drift-given', 'drift'), 'ms' } else { @('sine', 'ramp10ms', 'ramp1s', 'row', 'readrow'), 'us' }
+    foreach ($name in $names) {
+        '{0,-11} {1}: {2,8:F2} {6}   working tree: {3,8:F2} {6}   ratio {4:F2}  (fastest of {5} alternate rounds)' -f $name, $Baseline, $best["baseline/$name"], $best["current/$name"], ($best["current/$name"] / $best["baseline/$name"]), $Rounds, $unit
     }
 }
 finally {
