@@ -469,18 +469,36 @@ public sealed class TransientPathSolver
 
     /// <summary>
     /// The step's two ends for the impulse (<see cref="StepMechanics.StepEnds"/>): the amplitudes at its start (z, before
-    /// the step is taken), each mode's rate (e - s z) / lambda there and at its end (the modal emf e(x) = Start + Slope x),
-    /// and each drive's value at both ends on the step's line through its values at h/4 and 3h/4.
+    /// the step is taken); for each mode the step does not outlast, its rate (e - s z) / lambda at both ends (the modal
+    /// emf e(x) = Start + Slope x), and for each it outlasts, its exact form over the step; and each drive's value at
+    /// both ends on the step's line through its values at h/4 and 3h/4.
     /// </summary>
     private void StepEndsOf(StepMechanics.StepEnds ends, double[] z, StepWork work, double s, double h)
     {
+        double inverseS = 1 / s;
+        bool anyStiff = false;
         for (int k = 0; k < z.Length; k++)
         {
             ends.Start[k] = z[k];
+            double tau = _circuit.Lambdas[k] * inverseS;
+            bool stiff = h > tau;
+            ends.Stiff[k] = stiff;
+            anyStiff |= stiff;
+            if (stiff)
+            {
+                double a = (work.Start[k] - (work.Slope[k] * tau)) * inverseS;
+                ends.A[k] = a;
+                ends.B[k] = work.Slope[k] * inverseS;
+                ends.C[k] = z[k] - a;
+                ends.Tau[k] = tau;
+                continue;
+            }
+
             ends.RateStart[k] = (work.Start[k] - (s * z[k])) * _inverseLambdas[k];
             ends.RateEnd[k] = (work.Start[k] + (work.Slope[k] * h) - (s * work.Next[k])) * _inverseLambdas[k];
         }
 
+        ends.AnyStiff = anyStiff;
         for (int j = 0; j < ends.DriveStart.Length; j++)
         {
             double rise = work.DriveB[j] - work.DriveA[j];
