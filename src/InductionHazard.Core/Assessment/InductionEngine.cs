@@ -639,7 +639,7 @@ public static class InductionEngine
         double maxStep = LeastMaxStep(terms);
         int budget = HeatingIntegrator.DefaultMaxSteps + (4 * breakpoints.Length);
         double curvedUntil = Math.Min(leave, fieldEnd);
-        bool overBudget = !double.IsInfinity(maxStep) && (curvedUntil - begin) / maxStep > budget;
+        bool overBudget = !double.IsInfinity(maxStep) && CurvedSteps(terms, breakpoints, begin, curvedUntil) > budget;
         if (overBudget)
         {
             c.Issues.Add(new ValidityIssue(
@@ -800,6 +800,33 @@ public static class InductionEngine
     }
 
     /// <summary>The shortest of the terms' longest steps, s (NaN if any is, as Enumerable.Min gives it).</summary>
+    /// <summary>
+    /// The steps the curved part of a run takes at least, from begin to curvedUntil: each stretch between breakpoints at
+    /// the largest step from its start (<see cref="FieldWaveform.MaxStepAt"/>, which changes only at a breakpoint). A
+    /// crowbarred discharge's long decay counts at its own step, not at the first peak's.
+    /// </summary>
+    private static double CurvedSteps(IReadOnlyList<Fields.SourceTerm> terms, double[] breakpoints, double begin, double curvedUntil)
+    {
+        double steps = 0, from = begin;
+        foreach (double b in breakpoints.Append(curvedUntil))
+        {
+            if (b <= from)
+            {
+                continue;
+            }
+
+            double to = Math.Min(b, curvedUntil);
+            steps += (to - from) / LeastMaxStepAt(terms, from);
+            from = to;
+            if (from >= curvedUntil)
+            {
+                break;
+            }
+        }
+
+        return steps;
+    }
+
     /// <summary>The least of the terms' largest steps from a time on (<see cref="FieldWaveform.MaxStepAt"/>), s.</summary>
     private static double LeastMaxStepAt(IReadOnlyList<Fields.SourceTerm> terms, double t)
     {

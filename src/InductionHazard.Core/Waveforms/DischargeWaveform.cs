@@ -126,8 +126,13 @@ public sealed class DischargeWaveform : FieldWaveform
     /// 3 ms followed to 1e-4 of its peak, after a first peak at 1.1 ms). Before it, and for a discharge with no crowbar
     /// (whose ringing goes on), the hundredth of the time to the first peak.
     /// </summary>
+    /// <remarks>
+    /// From the crowbar's breakpoint on, to within a part in 1e9 of the time to the peak: the breakpoint is start + time
+    /// to the peak, from which the time to the peak comes back an ulp short when the start is not zero. A step taken a
+    /// little before it ends on the breakpoint anyway (a solver lands on each).
+    /// </remarks>
     public override double MaxStepAt(double t) =>
-        Crowbar && t - StartSeconds >= FirstPeakSeconds
+        Crowbar && t - StartSeconds >= FirstPeakSeconds * (1 - 1e-9)
             ? Math.Max(MaxStepSeconds, InductanceHenries / ResistanceOhms / DecayWaveform.StepsPerTimeConstant)
             : MaxStepSeconds;
 

@@ -105,8 +105,17 @@ public sealed class RepeatedWaveform : FieldWaveform
     /// <inheritdoc />
     public override double MaxStepSeconds => Pulse.MaxStepSeconds;
 
-    /// <summary>The pulse's own step at the same time within it (each pulse's breakpoints are the train's).</summary>
-    public override double MaxStepAt(double t) => Pulse.MaxStepAt(t - (Index(t) * PeriodSeconds));
+    /// <summary>
+    /// The pulse's own step at the same time within it (each pulse's breakpoints are the train's). The pulse is the one
+    /// whose start t has reached to within a part in 1e9 of the period: at a pulse's start (a breakpoint, which rounding
+    /// may leave an ulp short), that pulse's first step, not the step after the last pulse's crowbar.
+    /// </summary>
+    public override double MaxStepAt(double t)
+    {
+        double k = Math.Floor(((t - Pulse.StartSeconds) / PeriodSeconds) + 1e-9);
+        int index = (int)Math.Max(0, Math.Min(Count - 1, k));
+        return Pulse.MaxStepAt(t - (index * PeriodSeconds));
+    }
 
     /// <inheritdoc />
     public override double Value(double t) => Pulse.Value(t - (Index(t) * PeriodSeconds));
