@@ -162,6 +162,15 @@ public sealed class BurnCheckSearchTests
             Assert.True(Math.Abs(expected - burn.Margin) <= 1e-9 * expected, label + ": margin " + burn.Margin + " against " + expected);
             Assert.Contains("for " + InductionHazard.Quantities.SiFormat.Format(durations[worst], "s") + " against the threshold " + InductionHazard.Quantities.SiFormat.Celsius(thresholds[worst]), burn.Detail, StringComparison.Ordinal);
             Assert.Contains("(margin " + InductionHazard.Quantities.SiFormat.Margin(VerdictRules.Bounded(contact)) + ")", burn.Detail, StringComparison.Ordinal);
+
+            // Whichever governs, the finding gives the dose and its margin as solved on their own.
+            double? margin = ThermalDose.RiseMargin(history, start, policy.ThermalDoseLimitMinutes, out double added);
+            Assert.Contains(
+                margin is { } m
+                    ? (response.PeakTemperatureCelsius > ThermalDose.FittedUpToCelsius ? "its limit reached at a rise " + InductionHazard.Quantities.SiFormat.Margin(m) : "thermal dose added " + InductionHazard.Quantities.SiFormat.Plain(added) + " CEM43 against " + InductionHazard.Quantities.SiFormat.Plain(policy.ThermalDoseLimitMinutes) + " (margin on the rise " + InductionHazard.Quantities.SiFormat.Margin(m) + ")")
+                    : "thermal dose not the criterion",
+                burn.Detail,
+                StringComparison.Ordinal);
         }
 
         Assert.True(byDose >= 2 && byContact >= 2, "the cases should include both criteria governing: dose " + byDose + ", contact " + byContact);
