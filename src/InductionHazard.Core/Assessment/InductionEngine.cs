@@ -799,7 +799,6 @@ public static class InductionEngine
         }
     }
 
-    /// <summary>The shortest of the terms' longest steps, s (NaN if any is, as Enumerable.Min gives it).</summary>
     /// <summary>
     /// The steps the curved part of a run takes at least, from begin to curvedUntil: each stretch between breakpoints at
     /// the largest step from its start (<see cref="FieldWaveform.MaxStepAt"/>, which changes only at a breakpoint). A
@@ -839,6 +838,7 @@ public static class InductionEngine
         return least;
     }
 
+    /// <summary>The shortest of the terms' longest steps, s (NaN if any is, as Enumerable.Min gives it).</summary>
     private static double LeastMaxStep(IReadOnlyList<Fields.SourceTerm> terms)
     {
         double least = double.PositiveInfinity;

@@ -5,8 +5,8 @@ namespace InductionHazard.Induction;
 
 /// <summary>
 /// The force and torque on the paths at each step's end: the peak force and when, the impulse (over each step, the
-/// integral of the cubic through the force and its rate at both ends, where the solver gives the rates; else the
-/// trapezoid rule) and the peak torque.
+/// integral of the cubic through the force and its rate at both ends, with the part of each mode the step outlasts
+/// integrated exactly, where the solver gives the step's ends; else the trapezoid rule) and the peak torque.
 /// </summary>
 internal sealed class StepMechanics
 {

@@ -122,7 +122,7 @@ public sealed class DischargeWaveform : FieldWaveform
     /// <summary>
     /// After a crowbar fires (a breakpoint), the current only decays, as e^(-(R/L) t): it is stepped as an exponential
     /// decay is (<see cref="DecayWaveform"/>), at a fiftieth of its time constant L/R, where that is longer than the
-    /// hundredth of the time to the first peak that the ringing part takes (some 4,000 steps fewer over a decay of
+    /// hundredth of the time to the first peak that the ringing part takes (some 2,200 steps fewer over a decay of
     /// 3 ms followed to 1e-4 of its peak, after a first peak at 1.1 ms). Before it, and for a discharge with no crowbar
     /// (whose ringing goes on), the hundredth of the time to the first peak.
     /// </summary>
