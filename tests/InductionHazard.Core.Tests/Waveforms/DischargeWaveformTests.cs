@@ -90,7 +90,8 @@ public class DischargeWaveformTests
     [Fact]
     public void ACrowbarsDecayIsSteppedAsAnExponentialDecayIs()
     {
-        // Common practice within the module: an exponential decay is stepped at a fiftieth of its time constant.
+        // The module steps an exponential decay at a fiftieth of its time constant (DecayWaveform); a crowbar's decay, the
+        // same, where that is longer than the first phase's step.
         var d = new DischargeWaveform(4e-3, 6000, 120e-6, 0.04, crowbar: true);
         double tp = d.StartSeconds + d.FirstPeakSeconds;
         Assert.Equal(d.MaxStepSeconds, d.MaxStepAt(0.5 * tp));
@@ -124,8 +125,8 @@ public class DischargeWaveformTests
     public void ADischargeWithALongCrowbarredDecayIsSolvedWithinTheBudget()
     {
         // A crowbarred discharge whose L/R is 1.2 s, followed for 11 s: at a hundredth of its 1 ms first peak that would
-        // be a million steps, over the solver's budget, and the run was refused. At a fiftieth of L/R the decay takes
-        // some 460, and the ring is solved.
+        // be a million steps, over the solver's budget, and the run was refused. At a fiftieth of L/R the decay takes a
+        // few hundred, and the ring is solved.
         var d = new DischargeWaveform(4e-3, 60, 120e-6, 1e-4, crowbar: true);
         var coil = new FieldSource("coil", new[] { new SourceTerm(new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.05, 10), d) });
         ConductiveItem ring = ItemRecordReader.Read(new Dictionary<string, object?> { ["Name"] = "ring", ["Material"] = "Copper", ["Diameter"] = 0.02, ["WireDiameter"] = 0.001, ["Contact"] = "Fixed" }, MaterialLibrary.BuiltIn);
