@@ -57,28 +57,13 @@ public static class Program
     {
         var cases = new PulseBodyBenchmarks();
         cases.Setup();
-        foreach ((string name, Func<object> run) in new (string, Func<object>)[]
-        {
-            ("ring", () => cases.Ring()),
-            ("drift-given", () => cases.DriftNormalGiven()),
-            ("drift", () => cases.DriftNoNormal()),
-        })
-        {
-            for (int i = 0; i < 3; i++)
-            {
-                run();
-            }
-
-            long count = 0;
-            var watch = Stopwatch.StartNew();
-            while (watch.Elapsed.TotalSeconds < seconds || count < 3)
-            {
-                run();
-                count++;
-            }
-
-            Console.WriteLine(FormattableString.Invariant($"{name} {watch.Elapsed.TotalMilliseconds / count:F3} ms"));
-        }
+        Time(
+            new (string, Func<object>)[] { ("ring", () => cases.Ring()), ("drift-given", () => cases.DriftNormalGiven()), ("drift", () => cases.DriftNoNormal()) },
+            warmUp: 3,
+            batch: 1,
+            least: 3,
+            seconds,
+            static (name, perRun) => FormattableString.Invariant($"{name} {perRun * 1e3:F3} ms"));
     }
 
     /// <summary>Each case of <see cref="EngineBenchmarks"/> for about the time given, after a warm-up: microseconds per assessment.</summary>
@@ -86,33 +71,45 @@ public static class Program
     {
         var cases = new EngineBenchmarks();
         cases.Setup();
-        foreach ((string name, Func<object> run) in new (string, Func<object>)[]
+        Time(
+            new (string, Func<object>)[]
+            {
+                ("sine", () => cases.SineContinuous()),
+                ("ramp10ms", () => cases.Ramp10Milliseconds()),
+                ("ramp1s", () => cases.Ramp1Second()),
+                ("row", () => cases.InventoryRowRamp10Milliseconds()),
+                ("readrow", () => cases.ReadDistinctRow()),
+            },
+            warmUp: 20_000,
+            batch: 1000,
+            least: 1,
+            seconds,
+            static (name, perRun) => FormattableString.Invariant($"{name} {perRun * 1e6:F2} us"));
+    }
+
+    /// <summary>Each case warmed up, then run in batches for about the time given (at least <paramref name="least"/> batches), one line per case: the seconds per run, as the format writes it.</summary>
+    private static void Time((string Name, Func<object> Run)[] cases, int warmUp, int batch, int least, double seconds, Func<string, double, string> format)
+    {
+        foreach ((string name, Func<object> run) in cases)
         {
-            ("sine", () => cases.SineContinuous()),
-            ("ramp10ms", () => cases.Ramp10Milliseconds()),
-            ("ramp1s", () => cases.Ramp1Second()),
-            ("row", () => cases.InventoryRowRamp10Milliseconds()),
-            ("readrow", () => cases.ReadDistinctRow()),
-        })
-        {
-            for (int i = 0; i < 20_000; i++)
+            for (int i = 0; i < warmUp; i++)
             {
                 run();
             }
 
             long count = 0;
             var watch = Stopwatch.StartNew();
-            while (watch.Elapsed.TotalSeconds < seconds)
+            while (watch.Elapsed.TotalSeconds < seconds || count < least * batch)
             {
-                for (int i = 0; i < 1000; i++)
+                for (int i = 0; i < batch; i++)
                 {
                     run();
                 }
 
-                count += 1000;
+                count += batch;
             }
 
-            Console.WriteLine(FormattableString.Invariant($"{name} {watch.Elapsed.TotalMilliseconds * 1000 / count:F2} us"));
+            Console.WriteLine(format(name, watch.Elapsed.TotalSeconds / count));
         }
     }
 }
