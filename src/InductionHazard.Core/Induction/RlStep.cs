@@ -23,7 +23,7 @@ internal static class RlStep
     private const double SeriesBelowX = 0.04;
 
     /// <summary>The current after s seconds.</summary>
-    private static double Current(Circuit rl, double i0, double e0, double slope, double s)
+    internal static double Current(Circuit rl, double i0, double e0, double slope, double s)
     {
         double tau = rl.Tau;
         double x = s * rl.InverseTau;

@@ -22,11 +22,21 @@ public sealed class TransientPathSolver
     /// <summary>
     /// The growth before the mode settles for one path on which no force or torque is read at the steps' ends (<see
     /// cref="StepMechanics.Inert"/>): each step is exact for its drive and finds the current's peak within itself
-    /// exactly, so only a chart's resolution and the temperature's step limit bound it. Where a force or torque is
+    /// exactly, and a chart reads the points within it from the step's own solution (<see cref="SteppedCircuitSeries"/>),
+    /// so only the heating bounds it: the steps before the current settles stay short beside the cooling time constant,
+    /// so that the heat of the current's first rise is not spread over a long step. Where a force or torque is
     /// read at the ends the growth stays 1.25 (with 1.5 the demo's peak forces fell by up to 7e-5, a peak between two
     /// ends missed), and for a set of paths too, whose peak within a step is interpolated, not exact.
     /// </summary>
-    private const double InertGrowth = 1.5;
+    private const double InertGrowth = 4;
+
+    /// <summary>
+    /// The same growth while the drive is curved (each step reads it as a line, up to <see cref="MaxStepSeconds"/>):
+    /// 1.5, so that a curved drive's heating is sampled as finely as the steps' own accuracy asks (with 4, the burn
+    /// margin of a ring in a magnet's quench came out 2e-6 above that of steps eight times finer, where 1.5 gives 1e-6
+    /// below it).
+    /// </summary>
+    private const double CurvedInertGrowth = 1.5;
 
     /// <summary>
     /// The growth of a step once it is eight times the slowest mode's time constant: every mode has then decayed to
@@ -43,6 +53,12 @@ public sealed class TransientPathSolver
     /// longest step bound it. Not once the item only cools, where the cooling curve's chords set the step.
     /// </summary>
     private const double UnseenChange = 0.01;
+
+    /// <summary>
+    /// A step of one inert path whose current moved by more than this share is filled, when its series is read, with
+    /// points of its own exact solution (<see cref="SteppedCircuitSeries"/>); the series records such a step's end too.
+    /// </summary>
+    private const double ChartChange = 0.02;
     private const double UnseenGrowth = 16;
 
     /// <summary>
@@ -194,12 +210,13 @@ public sealed class TransientPathSolver
         int steps = 0;
         bool budgetExceeded = false;
         double? melted = null;
+        List<SteppedCircuitSeries.Fill>? fills = null;
 
         // G at the item's temperature, found again only when the temperature moves (each step's start, and its time constant).
         double conductance = _thermal.Conductance(temperature);
         foreach (double edge in edges)
         {
-            double h = FreshStep(temperature, conductance, edge - t, t);
+            double h = FreshStep(temperature, conductance, edge - t, t, onePathInert && LinearAt(t));
             bool lineKnown = false;
             while (t < edge)
             {
@@ -234,7 +251,7 @@ public sealed class TransientPathSolver
                 // Each drive over the step as a line through its values at h/4 and 3h/4: exact for linear drives. Where
                 // every drive is linear up to the edge (past the curved part, or none is curved), the line read at the
                 // segment's first step serves its later steps (a piecewise-constant emf, a ramp's, the same values).
-                bool linear = t >= CurvedUntilSeconds || double.IsPositiveInfinity(MaxStepSeconds);
+                bool linear = LinearAt(t);
                 if (linear && lineKnown)
                 {
                     double a = t + (h / 4) - work.LineFrom, b = t + (3 * h / 4) - work.LineFrom;
@@ -314,6 +331,7 @@ public sealed class TransientPathSolver
                     StepEndsOf(ends, z, work, s, h);
                 }
 
+                double amplitude0 = z[0], stepStart = t, startCelsius = temperature;
                 for (int k = 0; k < modes; k++)
                 {
                     z[k] = work.Next[k];
@@ -321,6 +339,8 @@ public sealed class TransientPathSolver
 
                 double before = total;
                 total = Total(z);
+                // A step of one inert path whose current moved visibly is filled from its own solution when the series is read.
+                bool fill = onePathInert && Math.Abs(total - before) > ChartChange * Math.Max(Math.Abs(total), Math.Abs(before));
                 if (Math.Abs(stepPeak) > Math.Abs(peak.current))
                 {
                     peak = (stepPeak, t + stepPeakAt);
@@ -334,8 +354,13 @@ public sealed class TransientPathSolver
                 temperature = next;
                 conductance = _thermal.Conductance(temperature);
                 bool melting = temperature > StopAboveCelsius;
-                if (melting || t >= edge || t - last.TimeSeconds >= recordSpacing || Changed(last, total, temperature))
+                if (fill || melting || t >= edge || t - last.TimeSeconds >= recordSpacing || Changed(last, total, temperature))
                 {
+                    if (fill)
+                    {
+                        (fills ??= new List<SteppedCircuitSeries.Fill>()).Add(new SteppedCircuitSeries.Fill(circuit.Count, stepStart, t - stepStart, amplitude0, z[0], work.Start[0], work.Slope[0], s, startCelsius, temperature));
+                    }
+
                     last = new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature);
                     circuit.Add(last);
                     heating.Add(new HeatingSample(t, temperature, power));
@@ -355,7 +380,7 @@ public sealed class TransientPathSolver
                 bool settled = h * s >= 8 * _slowestTimeConstant;
                 bool cooled = settled && t >= CoolingFromSeconds;
                 bool unseen = !cooled && onePathInert && Math.Abs(total - before) < UnseenChange * Math.Abs(peak.current);
-                double grown = h * (unseen ? UnseenGrowth : settled ? SettledGrowth : onePathInert ? InertGrowth : Growth);
+                double grown = h * (unseen ? UnseenGrowth : settled ? SettledGrowth : !onePathInert ? Growth : LinearAt(t) ? InertGrowth : CurvedInertGrowth);
                 h = Math.Min(moved > 0 ? Math.Min(grown, HeatedStep * MaxStepKelvin * h / moved) : grown, MaxStep(conductance, t));
                 if (cooled)
                 {
@@ -377,7 +402,7 @@ public sealed class TransientPathSolver
 
         return new TransientRun
         {
-            Circuit = circuit,
+            Circuit = fills is null ? circuit : new SteppedCircuitSeries(circuit, fills, _circuit.Lambdas[0], _inverseLambdas[0], _circuit.TotalWeights[0], outlineEmf),
             Heating = heating,
             PeakCurrentAmperes = peak.current,
             PeakCurrentSeconds = peak.at,
@@ -571,9 +596,16 @@ public sealed class TransientPathSolver
         Math.Abs(temperature - last.TemperatureCelsius) > 0.5
         || Math.Abs(current - last.CurrentAmperes) > 0.02 * Math.Max(Math.Abs(current), Math.Abs(last.CurrentAmperes));
 
-    /// <summary>The first step of a segment: an eighth of the leading mode's time constant, so its exponential is resolved from its start.</summary>
-    private double FreshStep(double celsius, double conductance, double segment, double t) =>
-        Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / 8, segment), MaxStep(conductance, t));
+    /// <summary>
+    /// The first step of a segment: an eighth of the leading mode's time constant, so that the exponential is resolved
+    /// from its start; half of it for one inert path on a linear drive (<paramref name="inertOnLine"/>), whose step is
+    /// exact for any length and whose chart reads the points within it from its solution.
+    /// </summary>
+    private double FreshStep(double celsius, double conductance, double segment, double t, bool inertOnLine) =>
+        Math.Min(Math.Min(_leadTimeConstant / _scaleAt(celsius) / (inertOnLine ? 2 : 8), segment), MaxStep(conductance, t));
+
+    /// <summary>Whether every drive is linear between the breakpoints from t on (past the curved part, or none is curved).</summary>
+    private bool LinearAt(double t) => t >= CurvedUntilSeconds || double.IsPositiveInfinity(MaxStepSeconds);
 
     /// <summary>The longest step at a time, with the conductance G at the item's temperature then.</summary>
     private double MaxStep(double conductance, double t) =>
