@@ -14,9 +14,9 @@ namespace InductionHazard.Induction;
 /// its value at the chord's start); past that the current is a line to the step's end, within a hundredth of the step's
 /// larger current. The solver's steps for such a circuit are
 /// exact for any length, so they are as long as the heating and the drive allow; the points within them cost nothing
-/// to an assessment that no one charts.
+/// to an assessment that no one charts. Public so that a shell reads its count and items as it reads any list's.
 /// </summary>
-internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
+public sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
 {
     /// <summary>The spacing of the points within a step, in the circuit's time constants L/R.</summary>
     private const double SpacingOfTau = 0.25;
@@ -42,7 +42,7 @@ internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
     /// <param name="inverseLambda">1 / lambda.</param>
     /// <param name="weight">The total current per unit modal amplitude.</param>
     /// <param name="emf">The emf around the outline at a time, V.</param>
-    public SteppedCircuitSeries(List<CircuitSample> ends, List<Fill> fills, double lambda, double inverseLambda, double weight, Func<double, double> emf)
+    internal SteppedCircuitSeries(List<CircuitSample> ends, List<Fill> fills, double lambda, double inverseLambda, double weight, Func<double, double> emf)
     {
         _ends = ends;
         _fills = fills;
@@ -75,22 +75,24 @@ internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
             if (next < _fills.Count && _fills[next].EndIndex == i)
             {
                 Fill f = _fills[next++];
+                CircuitSample end = _ends[i];
+                double seconds = end.TimeSeconds - f.StartSeconds;
                 var rl = new RlStep.Circuit(_lambda, _inverseLambda, f.Scale, 1 / f.Scale);
                 // i(s) = a + b s + c e^(-s/tau), in the mode's amplitude: c = i0 - (e0 - g tau) / R.
                 double c = f.Amplitude - ((f.DriveStart - (f.DriveSlope * rl.Tau)) * rl.InverseR);
-                double larger = Math.Max(Math.Abs(f.Amplitude), Math.Abs(f.AmplitudeEnd));
+                double larger = Math.Max(Math.Abs(_weight * f.Amplitude), Math.Abs(end.CurrentAmperes));
                 double spacing = SpacingOfTau * rl.Tau;
                 for (int j = 1; j <= MostWithin; j++)
                 {
                     double s = j * spacing;
-                    if (!(s < f.Seconds) || !(Math.Abs(c) * Math.Exp(-(s - spacing) / rl.Tau) > Visible * larger))
+                    if (!(s < seconds) || !(Math.Abs(_weight * c) * Math.Exp(-(s - spacing) / rl.Tau) > Visible * larger))
                     {
                         break;
                     }
 
                     double t = f.StartSeconds + s;
                     double current = _weight * RlStep.Current(rl, f.Amplitude, f.DriveStart, f.DriveSlope, s);
-                    double celsius = f.StartCelsius + ((f.EndCelsius - f.StartCelsius) * (s / f.Seconds));
+                    double celsius = f.StartCelsius + ((end.TemperatureCelsius - f.StartCelsius) * (s / seconds));
                     all.Add(new CircuitSample(t, _emf(t), current, celsius));
                 }
             }
@@ -101,21 +103,18 @@ internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
         return all.ToArray();
     }
 
-    /// <summary>One step to fill: where it starts, its length, its mode's amplitude at both ends and drive line from its start, its resistance scale and its temperatures.</summary>
+    /// <summary>One step to fill: where it starts, its mode's amplitude and drive line there, its resistance scale and its temperature at its start (its end is the sample at <see cref="EndIndex"/>).</summary>
     internal readonly struct Fill
     {
-        public Fill(int endIndex, double startSeconds, double seconds, double amplitude, double amplitudeEnd, double driveStart, double driveSlope, double scale, double startCelsius, double endCelsius)
+        public Fill(int endIndex, double startSeconds, double amplitude, double driveStart, double driveSlope, double scale, double startCelsius)
         {
             EndIndex = endIndex;
             StartSeconds = startSeconds;
-            Seconds = seconds;
             Amplitude = amplitude;
-            AmplitudeEnd = amplitudeEnd;
             DriveStart = driveStart;
             DriveSlope = driveSlope;
             Scale = scale;
             StartCelsius = startCelsius;
-            EndCelsius = endCelsius;
         }
 
         /// <summary>The index of the sample at the step's end.</summary>
@@ -123,11 +122,7 @@ internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
 
         public double StartSeconds { get; }
 
-        public double Seconds { get; }
-
         public double Amplitude { get; }
-
-        public double AmplitudeEnd { get; }
 
         public double DriveStart { get; }
 
@@ -136,7 +131,5 @@ internal sealed class SteppedCircuitSeries : IReadOnlyList<CircuitSample>
         public double Scale { get; }
 
         public double StartCelsius { get; }
-
-        public double EndCelsius { get; }
     }
 }

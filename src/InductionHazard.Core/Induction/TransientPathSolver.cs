@@ -70,6 +70,9 @@ public sealed class TransientPathSolver
     private const int MaxRecordedSamples = 4000;
     private const int InitialSampleCapacity = 64;
 
+    /// <summary>Room for a ring's ramp's steps to fill (some three a segment) from the start.</summary>
+    private const int InitialFillCapacity = 12;
+
     private readonly ModalCircuit _circuit;
     private readonly Func<double, double> _scaleAt;
     private readonly LumpedThermalModel _thermal;
@@ -358,7 +361,7 @@ public sealed class TransientPathSolver
                 {
                     if (fill)
                     {
-                        (fills ??= new List<SteppedCircuitSeries.Fill>()).Add(new SteppedCircuitSeries.Fill(circuit.Count, stepStart, t - stepStart, amplitude0, z[0], work.Start[0], work.Slope[0], s, startCelsius, temperature));
+                        (fills ??= new List<SteppedCircuitSeries.Fill>(InitialFillCapacity)).Add(new SteppedCircuitSeries.Fill(circuit.Count, stepStart, amplitude0, work.Start[0], work.Slope[0], s, startCelsius));
                     }
 
                     last = new CircuitSample(t, outlineEmf(Math.Min(t, edge - (1e-9 * h))), total, temperature);
