@@ -12,7 +12,8 @@ namespace InductionHazard.Benchmarks;
 /// process's peak working set, so two runs compare the memory of the module's loader with the baseline's; or with
 /// "loop" and a number of seconds, times the ring assessments of <see cref="EngineBenchmarks"/> in a plain loop, one
 /// line per case (tests/bench/CompareEngine.ps1 runs it against an earlier commit, alternately, in one session); with
-/// "pulse-loop", the same for <see cref="PulseBodyBenchmarks"/> (CompareEngine.ps1 -PulseBody).
+/// "pulse-loop", the same for <see cref="PulseBodyBenchmarks"/> (CompareEngine.ps1 -PulseBody); with "sweep", writes the
+/// lines of <see cref="RingSweep"/> (CompareEngine.ps1 -Sweep).
 /// </summary>
 public static class Program
 {
@@ -39,6 +40,12 @@ public static class Program
         if (args.Length == 2 && args[0] == "loop")
         {
             Loop(double.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture));
+            return 0;
+        }
+
+        if (args.Length == 1 && args[0] == "sweep")
+        {
+            RingSweep.Write(Console.Out);
             return 0;
         }
 

@@ -12,13 +12,21 @@
 
     The cases of PulseBodyBenchmarks instead: a ring and a solid body (given its normal, and not) beside a pulse coil,
     in milliseconds.
+.EXAMPLE
+    dotnet pwsh -NoProfile -File tests/bench/CompareEngine.ps1 -Baseline c1daeef -Sweep
+
+    No timing: the 224 ring assessments of RingSweep by each build, compared number by number: the verdicts that
+    differ, and for each quantity (peak current, temperature, energy, each mechanism's margin) the largest relative
+    difference and where. -SweepOut names a folder to keep both builds' lines in (baseline.tsv, current.tsv).
 #>
 param(
     [Parameter(Mandatory = $true)]
     [string] $Baseline,
     [int] $Rounds = 4,
     [double] $Seconds = 3,
-    [switch] $PulseBody
+    [switch] $PulseBody,
+    [switch] $Sweep,
+    [string] $SweepOut
 )
 $ErrorActionPreference = 'Stop'
 $root = (Resolve-Path (Join-Path $PSScriptRoot '../..')).Path
@@ -36,6 +44,52 @@ try {
     if ($LASTEXITCODE -ne 0) { throw "Building the benchmark against $Baseline failed." }
     dotnet build (Join-Path $root 'tests/InductionHazard.Benchmarks') -c Release --nologo -v quiet -o $builds.current | Out-Null
     if ($LASTEXITCODE -ne 0) { throw 'Building the benchmark against the working tree failed.' }
+
+    if ($Sweep) {
+        $lines = @{}
+        foreach ($which in 'baseline', 'current') {
+            $lines[$which] = @(& dotnet (Join-Path $builds[$which] 'InductionHazard.Benchmarks.dll') sweep)
+            if ($LASTEXITCODE -ne 0) { throw "The sweep failed on the $which build." }
+            if ($SweepOut) {
+                New-Item -ItemType Directory -Force -Path $SweepOut | Out-Null
+                Set-Content -Path (Join-Path $SweepOut "$which.tsv") -Value $lines[$which] -Encoding utf8
+            }
+        }
+
+        function Read-Sweep([string[]] $text) {
+            $rows = [ordered]@{}
+            foreach ($line in $text) {
+                $fields = $line -split "`t"
+                $values = @{}
+                foreach ($field in $fields[1..($fields.Count - 1)]) { $name, $value = $field -split '=', 2; $values[$name] = $value }
+                $rows[$fields[0]] = $values
+            }
+            $rows
+        }
+
+        $before, $after = (Read-Sweep $lines.baseline), (Read-Sweep $lines.current)
+        if ($before.Count -ne $after.Count) { throw "The builds gave $($before.Count) and $($after.Count) lines." }
+        $largest = [ordered]@{}
+        $verdicts = 0
+        foreach ($key in $before.Keys) {
+            $b, $a = $before[$key], $after[$key]
+            if ($b.verdict -ne $a.verdict) { $verdicts++; "verdict changed: $key $($b.verdict) -> $($a.verdict)" }
+            foreach ($name in $b.Keys) {
+                if ($name -eq 'verdict') { continue }
+                $x, $y = [double]::Parse($b[$name], [cultureinfo]::InvariantCulture), [double]::Parse($a[$name], [cultureinfo]::InvariantCulture)
+                if ($x -eq $y) { $change = 0 } elseif ($x -eq 0 -or [double]::IsNaN($x) -or [double]::IsInfinity($x)) { $change = [double]::PositiveInfinity } else { $change = [math]::Abs($y - $x) / [math]::Abs($x) }
+                if (-not $largest.Contains($name) -or $change -gt $largest[$name].Change) { $largest[$name] = [pscustomobject]@{ Change = $change; Key = $key; Before = $x; After = $y } }
+            }
+        }
+
+        "$($before.Count) assessments; $verdicts verdicts changed"
+        foreach ($name in $largest.Keys) {
+            $l = $largest[$name]
+            '{0,-12} largest relative change {1:E2} ({2}: {3:R} -> {4:R})' -f $name, $l.Change, $l.Key, $l.Before, $l.After
+        }
+
+        return
+    }
 
     $best = @{}
     foreach ($round in 1..$Rounds) {
