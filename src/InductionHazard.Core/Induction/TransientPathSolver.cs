@@ -90,6 +90,9 @@ public sealed class TransientPathSolver
     private readonly double _leadTimeConstant;
     private readonly double _slowestTimeConstant;
 
+    /// <summary><see cref="CoolKelvin"/> times the item's heat capacity, J.</summary>
+    private readonly double _coolJoules;
+
     /// <summary>1 / lambda of each mode, so that a step's time constants and ratios are products.</summary>
     private readonly double[] _inverseLambdas;
 
@@ -102,6 +105,7 @@ public sealed class TransientPathSolver
         _circuit = circuit;
         _scaleAt = scaleAtCelsius;
         _thermal = thermal;
+        _coolJoules = CoolKelvin * thermal.HeatCapacityJoulesPerKelvin;
         _inverseLambdas = new double[circuit.Count];
         for (int k = 0; k < circuit.Count; k++)
         {
@@ -625,9 +629,9 @@ public sealed class TransientPathSolver
     /// </summary>
     private bool StaysCool(double z, double s, double e0, double g, double seconds)
     {
-        double e = e0 + (g * seconds);
-        double power = Math.Max(s * z * z, e * e / s);
-        return power * seconds < CoolKelvin * _thermal.HeatCapacityJoulesPerKelvin;
+        // max(s z^2, e^2 / s) t < dT C, multiplied through by s (s > 0): no division.
+        double e = e0 + (g * seconds), sz = s * z;
+        return Math.Max(sz * sz, e * e) * seconds < _coolJoules * s;
     }
 
     /// <summary>Whether a segment's first step of half the L/R of one inert path stays cool (<see cref="StaysCool"/>), its emf read at the step's middle.</summary>
