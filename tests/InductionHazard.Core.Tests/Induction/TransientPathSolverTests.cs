@@ -209,13 +209,13 @@ public class TransientPathSolverTests
     [Fact]
     public void AChangeTooSmallToSeeBesideThePeakIsSteppedOverInLongStepsAndStaysExact()
     {
-        // A constant emf e for 20 L/R, then 0.4 % more for 20 L/R: i = e'/R + (i(t1) - e'/R) exp(-(t - t1)/tau) after t1
-        // (RL circuit theory). The change moves the current by under 1 % of its peak, which a chart on the peak's scale
-        // cannot show, so its steps grow sixteenfold from the first where a visible change's grow fourfold until its
-        // current settles: exact all the same (each step is the exact exponential update), in fewer steps than the
-        // first segment's rise takes (as many without the sixteenfold growth).
-        double e = 1e-3, bumped = 1.004 * e, t1 = 20 * Tau, t2 = 40 * Tau;
-        double atT1 = e / R * (1 - Math.Exp(-20));
+        // A constant emf e for 2,000 L/R, then 0.4 % more for 2,000 L/R: i = e'/R + (i(t1) - e'/R) exp(-(t - t1)/tau)
+        // after t1 (RL circuit theory). The change moves the current by under 1 % of its peak, which a chart on the
+        // peak's scale cannot show, so its steps grow sixteenfold from the first where a visible change's grow fourfold
+        // until its current settles: exact all the same (each step is the exact exponential update), in fewer steps
+        // than the first segment's rise takes (as many without the sixteenfold growth).
+        double e = 1e-3, bumped = 1.004 * e, t1 = 2000 * Tau, t2 = 4000 * Tau;
+        double atT1 = e / R * (1 - Math.Exp(-2000));
         double Exact(double t) => t <= t1 ? e / R * (1 - Math.Exp(-t / Tau)) : (bumped / R) + ((atT1 - (bumped / R)) * Math.Exp(-(t - t1) / Tau));
         TransientRun run = FixedResistance().Run(t => t < t1 ? e : bumped, new[] { t1 }, 0, t2, 20, CancellationToken.None);
         TransientRun rise = FixedResistance().Run(t => e, new[] { t1 }, 0, t1, 20, CancellationToken.None);
