@@ -248,7 +248,7 @@ public static class FluxCoupling
 
         // A compass search from there; then from those of a spread of orientations over the half sphere that link more
         // than the top it reached, best first, at most three (near a winding the peak may have more than one top).
-        (best, bestPeak, (Vector3D Normal, string Reason)? last) = Climb(best, bestPeak, turn);
+        (best, bestPeak, (Vector3D Normal, string Reason)? last, bool settled) = Climb(best, bestPeak, turn);
         // Where some of the spread reach into the source (the field over the loop cannot be integrated there), its rim
         // passes close by a conductor near them, where the flux may rise to a top too narrow for 24 to land near (a 269
         // mm ring 23 mm above a coil's plane, its centre 86 mm outside the winding: 7.1E-08 Wb reached, 1.0E-07 beside
@@ -290,17 +290,19 @@ public static class FluxCoupling
                     break;
                 }
 
-                (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge) = Climb(facing, value, firstTurn);
+                (Facing reached, double reachedPeak, (Vector3D Normal, string Reason)? edge, bool reachedSettled) = Climb(facing, value, firstTurn);
                 if (reachedPeak > bestPeak)
                 {
-                    (best, bestPeak, last) = (reached, reachedPeak, edge);
+                    (best, bestPeak, last, settled) = (reached, reachedPeak, edge, reachedSettled);
                 }
             }
 
             return intoSource;
         }
 
-        (Facing Best, double Peak, (Vector3D Normal, string Reason)? Edge) Climb(Facing from, double fromPeak, double firstTurn)
+        // A compass search from an orientation: the best reached, the orientation beside it that cannot be integrated if
+        // the best lies at that edge, and whether the turn came down to the last before the trials ran out.
+        (Facing Best, double Peak, (Vector3D Normal, string Reason)? Edge, bool Settled) Climb(Facing from, double fromPeak, double firstTurn)
         {
             double turn = firstTurn;
             bool edge = false;
@@ -333,7 +335,7 @@ public static class FluxCoupling
                 }
             }
 
-            return (from, fromPeak, edge && turn < LastTurn ? failed : null);
+            return (from, fromPeak, edge && turn < LastTurn ? failed : null, turn < LastTurn);
         }
 
         if (last is { } edgeOf)
@@ -345,6 +347,18 @@ public static class FluxCoupling
             throw new Errors.FieldEvaluationException(
                 "the orientation that links the largest flux change cannot be found this near the source: the flux grows as the loop turns toward it until, "
                 + SiFormat.Plain(Math.Round(degrees, 1)) + " degrees from the estimate by the field's axes (normal " + estimate + "), it cannot be found (" + edgeOf.Reason
+                + "); give how the item sits (-Normal or a Normal column), or assess it further from the source");
+        }
+
+        if (!settled)
+        {
+            // The trials ran out while the search still turned by more than its last turn (a 244 mm ring beside a
+            // coil's winding, whose peak falls away sharply either way across a ridge as its rim nears the winding, ran
+            // its 300 trials along the ridge and stopped 1 degree from a top it had not reached): the largest is not
+            // found, and the orientation the search stopped at may not stand in for it.
+            throw new Errors.FieldEvaluationException(
+                "the orientation that links the largest flux change cannot be found this near the source: the search for it did not settle within "
+                + MostTrials.ToString(System.Globalization.CultureInfo.InvariantCulture) + " orientations (it stopped at normal " + best.Normal
                 + "); give how the item sits (-Normal or a Normal column), or assess it further from the source");
         }
 

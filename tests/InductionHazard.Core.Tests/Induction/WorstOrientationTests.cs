@@ -285,6 +285,42 @@ public class WorstOrientationTests
     }
 
     [Fact]
+    public void ASearchThatRunsOutOfTrialsBeforeItSettlesNamesNoOrientation()
+    {
+        // Found by the property below with a random seed: a 244 mm ring 52 mm above a 100 mm coil's plane, its centre
+        // 106 mm outside the winding. Its peak falls away sharply either way across a ridge as its rim nears the
+        // winding; the search climbed along the ridge, ran out of its 300 trials while still turning by a degree, and
+        // named where it stopped, 4.7617E-07 Wb/A, where turning a degree off the plane through the coil's axis links
+        // 4.7743E-07 (and a degree and a half off, the loop reaches the winding). Now the orientation taken links no
+        // less than any of 150, or none is named (Indeterminate): a search that has not settled names none.
+        var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
+        ConductiveItem ring = Ring("0.2440057105166808 m", "2 mm");
+        var centre = new Vector3D(0.2055151465171483, 0, 3.0 / 58);
+        double largest = 0;
+        foreach (Vector3D n in SphereSearch.Spread(150, half: true))
+        {
+            try
+            {
+                largest = Math.Max(largest, Math.Abs(FluxCoupling.Flux(coil, centre, n, ring.Loop)));
+            }
+            catch (Errors.FieldEvaluationException)
+            {
+            }
+        }
+
+        Assert.True(largest > 4.77e-7, "the top off the plane, " + largest);
+        try
+        {
+            Vector3D taken = FluxCoupling.WorstNormal(Sine(coil), centre, ring.Loop);
+            Assert.True(Math.Abs(FluxCoupling.Flux(coil, centre, taken, ring.Loop)) >= (1 - 1e-4) * largest, "the orientation taken " + taken);
+        }
+        catch (Errors.FieldEvaluationException ex)
+        {
+            Assert.StartsWith("the orientation that links the largest flux change cannot be found this near the source", ex.Message, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
     public void NoOrientationOfAHundredAndFiftyLinksMoreThanTheOneTakenForRandomLoopsNearACoil()
     {
         // For rings of 10 to 300 mm anywhere from the coil's axis to well beyond its winding, 20 to 150 mm above its
