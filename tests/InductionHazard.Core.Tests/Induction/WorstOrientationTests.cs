@@ -259,29 +259,11 @@ public class WorstOrientationTests
         var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
         ConductiveItem ring = Ring("0.26860982782414683 m", "2 mm");
         var centre = new Vector3D(8.0 / 43, 0, 1.0 / 43);
-        double largest = 0;
-        foreach (Vector3D n in SphereSearch.Spread(150, half: true))
-        {
-            try
-            {
-                largest = Math.Max(largest, Math.Abs(FluxCoupling.Flux(coil, centre, n, ring.Loop)));
-            }
-            catch (Errors.FieldEvaluationException)
-            {
-            }
-        }
+        double largest = LargestOfASpread(coil, centre, ring);
 
         // 150 normals find 7.49E-08 there, above the 7.12E-08 the search reached before (2,000 find 9.96E-08).
         Assert.True(largest > 7.2e-8, "the top beside the winding, " + largest);
-        try
-        {
-            Vector3D taken = FluxCoupling.WorstNormal(Sine(coil), centre, ring.Loop);
-            Assert.True(Math.Abs(FluxCoupling.Flux(coil, centre, taken, ring.Loop)) >= (1 - 1e-4) * largest, "the orientation taken " + taken);
-        }
-        catch (Errors.FieldEvaluationException ex)
-        {
-            Assert.StartsWith("the orientation that links the largest flux change cannot be found this near the source", ex.Message, StringComparison.Ordinal);
-        }
+        TakenLinksAsMuchOrNoneIsNamed(coil, centre, ring, largest);
     }
 
     [Fact]
@@ -296,6 +278,14 @@ public class WorstOrientationTests
         var coil = new CircularCoil(new Axis(Vector3D.Zero, Vector3D.UnitZ), 0.1, 10);
         ConductiveItem ring = Ring("0.2440057105166808 m", "2 mm");
         var centre = new Vector3D(0.2055151465171483, 0, 3.0 / 58);
+        double largest = LargestOfASpread(coil, centre, ring);
+        Assert.True(largest > 4.77e-7, "the top off the plane, " + largest);
+        TakenLinksAsMuchOrNoneIsNamed(coil, centre, ring, largest);
+    }
+
+    /// <summary>The largest flux per ampere of 150 normals spread over the half sphere, those that can be integrated.</summary>
+    private static double LargestOfASpread(CircularCoil coil, Vector3D centre, ConductiveItem ring)
+    {
         double largest = 0;
         foreach (Vector3D n in SphereSearch.Spread(150, half: true))
         {
@@ -308,7 +298,12 @@ public class WorstOrientationTests
             }
         }
 
-        Assert.True(largest > 4.77e-7, "the top off the plane, " + largest);
+        return largest;
+    }
+
+    /// <summary>The orientation taken links no less than the largest given (to 1e-4), or the search names none, saying it cannot be found.</summary>
+    private static void TakenLinksAsMuchOrNoneIsNamed(CircularCoil coil, Vector3D centre, ConductiveItem ring, double largest)
+    {
         try
         {
             Vector3D taken = FluxCoupling.WorstNormal(Sine(coil), centre, ring.Loop);
