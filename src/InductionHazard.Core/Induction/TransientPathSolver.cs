@@ -32,9 +32,9 @@ public sealed class TransientPathSolver
 
     /// <summary>
     /// The same growth while the drive is curved (each step reads it as a line, up to <see cref="MaxStepSeconds"/>) or
-    /// the item heats (<see cref="CoolKelvin"/>): 1.5, so that a curved drive's heating is sampled as finely as the steps' own accuracy asks (with 4, the burn
-    /// margin of a ring in a magnet's quench came out 2e-6 above that of steps eight times finer, where 1.5 gives 1e-6
-    /// below it).
+    /// the item heats (<see cref="CoolKelvin"/>): 1.5, so that a curved drive's heating is sampled as finely as the
+    /// steps' own accuracy asks (with 4, the burn margin of a ring in a magnet's quench came out 2e-6 above that of
+    /// steps eight times finer, where 1.5 gives 1e-6 below it).
     /// </summary>
     private const double CurvedInertGrowth = 1.5;
 
@@ -71,13 +71,13 @@ public sealed class TransientPathSolver
     /// longest step bound it. Not once the item only cools, where the cooling curve's chords set the step.
     /// </summary>
     private const double UnseenChange = 0.01;
+    private const double UnseenGrowth = 16;
 
     /// <summary>
     /// A step of one inert path whose current moved by more than this share is filled, when its series is read, with
     /// points of its own exact solution (<see cref="SteppedCircuitSeries"/>); the series records such a step's end too.
     /// </summary>
     private const double ChartChange = 0.02;
-    private const double UnseenGrowth = 16;
 
     /// <summary>
     /// A step is at most this share of the one over which the last step's rate of heating would move the item by <see
