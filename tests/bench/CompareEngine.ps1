@@ -76,9 +76,14 @@ try {
             if ($b.verdict -ne $a.verdict) { $verdicts++; "verdict changed: $key $($b.verdict) -> $($a.verdict)" }
             foreach ($name in $b.Keys) {
                 if ($name -eq 'verdict') { continue }
+                if (-not $a.ContainsKey($name)) { "$name not judged by the working tree: $key"; continue }
                 $x, $y = [double]::Parse($b[$name], [cultureinfo]::InvariantCulture), [double]::Parse($a[$name], [cultureinfo]::InvariantCulture)
-                if ($x -eq $y) { $change = 0 } elseif ($x -eq 0 -or [double]::IsNaN($x) -or [double]::IsInfinity($x)) { $change = [double]::PositiveInfinity } else { $change = [math]::Abs($y - $x) / [math]::Abs($x) }
+                if ($x -eq $y -or ([double]::IsNaN($x) -and [double]::IsNaN($y))) { $change = 0 } elseif ($x -eq 0 -or [double]::IsNaN($x) -or [double]::IsInfinity($x)) { $change = [double]::PositiveInfinity } else { $change = [math]::Abs($y - $x) / [math]::Abs($x) }
                 if (-not $largest.Contains($name) -or $change -gt $largest[$name].Change) { $largest[$name] = [pscustomobject]@{ Change = $change; Key = $key; Before = $x; After = $y } }
+            }
+
+            foreach ($name in $a.Keys) {
+                if (-not $b.ContainsKey($name)) { "$name judged by the working tree only: $key" }
             }
         }
 
