@@ -16,6 +16,19 @@ public class TransientPathSolverTests
     private static TransientPathSolver FixedResistance(double maxStep = double.PositiveInfinity) =>
         new(ModalCircuit.OneLoop(L, R), _ => 1, new LumpedThermalModel(1e15, 1e-4, new ThermalEnvironment(20, 0, 0))) { MaxStepSeconds = maxStep };
 
+    /// <summary>
+    /// One classical fourth-order Runge-Kutta step of a loop's current i and temperature T, with the energy dissipated
+    /// alongside, from their rates (di/dt, dT/dt, power) at (i, T): the changes of all three over h.
+    /// </summary>
+    private static (double Di, double DT, double DW) Rk4(Func<double, double, (double Di, double DT, double DW)> rates, double i, double celsius, double h)
+    {
+        var k1 = rates(i, celsius);
+        var k2 = rates(i + (h / 2 * k1.Di), celsius + (h / 2 * k1.DT));
+        var k3 = rates(i + (h / 2 * k2.Di), celsius + (h / 2 * k2.DT));
+        var k4 = rates(i + (h * k3.Di), celsius + (h * k3.DT));
+        return (h / 6 * (k1.Di + (2 * k2.Di) + (2 * k3.Di) + k4.Di), h / 6 * (k1.DT + (2 * k2.DT) + (2 * k3.DT) + k4.DT), h / 6 * (k1.DW + (2 * k2.DW) + (2 * k3.DW) + k4.DW));
+    }
+
     [Validates("i(t) = (e/R)(1 - exp(-tR/L))", "RL circuit theory (closed form)", "1e-9")]
     [Fact]
     public void ARampGivesTheExponentialRiseOfAnRlCircuit()
@@ -269,13 +282,8 @@ public class TransientPathSolverTests
         double h = end / n;
         for (int k = 0; k < n; k++)
         {
-            var k1 = Rates(current, celsius);
-            var k2 = Rates(current + (h / 2 * k1.Di), celsius + (h / 2 * k1.DT));
-            var k3 = Rates(current + (h / 2 * k2.Di), celsius + (h / 2 * k2.DT));
-            var k4 = Rates(current + (h * k3.Di), celsius + (h * k3.DT));
-            current += h / 6 * (k1.Di + (2 * k2.Di) + (2 * k3.Di) + k4.Di);
-            celsius += h / 6 * (k1.DT + (2 * k2.DT) + (2 * k3.DT) + k4.DT);
-            energy += h / 6 * (k1.DW + (2 * k2.DW) + (2 * k3.DW) + k4.DW);
+            (double di, double dT, double dW) = Rk4(Rates, current, celsius, h);
+            (current, celsius, energy) = (current + di, celsius + dT, energy + dW);
             peak = Math.Max(peak, current);
         }
 
@@ -324,15 +332,8 @@ public class TransientPathSolverTests
                 // The emf is constant within each phase and the steps land on the pulse's end: every stage reads the
                 // step's own side of it, at mid-step.
                 double mid = ti + (h / 2);
-                (double, double, double) F(double i, double c) => Rates(mid, i, c);
-
-                var k1 = F(current, celsius);
-                var k2 = F(current + (h / 2 * k1.Item1), celsius + (h / 2 * k1.Item2));
-                var k3 = F(current + (h / 2 * k2.Item1), celsius + (h / 2 * k2.Item2));
-                var k4 = F(current + (h * k3.Item1), celsius + (h * k3.Item2));
-                current += h / 6 * (k1.Item1 + (2 * k2.Item1) + (2 * k3.Item1) + k4.Item1);
-                celsius += h / 6 * (k1.Item2 + (2 * k2.Item2) + (2 * k3.Item2) + k4.Item2);
-                energy += h / 6 * (k1.Item3 + (2 * k2.Item3) + (2 * k3.Item3) + k4.Item3);
+                (double di, double dT, double dW) = Rk4((i, c) => Rates(mid, i, c), current, celsius, h);
+                (current, celsius, energy) = (current + di, celsius + dT, energy + dW);
                 ti += h;
                 peakCurrent = Math.Max(peakCurrent, Math.Abs(current));
                 times.Add(ti);
