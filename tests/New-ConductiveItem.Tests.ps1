@@ -90,6 +90,23 @@ Describe 'New-ConductiveItem' {
         $items.Name | Should -Be $rows.Name
     }
 
+    It 'takes several rows given at once to -InputObject as it takes them piped: each in turn, numbered, a $null its own error' {
+        $a = @{ Name = 'A'; Material = 'Copper'; Diameter = '20 mm'; WireDiameter = '2 mm' }
+        $b = [pscustomobject]@{ Name = 'B'; Material = 'Gold'; Diameter = '25 mm'; WireDiameter = '2 mm' }
+        (New-ConductiveItem -InputObject $a, $b).Name | Should -Be @('A', 'B')
+        (New-ConductiveItem -InputObject $a).Name | Should -Be 'A' -Because 'a hashtable is one row, not a collection of its entries'
+        $list = [System.Collections.Generic.List[object]]::new(); $list.Add($b); $list.Add($a)
+        (New-ConductiveItem -InputObject $list).Name | Should -Be @('B', 'A')
+        @(New-ConductiveItem -InputObject @()).Count | Should -Be 0
+        $items = @(New-ConductiveItem -InputObject $a, $null, $b -ErrorVariable bad -ErrorAction SilentlyContinue)
+        $items.Name | Should -Be @('A', 'B')
+        @($bad).Count | Should -Be 1
+        "$($bad[0])" | Should -Match '^row 2: InputObject: is \$null'
+        $piped = @($a, $null, $b | New-ConductiveItem -ErrorVariable pipedBad -ErrorAction SilentlyContinue)
+        $piped.Name | Should -Be @('A', 'B')
+        "$($pipedBad[0])" | Should -Match '^row 2: InputObject: is \$null'
+    }
+
     It 'writes an error naming the row and field for a bad row and goes on' {
         $items = @(Import-Csv (Join-Path $PSScriptRoot 'data/inventory-with-bad-rows.csv') | New-ConductiveItem -ErrorVariable bad -ErrorAction SilentlyContinue)
         $items.Count | Should -Be 3

@@ -6,6 +6,10 @@
     serially (its default) and with -ThrottleLimit 2. A third pipeline gives the floor for any binary cmdlet: the same
     rows through a compiled cmdlet that only binds each row and writes it on (the shell's binding and writing, with no
     work), so that what the textbook pipeline leaves a module for its own work on a row is the difference of the two.
+    A fourth gives what reading alone costs: the same rows through New-ConductiveItem, which reads each row into an
+    item (its size, material, contact and their checks) and assesses nothing; Test-InductionHazard reads every row so
+    and more (its placement and inventory columns), so where this alone takes longer than the textbook pipeline, no
+    engine, however fast, brings Test-InductionHazard to it.
     The inventory's rings come in ten sizes, as an inventory repeats its items (rings of a size, a box of spanners), so
     that a row repeating an earlier one takes its result; with -DistinctRows every ring is a size of its own and every
     row is assessed. It also gives how long the runtime's garbage collections paused the serial runs, a round on
@@ -57,6 +61,9 @@ function Measure-Textbook([string] $Path) {
 function Measure-Floor([string] $Path) {
     Measure-Command { Import-Csv $Path | Write-RowUnchanged | Out-Null }
 }
+function Measure-Reading([string] $Path) {
+    Measure-Command { Import-Csv $Path | New-ConductiveItem | Out-Null }
+}
 function Measure-Module([string] $Path, $Source, [int] $Threads = 1) {
     Measure-Command { Import-Csv $Path | Test-InductionHazard -Source $Source -ThrottleLimit $Threads -WarningAction SilentlyContinue | Out-Null }
 }
@@ -65,18 +72,20 @@ function Measure-Module([string] $Path, $Source, [int] $Threads = 1) {
 foreach ($name in $sources.Keys) {
     $null = Measure-Textbook $warm
     $null = Measure-Floor $warm
+    $null = Measure-Reading $warm
     $null = Measure-Module $warm $sources[$name]
     $null = Measure-Module $warm $sources[$name] 2
-    $textbook = [double]::MaxValue; $floor = [double]::MaxValue; $module = [double]::MaxValue; $threaded = [double]::MaxValue
+    $textbook = [double]::MaxValue; $floor = [double]::MaxValue; $reading = [double]::MaxValue; $module = [double]::MaxValue; $threaded = [double]::MaxValue
     $pause = 0.0; $gen1 = 0
     foreach ($round in 1..$Rounds) {
         $textbook = [math]::Min($textbook, (Measure-Textbook $csv).TotalSeconds)
         $floor = [math]::Min($floor, (Measure-Floor $csv).TotalSeconds)
+        $reading = [math]::Min($reading, (Measure-Reading $csv).TotalSeconds)
         $paused = [GC]::GetTotalPauseDuration(); $older = [GC]::CollectionCount(1)
         $module = [math]::Min($module, (Measure-Module $csv $sources[$name]).TotalSeconds)
         $pause += ([GC]::GetTotalPauseDuration() - $paused).TotalMilliseconds; $gen1 += [GC]::CollectionCount(1) - $older
         $threaded = [math]::Min($threaded, (Measure-Module $csv $sources[$name] 2).TotalSeconds)
     }
-    '{0}: {1} rows{10}, textbook {2:F2} s, Test-InductionHazard {3:F2} s (ratio {4:F1}), with -ThrottleLimit 2 {5:F2} s (ratio {6:F1}); a cmdlet that only passes rows on {7:F3} s, leaving a module {8:F1} us a row of its own work to match the textbook (fastest of {9} rounds each, after a warm-up); garbage collections paused the serial runs {11:F0} ms a round, {12:F1} of them of the older generations' -f $name, $Rows, $textbook, $module, ($module / $textbook), $threaded, ($threaded / $textbook), $floor, (($textbook - $floor) / $Rows * 1e6), $Rounds, $(if ($DistinctRows) { ' (every one a ring of its own size)' } else { ' (rings of ten sizes)' }), ($pause / $Rounds), ($gen1 / $Rounds)
+    '{0}: {1} rows{10}, textbook {2:F2} s, Test-InductionHazard {3:F2} s (ratio {4:F1}), with -ThrottleLimit 2 {5:F2} s (ratio {6:F1}); a cmdlet that only passes rows on {7:F3} s, leaving a module {8:F1} us a row of its own work to match the textbook; reading the rows into items alone (New-ConductiveItem) {13:F3} s (ratio {14:F1}), {15:F1} us a row of its own (fastest of {9} rounds each, after a warm-up); garbage collections paused the serial runs {11:F0} ms a round, {12:F1} of them of the older generations' -f $name, $Rows, $textbook, $module, ($module / $textbook), $threaded, ($threaded / $textbook), $floor, (($textbook - $floor) / $Rows * 1e6), $Rounds, $(if ($DistinctRows) { ' (every one a ring of its own size)' } else { ' (rings of ten sizes)' }), ($pause / $Rounds), ($gen1 / $Rounds), $reading, ($reading / $textbook), (($reading - $floor) / $Rows * 1e6)
 }
 Remove-Item $csv, $warm

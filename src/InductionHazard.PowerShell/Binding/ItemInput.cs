@@ -7,6 +7,22 @@ namespace InductionHazard.PowerShell.Binding;
 /// <summary>Turns one pipeline object into an item: an item passes through, a row or hashtable is read by its fields.</summary>
 internal static class ItemInput
 {
+    /// <summary>
+    /// The objects of a collection bound as one to a pipeline parameter that takes one object (-Item $band, $ring), to be
+    /// taken in turn as the shell would enumerate them; null for one object (a hashtable or a text being one, as the
+    /// shell takes them). A parameter that takes one object is bound row by row from the pipeline, where an
+    /// array-typed one made the shell wrap every piped row in an array of one (some 0.8 us a row).
+    /// </summary>
+    public static System.Collections.IEnumerable? Several(PSObject? input)
+    {
+        object? bound = input?.BaseObject;
+        return bound is not null && bound is not string && bound is not System.Collections.IDictionary ? LanguagePrimitives.GetEnumerable(bound) : null;
+    }
+
+    /// <summary>The error of a row that the pipeline gave as $null (an empty line, a missing object), named by its label.</summary>
+    public static Errors.RecordException NothingGiven(string label) =>
+        new(label, new[] { new Errors.FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+
     /// <summary>The named values of a row, read once (they are read by several readers); null for an item object.</summary>
     public static IReadOnlyList<KeyValuePair<string, object?>>? RecordOf(PSObject input) =>
         input.BaseObject is ConductiveItem ? null

@@ -57,8 +57,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     /// <remarks>
     /// One object as the shell binds it from the pipeline, row by row; several given at once (-Item $band, $ring) arrive
-    /// as one collection and are taken in turn, as the shell would enumerate them. (An array-typed parameter made the
-    /// shell wrap every piped row in an array of one, some 0.8 us a row.)
+    /// as one collection and are taken in turn (<see cref="ItemInput.Several"/>).
     /// </remarks>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [Alias("Item")]
@@ -221,8 +220,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     protected override void ProcessRecord()
     {
         // A collection given to -Item is its items (a hashtable or a text is one item, as the shell takes them).
-        object? bound = InputObject?.BaseObject;
-        if (bound is not null && bound is not string && bound is not System.Collections.IDictionary && LanguagePrimitives.GetEnumerable(bound) is { } several)
+        if (ItemInput.Several(InputObject) is { } several)
         {
             foreach (object? one in several)
             {
@@ -313,7 +311,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
         {
             if (given is null || given.BaseObject is null)
             {
-                throw new RecordException(label, new[] { new FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+                throw ItemInput.NothingGiven(label);
             }
 
             // The row's fields are read here, on the pipeline thread (the shell's objects are not for other threads);

@@ -17,6 +17,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     private const string InputObjectSet = "InputObject";
     private MaterialLibrary _materials = MaterialLibrary.BuiltIn;
     private int _row;
+    private IReadOnlyDictionary<string, string>? _units;
 
     /// <summary>The item's name as it appears in assessments.</summary>
     [Parameter(ParameterSetName = ParametersSet, Position = 0)]
@@ -87,8 +88,11 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     public ContactKind Contact { get; set; } = ContactKind.Skin;
 
     /// <summary>Data rows (Import-Csv output, hashtables) with columns Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and Thickness, Gap, Contact.</summary>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>).</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
-    public PSObject[] InputObject { get; set; } = null!;
+    [AllowNull]
+    [AllowEmptyCollection]
+    public PSObject? InputObject { get; set; }
 
     /// <summary>The unit of the bare numbers in data rows, by column, where the headers do not name it: @{ Diameter = 'mm' }.</summary>
     [Parameter(ParameterSetName = InputObjectSet)]
@@ -106,6 +110,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     /// <inheritdoc />
     protected override void BeginProcessing()
     {
+        _units = ItemInput.UnitsOf(Unit);
         if (AdditionalMaterial is { Length: > 0 })
         {
             _materials = MaterialLibrary.BuiltIn.With(AdditionalMaterial);
@@ -129,21 +134,42 @@ public sealed class NewConductiveItemCommand : PSCmdlet
             return;
         }
 
-        foreach (PSObject input in InputObject)
+        if (ItemInput.Several(InputObject) is { } several)
         {
-            _row++;
-            try
+            foreach (object? one in several)
             {
-                WriteObject(ItemInput.ToItem(input, _materials, _row, ItemInput.UnitsOf(Unit), AcceptUnusualSize.IsPresent));
+                ReadOne(one is null ? null : PSObject.AsPSObject(one));
             }
-            catch (InductionHazardException ex)
+        }
+        else
+        {
+            ReadOne(InputObject);
+        }
+    }
+
+    /// <summary>One row or item: its item written, or an error naming the row.</summary>
+    private void ReadOne(PSObject? given)
+    {
+        _row++;
+
+        // A $null (an empty line, a missing object) is that row's error, not the shell's binding error.
+        PSObject input = given ?? new PSObject(string.Empty);
+        try
+        {
+            if (given is null || given.BaseObject is null)
             {
-                WriteError(ErrorRecords.From(ex, input, ItemInput.Label(input, _row)));
+                throw ItemInput.NothingGiven(ItemInput.Label(input, _row));
             }
-            catch (Exception ex) when (ErrorRecords.IsRecordFailure(ex))
-            {
-                WriteError(ErrorRecords.Unexpected(ex, input, ItemInput.Label(input, _row)));
-            }
+
+            WriteObject(ItemInput.ToItem(input, _materials, _row, _units, AcceptUnusualSize.IsPresent));
+        }
+        catch (InductionHazardException ex)
+        {
+            WriteError(ErrorRecords.From(ex, input, ItemInput.Label(input, _row)));
+        }
+        catch (Exception ex) when (ErrorRecords.IsRecordFailure(ex))
+        {
+            WriteError(ErrorRecords.Unexpected(ex, input, ItemInput.Label(input, _row)));
         }
     }
 
