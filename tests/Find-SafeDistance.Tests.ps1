@@ -35,6 +35,21 @@ Describe 'Find-SafeDistance' {
         { Find-SafeDistance -Item $ring -Source $fault -Direction x -MaxDistance '0.1 mm' } | Should -Throw '*MaxDistance*'
     }
 
+    It 'takes several items given at once to -Item in turn, as piped; a $null is its row''s error and the rest go on' {
+        $row = [pscustomobject]@{ Name = 'Row ring'; Material = 'Copper'; Diameter = '60 mm'; WireDiameter = '3 mm'; Contact = 'Loose' }
+        $alone = Find-SafeDistance -Item $ring -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m' -WarningAction SilentlyContinue
+        foreach ($run in @(
+                @{ Name = 'given at once'; Out = { Find-SafeDistance -Item $null, $ring, $row -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m' -WarningAction SilentlyContinue -ErrorVariable script:bad -ErrorAction SilentlyContinue } },
+                @{ Name = 'piped'; Out = { $null, $ring, $row | Find-SafeDistance -Source $fault -From '70 mm, 0, 0' -Direction x -MaxDistance '3 m' -WarningAction SilentlyContinue -ErrorVariable script:bad -ErrorAction SilentlyContinue } })) {
+            $script:bad = $null
+            $out = @(& $run.Out)
+            $out.ItemName | Should -Be @('Copper ring', 'Row ring') -Because $run.Name
+            $out.DistanceMeters | Should -Be @($alone.DistanceMeters, $alone.DistanceMeters) -Because "$($run.Name): the row is the same ring"
+            @($script:bad).Count | Should -Be 1 -Because $run.Name
+            "$($script:bad[0])" | Should -Match '^row 1: Item: is \$null' -Because $run.Name
+        }
+    }
+
     It 'gives a row that repeats an earlier row''s item what searching for it alone gives, under its own name, and its own warning and error' {
         $fields = @{ Material = 'Copper'; Diameter = '60 mm'; WireDiameter = '3 mm'; Contact = 'Loose' }
         $rows = @(

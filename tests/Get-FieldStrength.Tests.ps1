@@ -30,6 +30,20 @@ Describe 'Get-FieldStrength' {
         "$($errs[0])" | Should -BeLike 'Position:*parsec*'
     }
 
+    It 'takes several points given at once to -InputObject in turn, as piped; a $null is its row''s error and the rest go on' {
+        $given = @(Get-FieldStrength -Source $line -Position '100 mm,0,0', '0,400 mm,0')
+        $row = [pscustomobject]@{ X = '100 mm'; Y = '0 mm'; Z = '0 mm' }
+        foreach ($run in @(
+                @{ Name = 'given at once'; Out = { Get-FieldStrength -Source $line -InputObject $row, $null, '0, 0.4, 0' -ErrorVariable script:bad -ErrorAction SilentlyContinue } },
+                @{ Name = 'piped'; Out = { $row, $null, '0, 0.4, 0' | Get-FieldStrength -Source $line -ErrorVariable script:bad -ErrorAction SilentlyContinue } })) {
+            $script:bad = $null
+            $out = @(& $run.Out)
+            $out.PeakFluxDensityTesla | Should -Be $given.PeakFluxDensityTesla -Because $run.Name
+            @($script:bad).Count | Should -Be 1 -Because $run.Name
+            "$($script:bad[0])" | Should -Match '^row 2: InputObject: is \$null' -Because $run.Name
+        }
+    }
+
     # Validates: the cmdlet's resultant rms of a line's 50 Hz field, its peak over root 2 | Ampere's law | 1e-12
     It 'gives a sinusoid''s resultant rms: a line''s peak over root 2, more than that beside a three-phase set, none for a ramp' {
         $s = Get-FieldStrength -Source $line -Position '100 mm,0,0'

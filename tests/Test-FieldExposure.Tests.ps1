@@ -73,6 +73,23 @@ Bare,300,0,0,
         (@{ X = '300'; Y = '0'; Z = '0' } | Test-FieldExposure -Source $feeder -Unit @{ X = 'mm'; Y = 'mm'; Z = 'mm' }).Margin | Should -Be $given[0].Margin
     }
 
+    It 'takes several points given at once to -InputObject in turn, as piped; a $null is its row''s error and the rest go on' {
+        $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'
+        $given = @(Test-FieldExposure -Source $feeder -Position '300 mm, 0, 0', '1 m, 0, 0')
+        $row = [pscustomobject]@{ Point = 'Panel front'; X = '300 mm'; Y = '0 mm'; Z = '0 mm' }
+        foreach ($run in @(
+                @{ Name = 'given at once'; Out = { Test-FieldExposure -Source $feeder -InputObject $row, $null, '1 m, 0, 0' -ErrorVariable script:bad -ErrorAction SilentlyContinue } },
+                @{ Name = 'piped'; Out = { $row, $null, '1 m, 0, 0' | Test-FieldExposure -Source $feeder -ErrorVariable script:bad -ErrorAction SilentlyContinue } })) {
+            $script:bad = $null
+            $out = @(& $run.Out)
+            $out.Margin | Should -Be $given.Margin -Because $run.Name
+            $out[0].PointName | Should -Be 'Panel front' -Because $run.Name
+            @($script:bad).Count | Should -Be 1 -Because $run.Name
+            "$($script:bad[0])" | Should -Match '^row 2: InputObject: is \$null' -Because $run.Name
+        }
+        @(Test-FieldExposure -Source $feeder -InputObject @()).Count | Should -Be 0
+    }
+
     # Validates: a survey row's visitor point at 50 Hz judged at the public's level, a fifth of the workers', through Test-FieldExposure | ICNIRP 2010, Health Phys 99:818, tables 3 and 4 (1 mT and 0.2 mT, 25 to 300 Hz) | 1e-9
     It 'judges a survey row that names the public (ExposureGroup) at the public''s limits, and says when a row cannot loosen a policy for the public' {
         $feeder = New-FieldWaveform -Sine -Amplitude '2 kA' -Frequency '50 Hz' | New-FieldSource -Conductor -Center '0, 0, 0'

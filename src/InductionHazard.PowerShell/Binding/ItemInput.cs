@@ -19,9 +19,9 @@ internal static class ItemInput
         return bound is not null && bound is not string && bound is not System.Collections.IDictionary ? LanguagePrimitives.GetEnumerable(bound) : null;
     }
 
-    /// <summary>The error of a row that the pipeline gave as $null (an empty line, a missing object), named by its label.</summary>
-    public static Errors.RecordException NothingGiven(string label) =>
-        new(label, new[] { new Errors.FieldError("InputObject", "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
+    /// <summary>The error of a row that the pipeline gave as $null (an empty line, a missing object), named by its label and the parameter it came to.</summary>
+    public static Errors.RecordException NothingGiven(string label, string parameter = "InputObject") =>
+        new(label, new[] { new Errors.FieldError(parameter, "is $null: the pipeline gave nothing for this row (an empty line or a missing object)", "InvalidInput") });
 
     /// <summary>The named values of a row, read once (they are read by several readers); null for an item object.</summary>
     public static IReadOnlyList<KeyValuePair<string, object?>>? RecordOf(PSObject input) =>

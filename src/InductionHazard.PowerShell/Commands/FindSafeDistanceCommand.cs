@@ -37,8 +37,11 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private readonly BoundedCache<string, SafeDistanceResult> _repeated = new(256, StringComparer.Ordinal);
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows with the item columns.</summary>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
-    public PSObject[] Item { get; set; } = null!;
+    [AllowNull]
+    [AllowEmptyCollection]
+    public PSObject? Item { get; set; }
 
     /// <summary>The field source, from New-FieldSource; several sources sum into one.</summary>
     [Parameter(Mandatory = true, Position = 1, ParameterSetName = SourceSet)]
@@ -166,81 +169,101 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     /// <inheritdoc />
     protected override void ProcessRecord()
     {
-        foreach (PSObject input in Item)
+        if (ItemInput.Several(Item) is { } several)
         {
-            _row++;
-            // A row's fields are read once: for its name in messages, its key and its item.
-            IReadOnlyList<KeyValuePair<string, object?>>? record = ItemInput.RecordOf(input);
-            string? name = record is null ? null : ItemRecordReader.NameOf(record);
-            string label = record is null ? ItemInput.Label(input, _row) : ItemRecordReader.Label(_row, name);
-            try
+            foreach (object? one in several)
             {
-                // A row whose item fields are written as an earlier row's takes that row's search under its own name.
-                string? key = record is null ? null : RepeatedRows.KeyOf(record);
-                ExposureGroup? wearer = record is null ? null : WearerGroupReader.Read(record, label);
-                if (StationPolicy.WearerNotApplied(label, wearer, _policy.ExposureGroup, _policy.Name) is { } notApplied)
-                {
-                    WriteWarning(notApplied);
-                }
-
-                // A row's own normal and velocity hold along the whole ray; its position does not move the ray's start.
-                (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity, double? rowTilt) = record is null ? (null, null, null, null) : PlacementRecordReader.Read(record, label);
-                if (rowPosition is not null && !_positionsWarned)
-                {
-                    _positionsWarned = true;
-                    WriteWarning(label + " gives a position (X, Y, Z or Position), which the search does not read: every row is searched along the ray from -From or its station's position; a row's own normal and velocity are read.");
-                }
-
-                SafeDistanceResult result;
-                if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
-                {
-                    result = RepeatedRows.Relabel(first, name, _row);
-                }
-                else
-                {
-                    ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
-                    // The row's normal or tilt, else -Normal or -Tilt, else the station's.
-                    (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), _stationFacing);
-
-                    // A visitor the row names is judged at the public's limits along the whole ray.
-                    HazardPolicy policy = _policy.For(wearer);
-                    (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label);
-
-                    var progress = new ProgressRecord(2, "Find-SafeDistance", label);
-                    result = SafeDistance.Find(
-                        item, _source, _from, Direction, MaxDistance, policy, normal, rowExposure ?? _exposure, rowAmbient is { } air ? new ThermalEnvironment(air) : _environment, rowVelocity ?? _velocity, rowLeave, tilt,
-                        fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
-                        _cancellation.Token);
-                    progress.RecordType = ProgressRecordType.Completed;
-                    WriteProgress(progress);
-                    if (key is not null)
-                    {
-                        _repeated.Add(key, result);
-                    }
-                }
-
-                if (result.DipsAgain)
-                {
-                    WriteWarning(label + ": Clear nearer in, then not Clear again further out; the distance given is beyond the last point that is not Clear.");
-                }
-
-                if (!result.Found)
-                {
-                    WriteWarning(label + ": not Clear anywhere within " + SiFormat.Format(MaxDistance, "m") + " along the ray; keep it out of this field or look further with -MaxDistance.");
-                }
-
-                WriteObject(result);
-            }
-            catch (InductionHazardException ex)
-            {
-                WriteError(ErrorRecords.From(ex, input, label));
-            }
-            catch (OperationCanceledException)
-            {
-                throw new PipelineStoppedException();
+                SearchOne(one is null ? null : PSObject.AsPSObject(one));
             }
         }
+        else
+        {
+            SearchOne(Item);
+        }
     }
+
+    /// <summary>One row or item: its search written, or an error naming the row.</summary>
+    private void SearchOne(PSObject? given)
+    {
+        _row++;
+        // A $null (an empty line, a missing object) is that row's error, not the shell's binding error.
+        PSObject input = given ?? new PSObject(string.Empty);
+        // A row's fields are read once: for its name in messages, its key and its item.
+        IReadOnlyList<KeyValuePair<string, object?>>? record = given is null ? null : ItemInput.RecordOf(input);
+        string? name = record is null ? null : ItemRecordReader.NameOf(record);
+        string label = record is null ? ItemInput.Label(input, _row) : ItemRecordReader.Label(_row, name);
+        try
+        {
+            if (given is null || given.BaseObject is null)
+            {
+                throw ItemInput.NothingGiven(label, nameof(Item));
+            }
+
+            // A row whose item fields are written as an earlier row's takes that row's search under its own name.
+            string? key = record is null ? null : RepeatedRows.KeyOf(record);
+            ExposureGroup? wearer = record is null ? null : WearerGroupReader.Read(record, label);
+            if (StationPolicy.WearerNotApplied(label, wearer, _policy.ExposureGroup, _policy.Name) is { } notApplied)
+            {
+                WriteWarning(notApplied);
+            }
+
+            // A row's own normal and velocity hold along the whole ray; its position does not move the ray's start.
+            (Vector3D? rowPosition, Vector3D? rowNormal, Vector3D? rowVelocity, double? rowTilt) = record is null ? (null, null, null, null) : PlacementRecordReader.Read(record, label);
+            if (rowPosition is not null && !_positionsWarned)
+            {
+                _positionsWarned = true;
+                WriteWarning(label + " gives a position (X, Y, Z or Position), which the search does not read: every row is searched along the ray from -From or its station's position; a row's own normal and velocity are read.");
+            }
+
+            SafeDistanceResult result;
+            if (key is not null && _repeated.TryGet(key, out SafeDistanceResult first))
+            {
+                result = RepeatedRows.Relabel(first, name, _row);
+            }
+            else
+            {
+                ConductiveItem item = ItemInput.ToItem(input, record, MaterialLibrary.BuiltIn, _row, null, AcceptUnusualSize.IsPresent);
+                // The row's normal or tilt, else -Normal or -Tilt, else the station's.
+                (Vector3D? normal, double? tilt) = Placement.Orientation((rowNormal, rowTilt), (Normal, Tilt), _stationFacing);
+
+                // A visitor the row names is judged at the public's limits along the whole ray.
+                HazardPolicy policy = _policy.For(wearer);
+                (double? rowExposure, double? rowLeave, double? rowAmbient) = record is null ? (null, null, null) : ExposureRecordReader.Read(record, label);
+
+                var progress = new ProgressRecord(2, "Find-SafeDistance", label);
+                result = SafeDistance.Find(
+                    item, _source, _from, Direction, MaxDistance, policy, normal, rowExposure ?? _exposure, rowAmbient is { } air ? new ThermalEnvironment(air) : _environment, rowVelocity ?? _velocity, rowLeave, tilt,
+                    fraction => { progress.PercentComplete = (int)(100 * fraction); WriteProgress(progress); },
+                    _cancellation.Token);
+                progress.RecordType = ProgressRecordType.Completed;
+                WriteProgress(progress);
+                if (key is not null)
+                {
+                    _repeated.Add(key, result);
+                }
+            }
+
+            if (result.DipsAgain)
+            {
+                WriteWarning(label + ": Clear nearer in, then not Clear again further out; the distance given is beyond the last point that is not Clear.");
+            }
+
+            if (!result.Found)
+            {
+                WriteWarning(label + ": not Clear anywhere within " + SiFormat.Format(MaxDistance, "m") + " along the ray; keep it out of this field or look further with -MaxDistance.");
+            }
+
+            WriteObject(result);
+        }
+        catch (InductionHazardException ex)
+        {
+            WriteError(ErrorRecords.From(ex, input, label));
+        }
+        catch (OperationCanceledException)
+        {
+            throw new PipelineStoppedException();
+        }
+}
 
     /// <inheritdoc />
     protected override void StopProcessing() => _cancellation.Cancel();

@@ -28,8 +28,11 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
     public Vector3D[] Position { get; set; } = Array.Empty<Vector3D>();
 
     /// <summary>Rows with X, Y, Z columns (Import-Csv output, hashtables), one result per row; or points themselves, as Test-FieldExposure takes them ('0, 300 mm, 0').</summary>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
-    public PSObject[] InputObject { get; set; } = null!;
+    [AllowNull]
+    [AllowEmptyCollection]
+    public PSObject? InputObject { get; set; }
 
     /// <summary>The unit of bare numbers in the rows' X, Y, Z where the headers do not name it: @{ X = 'mm'; Y = 'mm'; Z = 'mm' }.</summary>
     [Parameter(ParameterSetName = InputObjectSet)]
@@ -61,18 +64,36 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
             return;
         }
 
-        foreach (PSObject input in InputObject)
+        if (ItemInput.Several(InputObject) is { } several)
         {
-            _row++;
-            string label = "row " + _row;
-            try
+            foreach (object? one in several)
             {
-                Write(PointInput.Of(input, label, Unit), input, label);
+                ReadOne(one is null ? null : PSObject.AsPSObject(one));
             }
-            catch (InductionHazardException ex)
+        }
+        else
+        {
+            ReadOne(InputObject);
+        }
+    }
+
+    /// <summary>One row or point: its field written, or an error naming the row.</summary>
+    private void ReadOne(PSObject? input)
+    {
+        _row++;
+        string label = "row " + _row;
+        try
+        {
+            if (input is null || input.BaseObject is null)
             {
-                WriteError(ErrorRecords.From(ex, input, label));
+                throw ItemInput.NothingGiven(label);
             }
+
+            Write(PointInput.Of(input, label, Unit), input, label);
+        }
+        catch (InductionHazardException ex)
+        {
+            WriteError(ErrorRecords.From(ex, input, label));
         }
     }
 

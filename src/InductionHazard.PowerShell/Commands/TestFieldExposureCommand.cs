@@ -33,8 +33,11 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     public Vector3D[] Position { get; set; } = { Vector3D.Zero };
 
     /// <summary>Points piped in: the points themselves ('0, 300 mm, 0', as -Position takes them), or rows with X, Y, Z columns or one Position column (Import-Csv output, hashtables), one result per row.</summary>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
-    public PSObject[] InputObject { get; set; } = null!;
+    [AllowNull]
+    [AllowEmptyCollection]
+    public PSObject? InputObject { get; set; }
 
     /// <summary>The unit of bare numbers in the rows' X, Y, Z or Position where the headers do not name it: @{ X = 'mm'; Y = 'mm'; Z = 'mm' }.</summary>
     [Parameter(ParameterSetName = InputObjectSet)]
@@ -91,30 +94,16 @@ public sealed class TestFieldExposureCommand : PSCmdlet
 
         if (ParameterSetName == InputObjectSet)
         {
-            foreach (PSObject input in InputObject)
+            if (ItemInput.Several(InputObject) is { } several)
             {
-                _row++;
-                string label = "row " + _row;
-                try
+                foreach (object? one in several)
                 {
-                    IReadOnlyList<KeyValuePair<string, object?>>? record = PointInput.RecordOf(input);
-                    string? name = PointInput.NameOf(record);
-                    Vector3D point = PointInput.Of(input, record, label, Unit);
-
-                    // A row may name a visitors' point (ExposureGroup = Public); it cannot loosen a judgement of the public.
-                    HazardPolicy policy = Policy ?? HazardPolicy.Default;
-                    ExposureGroup? group = record is null ? null : WearerGroupReader.Read(record, label);
-                    if (StationPolicy.WearerNotApplied(name ?? label, group, policy.ExposureGroup, policy.Name) is { } notApplied)
-                    {
-                        WriteWarning(notApplied);
-                    }
-
-                    Judge(_source, point, policy.For(group), null, name);
+                    JudgeRow(one is null ? null : PSObject.AsPSObject(one));
                 }
-                catch (InductionHazardException ex)
-                {
-                    WriteError(ErrorRecords.From(ex, input, label));
-                }
+            }
+            else
+            {
+                JudgeRow(InputObject);
             }
 
             return;
@@ -123,6 +112,38 @@ public sealed class TestFieldExposureCommand : PSCmdlet
         foreach (Vector3D point in Position)
         {
             Judge(_source, point, Policy ?? HazardPolicy.Default, null);
+        }
+    }
+
+    /// <summary>One row or point: its judgement written, or an error naming the row.</summary>
+    private void JudgeRow(PSObject? input)
+    {
+        _row++;
+        string label = "row " + _row;
+        try
+        {
+            if (input is null || input.BaseObject is null)
+            {
+                throw ItemInput.NothingGiven(label);
+            }
+
+            IReadOnlyList<KeyValuePair<string, object?>>? record = PointInput.RecordOf(input);
+            string? name = PointInput.NameOf(record);
+            Vector3D point = PointInput.Of(input, record, label, Unit);
+
+            // A row may name a visitors' point (ExposureGroup = Public); it cannot loosen a judgement of the public.
+            HazardPolicy policy = Policy ?? HazardPolicy.Default;
+            ExposureGroup? group = record is null ? null : WearerGroupReader.Read(record, label);
+            if (StationPolicy.WearerNotApplied(name ?? label, group, policy.ExposureGroup, policy.Name) is { } notApplied)
+            {
+                WriteWarning(notApplied);
+            }
+
+            Judge(_source, point, policy.For(group), null, name);
+        }
+        catch (InductionHazardException ex)
+        {
+            WriteError(ErrorRecords.From(ex, input, label));
         }
     }
 
