@@ -8,15 +8,28 @@ namespace InductionHazard.PowerShell.Binding;
 internal static class ItemInput
 {
     /// <summary>
-    /// The objects of a collection bound as one to a pipeline parameter that takes one object (-Item $band, $ring), to be
-    /// taken in turn as the shell would enumerate them; null for one object (a hashtable or a text being one, as the
-    /// shell takes them). A parameter that takes one object is bound row by row from the pipeline, where an
-    /// array-typed one made the shell wrap every piped row in an array of one (some 0.8 us a row).
+    /// Takes what a pipeline parameter that takes one object was bound to: one object, or the objects of a collection
+    /// given at once (-Item $band, $ring) in turn, as the shell would enumerate them (a hashtable or a text being one, as
+    /// the shell takes them), a $null among them passed on as null. A parameter that takes one object is bound row by row
+    /// from the pipeline, where an array-typed one made the shell wrap every piped row in an array of one (some 0.8 us a
+    /// row).
     /// </summary>
-    public static System.Collections.IEnumerable? Several(PSObject? input)
+    /// <param name="input">The parameter's value.</param>
+    /// <param name="one">What to do with each object.</param>
+    public static void ForEachGiven(PSObject? input, System.Action<PSObject?> one)
     {
         object? bound = input?.BaseObject;
-        return bound is not null && bound is not string && bound is not System.Collections.IDictionary ? LanguagePrimitives.GetEnumerable(bound) : null;
+        if (bound is not null && bound is not string && bound is not System.Collections.IDictionary && LanguagePrimitives.GetEnumerable(bound) is { } several)
+        {
+            foreach (object? each in several)
+            {
+                one(each is null ? null : PSObject.AsPSObject(each));
+            }
+        }
+        else
+        {
+            one(input);
+        }
     }
 
     /// <summary>The error of a row that the pipeline gave as $null (an empty line, a missing object), named by its label and the parameter it came to.</summary>

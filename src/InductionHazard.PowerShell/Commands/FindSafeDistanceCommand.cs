@@ -37,7 +37,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     private readonly BoundedCache<string, SafeDistanceResult> _repeated = new(256, StringComparer.Ordinal);
 
     /// <summary>The items: objects from New-ConductiveItem, or data rows with the item columns.</summary>
-    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.ForEachGiven"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [AllowNull]
     [AllowEmptyCollection]
@@ -169,17 +169,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
     /// <inheritdoc />
     protected override void ProcessRecord()
     {
-        if (ItemInput.Several(Item) is { } several)
-        {
-            foreach (object? one in several)
-            {
-                SearchOne(one is null ? null : PSObject.AsPSObject(one));
-            }
-        }
-        else
-        {
-            SearchOne(Item);
-        }
+        ItemInput.ForEachGiven(Item, SearchOne);
     }
 
     /// <summary>One row or item: its search written, or an error naming the row.</summary>

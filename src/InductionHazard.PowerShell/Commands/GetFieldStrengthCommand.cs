@@ -28,7 +28,7 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
     public Vector3D[] Position { get; set; } = Array.Empty<Vector3D>();
 
     /// <summary>Rows with X, Y, Z columns (Import-Csv output, hashtables), one result per row; or points themselves, as Test-FieldExposure takes them ('0, 300 mm, 0').</summary>
-    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.ForEachGiven"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     [AllowNull]
     [AllowEmptyCollection]
@@ -64,17 +64,7 @@ public sealed class GetFieldStrengthCommand : PSCmdlet
             return;
         }
 
-        if (ItemInput.Several(InputObject) is { } several)
-        {
-            foreach (object? one in several)
-            {
-                ReadOne(one is null ? null : PSObject.AsPSObject(one));
-            }
-        }
-        else
-        {
-            ReadOne(InputObject);
-        }
+        ItemInput.ForEachGiven(InputObject, ReadOne);
     }
 
     /// <summary>One row or point: its field written, or an error naming the row.</summary>

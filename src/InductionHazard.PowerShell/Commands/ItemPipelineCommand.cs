@@ -54,10 +54,13 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     private IReadOnlyDictionary<string, string>? _units;
     private readonly UnreadColumns _unreadColumns = new();
 
+    /// <summary><see cref="ProcessOne"/> as a delegate, made once rather than on every row.</summary>
+    private Action<PSObject?>? _processOne;
+
     /// <summary>The items: objects from New-ConductiveItem, or data rows (Import-Csv output, hashtables) with the item columns.</summary>
     /// <remarks>
     /// One object as the shell binds it from the pipeline, row by row; several given at once (-Item $band, $ring) arrive
-    /// as one collection and are taken in turn (<see cref="ItemInput.Several"/>).
+    /// as one collection and are taken in turn (<see cref="ItemInput.ForEachGiven"/>).
     /// </remarks>
     [Parameter(Mandatory = true, Position = 0, ValueFromPipeline = true)]
     [Alias("Item")]
@@ -220,17 +223,7 @@ public abstract class ItemPipelineCommand : PSCmdlet, IDisposable
     protected override void ProcessRecord()
     {
         // A collection given to -Item is its items (a hashtable or a text is one item, as the shell takes them).
-        if (ItemInput.Several(InputObject) is { } several)
-        {
-            foreach (object? one in several)
-            {
-                ProcessOne(one is null ? null : PSObject.AsPSObject(one));
-            }
-        }
-        else
-        {
-            ProcessOne(InputObject);
-        }
+        ItemInput.ForEachGiven(InputObject, _processOne ??= ProcessOne);
     }
 
     /// <summary>One item or row: its assessment started (or a repeat's taken), and the finished results at the queue's head written.</summary>

@@ -19,6 +19,9 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     private int _row;
     private IReadOnlyDictionary<string, string>? _units;
 
+    /// <summary><see cref="ReadOne"/> as a delegate, made once rather than on every row.</summary>
+    private Action<PSObject?>? _readOne;
+
     /// <summary>The item's name as it appears in assessments.</summary>
     [Parameter(ParameterSetName = ParametersSet, Position = 0)]
     public string? Name { get; set; }
@@ -88,7 +91,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
     public ContactKind Contact { get; set; } = ContactKind.Skin;
 
     /// <summary>Data rows (Import-Csv output, hashtables) with columns Name, Shape, Material, Diameter or InnerDiameter, WireDiameter or Width and Thickness, Gap, Contact.</summary>
-    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>).</remarks>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.ForEachGiven"/>).</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     [AllowNull]
     [AllowEmptyCollection]
@@ -134,17 +137,7 @@ public sealed class NewConductiveItemCommand : PSCmdlet
             return;
         }
 
-        if (ItemInput.Several(InputObject) is { } several)
-        {
-            foreach (object? one in several)
-            {
-                ReadOne(one is null ? null : PSObject.AsPSObject(one));
-            }
-        }
-        else
-        {
-            ReadOne(InputObject);
-        }
+        ItemInput.ForEachGiven(InputObject, _readOne ??= ReadOne);
     }
 
     /// <summary>One row or item: its item written, or an error naming the row.</summary>

@@ -33,7 +33,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
     public Vector3D[] Position { get; set; } = { Vector3D.Zero };
 
     /// <summary>Points piped in: the points themselves ('0, 300 mm, 0', as -Position takes them), or rows with X, Y, Z columns or one Position column (Import-Csv output, hashtables), one result per row.</summary>
-    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.Several"/>), a $null its row's error.</remarks>
+    /// <remarks>One object as the shell binds it from the pipeline; several given at once arrive as one collection and are taken in turn (<see cref="ItemInput.ForEachGiven"/>), a $null its row's error.</remarks>
     [Parameter(Mandatory = true, ValueFromPipeline = true, ParameterSetName = InputObjectSet)]
     [AllowNull]
     [AllowEmptyCollection]
@@ -94,17 +94,7 @@ public sealed class TestFieldExposureCommand : PSCmdlet
 
         if (ParameterSetName == InputObjectSet)
         {
-            if (ItemInput.Several(InputObject) is { } several)
-            {
-                foreach (object? one in several)
-                {
-                    JudgeRow(one is null ? null : PSObject.AsPSObject(one));
-                }
-            }
-            else
-            {
-                JudgeRow(InputObject);
-            }
+            ItemInput.ForEachGiven(InputObject, JudgeRow);
 
             return;
         }
