@@ -276,7 +276,6 @@ public static class HazardAssessor
 
         AddOnce(standardList, Standards.SafetyFactorOf(policy));
         string[] standards = standardList.ToArray();
-        string unjudged = RecommendedAction.Unjudged(verdict, applicable, governing, response.Item.Contact);
 
         return new InductionAssessment
         {
@@ -288,7 +287,7 @@ public static class HazardAssessor
             GoverningMechanism = governing?.Mechanism,
             MinimumMargin = minimum,
             LaterSummary = LaterText.From((verdict, governing, policy.SafetyFactor), static f => Summarize(f.verdict, f.governing, f.SafetyFactor)),
-            Action = RecommendedAction.For(verdict, governing, policy, response.Item.Contact, unjudged.Length > 0) + RecommendedAction.ItemItself(applicable, governing, policy, response.Item.Contact) + unjudged + RecommendedAction.PlaceItself(applicable, governing),
+            LaterAction = LaterText.From((verdict, governing, policy, response.Item.Contact, applicable), static f => Act(f.verdict, f.governing, f.policy, f.Contact, f.applicable)),
             ActionBrief = RecommendedAction.Brief(verdict, governing, response.Item.Contact, applicable),
             Mechanisms = new MechanismList(results),
             ShockMargin = MarginOf(results, HazardMechanism.Shock),
@@ -318,6 +317,13 @@ public static class HazardAssessor
             Inventory = response.Scenario.Inventory,
             Response = response,
         };
+    }
+
+    /// <summary>What to do, in plain words: the action for the verdict, then what the item itself, the mechanisms not judged and the place ask.</summary>
+    private static string Act(Verdict verdict, MechanismResult? governing, HazardPolicy policy, Items.ContactKind contact, MechanismResult[] applicable)
+    {
+        string unjudged = RecommendedAction.Unjudged(verdict, applicable, governing, contact);
+        return RecommendedAction.For(verdict, governing, policy, contact, unjudged.Length > 0) + RecommendedAction.ItemItself(applicable, governing, policy, contact) + unjudged + RecommendedAction.PlaceItself(applicable, governing);
     }
 
     private static Verdict[] VerdictsOf(MechanismResult[] applicable)

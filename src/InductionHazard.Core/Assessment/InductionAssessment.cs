@@ -59,8 +59,20 @@ public sealed class InductionAssessment
         init => _summary = value;
     }
 
-    /// <summary>What to do, in plain words: the action for a Hazard or Indeterminate, what restores the margin for a Caution.</summary>
-    public string Action { get; init; } = string.Empty;
+    private object _action = string.Empty;
+
+    /// <summary>What to do, in plain words: the action for a Hazard or Indeterminate, what restores the margin for a Caution (written when first read).</summary>
+    public string Action
+    {
+        get => LaterText.Read(ref _action);
+        init => _action = value;
+    }
+
+    /// <summary>The action, to be written when first read.</summary>
+    internal LaterText LaterAction
+    {
+        init => _action = value;
+    }
 
     /// <summary>The action in a few words ("Take it off", "Keep out or fix down", "Unsafe until assessed", "Use with care", "None"), for narrow tables.</summary>
     public string ActionBrief { get; init; } = string.Empty;

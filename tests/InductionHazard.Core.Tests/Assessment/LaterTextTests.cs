@@ -126,7 +126,7 @@ public class LaterTextTests
     /// <summary>Every text of an assessment and its response, read from a place in the list on.</summary>
     private static string[] Texts(InductionAssessment a, int rotate = 0)
     {
-        var slots = new List<Func<string>> { () => a.Summary, () => a.Response.Regime, () => a.Response.CurrentSense, () => a.Reasons.ToString(), () => a.Mechanisms.ToString() };
+        var slots = new List<Func<string>> { () => a.Summary, () => a.Action, () => a.Response.Regime, () => a.Response.CurrentSense, () => a.Reasons.ToString(), () => a.Mechanisms.ToString() };
         for (int k = 0; k < a.Mechanisms.Count; k++)
         {
             int at = k;
