@@ -206,7 +206,7 @@ public static class HazardAssessor
         policy = policy.For(response.Scenario.WearerGroup);
         // Loops rather than queries: an assessment is made hundreds of thousands of times in an audit.
         var results = given ?? new MechanismResult[Checks.Length];
-        var applicableList = new List<MechanismResult>(Checks.Length);
+        int applying = 0;
         bool anyIndeterminate = false;
         for (int k = 0; k < Checks.Length; k++)
         {
@@ -217,12 +217,19 @@ public static class HazardAssessor
 
             if (results[k].Applies)
             {
-                applicableList.Add(results[k]);
+                applying++;
                 anyIndeterminate |= results[k].Verdict == Verdict.Indeterminate;
             }
         }
 
-        MechanismResult[] applicable = applicableList.ToArray();
+        var applicable = new MechanismResult[applying];
+        for (int k = 0, next = 0; next < applying; k++)
+        {
+            if (results[k].Applies)
+            {
+                applicable[next++] = results[k];
+            }
+        }
         Verdict verdict = VerdictRules.Combine(VerdictsOf(applicable));
         MechanismResult? governing = Governing(applicable, verdict);
         // A Hazard stands even beside mechanisms that could not be judged: its smallest judged margin is the minimum.
@@ -265,7 +272,8 @@ public static class HazardAssessor
             }
         }
 
-        var standardList = new List<string>();
+        // Room for the sources of a ring's mechanisms and the safety factor's without growing.
+        var standardList = new List<string>(12);
         foreach (MechanismResult r in applicable)
         {
             for (int k = 0; k < r.Sources.Count; k++)
@@ -389,7 +397,7 @@ public static class HazardAssessor
 
     /// <summary>A value the assessment shows only when no broken assumption affects it: never a safe-looking number.</summary>
     private static double Trusted(InductionResponse response, AffectedResults needs, double value) =>
-        response.Trusts(needs) ? value : double.NaN;
+        response.ValidityIssues.Count == 0 || response.Trusts(needs) ? value : double.NaN;
 
     private static MechanismResult? Governing(MechanismResult[] applicable, Verdict verdict)
     {
