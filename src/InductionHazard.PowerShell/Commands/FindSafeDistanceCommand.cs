@@ -253,7 +253,7 @@ public sealed class FindSafeDistanceCommand : PSCmdlet, IDisposable
         {
             throw new PipelineStoppedException();
         }
-}
+    }
 
     /// <inheritdoc />
     protected override void StopProcessing() => _cancellation.Cancel();
