@@ -7,9 +7,9 @@
     rows through a compiled cmdlet that only binds each row and writes it on (the shell's binding and writing, with no
     work), so that what the textbook pipeline leaves a module for its own work on a row is the difference of the two.
     A fourth gives what reading alone costs: the same rows through New-ConductiveItem, which reads each row into an
-    item (its size, material, contact and their checks) and assesses nothing; Test-InductionHazard reads every row so
-    and more (its placement and inventory columns), so where this alone takes longer than the textbook pipeline, no
-    engine, however fast, brings Test-InductionHazard to it.
+    item (its size, material, contact and their checks) and assesses nothing; Test-InductionHazard reads each row it
+    assesses so, and more (its placement and inventory columns), so where this alone takes longer than the textbook
+    pipeline on rows of items all different (-DistinctRows), no engine, however fast, brings Test-InductionHazard to it.
     The inventory's rings come in ten sizes, as an inventory repeats its items (rings of a size, a box of spanners), so
     that a row repeating an earlier one takes its result; with -DistinctRows every ring is a size of its own and every
     row is assessed. It also gives how long the runtime's garbage collections paused the serial runs, a round on
