@@ -85,6 +85,12 @@ public static class HazardAssessor
             assessed.AcrossIndex = across;
         }
 
+        // Each figure too the largest over all judged: the orientation is not known, and the one kept for its verdict
+        // (a body with its axis across the field) may link no flux around its axis, its emf and current zero.
+        var judged = new List<InductionAssessment>(given.Length + other.Length);
+        judged.AddRange(given);
+        judged.AddRange(other);
+        assessed = assessed.WithLargestFigures(judged);
         assessed.ShorterStayKept = shorterKept;
         return assessed;
     }
@@ -306,8 +312,12 @@ public static class HazardAssessor
             TorqueMargin = MarginOf(results, HazardMechanism.Torque),
             AttractionMargin = MarginOf(results, HazardMechanism.Attraction),
             ExposureMargin = MarginOf(results, HazardMechanism.Exposure),
+            // The field at the item is the source's, whatever the item's own model: shown even where the emf is not trusted.
+            PeakFluxDensityTesla = response.PeakFluxDensityTesla,
+            PeakFluxWebers = Trusted(response, AffectedResults.Emf, response.PeakFluxWebers),
             PeakForceNewtons = Trusted(response, AffectedResults.Current, response.PeakForceNewtons),
             PeakEmfVolts = Trusted(response, AffectedResults.Emf, response.PeakEmfVolts),
+            RmsEmfVolts = response.RmsEmfVolts is { } rms ? Trusted(response, AffectedResults.Emf, rms) : null,
             GapVoltageVolts = response.GapVoltageVolts is { } gap ? Trusted(response, AffectedResults.Emf, gap) : null,
             PeakCurrentAmperes = Trusted(response, AffectedResults.Current, response.PeakCurrentAmperes),
             PeakTemperatureCelsius = Trusted(response, AffectedResults.Current | AffectedResults.Heating, response.PeakTemperatureCelsius),

@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using InductionHazard.Criteria;
 
 namespace InductionHazard.Assessment;
@@ -104,23 +105,84 @@ public sealed class InductionAssessment
     /// <summary>The Exposure margin (a worn or held item's wearer in the field), or null when it does not apply.</summary>
     public double? ExposureMargin { get; init; }
 
-    /// <summary>The peak force on the item, N (NaN when the current is not trusted).</summary>
-    public double PeakForceNewtons { get; init; }
+    // The figures below are those of the response kept, or for an item whose orientation the engine chose among several
+    // (a body given no normal, judged with its axis along the largest flux change and across it) or judged for two
+    // stays, each the largest over all it judged (WithLargestFigures): the orientation is not known, and the one kept
+    // for its verdict may link no flux around its axis at all.
+    private double _peakFluxDensity, _peakFlux, _peakForce, _peakEmf, _peakCurrent, _peakTemperature, _energy;
+    private double? _rmsEmf, _gapVoltage;
 
-    /// <summary>The peak emf around the loop, V. Like the other numbers here, NaN when a broken model assumption affects it.</summary>
-    public double PeakEmfVolts { get; init; }
+    /// <summary>
+    /// The largest flux density normal to the item's loop at its centre, T. For an item whose orientation was not given
+    /// and that was judged in several (a body with its axis along the largest flux change and across it), this and the
+    /// figures below are each the largest over the orientations and stays judged. The field is the source's, shown whatever
+    /// the item's own model; the figures below are NaN when a broken model assumption affects them.
+    /// </summary>
+    public double PeakFluxDensityTesla { get => _peakFluxDensity; init => _peakFluxDensity = value; }
+
+    /// <summary>The largest flux through the item's loop, Wb.</summary>
+    public double PeakFluxWebers { get => _peakFlux; init => _peakFlux = value; }
+
+    /// <summary>The peak force on the item, N (NaN when the current is not trusted).</summary>
+    public double PeakForceNewtons { get => _peakForce; init => _peakForce = value; }
+
+    /// <summary>The peak emf around the loop, V.</summary>
+    public double PeakEmfVolts { get => _peakEmf; init => _peakEmf = value; }
+
+    /// <summary>The rms emf around the loop of an alternating drive, V; null for a transient.</summary>
+    public double? RmsEmfVolts { get => _rmsEmf; init => _rmsEmf = value; }
 
     /// <summary>The peak gap voltage of a split ring, V; null for a closed loop.</summary>
-    public double? GapVoltageVolts { get; init; }
+    public double? GapVoltageVolts { get => _gapVoltage; init => _gapVoltage = value; }
 
     /// <summary>The peak loop current, A.</summary>
-    public double PeakCurrentAmperes { get; init; }
+    public double PeakCurrentAmperes { get => _peakCurrent; init => _peakCurrent = value; }
 
     /// <summary>The item's peak temperature, °C.</summary>
-    public double PeakTemperatureCelsius { get; init; }
+    public double PeakTemperatureCelsius { get => _peakTemperature; init => _peakTemperature = value; }
 
     /// <summary>The energy dissipated in the item, J.</summary>
-    public double EnergyDissipatedJoules { get; init; }
+    public double EnergyDissipatedJoules { get => _energy; init => _energy = value; }
+
+    /// <summary>How many orientations and stays the figures are the largest over: 1 for an item judged as it was placed.</summary>
+    public int FiguresJudgedOver { get; private set; } = 1;
+
+    /// <summary>
+    /// This assessment with each figure the largest over <paramref name="judged"/> (the orientations and stays judged,
+    /// this one among them): NaN where any is NaN, as a figure not trusted in one of them is not shown from the others.
+    /// </summary>
+    internal InductionAssessment WithLargestFigures(IReadOnlyList<InductionAssessment> judged)
+    {
+        var copy = (InductionAssessment)MemberwiseClone();
+        copy._peakFluxDensity = Largest(judged, a => a._peakFluxDensity);
+        copy._peakFlux = Largest(judged, a => a._peakFlux);
+        copy._peakForce = Largest(judged, a => a._peakForce);
+        copy._peakEmf = Largest(judged, a => a._peakEmf);
+        copy._rmsEmf = _rmsEmf is null ? null : Largest(judged, a => a._rmsEmf ?? double.NaN);
+        copy._gapVoltage = _gapVoltage is null ? null : Largest(judged, a => a._gapVoltage ?? double.NaN);
+        copy._peakCurrent = Largest(judged, a => a._peakCurrent);
+        copy._peakTemperature = Largest(judged, a => a._peakTemperature);
+        copy._energy = Largest(judged, a => a._energy);
+        copy.FiguresJudgedOver = judged.Count;
+        return copy;
+    }
+
+    private static double Largest(IReadOnlyList<InductionAssessment> judged, Func<InductionAssessment, double> figure)
+    {
+        double largest = double.NegativeInfinity;
+        foreach (InductionAssessment a in judged)
+        {
+            double value = figure(a);
+            if (double.IsNaN(value))
+            {
+                return double.NaN;
+            }
+
+            largest = Math.Max(largest, value);
+        }
+
+        return largest;
+    }
 
     /// <summary>Why the verdict is what it is: the broken assumptions of an Indeterminate, the findings of a Hazard or Caution.</summary>
     public TextList Reasons { get; init; } = TextList.Empty;

@@ -30,7 +30,7 @@ public static class CsvReportWriter
         ("TorqueMargin", a => a.TorqueMargin),
         ("AttractionMargin", a => a.AttractionMargin),
         ("ExposureMargin", a => a.ExposureMargin),
-        ("PeakFluxDensity (T)", a => a.Response.PeakFluxDensityTesla),
+        ("PeakFluxDensity (T)", a => a.PeakFluxDensityTesla),
         ("PeakEmf (V)", a => a.PeakEmfVolts),
         ("GapVoltage (V)", a => a.GapVoltageVolts),
         ("PeakCurrent (A)", a => a.PeakCurrentAmperes),

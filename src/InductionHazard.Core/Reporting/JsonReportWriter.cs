@@ -117,7 +117,7 @@ public static class JsonReportWriter
         j.WriteEndArray();
         j.WritePropertyName("figures");
         j.WriteStartObject();
-        Number(j, "peakFluxDensityTesla", r.PeakFluxDensityTesla);
+        Number(j, "peakFluxDensityTesla", a.PeakFluxDensityTesla);
         Number(j, "peakEmfVolts", a.PeakEmfVolts);
         Number(j, "gapVoltageVolts", a.GapVoltageVolts);
         Number(j, "peakCurrentAmperes", a.PeakCurrentAmperes);

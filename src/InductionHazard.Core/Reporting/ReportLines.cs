@@ -80,7 +80,11 @@ public static class ReportLines
             ? char.ToUpperInvariant(note[0]) + note.Substring(1)
             : note;
 
-    /// <summary>The figures that apply to the item, each with its unit.</summary>
+    /// <summary>
+    /// The figures that apply to the item, each with its unit. For an item judged in several orientations or stays (a body
+    /// given no normal), the flux, emf, current, heating and force are each the largest over them, and a first line says
+    /// so; the circuit's figures and the torques are those of the one kept.
+    /// </summary>
     public static IReadOnlyList<(string Label, string Text)> Figures(InductionAssessment a)
     {
         InductionResponse r = a.Response;
@@ -93,11 +97,17 @@ public static class ReportLines
             }
         }
 
-        Add("Peak flux density at the item", r.PeakFluxDensityTesla, "T");
-        Add("Peak flux through the item", r.PeakFluxWebers, "Wb");
+        if (a.FiguresJudgedOver > 1)
+        {
+            lines.Add(("Figures shown", "flux, emf, current, heating and force: each the largest of the " + a.FiguresJudgedOver.ToString(CultureInfo.InvariantCulture)
+                + " orientations or stays judged (the orientation was not given); the circuit's figures and the torques: those of the one kept (see Placement)"));
+        }
+
+        Add("Peak flux density normal to the item", a.PeakFluxDensityTesla, "T");
+        Add("Peak flux through the item", a.PeakFluxWebers, "Wb");
         Add("Significant frequency", r.FrequencyHertz > 0 ? r.FrequencyHertz : null, "Hz");
         Add("Peak emf", a.PeakEmfVolts, "V");
-        Add("Rms emf", r.RmsEmfVolts, "V");
+        Add("Rms emf", a.RmsEmfVolts, "V");
         Add("Peak gap voltage", a.GapVoltageVolts, "V");
         Add("Motional emf", r.MotionalEmfVolts, "V");
         Add("Resistance", r.ResistanceOhms, "Ω");

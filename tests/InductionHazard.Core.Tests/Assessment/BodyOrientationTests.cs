@@ -108,6 +108,51 @@ public sealed class BodyOrientationTests
         }
     }
 
+    [Validates("a disc given no normal in a 9.6 kHz field, kept with its axis across the field for its heating: the figures shown are the largest over the orientations judged, the flux density the field's peak B and the emf around its axis omega B pi R^2", "Faraday's law for a flat loop facing a uniform sinusoidal field: Phi = B A, emf = omega Phi (textbook)", "1e-9")]
+    [Fact]
+    public void TheFiguresOfABodyGivenNoNormalAreTheLargestOverTheOrientationsJudged()
+    {
+        // The demo's aluminium sample disc at the furnace mouth: kept with its axis across the field, where the field
+        // drives currents along the body and back and heats it most, but where no flux threads its axis: its own emf,
+        // current and normal flux density are zero. The figures an assessment shows (and a report or a table reads) are
+        // each the largest over the three orientations judged, as each mechanism's margin is the smallest over them.
+        double b = 0.0015, f = 9600, radius = 0.025;
+        ConductiveItem disc = FilamentModelTests.Body("Disc", "Aluminium", 2 * radius, thickness: 0.003, contact: "Held");
+        var furnace = FieldSource.Uniform("furnace", new SineWaveform(b, f, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        InductionResponse head = InductionEngine.Respond(new Scenario(disc, furnace, new Placement(Vector3D.Zero)));
+        InductionAssessment judged = HazardAssessor.Assess(head, HazardPolicy.Default);
+        InductionAssessment[] each = new[] { head }.Concat(head.AcrossAxis).Select(r => HazardAssessor.Assess(r with { AcrossAxis = Array.Empty<InductionResponse>() }, HazardPolicy.Default)).ToArray();
+
+        Assert.StartsWith("axis across the largest flux change", judged.Orientation, StringComparison.Ordinal);
+        Assert.Equal(0, judged.Response.PeakEmfVolts, 15);
+        Assert.Equal(3, judged.FiguresJudgedOver);
+        Assert.Equal(each.Max(a => a.PeakEmfVolts), judged.PeakEmfVolts);
+        Assert.Equal(each.Max(a => a.PeakCurrentAmperes), judged.PeakCurrentAmperes);
+        Assert.Equal(each.Max(a => a.PeakFluxDensityTesla), judged.PeakFluxDensityTesla);
+        Assert.Equal(each.Max(a => a.PeakTemperatureCelsius), judged.PeakTemperatureCelsius);
+        Assert.Equal(each.Max(a => a.EnergyDissipatedJoules), judged.EnergyDissipatedJoules);
+        Assert.True(judged.PeakCurrentAmperes > 0, "the current around the axis along the field");
+
+        // Faraday's law for the orientation along the field: Phi = B pi R^2, emf = omega Phi.
+        double flux = b * Math.PI * radius * radius;
+        Within.Relative(b, judged.PeakFluxDensityTesla, 1e-9, "the field's peak, normal to the disc along it");
+        Within.Relative(flux, judged.PeakFluxWebers, 1e-9, "B pi R^2");
+        Within.Relative(2 * Math.PI * f * flux, judged.PeakEmfVolts, 1e-9, "omega B pi R^2");
+        Within.Relative(2 * Math.PI * f * flux / Math.Sqrt(2), judged.RmsEmfVolts!.Value, 1e-9, "its rms");
+
+        // A report's figures say so, and show those figures.
+        IReadOnlyList<(string Label, string Text)> figures = InductionHazard.Reporting.ReportLines.Figures(judged);
+        Assert.Equal("Figures shown", figures[0].Label);
+        Assert.Contains("largest of the 3 orientations", figures[0].Text, StringComparison.Ordinal);
+        Assert.Equal(SiFormat.Format(judged.PeakEmfVolts, "V"), figures.Single(l => l.Label == "Peak emf").Text);
+        Assert.Equal(SiFormat.Format(b, "T"), figures.Single(l => l.Label == "Peak flux density normal to the item").Text);
+
+        // An item judged as placed shows its own figures and says nothing of others.
+        InductionAssessment given = each[0];
+        Assert.Equal(1, given.FiguresJudgedOver);
+        Assert.DoesNotContain(InductionHazard.Reporting.ReportLines.Figures(given), l => l.Label == "Figures shown");
+    }
+
     [Theory]
     [InlineData("Cylinder")]
     [InlineData("Disc")]
