@@ -147,6 +147,14 @@ public sealed class InductionAssessment
     /// <summary>How many orientations and stays the figures are the largest over: 1 for an item judged as it was placed.</summary>
     public int FiguresJudgedOver { get; private set; } = 1;
 
+    /// <summary>The response whose current a chart draws: of the orientations and stays judged, the one whose peak current is the figure shown (this one's own by default).</summary>
+    internal InductionResponse CurrentCharted => _currentCharted ?? _response;
+
+    /// <summary>The response whose heating a chart draws: the one whose peak temperature is the figure shown (this one's own by default).</summary>
+    internal InductionResponse HeatingCharted => _heatingCharted ?? _response;
+
+    private InductionResponse? _currentCharted, _heatingCharted;
+
     /// <summary>
     /// This assessment with each figure the largest over <paramref name="judged"/> (the orientations and stays judged,
     /// this one among them): NaN where any is NaN, as a figure not trusted in one of them is not shown from the others.
@@ -164,7 +172,28 @@ public sealed class InductionAssessment
         copy._peakTemperature = Largest(judged, a => a._peakTemperature);
         copy._energy = Largest(judged, a => a._energy);
         copy.FiguresJudgedOver = judged.Count;
+        copy._currentCharted = Reaching(judged, copy._peakCurrent, a => a._peakCurrent);
+        copy._heatingCharted = Reaching(judged, copy._peakTemperature, a => a._peakTemperature);
         return copy;
+    }
+
+    /// <summary>The response of the first judged whose figure is the one shown (this one's where it is, or none is finite).</summary>
+    private InductionResponse? Reaching(IReadOnlyList<InductionAssessment> judged, double shown, Func<InductionAssessment, double> figure)
+    {
+        if (figure(this) == shown || double.IsNaN(shown))
+        {
+            return null;
+        }
+
+        foreach (InductionAssessment a in judged)
+        {
+            if (figure(a) == shown)
+            {
+                return a._response;
+            }
+        }
+
+        return null;
     }
 
     private static double Largest(IReadOnlyList<InductionAssessment> judged, Func<InductionAssessment, double> figure)

@@ -209,12 +209,12 @@ a { color: inherit; }
         }
         else if (ReportCharts.DriveAndCurrent(a, id + "-current") is { } current)
         {
-            w.Write("<figure>" + current + "<figcaption>The drive of the source (dashed, right axis) and the current induced around the item (left axis).</figcaption></figure>\n");
+            w.Write("<figure>" + current + "<figcaption>The drive of the source (dashed, right axis) and the current induced around the item (left axis)." + E(DrawnFor(a, a.CurrentCharted, "current")) + "</figcaption></figure>\n");
         }
 
         if (charts && ReportCharts.Temperature(a, id + "-temperature") is { } temperature)
         {
-            w.Write("<figure>" + temperature + "<figcaption>The item's temperature while in the field and after, against the limit it is judged by.</figcaption></figure>\n");
+            w.Write("<figure>" + temperature + "<figcaption>The item's temperature while in the field and after, against the limit it is judged by." + E(DrawnFor(a, a.HeatingCharted, "peak temperature")) + "</figcaption></figure>\n");
         }
 
         w.Write("<p class=\"small\">Assessed " + E(a.AssessedUtc) + " · policy " + E(a.PolicyName + HazardReport.GroupNote(a)) + " · inputs SHA-256 <span class=\"hash\">" + E(a.InputHash) + "</span></p>\n</section>\n");
@@ -246,6 +246,11 @@ a { color: inherit; }
             + " inventory rows could not be assessed</b> and have no verdict: treat those items as unsafe until their rows are corrected and assessed.<ul>"
             + string.Concat(report.NotAssessed.Select(n => "<li>" + E(n) + "</li>")) + "</ul></div>\n");
     }
+
+    /// <summary>Where a chart draws another orientation or stay than the one kept for the verdict (the one whose figure the tables show), what it draws.</summary>
+    private static string DrawnFor(InductionAssessment a, InductionResponse drawn, string figure) =>
+        ReferenceEquals(drawn, a.Response) ? string.Empty
+            : " Drawn for the orientation or stay judged where the " + figure + " is largest, normal " + drawn.Normal + ", as the figures above are; the one kept for the verdict is normal " + a.Response.Normal + ".";
 
     private static string Badge(Verdict v) => "<span class=\"verdict\" style=\"--c:" + ReportCharts.Colour(v) + "\">" + v + "</span>";
 }

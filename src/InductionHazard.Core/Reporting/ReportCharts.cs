@@ -71,7 +71,7 @@ public static class ReportCharts
     /// <summary>The drive of each source term and the induced current against time; null when the item has no circuit history.</summary>
     public static string? DriveAndCurrent(InductionAssessment a, string idPrefix)
     {
-        IReadOnlyList<CircuitSample> samples = a.Response.CircuitSeries;
+        IReadOnlyList<CircuitSample> samples = a.CurrentCharted.CircuitSeries;
         if (samples.Count < 2 || samples.All(s => !Finite.Is(s.CurrentAmperes)))
         {
             return null;
@@ -82,7 +82,7 @@ public static class ReportCharts
         model.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Key = "current", Title = "current", LabelFormatter = v => SiFormat.Format(v, "A", 2) });
         model.Axes.Add(new LinearAxis { Position = AxisPosition.Right, Key = "drive", Title = "drive", LabelFormatter = v => SiFormat.Format(v, string.Empty, 2) });
         int k = 0;
-        foreach (Fields.SourceTerm term in a.Response.Scenario.Source.Terms.Take(3))
+        foreach (Fields.SourceTerm term in a.CurrentCharted.Scenario.Source.Terms.Take(3))
         {
             var drive = new LineSeries { Title = "drive " + (++k).ToString(CultureInfo.InvariantCulture) + " (" + term.Waveform.Form + ")", YAxisKey = "drive", Color = OxyColor.FromRgb(120, 120, 120), LineStyle = LineStyle.Dash, StrokeThickness = 1.2 };
             drive.Points.AddRange(Thin(samples.Select(s => new DataPoint(s.TimeSeconds, term.Waveform.Value(s.TimeSeconds)))));
@@ -98,7 +98,7 @@ public static class ReportCharts
     /// <summary>The item's temperature against time with the limit it is judged against (burn for skin, else overheat); null without a heating history.</summary>
     public static string? Temperature(InductionAssessment a, string idPrefix)
     {
-        IReadOnlyList<HeatingSample> samples = a.Response.HeatingSeries;
+        IReadOnlyList<HeatingSample> samples = a.HeatingCharted.HeatingSeries;
         if (samples.Count < 2 || samples.All(s => !Finite.Is(s.TemperatureCelsius)))
         {
             return null;

@@ -147,6 +147,12 @@ public sealed class BodyOrientationTests
         Assert.Equal(SiFormat.Format(judged.PeakEmfVolts, "V"), figures.Single(l => l.Label == "Peak emf").Text);
         Assert.Equal(SiFormat.Format(b, "T"), figures.Single(l => l.Label == "Peak flux density normal to the item").Text);
 
+        // A chart of the current draws the orientation whose current is the figure shown (the one kept carries none);
+        // the temperature's, the one whose peak is.
+        Assert.NotSame(judged.Response, judged.CurrentCharted);
+        Assert.Equal(judged.PeakCurrentAmperes, judged.CurrentCharted.PeakCurrentAmperes);
+        Assert.Equal(judged.PeakTemperatureCelsius, judged.HeatingCharted.PeakTemperatureCelsius);
+
         // An item judged as placed shows its own figures and says nothing of others.
         InductionAssessment given = each[0];
         Assert.Equal(1, given.FiguresJudgedOver);
