@@ -886,7 +886,7 @@ All-day ring,Copper,20 mm,2 mm,Skin,,,site rules,technician
             ($long.Response.ModelNotes -join "`n") | Should -Match 'stay: judged as given \(28\.8 ks\) and leaving as soon as the drive stops changing \(1 s\).*this is the shorter stay'
             $long.InputHash | Should -Not -Be $once.InputHash -Because 'the inputs gave 8 h, whichever stay was kept'
             $long | Export-HazardReport -Path (Join-Path $TestDrive 'stay.md')
-            Get-Content (Join-Path $TestDrive 'stay.md') -Raw | Should -Match '\| Time in the field \| 1 s, leaving as soon as the drive stops changing, which heats it more than the stay given \(28\.8 ks\)'
+            Get-Content (Join-Path $TestDrive 'stay.md') -Raw | Should -Match '\| Time in the field \| 1 s, leaving as soon as the drive stops changing, judged worse than the stay given \(28\.8 ks\)'
         }
     }
 

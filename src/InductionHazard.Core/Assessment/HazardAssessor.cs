@@ -28,8 +28,9 @@ public static class HazardAssessor
     /// <see cref="InductionResponse.AcrossAxis"/>), and the worst of these is the assessment: the most severe verdict
     /// (Hazard, then Indeterminate, Caution, Clear, as <see cref="VerdictRules.Combine"/> ranks them), then the smaller
     /// judged margins in turn, smallest first. Its orientation says which it is. An item given a stay longer than its
-    /// drive changes is judged leaving as soon as the drive stops changing too (<see cref="InductionResponse.ShorterStay"/>),
-    /// and the worse kept the same way; its model notes say which stay it is.
+    /// drive changes is judged leaving as soon as the drive stops changing too, and one whose drive holds its peak before
+    /// the stay ends, leaving then (<see cref="InductionResponse.ShorterStay"/>), and the worse kept the same way; its model
+    /// notes say which stay it is.
     /// </remarks>
     public static InductionAssessment Assess(InductionResponse response, HazardPolicy policy, int? rowNumber = null, DateTime? now = null)
     {
@@ -40,20 +41,27 @@ public static class HazardAssessor
 
         InductionAssessment[] given = AssessOrientations(response, policy, rowNumber, now, out InductionAssessment assessed);
         InductionAssessment[] other = Array.Empty<InductionAssessment>();
-        bool shorterKept = false;
+        bool shorterKept = false, midDrive = false;
+        string otherStay = string.Empty;
         if (response.ShorterStay is { } shorter)
         {
+            // Leaving while the drive holds its peak differs from the stay given in its leaving (emf, current, force,
+            // torque), not in its heating alone, as leaving once the drive has stopped does.
+            midDrive = shorter.Scenario.ExposureSeconds is not null;
             other = AssessOrientations(shorter, policy, rowNumber, now, out InductionAssessment early);
             if (Worse(early, assessed, HeatingFirst))
             {
                 (assessed, shorterKept) = (early, true);
                 (given, other) = (other, given);
             }
+
+            otherStay = shorterKept ? "staying as given" : InductionEngine.LeavingWords(shorter.Scenario);
         }
 
         // Each mechanism at the orientation worst for it (the orientation is not known), and between the stays the
-        // heating (they differ in nothing else): the verdict is the same as the worst alternative's, but a mechanism
-        // that does not govern is no longer shown milder than another orientation makes it.
+        // heating (where the other leaves once the drive has stopped, they differ in nothing else) or every mechanism
+        // (where it leaves while the drive holds its peak): the verdict is the same as the worst alternative's, but a
+        // mechanism that does not govern is no longer shown milder than another orientation or stay makes it.
         MechanismResult[]? envelope = null;
         for (int m = 0; m < assessed.Mechanisms.Count; m++)
         {
@@ -63,11 +71,11 @@ public static class HazardAssessor
                 worst = WorseOf(worst, a, m, assessed, stay: null);
             }
 
-            if (Array.IndexOf(HeatingFirst, worst.Mechanism) >= 0)
+            if (midDrive || Array.IndexOf(HeatingFirst, worst.Mechanism) >= 0)
             {
                 foreach (InductionAssessment a in other)
                 {
-                    worst = WorseOf(worst, a, m, assessed, shorterKept ? "staying as given" : "leaving as soon as the drive stops changing");
+                    worst = WorseOf(worst, a, m, assessed, otherStay);
                 }
             }
 

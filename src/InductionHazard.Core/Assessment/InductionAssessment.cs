@@ -262,7 +262,7 @@ public sealed class InductionAssessment
     /// <summary>Which of a body's responses with its axis across the field this assessment kept as the worst (<see cref="InductionResponse.AcrossAxis"/>); -1: the one along it, or an item with one response.</summary>
     internal int AcrossIndex { get; set; } = -1;
 
-    /// <summary>Whether this assessment kept the stay that leaves as soon as the drive stops changing (<see cref="InductionResponse.ShorterStay"/>) over the stay given.</summary>
+    /// <summary>Whether this assessment kept the shorter stay (<see cref="InductionResponse.ShorterStay"/>: leaving as soon as the drive stops changing, or as soon as the field at the item first reaches its largest and holds) over the stay given.</summary>
     internal bool ShorterStayKept { get; set; }
 
     /// <summary>

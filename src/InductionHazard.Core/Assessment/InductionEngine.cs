@@ -59,41 +59,124 @@ public static class InductionEngine
         }
 
         CheckFinite(response, c.Issues);
-        return ShorterStay(AxisAcross(response, c, cancellation), cancellation);
+        return ShorterStay(AxisAcross(response, c, cancellation), c, cancellation);
     }
 
     /// <summary>
-    /// An item given a stay longer than its drive changes, under a drive that ends holding flux in it, from which it is
-    /// carried out: also solved leaving as soon as the drive stops changing, which an assessment judges beside the stay
-    /// as given, keeping the worse (<see cref="HazardAssessor.Assess"/>). Leaving is a flux change of its own; soon
-    /// after the drive, its heat adds to the drive's before the item has shed it, while a longer stay lets it cool in
-    /// between (a ring whose ramp and leaving heat it alike is left with up to half the rise after a long stay). A stay
-    /// given is read as the longest an item stays, so a shorter one is no milder. Within the drive, the stay is as
-    /// given: leaving earlier is not searched.
+    /// An item carried out of a transient field whose stay (as given, or by default the drive's span) lasts past the time
+    /// the flux it links first reaches its largest and holds it: also solved leaving then, which an assessment judges
+    /// beside the stay as given, keeping the worse (<see cref="HazardAssessor.Assess"/>). Leaving is a flux change of its
+    /// own: where the drive ends holding flux (a ramp up to a magnet's field) and the stay outlasts it, leaving as soon as
+    /// the drive stops changing, whose heat adds to the drive's before the item has shed it, while a longer stay lets it
+    /// cool in between (a ring whose ramp and leaving heat it alike is left with up to half the rise after a long stay);
+    /// where the drive holds its peak and falls again (a magnet's cycle up, held and down), leaving while it holds, which
+    /// the stay through to the end never does (a 150 mm copper loop at a 3 T cycle held 10 min: its torque margin 1.1
+    /// staying to the end, 0.018 carried out at the field). A stay given is read as the longest an item stays, so a
+    /// shorter one is no milder. A drive whose peak does not hold for the whole of a leaving (a pulse, a fault) is not
+    /// searched for an earlier leaving: its own change outpaces a person's.
     /// </summary>
-    private static InductionResponse ShorterStay(InductionResponse response, CancellationToken cancellation)
+    private static InductionResponse ShorterStay(InductionResponse response, EngineContext c, CancellationToken cancellation)
     {
         Scenario scenario = response.Scenario;
         FieldSource source = scenario.Source;
-        if (scenario.ExposureSeconds is not { } given || source.IsSinusoidal || !scenario.Leaves || scenario.Item.IsSplit
-            || scenario.Item.Material.IsFerromagnetic || scenario.Placement.Velocity is not null || double.IsInfinity(source.EndSeconds))
+        if (source.IsSinusoidal || !scenario.Leaves || scenario.Item.IsSplit || scenario.Item.Material.IsFerromagnetic || scenario.Placement.Velocity is not null
+            || double.IsInfinity(source.EndSeconds))
         {
             return response;
         }
 
         double runs = source.EndSeconds - source.StartSeconds;
-        // Not the flux along the axis alone: a body's leaving also moves the field across it, which heats it too.
-        if (!(runs > 0) || !(given > runs * (1 + 1e-9)) || HeldAtEnd(source) == 0)
+        double stay = scenario.ExposureSeconds ?? runs;
+        if (!(runs > 0) || HeldPeak(c, stay) is not { } peak)
         {
             return response;
         }
 
-        // The default stay is the drive's span: a 10 ms pulse's, shorter than a stay anyone can give (0.1 s at least).
-        InductionResponse shorter = Respond(scenario.LeavingAtOnce(), cancellation);
-        string Note(bool asGiven) => "stay: judged as given (" + SiFormat.Format(given, "s") + ") and leaving as soon as the drive stops changing ("
-            + SiFormat.Format(runs, "s") + "), whose leaving heats the item before it has shed the drive's heat; the worse is kept, and this is the "
-            + (asGiven ? "stay as given" : "shorter stay");
+        // Leaving once the drive has stopped changing is the default stay (however short the drive); leaving while it
+        // holds a peak, a stay of its own, no shorter than anyone gives.
+        bool atEnd = peak >= runs * (1 - 1e-12);
+        double after = atEnd ? runs : Math.Max(peak, PhysicalRanges.ExposureTime.Minimum);
+        if (!(after < stay * (1 - 1e-9)))
+        {
+            return response;
+        }
+
+        InductionResponse shorter = Respond(atEnd ? scenario.LeavingAtOnce() : scenario.LeavingAfter(after), cancellation);
+        string asGiven = scenario.ExposureSeconds is { } given ? SiFormat.Format(given, "s") : "by default the drive's span, " + SiFormat.Format(runs, "s");
+        string Note(bool kept) => "stay: judged as given (" + asGiven + ") and " + LeavingWords(shorter.Scenario) + " (" + SiFormat.Format(after, "s") + "), "
+            + (atEnd ? "whose leaving heats the item before it has shed the drive's heat" : "carrying out the flux it links at the drive's peak") + "; the worse is kept, and this is the "
+            + (kept ? "stay as given" : "shorter stay");
         return WithNote(response, Note(true)) with { ShorterStay = WithNote(shorter, Note(false)) };
+    }
+
+    /// <summary>How a shorter stay leaves, in words: as soon as the drive stops changing, or as soon as the field at the item first reaches its largest.</summary>
+    internal static string LeavingWords(Scenario shorter) =>
+        shorter.ExposureSeconds is null ? "leaving as soon as the drive stops changing" : "leaving as soon as the field at the item first reaches its largest and holds";
+
+    /// <summary>Within 1 % of its largest: the field a leaving carries the item out of where the drive holds its peak (a measured plateau's noise included).</summary>
+    private const double HeldShare = 0.99;
+
+    /// <summary>
+    /// The time from the drive's start, within the stay, at which the field at the item's centre (each term's field per
+    /// unit drive times its drive, summed) first reaches its largest size, where it stays within 1 % of that for the
+    /// whole of a leaving after it, or after the shortest stay anyone can give (0.1 s) where that is later. Null where it
+    /// never holds so, or is nothing. The field's size, not the flux along the item's axis: a body's leaving moves the field across it
+    /// too, which heats it. Read at the drives' breakpoints, the stay's end and a leaving after it, between which a drive
+    /// that can hold a peak (a ramp, a trapezoid, samples) runs straight.
+    /// </summary>
+    private static double? HeldPeak(EngineContext c, double stay)
+    {
+        Scenario scenario = c.Scenario;
+        FieldSource source = scenario.Source;
+        Vector3D[] perUnitDrive = c.CentreField;
+        if (perUnitDrive.Length != source.Terms.Count)
+        {
+            return null;
+        }
+
+        double begin = source.StartSeconds, leave = scenario.LeaveSeconds;
+        double Linked(double t)
+        {
+            Vector3D sum = Vector3D.Zero;
+            for (int k = 0; k < perUnitDrive.Length; k++)
+            {
+                sum += source.Terms[k].Waveform.Value(t) * perUnitDrive[k];
+            }
+
+            return sum.Length;
+        }
+
+        var times = new List<double> { begin };
+        times.AddRange(source.BreakpointsBetween(begin, begin + stay + leave));
+        times.Add(begin + stay);
+        times.Add(begin + stay + leave);
+        times.Sort();
+        double largest = 0, at = double.NaN;
+        foreach (double t in times)
+        {
+            double linked = Linked(t);
+            if (t <= begin + stay && linked > largest)
+            {
+                (largest, at) = (linked, t);
+            }
+        }
+
+        if (!(largest > 0) || !Finite.Is(largest))
+        {
+            return null;
+        }
+
+        // Held from there through a leaving that starts no sooner than the shortest stay anyone gives.
+        double until = Math.Max(at, begin + PhysicalRanges.ExposureTime.Minimum) + leave;
+        foreach (double t in times)
+        {
+            if (t >= at && t <= until && !(Linked(t) >= HeldShare * largest))
+            {
+                return null;
+            }
+        }
+
+        return Linked(until) >= HeldShare * largest ? at - begin : null;
     }
 
     /// <summary>A response and its orientations with one more model note.</summary>
@@ -106,18 +189,6 @@ public static class InductionEngine
         }
 
         return response with { ModelNotes = response.ModelNotes.Concat(new[] { note }).ToArray(), AcrossAxis = across };
-    }
-
-    /// <summary>The largest size of any term's drive once the drive stops changing: zero where it ends with nothing held.</summary>
-    private static double HeldAtEnd(FieldSource source)
-    {
-        double held = 0;
-        foreach (SourceTerm term in source.Terms)
-        {
-            held = Math.Max(held, Math.Abs(term.Waveform.Value(source.EndSeconds)));
-        }
-
-        return held;
     }
 
     /// <summary>

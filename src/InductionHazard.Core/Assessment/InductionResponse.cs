@@ -189,9 +189,11 @@ public sealed record InductionResponse
     internal IReadOnlyList<InductionResponse> AcrossAxis { get; init; } = Array.Empty<InductionResponse>();
 
     /// <summary>
-    /// For an item given a stay longer than its drive changes, carried out of a field that still holds flux in it: the
-    /// same scenario leaving as soon as the drive stops changing, which an assessment judges beside this one, keeping
-    /// the worse (leaving soon after the drive heats the item before it has shed the drive's heat). Null otherwise.
+    /// For an item carried out of a transient field whose stay lasts past the time the field at it first reaches its
+    /// largest and holds (a stay longer than a drive that ends holding flux, or one through a drive that holds its peak
+    /// and falls again): the same scenario leaving then, which an assessment judges beside this one, keeping the worse
+    /// (leaving soon after the drive heats the item before it has shed the drive's heat; leaving at the peak carries the
+    /// most flux out). Null otherwise.
     /// </summary>
     internal InductionResponse? ShorterStay { get; init; }
 

@@ -51,7 +51,7 @@ public sealed class Scenario
         var text = new System.Text.StringBuilder(256);
         text.Append(ItemHash(Item)).Append('|').Append(SourceHashes.GetValue(Source, SourceHash))
             .Append('|').Append(Exact(Placement.Centre)).Append('|').Append(Placement.Normal is { } n && Placement.AxisAlong is null ? Exact(n) : Placement.TiltDegrees is { } tilt ? "tilted " + TextHash.Exact(tilt) : "facing the field").Append('|').Append(Placement.Velocity is { } v ? Exact(v) : "still")
-            .Append('|').Append((StayGiven ?? ExposureSeconds) is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
+            .Append('|').Append((Shortened ? StayGiven : ExposureSeconds) is { } e ? TextHash.Exact(e) : "default").Append('|').Append(TextHash.Exact(LeaveSeconds))
             .Append('|').Append(TextHash.Exact(Environment.AmbientCelsius)).Append('|').Append(StationName).Append('|').Append(Inventory);
         if (WearerGroup is { } group)
         {
@@ -104,21 +104,34 @@ public sealed class Scenario
     /// the item under that row's name, with that row's inventory columns; everything the physics reads is this one's.
     /// </summary>
     internal Scenario For(string itemName, InventoryFields inventory) =>
-        new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = inventory, StayGiven = StayGiven };
+        new(Item.Named(itemName), Source, Placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = inventory, StayGiven = StayGiven, Shortened = Shortened };
 
     /// <summary>
     /// This scenario leaving as soon as the drive stops changing (the default stay), for judging beside the stay given
     /// (<see cref="InductionResponse.ShorterStay"/>); its fingerprint is still the inputs', the stay given among them.
     /// </summary>
-    internal Scenario LeavingAtOnce() =>
-        new(Item, Source, Placement, null, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory, StayGiven = StayGiven ?? ExposureSeconds };
+    internal Scenario LeavingAtOnce() => Leaving(null);
 
-    /// <summary>For a scenario made by <see cref="LeavingAtOnce"/>, the stay the inputs gave, s; null otherwise.</summary>
+    /// <summary>
+    /// This scenario leaving after a time from the drive's start, shorter than the stay given or the default, where the
+    /// field at the item first reaches its largest and holds (<see cref="InductionResponse.ShorterStay"/>); its fingerprint
+    /// is still the inputs'.
+    /// </summary>
+    /// <param name="seconds">The stay, s (at least the shortest anyone gives).</param>
+    internal Scenario LeavingAfter(double seconds) => Leaving(seconds);
+
+    private Scenario Leaving(double? seconds) =>
+        new(Item, Source, Placement, seconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory, StayGiven = Shortened ? StayGiven : ExposureSeconds, Shortened = true };
+
+    /// <summary>For a scenario made by <see cref="LeavingAtOnce"/> or <see cref="LeavingAfter"/>, the stay the inputs gave, s (null: the default); null otherwise.</summary>
     internal double? StayGiven { get; private init; }
+
+    /// <summary>True for a scenario made by <see cref="LeavingAtOnce"/> or <see cref="LeavingAfter"/>: its stay is not the inputs' (<see cref="StayGiven"/> is).</summary>
+    internal bool Shortened { get; private init; }
 
     /// <summary>This scenario with the item placed otherwise; everything else is this one's.</summary>
     internal Scenario With(Placement placement) =>
-        new(Item, Source, placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory, StayGiven = StayGiven };
+        new(Item, Source, placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory, StayGiven = StayGiven, Shortened = Shortened };
 
     /// <summary>The site station the scenario stands for, if it came from one.</summary>
     public string? StationName { get; init; }

@@ -2,8 +2,10 @@ using System;
 using System.Linq;
 using InductionHazard.Assessment;
 using InductionHazard.Criteria;
+using InductionHazard.Fields;
 using InductionHazard.Items;
 using InductionHazard.Quantities;
+using InductionHazard.Waveforms;
 using Xunit;
 using Xunit.Abstractions;
 
@@ -69,6 +71,52 @@ public class StayTests
         InductionResponse pulse = Fixtures.Respond(ring, Fixtures.UniformRamp(0, 1, 0.01), exposure: 2);
         Assert.Equal(0.01, pulse.ShorterStay!.ExposureSeconds, 12);
         Assert.True(HazardAssessor.Assess(pulse, HazardPolicy.Default).BurnMargin <= HazardAssessor.Assess(pulse with { ShorterStay = null }, HazardPolicy.Default).BurnMargin);
+    }
+
+    [Validates("a loose 150 mm copper loop through a 3 T magnet cycle (up in 60 s, held 10 min, down in 60 s), judged by default for leaving while the field holds: the emf of carrying it out, A B / t over the 1 s it takes", "Faraday's law for a flat loop leaving a uniform field linearly in time (textbook)", "1e-9")]
+    [Fact]
+    public void AStayThroughADriveThatHoldsItsPeakIsJudgedLeavingWhileItHolds()
+    {
+        // A magnet cycled up, held and down: staying through to the end, the loop leaves a field that has fallen to zero
+        // and carries nothing out; the slow ramps drive some 0.9 mV around it. Carried out while the field holds (the
+        // usual way a person leaves a magnet at field), it leaves 3 T over a second: A B / t = 53 mV, 82 A, and a
+        // turned torque some sixty times the ramps'. Judged both ways by default, and the worse kept, as with a stay
+        // given that ends within the hold.
+        ConductiveItem loop = Fixtures.Ring("Copper", 0.15, 0.004, contact: "Free");
+        var cycle = FieldSource.Uniform("magnet cycle", PiecewiseLinearWaveform.Trapezoid(3, 60, 600, 60, drive: DriveKind.FluxDensity), Vector3D.UnitZ);
+        InductionResponse response = Fixtures.Respond(loop, cycle);
+        Assert.NotNull(response.ShorterStay);
+        InductionResponse atField = response.ShorterStay!;
+        Assert.Equal(60, atField.ExposureSeconds, 9);
+        Assert.Equal(720, response.ExposureSeconds, 9);
+
+        double carried = response.LoopAreaSquareMeters * 3 / Scenario.DefaultLeaveSeconds;
+        Within.Relative(carried, atField.PeakEmfVolts, 1e-9, "A B / t leaving at the field");
+        Assert.True(response.PeakEmfVolts < 0.02 * carried, "staying through, the ramps' emf " + response.PeakEmfVolts);
+
+        InductionAssessment assessed = HazardAssessor.Assess(response, HazardPolicy.Default);
+        InductionAssessment through = HazardAssessor.Assess(response with { ShorterStay = null }, HazardPolicy.Default);
+        _out.WriteLine($"through: {through.Verdict}, torque margin {through.TorqueMargin:G4}; kept: {assessed.Verdict}, torque margin {assessed.TorqueMargin:G4}, emf {assessed.PeakEmfVolts:G4} V");
+        Assert.Same(atField, assessed.Response);
+        Assert.Equal(Verdict.Hazard, assessed.Verdict);
+        Assert.NotEqual(Verdict.Hazard, through.Verdict);
+        Assert.True(assessed.TorqueMargin < 0.05 * through.TorqueMargin, assessed.TorqueMargin + " against " + through.TorqueMargin);
+        Assert.Equal(through.InputHash, assessed.InputHash);
+        Assert.Contains(assessed.Response.ModelNotes, n => n.StartsWith("stay: judged as given (by default the drive's span, 720 s) and leaving as soon as the field at the item first reaches its largest and holds (60 s)", StringComparison.Ordinal));
+
+        // A stay given that ends within the hold leaves at the field already; it is judged leaving as the hold begins
+        // too, which carries the ramp's heat out with it. Both carry 3 T out: their torques differ in the fifth figure
+        // (their steps differ), and each mechanism is the worse of the two.
+        InductionAssessment fiveMinutes = HazardAssessor.Assess(Fixtures.Respond(loop, cycle, exposure: 300), HazardPolicy.Default);
+        Within.Relative(assessed.TorqueMargin!.Value, fiveMinutes.TorqueMargin!.Value, 1e-4, "the torque margins leaving at 60 s and at 300 s");
+        Assert.True(fiveMinutes.TorqueMargin <= assessed.TorqueMargin, "the worse of the two stays");
+        Assert.Equal(60, fiveMinutes.Response.ExposureSeconds, 9);
+
+        // Not for a drive whose peak does not hold for a leaving: a pulse, or a peak held for half the second it takes and
+        // gone in another half. (A fall as slow as the rise keeps the field within 1 % of its peak through the second.)
+        Assert.Null(Fixtures.Respond(loop, FieldSource.Uniform("short hold", PiecewiseLinearWaveform.Trapezoid(3, 60, 0.5, 0.5, drive: DriveKind.FluxDensity), Vector3D.UnitZ)).ShorterStay);
+        Assert.NotNull(Fixtures.Respond(loop, FieldSource.Uniform("short hold, slow fall", PiecewiseLinearWaveform.Trapezoid(3, 60, 0.5, 60, drive: DriveKind.FluxDensity), Vector3D.UnitZ)).ShorterStay);
+        Assert.Null(Fixtures.Respond(loop, Fixtures.UniformRamp(3, 0, 1), exposure: 600).ShorterStay);
     }
 
     [Fact]
