@@ -146,19 +146,22 @@ public static class InductionEngine
             return sum.Length;
         }
 
-        var times = new List<double> { begin };
-        times.AddRange(source.BreakpointsBetween(begin, begin + stay + leave));
-        times.Add(begin + stay);
-        times.Add(begin + stay + leave);
-        times.Sort();
-        double largest = 0, at = double.NaN;
-        foreach (double t in times)
+        // In time order without a list: the start, the breakpoints within the stay, the stay's end; the earliest largest.
+        double stayEnd = begin + stay;
+        IReadOnlyList<double> breakpoints = source.BreakpointsBetween(begin, stayEnd + leave);
+        double largest = Linked(begin), at = begin;
+        for (int i = 0; i < breakpoints.Count && breakpoints[i] <= stayEnd; i++)
         {
-            double linked = Linked(t);
-            if (t <= begin + stay && linked > largest)
+            double linked = Linked(breakpoints[i]);
+            if (linked > largest)
             {
-                (largest, at) = (linked, t);
+                (largest, at) = (linked, breakpoints[i]);
             }
+        }
+
+        if (Linked(stayEnd) is var atEnd && atEnd > largest)
+        {
+            (largest, at) = (atEnd, stayEnd);
         }
 
         if (!(largest > 0) || !Finite.Is(largest))
@@ -168,9 +171,9 @@ public static class InductionEngine
 
         // Held from there through a leaving that starts no sooner than the shortest stay anyone gives.
         double until = Math.Max(at, begin + PhysicalRanges.ExposureTime.Minimum) + leave;
-        foreach (double t in times)
+        for (int i = 0; i < breakpoints.Count; i++)
         {
-            if (t >= at && t <= until && !(Linked(t) >= HeldShare * largest))
+            if (breakpoints[i] >= at && breakpoints[i] <= until && !(Linked(breakpoints[i]) >= HeldShare * largest))
             {
                 return null;
             }
