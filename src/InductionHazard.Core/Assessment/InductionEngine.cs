@@ -146,27 +146,37 @@ public static class InductionEngine
             return sum.Length;
         }
 
-        // In time order without a list: the start, the breakpoints within the stay, the stay's end; the earliest largest.
+        // The largest at the start, the breakpoints within the stay and the stay's end; then the earliest of those within
+        // rounding of it (a plateau read an ulp higher at its far end, as a drive shifted in time can be, is still
+        // left at its start).
         double stayEnd = begin + stay;
         IReadOnlyList<double> breakpoints = source.BreakpointsBetween(begin, stayEnd + leave);
-        double largest = Linked(begin), at = begin;
+        double largest = Math.Max(Linked(begin), Linked(stayEnd));
         for (int i = 0; i < breakpoints.Count && breakpoints[i] <= stayEnd; i++)
         {
-            double linked = Linked(breakpoints[i]);
-            if (linked > largest)
-            {
-                (largest, at) = (linked, breakpoints[i]);
-            }
-        }
-
-        if (Linked(stayEnd) is var atEnd && atEnd > largest)
-        {
-            (largest, at) = (atEnd, stayEnd);
+            largest = Math.Max(largest, Linked(breakpoints[i]));
         }
 
         if (!(largest > 0) || !Finite.Is(largest))
         {
             return null;
+        }
+
+        double at = stayEnd;
+        if (Linked(begin) >= (1 - 1e-9) * largest)
+        {
+            at = begin;
+        }
+        else
+        {
+            for (int i = 0; i < breakpoints.Count && breakpoints[i] <= stayEnd; i++)
+            {
+                if (Linked(breakpoints[i]) >= (1 - 1e-9) * largest)
+                {
+                    at = breakpoints[i];
+                    break;
+                }
+            }
         }
 
         // Held from there through a leaving that starts no sooner than the shortest stay anyone gives.

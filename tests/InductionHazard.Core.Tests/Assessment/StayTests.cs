@@ -112,6 +112,17 @@ public class StayTests
         Assert.True(fiveMinutes.TorqueMargin <= assessed.TorqueMargin, "the worse of the two stays");
         Assert.Equal(60, fiveMinutes.Response.ExposureSeconds, 9);
 
+        // The same cycle started later leaves at the start of its hold too (a plateau read an ulp higher at its far end
+        // is still left at its start), with the same margins.
+        foreach (double start in new[] { 1000.0 / 3, 7654.321 })
+        {
+            var later = FieldSource.Uniform("magnet cycle", PiecewiseLinearWaveform.Trapezoid(3, 60, 600, 60, start, DriveKind.FluxDensity), Vector3D.UnitZ);
+            InductionAssessment shifted = HazardAssessor.Assess(Fixtures.Respond(loop, later), HazardPolicy.Default);
+            Assert.Equal(60, shifted.Response.ExposureSeconds, 6);
+            Within.Relative(assessed.TorqueMargin!.Value, shifted.TorqueMargin!.Value, 1e-6, "the torque margin, started at " + start);
+            Within.Relative(assessed.BurnMargin!.Value, shifted.BurnMargin!.Value, 1e-6, "the burn margin, started at " + start);
+        }
+
         // Not for a drive whose peak does not hold for a leaving: a pulse, or a peak held for half the second it takes and
         // gone in another half. (A fall as slow as the rise keeps the field within 1 % of its peak through the second.)
         Assert.Null(Fixtures.Respond(loop, FieldSource.Uniform("short hold", PiecewiseLinearWaveform.Trapezoid(3, 60, 0.5, 0.5, drive: DriveKind.FluxDensity), Vector3D.UnitZ)).ShorterStay);
