@@ -64,7 +64,7 @@ public static class InductionEngine
 
     /// <summary>
     /// An item carried out of a transient field whose stay (as given, or by default the drive's span) lasts past the time
-    /// the flux it links first reaches its largest and holds it: also solved leaving then, which an assessment judges
+    /// the field at it first reaches its largest and holds (<see cref="HeldPeak"/>): also solved leaving then, which an assessment judges
     /// beside the stay as given, keeping the worse (<see cref="HazardAssessor.Assess"/>). Leaving is a flux change of its
     /// own: where the drive ends holding flux (a ramp up to a magnet's field) and the stay outlasts it, leaving as soon as
     /// the drive stops changing, whose heat adds to the drive's before the item has shed it, while a longer stay lets it
@@ -119,10 +119,10 @@ public static class InductionEngine
     /// <summary>
     /// The time from the drive's start, within the stay, at which the field at the item's centre (each term's field per
     /// unit drive times its drive, summed) first reaches its largest size, where it stays within 1 % of that for the
-    /// whole of a leaving after it, or after the shortest stay anyone can give (0.1 s) where that is later. Null where it
-    /// never holds so, or is nothing. The field's size, not the flux along the item's axis: a body's leaving moves the field across it
-    /// too, which heats it. Read at the drives' breakpoints, the stay's end and a leaving after it, between which a drive
-    /// that can hold a peak (a ramp, a trapezoid, samples) runs straight.
+    /// whole of a leaving after it, or after the shortest stay anyone can give (0.1 s) where that is later. Null where
+    /// it never holds so, or is nothing. The field's size, not the flux along the item's axis: a body's leaving moves
+    /// the field across it too, which heats it. Read at the drives' breakpoints, the stay's end and a leaving after it,
+    /// between which a drive that can hold a peak (a ramp, a trapezoid, samples) runs straight.
     /// </summary>
     private static double? HeldPeak(EngineContext c, double stay)
     {
@@ -135,7 +135,7 @@ public static class InductionEngine
         }
 
         double begin = source.StartSeconds, leave = scenario.LeaveSeconds;
-        double Linked(double t)
+        double FieldSize(double t)
         {
             Vector3D sum = Vector3D.Zero;
             for (int k = 0; k < perUnitDrive.Length; k++)
@@ -147,14 +147,14 @@ public static class InductionEngine
         }
 
         // The largest at the start, the breakpoints within the stay and the stay's end; then the earliest of those within
-        // rounding of it (a plateau read an ulp higher at its far end, as a drive shifted in time can be, is still
-        // left at its start).
+        // rounding of it (a plateau read an ulp higher at its far end, as a drive shifted in time can be, is still left
+        // at its start).
         double stayEnd = begin + stay;
         IReadOnlyList<double> breakpoints = source.BreakpointsBetween(begin, stayEnd + leave);
-        double largest = Math.Max(Linked(begin), Linked(stayEnd));
+        double largest = Math.Max(FieldSize(begin), FieldSize(stayEnd));
         for (int i = 0; i < breakpoints.Count && breakpoints[i] <= stayEnd; i++)
         {
-            largest = Math.Max(largest, Linked(breakpoints[i]));
+            largest = Math.Max(largest, FieldSize(breakpoints[i]));
         }
 
         if (!(largest > 0) || !Finite.Is(largest))
@@ -163,7 +163,7 @@ public static class InductionEngine
         }
 
         double at = stayEnd;
-        if (Linked(begin) >= (1 - 1e-9) * largest)
+        if (FieldSize(begin) >= (1 - 1e-9) * largest)
         {
             at = begin;
         }
@@ -171,7 +171,7 @@ public static class InductionEngine
         {
             for (int i = 0; i < breakpoints.Count && breakpoints[i] <= stayEnd; i++)
             {
-                if (Linked(breakpoints[i]) >= (1 - 1e-9) * largest)
+                if (FieldSize(breakpoints[i]) >= (1 - 1e-9) * largest)
                 {
                     at = breakpoints[i];
                     break;
@@ -183,13 +183,13 @@ public static class InductionEngine
         double until = Math.Max(at, begin + PhysicalRanges.ExposureTime.Minimum) + leave;
         for (int i = 0; i < breakpoints.Count; i++)
         {
-            if (breakpoints[i] >= at && breakpoints[i] <= until && !(Linked(breakpoints[i]) >= HeldShare * largest))
+            if (breakpoints[i] >= at && breakpoints[i] <= until && !(FieldSize(breakpoints[i]) >= HeldShare * largest))
             {
                 return null;
             }
         }
 
-        return Linked(until) >= HeldShare * largest ? at - begin : null;
+        return FieldSize(until) >= HeldShare * largest ? at - begin : null;
     }
 
     /// <summary>A response and its orientations with one more model note.</summary>

@@ -250,7 +250,9 @@ a { color: inherit; }
     /// <summary>Where a chart draws another orientation or stay than the one kept for the verdict (the one whose figure the tables show), what it draws.</summary>
     private static string DrawnFor(InductionAssessment a, InductionResponse drawn, string figure) =>
         ReferenceEquals(drawn, a.Response) ? string.Empty
-            : " Drawn for the orientation or stay judged where the " + figure + " is largest, normal " + drawn.Normal + ", as the figures above are; the one kept for the verdict is normal " + a.Response.Normal + ".";
+        : drawn.Normal.Equals(a.Response.Normal)
+            ? " Drawn for the stay judged where the " + figure + " is largest, leaving after " + SiFormat.Format(drawn.ExposureSeconds, "s") + ", as the figures above are; the one kept for the verdict leaves after " + SiFormat.Format(a.Response.ExposureSeconds, "s") + "."
+            : " Drawn for the orientation judged where the " + figure + " is largest, normal " + drawn.Normal + ", as the figures above are; the one kept for the verdict is normal " + a.Response.Normal + ".";
 
     private static string Badge(Verdict v) => "<span class=\"verdict\" style=\"--c:" + ReportCharts.Colour(v) + "\">" + v + "</span>";
 }

@@ -100,7 +100,7 @@ public static class ReportLines
         if (a.FiguresJudgedOver > 1)
         {
             lines.Add(("Figures shown", "flux, emf, current, heating and force: each the largest of the " + a.FiguresJudgedOver.ToString(CultureInfo.InvariantCulture)
-                + " orientations or stays judged (the orientation was not given); the circuit's figures and the torques: those of the one kept (see Placement)"));
+                + " orientations or stays judged; the circuit's figures and the torques: those of the one kept (see Placement and Time in the field)"));
         }
 
         Add("Peak flux density normal to the item", a.PeakFluxDensityTesla, "T");
