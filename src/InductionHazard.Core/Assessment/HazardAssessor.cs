@@ -55,7 +55,7 @@ public static class HazardAssessor
                 (given, other) = (other, given);
             }
 
-            otherStay = shorterKept ? "staying as given" : InductionEngine.LeavingWords(shorter.Scenario);
+            otherStay = shorterKept ? "staying as given" : shorter.Scenario.LeavingWords;
         }
 
         // Each mechanism at the orientation worst for it (the orientation is not known), and between the stays the

@@ -103,15 +103,11 @@ public static class InductionEngine
 
         InductionResponse shorter = Respond(atEnd ? scenario.LeavingAtOnce() : scenario.LeavingAfter(after), cancellation);
         string asGiven = scenario.ExposureSeconds is { } given ? SiFormat.Format(given, "s") : "by default the drive's span, " + SiFormat.Format(runs, "s");
-        string Note(bool kept) => "stay: judged as given (" + asGiven + ") and " + LeavingWords(shorter.Scenario) + " (" + SiFormat.Format(after, "s") + "), "
+        string Note(bool kept) => "stay: judged as given (" + asGiven + ") and " + shorter.Scenario.LeavingWords + " (" + SiFormat.Format(after, "s") + "), "
             + (atEnd ? "whose leaving heats the item before it has shed the drive's heat" : "carrying out the flux it links at the drive's peak") + "; the worse is kept, and this is the "
             + (kept ? "stay as given" : "shorter stay");
         return WithNote(response, Note(true)) with { ShorterStay = WithNote(shorter, Note(false)) };
     }
-
-    /// <summary>How a shorter stay leaves, in words: as soon as the drive stops changing, or as soon as the field at the item first reaches its largest.</summary>
-    internal static string LeavingWords(Scenario shorter) =>
-        shorter.ExposureSeconds is null ? "leaving as soon as the drive stops changing" : "leaving as soon as the field at the item first reaches its largest and holds";
 
     /// <summary>Within 1 % of its largest: the field a leaving carries the item out of where the drive holds its peak (a measured plateau's noise included).</summary>
     private const double HeldShare = 0.99;

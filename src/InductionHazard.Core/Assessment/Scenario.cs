@@ -129,6 +129,10 @@ public sealed class Scenario
     /// <summary>True for a scenario made by <see cref="LeavingAtOnce"/> or <see cref="LeavingAfter"/>: its stay is not the inputs' (<see cref="StayGiven"/> is).</summary>
     internal bool Shortened { get; private init; }
 
+    /// <summary>How a shortened scenario leaves, in words: as soon as the drive stops changing (<see cref="LeavingAtOnce"/>), or as soon as the field at the item first reaches its largest and holds (<see cref="LeavingAfter"/>).</summary>
+    internal string LeavingWords =>
+        ExposureSeconds is null ? "leaving as soon as the drive stops changing" : "leaving as soon as the field at the item first reaches its largest and holds";
+
     /// <summary>This scenario with the item placed otherwise; everything else is this one's.</summary>
     internal Scenario With(Placement placement) =>
         new(Item, Source, placement, ExposureSeconds, Environment, LeaveSeconds) { StationName = StationName, WearerGroup = WearerGroup, Inventory = Inventory, StayGiven = StayGiven, Shortened = Shortened };

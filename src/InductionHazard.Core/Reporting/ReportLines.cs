@@ -39,7 +39,7 @@ public static class ReportLines
         lines.Add(("Source", s.Source.Describe()));
         lines.Add(("Placement", Placement(a)));
         lines.Add(("Time in the field", SiFormat.Format(r.ExposureSeconds, "s")
-            + (r.Scenario.Shortened ? ", " + InductionEngine.LeavingWords(r.Scenario) + ", judged worse than " + (r.Scenario.StayGiven is { } given ? "the stay given (" + SiFormat.Format(given, "s") + ")" : "staying through the drive (the default stay)") : string.Empty)
+            + (r.Scenario.Shortened ? ", " + r.Scenario.LeavingWords + ", judged worse than " + (r.Scenario.StayGiven is { } given ? "the stay given (" + SiFormat.Format(given, "s") + ")" : "staying through the drive (the default stay)") : string.Empty)
             + " (assessed over " + SiFormat.Format(r.AssessedSeconds, "s") + ", with the cooling after it)"));
         lines.Add(("Surroundings", SiFormat.Celsius(s.Environment.AmbientCelsius) + " air"));
         return lines;
